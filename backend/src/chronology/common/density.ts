@@ -1,0 +1,195 @@
+/**
+ * Calendar-age densities on a 1-year grid, shared by calibration, the age model, correlation and
+ * recurrence. Ages are cal BP (calendar years before AD 1950); index i of `probabilities` is the
+ * year `startCalBp + i`, so the array runs from young to old.
+ *
+ * Summaries follow the usual practice of the radiocarbon community: the median is the 50 % point
+ * of the cumulative mass, highest-density (HPD) ranges are found by sorting grid probabilities
+ * from highest to lowest and keeping years until the requested mass is reached (e.g. Bronk Ramsey
+ * 2009, Radiocarbon 51(1), section on HPD ranges), then merging adjacent years into ranges.
+ */
+
+/** A probability density on a 1-year calendar grid. */
+export interface CalendarDensity {
+  /** cal BP of index 0 (the youngest year held). */
+  readonly startCalBp: number;
+  /** One value per year, young to old. Normalised densities sum to 1. */
+  readonly probabilities: Float64Array;
+}
+
+/** A contiguous highest-density range: `olderCalBp >= youngerCalBp`. */
+export interface HpdRange {
+  readonly olderCalBp: number;
+  readonly youngerCalBp: number;
+  /** Mass inside the range (0-1). */
+  readonly probability: number;
+}
+
+export interface DensitySummary {
+  readonly medianCalBp: number;
+  readonly meanCalBp: number;
+  readonly sdYears: number;
+  /** HPD ranges holding 68.27 % of the mass (labelled 68.3 % in the trade), oldest first. */
+  readonly hpd68: HpdRange[];
+  /** HPD ranges holding 95.45 % of the mass (labelled 95.4 % in the trade), oldest first. */
+  readonly hpd95: HpdRange[];
+}
+
+/** The +-1 and +-2 sigma masses of a normal distribution, as the trade's 68.3 % and 95.4 %. */
+export const HPD68_LEVEL = 0.6826894921370859;
+export const HPD95_LEVEL = 0.9544997361036416;
+
+/** Total mass of a density. */
+export function totalMass(density: CalendarDensity): number {
+  let sum = 0;
+  for (const p of density.probabilities) sum += p;
+  return sum;
+}
+
+/**
+ * Normalise a density to unit mass. Throws when the mass is zero or not finite: callers turn that
+ * into a user-facing error (an age the curve cannot explain), never a silent number.
+ */
+export function normalise(density: CalendarDensity): CalendarDensity {
+  const mass = totalMass(density);
+  if (!(mass > 0) || !Number.isFinite(mass)) {
+    throw new RangeError('density has no mass to normalise');
+  }
+  const probabilities = new Float64Array(density.probabilities.length);
+  for (let i = 0; i < probabilities.length; i++) probabilities[i] = density.probabilities[i] / mass;
+  return { startCalBp: density.startCalBp, probabilities };
+}
+
+/**
+ * Drop leading and trailing grid years whose probability is below `relativeThreshold` of the
+ * total, so stored and transmitted densities stay small. The mass dropped is at most
+ * `relativeThreshold` times the grid length.
+ */
+export function trim(density: CalendarDensity, relativeThreshold = 1e-6): CalendarDensity {
+  const mass = totalMass(density);
+  const cutoff = mass * relativeThreshold;
+  const p = density.probabilities;
+  let first = 0;
+  while (first < p.length && p[first] <= cutoff) first++;
+  let last = p.length - 1;
+  while (last > first && p[last] <= cutoff) last--;
+  if (first > last) return { startCalBp: density.startCalBp, probabilities: new Float64Array(0) };
+  return { startCalBp: density.startCalBp + first, probabilities: p.slice(first, last + 1) };
+}
+
+/** Median, mean, standard deviation and the 68.3 % / 95.4 % HPD ranges of a density. */
+export function summarise(density: CalendarDensity): DensitySummary {
+  const d = normalise(density);
+  const p = d.probabilities;
+  let mean = 0;
+  for (let i = 0; i < p.length; i++) mean += p[i] * (d.startCalBp + i);
+  let variance = 0;
+  for (let i = 0; i < p.length; i++) variance += p[i] * (d.startCalBp + i - mean) ** 2;
+  return {
+    medianCalBp: quantile(d, 0.5),
+    meanCalBp: mean,
+    sdYears: Math.sqrt(variance),
+    hpd68: hpdRanges(d, HPD68_LEVEL),
+    hpd95: hpdRanges(d, HPD95_LEVEL),
+  };
+}
+
+/**
+ * The calendar age below which (younger than which) a fraction `q` of the mass lies, linearly
+ * interpolated inside the grid year where the cumulative mass crosses `q`. Each grid value is
+ * taken as the mass of the year centred on its index.
+ */
+export function quantile(density: CalendarDensity, q: number): number {
+  const p = density.probabilities;
+  const mass = totalMass(density);
+  const target = q * mass;
+  let cumulative = 0;
+  for (let i = 0; i < p.length; i++) {
+    const next = cumulative + p[i];
+    if (next >= target && p[i] > 0) {
+      const within = (target - cumulative) / p[i];
+      return density.startCalBp + i - 0.5 + within;
+    }
+    cumulative = next;
+  }
+  return density.startCalBp + p.length - 1;
+}
+
+/**
+ * Highest-density ranges holding at least `level` of the mass: sort grid years by probability,
+ * keep the highest until their sum reaches the level, then merge runs of kept years. Each range
+ * reports its own mass. Ranges are returned oldest first.
+ */
+export function hpdRanges(density: CalendarDensity, level: number): HpdRange[] {
+  const p = density.probabilities;
+  const mass = totalMass(density);
+  const order = Array.from(p.keys()).sort((a, b) => p[b] - p[a] || a - b);
+  const kept = new Uint8Array(p.length);
+  let cumulative = 0;
+  for (const i of order) {
+    if (cumulative >= level * mass) break;
+    kept[i] = 1;
+    cumulative += p[i];
+  }
+  const ranges: HpdRange[] = [];
+  let i = 0;
+  while (i < p.length) {
+    if (!kept[i]) {
+      i++;
+      continue;
+    }
+    let j = i;
+    let rangeMass = 0;
+    while (j < p.length && kept[j]) rangeMass += p[j++];
+    ranges.push({
+      youngerCalBp: density.startCalBp + i,
+      olderCalBp: density.startCalBp + j - 1,
+      probability: rangeMass / mass,
+    });
+    i = j;
+  }
+  return ranges.reverse();
+}
+
+/** A normal density N(mean, sd) on the 1-year grid covering mean +- 6 sd (cal BP). */
+export function normalDensity(meanCalBp: number, sdYears: number): CalendarDensity {
+  const start = Math.floor(meanCalBp - 6 * sdYears);
+  const end = Math.ceil(meanCalBp + 6 * sdYears);
+  const probabilities = new Float64Array(end - start + 1);
+  for (let i = 0; i < probabilities.length; i++) {
+    const z = (start + i - meanCalBp) / sdYears;
+    probabilities[i] = Math.exp(-0.5 * z * z);
+  }
+  return normalise({ startCalBp: start, probabilities });
+}
+
+/** A uniform density over whole years `youngerCalBp..olderCalBp` inclusive. */
+export function uniformDensity(youngerCalBp: number, olderCalBp: number): CalendarDensity {
+  const start = Math.round(youngerCalBp);
+  const end = Math.round(olderCalBp);
+  if (end < start) throw new RangeError('uniform range has older < younger');
+  const probabilities = new Float64Array(end - start + 1).fill(1 / (end - start + 1));
+  return { startCalBp: start, probabilities };
+}
+
+/** Value of a density at calendar age `calBp` (0 outside its grid), linear between years. */
+export function densityAt(density: CalendarDensity, calBp: number): number {
+  const x = calBp - density.startCalBp;
+  const i = Math.floor(x);
+  const p = density.probabilities;
+  if (i < 0 || i >= p.length) return 0;
+  if (i === p.length - 1) return x === i ? p[i] : 0;
+  const f = x - i;
+  return p[i] * (1 - f) + p[i + 1] * f;
+}
+
+/** cal BP to a signed calendar year: 1950 - calBp, where 0 is 1 BCE (astronomical numbering). */
+export function calBpToYearCe(calBp: number): number {
+  return 1950 - calBp;
+}
+
+/** A signed astronomical year to a human label: 1 BCE is year 0, 2 BCE is -1. */
+export function formatCeBce(yearAstronomical: number): string {
+  const y = Math.round(yearAstronomical);
+  return y > 0 ? `${y} CE` : `${1 - y} BCE`;
+}
