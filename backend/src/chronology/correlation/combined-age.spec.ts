@@ -23,6 +23,13 @@ function mixture(random: SeededRandom): CalendarDensity {
   return { startCalBp: start, probabilities };
 }
 
+/** exp(-z^2 / 2) on every year of youngestCalBp..oldestCalBp, with no truncation at 6 sigma. */
+function gaussianOnGrid(mean: number, sd: number, youngestCalBp: number, oldestCalBp: number): CalendarDensity {
+  const probabilities = new Float64Array(oldestCalBp - youngestCalBp + 1);
+  for (let i = 0; i < probabilities.length; i++) probabilities[i] = Math.exp(-0.5 * ((youngestCalBp + i - mean) / sd) ** 2);
+  return { startCalBp: youngestCalBp, probabilities };
+}
+
 describe(combineAges.name, () => {
   describe('combined density', () => {
     it('is the normal of precision-weighted mean for two normal members [analytic]', () => {
@@ -73,6 +80,23 @@ describe(combineAges.name, () => {
       expect(() => combineAges([normalDensity(1000, 20), { startCalBp: 0, probabilities: new Float64Array(3) }])).toThrow(
         RangeError,
       );
+    });
+
+    it('keeps a combined age when the members meet only in their far tails', () => {
+      // N(1000, 10) and N(1600, 10) on a shared wide grid: at 1300 cal BP each is exp(-450)
+      // of its peak, so a plain product (1e-391) is 0 in double precision. The product is
+      // still proportional to N(1300, 10 / sqrt(2)) [analytic].
+      const { density } = combineAges([gaussianOnGrid(1000, 10, 700, 1900), gaussianOnGrid(1600, 10, 700, 1900)]);
+      expect(density).not.toBeNull();
+      const summary = summarise(density as CalendarDensity);
+      expect(summary.meanCalBp).toBeCloseTo(1300, 6);
+      expect(summary.sdYears).toBeCloseTo(10 / Math.SQRT2, 6);
+    });
+
+    it('works in logarithms where the product is tiny but representable [analytic]', () => {
+      // d = 500, s = 10: C = exp(-d^2 / (4 s^2)) = exp(-625), about 3.6e-272.
+      const { concordance } = combineAges([gaussianOnGrid(1000, 10, 700, 1900), gaussianOnGrid(1500, 10, 700, 1900)]);
+      expect(Math.log(concordance)).toBeCloseTo(-625, 6);
     });
   });
 
@@ -129,8 +153,8 @@ describe(combineAges.name, () => {
     });
 
     it('does not underflow with many members', () => {
-      // 300 copies of N(1000, 30): a plain product of the probabilities (about 0.013 each)
-      // would be 0 in double precision, yet the members are identical.
+      // 300 copies of N(1000, 30): a plain product of the normalised probabilities (about 0.013
+      // at the peak) would be 0 in double precision, yet the members are identical.
       const member = normalDensity(1000, 30);
       const { density, concordance } = combineAges(Array.from({ length: 300 }, () => member));
       expect(concordance).toBeCloseTo(1, 9);

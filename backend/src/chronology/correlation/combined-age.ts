@@ -19,6 +19,12 @@ export const CONCORDANCE_WARNING_THRESHOLD = 0.05;
 /** Relative mass below which the grid years at either end of a combined density are dropped. */
 const COMBINED_TRIM_THRESHOLD = 1e-9;
 
+/**
+ * Below this maximum a plain product has lost the years whose product is under 1e-308, which
+ * are then within 1e-108 of the maximum: kept in logarithms instead, as they may be all there is.
+ */
+const DIRECT_PRODUCT_FLOOR = 1e-200;
+
 export interface CombinedAge {
   /** Normalised product of the member densities; null when the product has no mass. */
   readonly density: CalendarDensity | null;
@@ -73,6 +79,42 @@ function logPowerSum(member: ScaledMember, n: number): number {
 }
 
 /**
+ * prod_i q_i(t) over `length` years from `youngestCalBp`, divided by its maximum, and the log
+ * of that maximum. Each q_i is at most 1, so a plain product can only underflow; when its
+ * maximum falls below `DIRECT_PRODUCT_FLOOR` the product is redone in logarithms.
+ */
+function scaledProduct(
+  scaled: readonly ScaledMember[],
+  youngestCalBp: number,
+  length: number,
+): { weights: Float64Array; logMax: number } {
+  const weights = new Float64Array(length).fill(1);
+  for (const member of scaled) {
+    const p = member.probabilities;
+    const offset = youngestCalBp - member.startCalBp;
+    for (let i = 0; i < length; i++) weights[i] *= p[offset + i] * member.inverseMax;
+  }
+  let max = 0;
+  for (let i = 0; i < length; i++) if (weights[i] > max) max = weights[i];
+  if (max >= DIRECT_PRODUCT_FLOOR) {
+    for (let i = 0; i < length; i++) weights[i] /= max;
+    return { weights, logMax: Math.log(max) };
+  }
+
+  const logProduct = weights.fill(0);
+  for (const member of scaled) {
+    const p = member.probabilities;
+    const offset = youngestCalBp - member.startCalBp;
+    for (let i = 0; i < length; i++) logProduct[i] += Math.log(p[offset + i] * member.inverseMax);
+  }
+  let logMax = -Infinity;
+  for (let i = 0; i < length; i++) if (logProduct[i] > logMax) logMax = logProduct[i];
+  if (logMax === -Infinity) return { weights: logProduct, logMax };
+  for (let i = 0; i < length; i++) logProduct[i] = Math.exp(logProduct[i] - logMax);
+  return { weights: logProduct, logMax };
+}
+
+/**
  * Combine the age densities of the members of one regional event.
  *
  * Combined density: p(t) = prod_i p_i(t) / sum_u prod_i p_i(u), on the overlap of the members'
@@ -96,8 +138,9 @@ function logPowerSum(member: ScaledMember, n: number): number {
  * numerator and the reference integral carry the same factor, leaving
  * C = exp(-sum_i (m_i - m)^2 / (2 s^2)) = exp(-T/2) with T the Ward & Wilson statistic [analytic].
  *
- * Products are taken in logarithms after scaling each member to a maximum of 1, so neither the
- * product nor the n-th powers underflow when many members are combined.
+ * Each member is scaled to a maximum of 1, so the n-th power sums are at least 1, and the
+ * product is redone in logarithms when a plain product would underflow (many members, or
+ * members that meet only in their tails).
  *
  * Throws RangeError when a member has no mass or holds a negative or non-finite value.
  */
@@ -114,23 +157,10 @@ export function combineAges(members: readonly CalendarDensity[]): CombinedAge {
   if (youngest > oldest) return { density: null, concordance: 0 };
 
   const length = oldest - youngest + 1;
-  const logProduct = new Float64Array(length);
-  for (const member of scaled) {
-    const p = member.probabilities;
-    const offset = youngest - member.startCalBp;
-    for (let i = 0; i < length; i++) logProduct[i] += Math.log(p[offset + i] * member.inverseMax);
-  }
-  let logMax = -Infinity;
-  for (let i = 0; i < length; i++) if (logProduct[i] > logMax) logMax = logProduct[i];
+  const { weights, logMax } = scaledProduct(scaled, youngest, length);
   if (logMax === -Infinity) return { density: null, concordance: 0 };
-
-  const weights = new Float64Array(length);
   let mass = 0;
-  for (let i = 0; i < length; i++) {
-    const value = Math.exp(logProduct[i] - logMax);
-    weights[i] = value;
-    mass += value;
-  }
+  for (let i = 0; i < length; i++) mass += weights[i];
 
   // The scale factors 1/max_i appear to the first power in the numerator and in each reference
   // term, so they cancel in C and the scaled members can be used throughout.
