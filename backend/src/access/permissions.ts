@@ -1,0 +1,41 @@
+/**
+ * Authorization: one permission enum and one role-to-permission table. Services ask for a
+ * permission through `AccessService.requireAccess`; no role strings anywhere else.
+ */
+export type Role = 'ADMIN' | 'RESEARCHER' | 'CORRELATOR' | 'ANALYST' | 'VIEWER';
+export const ROLES: readonly Role[] = ['ADMIN', 'RESEARCHER', 'CORRELATOR', 'ANALYST', 'VIEWER'];
+
+export enum Permission {
+  /** Read everything in the project. */
+  ProjectRead = 'project.read',
+  /** Segments, sites, units, event horizons, samples, imports, attachments. */
+  StratigraphyWrite = 'stratigraphy.write',
+  /** Start and cancel site age model runs. */
+  AgeModelRun = 'age-model.run',
+  /** Create, edit and delete correlation hypotheses and ties. */
+  CorrelationWrite = 'correlation.write',
+  /** Start and cancel recurrence analyses. */
+  RecurrenceRun = 'recurrence.run',
+  /** Members, roles, invitations. */
+  MembersManage = 'members.manage',
+  /** Freeze releases. */
+  ReleaseCreate = 'release.create',
+  /** Read the audit trail. */
+  AuditRead = 'audit.read',
+  /** Install calibration curves. */
+  CurveInstall = 'curve.install',
+}
+
+const READ = [Permission.ProjectRead, Permission.AuditRead];
+
+export const ROLE_PERMISSIONS: Record<Role, ReadonlySet<Permission>> = {
+  ADMIN: new Set(Object.values(Permission)),
+  RESEARCHER: new Set([...READ, Permission.StratigraphyWrite, Permission.AgeModelRun]),
+  CORRELATOR: new Set([...READ, Permission.CorrelationWrite]),
+  ANALYST: new Set([...READ, Permission.RecurrenceRun]),
+  VIEWER: new Set(READ),
+};
+
+export function roleAllows(role: Role, permission: Permission): boolean {
+  return ROLE_PERMISSIONS[role].has(permission);
+}

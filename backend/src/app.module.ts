@@ -1,0 +1,61 @@
+import { ApolloDriver, ApolloDriverConfig } from '@nestjs/apollo';
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { GraphQLModule } from '@nestjs/graphql';
+import { join } from 'node:path';
+import { AccessModule } from './access/access.module';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { CalibrationModule } from './calibration/calibration.module';
+import { formatGraphqlError } from './common/errors/format-graphql-error';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { repositoryRoot } from './common/repo-paths';
+import { DateTimeScalar, JsonScalar } from './common/scalars/scalars';
+import { APP_CONFIG, AppConfig } from './config/config';
+import { ConfigModule } from './config/config.module';
+import { DatabaseModule } from './database/database.module';
+import { EventHorizonsModule } from './event-horizons/event-horizons.module';
+import { HealthModule } from './health/health.module';
+import { MembershipsModule } from './memberships/memberships.module';
+import { ProjectsModule } from './projects/projects.module';
+import { SamplesModule } from './samples/samples.module';
+import { SegmentsModule } from './segments/segments.module';
+import { SitesModule } from './sites/sites.module';
+import { UnitsModule } from './units/units.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    ConfigModule,
+    DatabaseModule,
+    AccessModule,
+    AuditModule,
+    AuthModule,
+    GraphQLModule.forRootAsync<ApolloDriverConfig>({
+      driver: ApolloDriver,
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => ({
+        typePaths: [join(repositoryRoot(), 'schema.graphql')],
+        path: '/graphql',
+        resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar },
+        playground: false,
+        introspection: config.nodeEnv !== 'production',
+        includeStacktraceInErrorResponses: false,
+        context: ({ req }: { req: unknown }) => ({ req }),
+        formatError: (formatted, error) => formatGraphqlError(formatted, error, config.nodeEnv === 'production'),
+      }),
+    }),
+    HealthModule,
+    UsersModule,
+    MembershipsModule,
+    ProjectsModule,
+    SegmentsModule,
+    SitesModule,
+    UnitsModule,
+    EventHorizonsModule,
+    CalibrationModule,
+    SamplesModule,
+  ],
+  providers: [{ provide: APP_GUARD, useClass: JwtAuthGuard }],
+})
+export class AppModule {}

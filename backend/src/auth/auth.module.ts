@@ -1,0 +1,23 @@
+import { Global, Module } from '@nestjs/common';
+import { JwtModule } from '@nestjs/jwt';
+import { PassportModule } from '@nestjs/passport';
+import { APP_CONFIG, AppConfig } from '../config/config';
+import { UsersModule } from '../users/users.module';
+import { AuthResolver } from './auth.resolver';
+import { AuthService } from './auth.service';
+import { JwtStrategy } from './jwt.strategy';
+
+@Global()
+@Module({
+  imports: [
+    PassportModule,
+    UsersModule,
+    JwtModule.registerAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => ({ secret: config.jwtSecret, signOptions: { algorithm: 'HS256' } }),
+    }),
+  ],
+  providers: [AuthService, AuthResolver, JwtStrategy],
+  exports: [AuthService],
+})
+export class AuthModule {}

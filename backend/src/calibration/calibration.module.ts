@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { MembershipsModule } from '../memberships/memberships.module';
+import { CalibrationCurvesRepository } from './calibration-curves.repository';
+import { CalibrationResolver } from './calibration.resolver';
+import { CalibrationService } from './calibration.service';
+import { CurveRegistryService } from './curve-registry.service';
+
+@Module({
+  imports: [MembershipsModule],
+  providers: [CalibrationCurvesRepository, CurveRegistryService, CalibrationService, CalibrationResolver],
+  exports: [CalibrationService, CurveRegistryService],
+})
+export class CalibrationModule {}

@@ -1,0 +1,165 @@
+import { Injectable } from '@nestjs/common';
+import { AccessService } from '../access/access.service';
+import { Permission } from '../access/permissions';
+import { AuditService } from '../audit/audit.service';
+import { AuthUser } from '../auth/auth-user';
+import { CalibrationResult, calibrateRadiocarbon } from '../chronology/calibration/calibrate';
+import { calibrateLuminescence } from '../chronology/calibration/calendar-ages';
+import { CurveFormatError } from '../chronology/calibration/curve';
+import { validateCurveText } from '../chronology/calibration/custom-curve';
+import { CalibrationInputError } from '../chronology/calibration/errors';
+import { calibrationForSample, SampleDating } from '../chronology/calibration/sample-calibration';
+import { badInput, forbidden } from '../common/errors/domain-error';
+import { DatabaseService } from '../database/database.service';
+import { StoredCalibration } from '../database/schema';
+import { MembershipsRepository } from '../memberships/memberships.repository';
+import { CalibrationCurvesRepository } from './calibration-curves.repository';
+import { CalibrateInput, CalibrateLuminescenceInput, InstallCurveInput } from './dto/calibrate.input';
+import { CurveInfo, CurveRegistryService } from './curve-registry.service';
+
+/** A calibration as the API returns it: summaries plus the density as (calBp, probability) points. */
+export interface CalibrationView {
+  curve: string | null;
+  medianCalBp: number;
+  meanCalBp: number;
+  sdYears: number;
+  hpd68: StoredCalibration['hpd68'];
+  hpd95: StoredCalibration['hpd95'];
+  warnings: string[];
+  density: { calBp: number; probability: number }[];
+}
+
+@Injectable()
+export class CalibrationService {
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly registry: CurveRegistryService,
+    private readonly curves: CalibrationCurvesRepository,
+    private readonly memberships: MembershipsRepository,
+    private readonly access: AccessService,
+    private readonly audit: AuditService,
+  ) {}
+
+  async calibrate(input: CalibrateInput): Promise<CalibrationView> {
+    const lookup = await this.registry.lookup();
+    const curve = lookup(input.curve);
+    if (!curve) throw badInput('curve', `curve ${input.curve} is not installed; an administrator can install it from its published file`);
+    return toView(asUserInput(() => calibrateRadiocarbon({ ...input, curve })), input.curve);
+  }
+
+  calibrateLuminescence(input: CalibrateLuminescenceInput): CalibrationView {
+    return toView(asUserInput(() => calibrateLuminescence(input)), null);
+  }
+
+  /** The stored calibration of a sample's dating; BAD_USER_INPUT naming the field when it cannot be calibrated. */
+  async calibrateSample(dating: SampleDating): Promise<StoredCalibration> {
+    const lookup = await this.registry.lookup();
+    return toStored(asUserInput(() => calibrationForSample(dating, lookup)), dating.method === 'RADIOCARBON' ? dating.curve ?? null : null);
+  }
+
+  /** The same, for bulk imports: returns the problem instead of throwing. */
+  async sampleCalibrator(): Promise<(dating: SampleDating) => StoredCalibration | { field: string; message: string }> {
+    const lookup = await this.registry.lookup();
+    return (dating) => {
+      try {
+        return toStored(calibrationForSample(dating, lookup), dating.method === 'RADIOCARBON' ? dating.curve ?? null : null);
+      } catch (error) {
+        if (error instanceof CalibrationInputError) return { field: error.field, message: error.message };
+        throw error;
+      }
+    };
+  }
+
+  listCurves(): Promise<CurveInfo[]> {
+    return this.registry.list();
+  }
+
+  /** Tabulated curve values (every year, or thinned to at most ~2000 points) for the calibration view. */
+  async curveBand(code: string, youngerCalBp: number, olderCalBp: number) {
+    const curve = (await this.registry.lookup())(code);
+    if (!curve) throw badInput('curve', `curve ${code} is not installed`);
+    const from = Math.max(curve.startCalBp, Math.min(youngerCalBp, olderCalBp));
+    const to = Math.min(curve.endCalBp, Math.max(youngerCalBp, olderCalBp));
+    const step = Math.max(1, Math.ceil((to - from) / 2000));
+    const points: { calBp: number; c14Age: number; c14Sigma: number }[] = [];
+    for (let t = from; t <= to; t += step) {
+      const i = t - curve.startCalBp;
+      points.push({ calBp: t, c14Age: curve.mu[i], c14Sigma: curve.sigma[i] });
+    }
+    return points;
+  }
+
+  /** Install or replace a curve from its published file. Open to an ADMIN of any project. */
+  async installCurve(user: AuthUser, input: InstallCurveInput): Promise<CurveInfo> {
+    const mine = await this.memberships.listForUser(user.id);
+    const adminOf = mine.find((m) => m.role === 'ADMIN');
+    if (!adminOf) throw forbidden('only a project administrator can install calibration curves');
+    if (input.code === 'INTCAL20' || input.code === 'MARINE20') {
+      throw badInput('code', `${input.code} is built in and cannot be replaced`);
+    }
+    let parsed: ReturnType<typeof validateCurveText>;
+    try {
+      parsed = validateCurveText(input.text, { code: input.code, name: input.name, marine: input.marine });
+    } catch (error) {
+      if (error instanceof CurveFormatError) throw badInput('text', error.message);
+      throw error;
+    }
+    await this.database.transaction(async (tx) => {
+      const row = await this.curves.upsert(
+        {
+          code: input.code,
+          name: input.name,
+          marine: input.marine,
+          sourceText: input.text,
+          youngestCalBp: parsed.coverage.youngestCalBp,
+          oldestCalBp: parsed.coverage.oldestCalBp,
+          installedById: user.id,
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
+        actor: user, projectId: null, action: 'install', objectType: 'calibrationCurve', objectId: row.id,
+        after: { code: row.code, name: row.name, marine: row.marine, coverage: parsed.coverage },
+      });
+    });
+    await this.registry.reload();
+    return {
+      code: input.code, name: input.name, marine: input.marine, builtIn: false,
+      youngestCalBp: parsed.coverage.youngestCalBp, oldestCalBp: parsed.coverage.oldestCalBp,
+    };
+  }
+}
+
+function asUserInput<T>(compute: () => T): T {
+  try {
+    return compute();
+  } catch (error) {
+    if (error instanceof CalibrationInputError) throw badInput(error.field, error.message);
+    throw error;
+  }
+}
+
+export function toStored(result: CalibrationResult, curve: string | null): StoredCalibration {
+  return {
+    curve,
+    medianCalBp: result.medianCalBp,
+    meanCalBp: result.meanCalBp,
+    sdYears: result.sdYears,
+    hpd68: result.hpd68,
+    hpd95: result.hpd95,
+    warnings: result.warnings,
+    density: { startCalBp: result.density.startCalBp, probabilities: Array.from(result.density.probabilities) },
+  };
+}
+
+export function storedToView(stored: StoredCalibration): CalibrationView {
+  const { startCalBp, probabilities } = stored.density;
+  return {
+    ...stored,
+    density: probabilities.map((probability, i) => ({ calBp: startCalBp + i, probability })),
+  };
+}
+
+function toView(result: CalibrationResult, curve: string | null): CalibrationView {
+  return storedToView(toStored(result, curve));
+}

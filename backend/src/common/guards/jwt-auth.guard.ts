@@ -1,0 +1,29 @@
+import { ExecutionContext, Injectable } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { AuthGuard } from '@nestjs/passport';
+import { unauthenticated } from '../errors/domain-error';
+import { IS_PUBLIC } from '../decorators/public.decorator';
+import { requestOf } from '../request-of';
+
+/** The global guard: every operation needs a valid bearer token unless marked `@Public()`. */
+@Injectable()
+export class JwtAuthGuard extends AuthGuard('jwt') {
+  constructor(private readonly reflector: Reflector) {
+    super();
+  }
+
+  override getRequest(context: ExecutionContext) {
+    return requestOf(context);
+  }
+
+  override canActivate(context: ExecutionContext) {
+    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, [context.getHandler(), context.getClass()]);
+    if (isPublic) return true;
+    return super.canActivate(context);
+  }
+
+  override handleRequest<TUser>(error: unknown, user: TUser | false): TUser {
+    if (error || !user) throw unauthenticated('a valid bearer token is required: sign in first');
+    return user;
+  }
+}

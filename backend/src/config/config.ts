@@ -1,0 +1,99 @@
+/**
+ * The one typed configuration object, read once at boot. This is the only module that reads
+ * `process.env`; a bad or missing variable fails the start with every problem listed at once.
+ */
+
+export interface AppConfig {
+  readonly nodeEnv: 'development' | 'test' | 'production';
+  readonly host: string;
+  readonly port: number;
+  readonly databaseUrl: string;
+  readonly jwtSecret: string;
+  readonly jwtExpiresInSeconds: number;
+  /** Seed the invented demo project on first start (never in production). */
+  readonly seedDemo: boolean;
+  /** Public base URL used in e-mailed links. */
+  readonly publicUrl: string;
+  readonly smtp: { host: string; port: number; secure: boolean; user?: string; password?: string; from: string };
+  readonly s3: {
+    endpoint?: string;
+    region: string;
+    bucket: string;
+    accessKeyId?: string;
+    secretAccessKey?: string;
+    forcePathStyle: boolean;
+  };
+  /** Folder holding the built frontend, served at `/` when present. */
+  readonly frontendDist?: string;
+  /** Concurrent jobs one worker process runs. */
+  readonly workerConcurrency: number;
+}
+
+export class ConfigError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Invalid configuration:\n  - ${problems.join('\n  - ')}`);
+    this.name = 'ConfigError';
+  }
+}
+
+type Env = Record<string, string | undefined>;
+
+/** Build and validate the configuration from an environment (defaults to `process.env`). */
+export function loadConfig(env: Env = process.env): AppConfig {
+  const problems: string[] = [];
+  const nodeEnv = (env.NODE_ENV ?? 'development') as AppConfig['nodeEnv'];
+  if (!['development', 'test', 'production'].includes(nodeEnv)) {
+    problems.push(`NODE_ENV must be development, test or production, got "${env.NODE_ENV}"`);
+  }
+  const integer = (name: string, fallback: number, min = 0, max = 65535): number => {
+    const raw = env[name];
+    if (raw === undefined || raw === '') return fallback;
+    const value = Number(raw);
+    if (!Number.isInteger(value) || value < min || value > max) {
+      problems.push(`${name} must be an integer in ${min}..${max}, got "${raw}"`);
+      return fallback;
+    }
+    return value;
+  };
+  const databaseUrl = env.DATABASE_URL ?? '';
+  if (!databaseUrl) problems.push('DATABASE_URL is required (npm start and npm test set it for you)');
+  else if (!/^postgres(ql)?:\/\//.test(databaseUrl)) problems.push('DATABASE_URL must be a postgres:// URL');
+  const jwtSecret = env.JWT_SECRET ?? (nodeEnv === 'production' ? '' : 'stratochron-development-secret-not-for-production');
+  if (jwtSecret.length < 32) problems.push('JWT_SECRET must be at least 32 characters');
+  const port = integer('PORT', 3000, 1);
+  const seedDemo = (env.SEED_DEMO ?? 'false') === 'true';
+  if (seedDemo && nodeEnv === 'production') problems.push('SEED_DEMO must not be true in production');
+  const config: AppConfig = {
+    nodeEnv,
+    host: env.HOST ?? '127.0.0.1',
+    port,
+    databaseUrl,
+    jwtSecret,
+    jwtExpiresInSeconds: integer('JWT_EXPIRES_IN_SECONDS', 12 * 3600, 60, 30 * 86400),
+    seedDemo,
+    publicUrl: env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
+    smtp: {
+      host: env.SMTP_HOST ?? '127.0.0.1',
+      port: integer('SMTP_PORT', 2525, 1),
+      secure: env.SMTP_SECURE === 'true',
+      user: env.SMTP_USER,
+      password: env.SMTP_PASSWORD,
+      from: env.MAIL_FROM ?? 'Stratochron <no-reply@stratochron.test>',
+    },
+    s3: {
+      endpoint: env.S3_ENDPOINT || undefined,
+      region: env.S3_REGION ?? 'us-east-1',
+      bucket: env.S3_BUCKET ?? 'stratochron-attachments',
+      accessKeyId: env.S3_ACCESS_KEY_ID,
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+      forcePathStyle: (env.S3_FORCE_PATH_STYLE ?? (env.S3_ENDPOINT ? 'true' : 'false')) === 'true',
+    },
+    frontendDist: env.FRONTEND_DIST || undefined,
+    workerConcurrency: integer('WORKER_CONCURRENCY', 1, 1, 64),
+  };
+  if (problems.length > 0) throw new ConfigError(problems);
+  return config;
+}
+
+/** Injection token for the configuration object. */
+export const APP_CONFIG = Symbol('APP_CONFIG');

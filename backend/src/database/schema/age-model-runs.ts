@@ -1,0 +1,30 @@
+import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns';
+import { jobStatusEnum } from './enums';
+import { sites } from './sites';
+import { users } from './users';
+
+/** One computation of a site's chronology. Inputs are snapshotted; results are JSON. */
+export const ageModelRuns = pgTable(
+  'age_model_runs',
+  {
+    id: id(),
+    siteId: uuid('site_id').notNull().references(() => sites.id, { onDelete: 'cascade' }),
+    requestedById: uuid('requested_by_id').references(() => users.id, { onDelete: 'set null' }),
+    status: jobStatusEnum('status').notNull().default('QUEUED'),
+    progress: doublePrecision('progress').notNull().default(0),
+    message: text('message'),
+    seed: integer('seed').notNull(),
+    settings: jsonb('settings').notNull(),
+    inputSnapshot: jsonb('input_snapshot').notNull(),
+    /** Fingerprint of the column and samples the run was computed from; stale when the site's differs. */
+    inputFingerprint: text('input_fingerprint').notNull(),
+    diagnostics: jsonb('diagnostics'),
+    results: jsonb('results'),
+    attempts: integer('attempts').notNull().default(0),
+    startedAt: timestamp('started_at', { withTimezone: true, mode: 'date' }),
+    finishedAt: timestamp('finished_at', { withTimezone: true, mode: 'date' }),
+    ...timestamps,
+  },
+  (t) => [index('age_model_runs_site_idx').on(t.siteId, t.createdAt)],
+);

@@ -1,0 +1,39 @@
+import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns';
+import { jobStatusEnum } from './enums';
+import { hypotheses } from './hypotheses';
+import { projects } from './projects';
+import { releases } from './releases';
+import { segments } from './segments';
+import { sites } from './sites';
+import { users } from './users';
+
+/** A recurrence analysis with its inputs, so it can be re-run and cited. */
+export const recurrenceAnalyses = pgTable(
+  'recurrence_analyses',
+  {
+    id: id(),
+    projectId: uuid('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+    segmentId: uuid('segment_id').references(() => segments.id, { onDelete: 'set null' }),
+    siteId: uuid('site_id').references(() => sites.id, { onDelete: 'set null' }),
+    hypothesisId: uuid('hypothesis_id').references(() => hypotheses.id, { onDelete: 'set null' }),
+    hypothesisVersion: integer('hypothesis_version'),
+    releaseId: uuid('release_id').references(() => releases.id, { onDelete: 'restrict' }),
+    requestedById: uuid('requested_by_id').references(() => users.id, { onDelete: 'set null' }),
+    status: jobStatusEnum('status').notNull().default('QUEUED'),
+    progress: doublePrecision('progress').notNull().default(0),
+    message: text('message'),
+    seed: integer('seed').notNull(),
+    forecastStartYear: integer('forecast_start_year').notNull(),
+    windowsYears: doublePrecision('windows_years').array().notNull(),
+    draws: integer('draws').notNull(),
+    settings: jsonb('settings').notNull(),
+    inputSnapshot: jsonb('input_snapshot').notNull(),
+    results: jsonb('results'),
+    attempts: integer('attempts').notNull().default(0),
+    startedAt: timestamp('started_at', { withTimezone: true, mode: 'date' }),
+    finishedAt: timestamp('finished_at', { withTimezone: true, mode: 'date' }),
+    ...timestamps,
+  },
+  (t) => [index('recurrence_analyses_project_idx').on(t.projectId, t.createdAt)],
+);

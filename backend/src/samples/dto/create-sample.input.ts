@@ -1,0 +1,104 @@
+import { OmitType, PartialType } from '@nestjs/mapped-types';
+import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, IsUUID, Length, Matches, Max, Min } from 'class-validator';
+import { CURVE_CODES, CurveCode } from '../../calibration/dto/calibrate.input';
+
+export const DATING_METHODS = ['RADIOCARBON', 'LUMINESCENCE', 'HISTORICAL', 'TEPHRA'] as const;
+export const SAMPLE_MATERIALS = [
+  'DETRITAL_CHARCOAL', 'IN_SITU_PLANT', 'PLANT_MACROFOSSIL', 'PLANKTIC_FORAMS', 'BENTHIC_FORAMS', 'SHELL', 'BULK_SEDIMENT', 'OTHER',
+] as const;
+export const AGE_RELATIONS = ['DATES_DEPOSIT', 'OLDER_THAN_DEPOSIT', 'YOUNGER_THAN_DEPOSIT'] as const;
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+/**
+ * Types and ranges are checked here; which fields each method requires (and whether the values
+ * can be calibrated at all) is checked by the calibration engine, so a form, an update and an
+ * import line get the same messages.
+ */
+export class CreateSampleInput {
+  @IsUUID()
+  siteId: string;
+
+  @IsUUID()
+  unitId: string;
+
+  @IsString()
+  @Length(1, 64)
+  @Matches(/^[\w.\-/ ]+$/, { message: 'labCode may hold letters, digits, spaces and . - _ / only' })
+  labCode: string;
+
+  @IsIn(DATING_METHODS)
+  method: (typeof DATING_METHODS)[number];
+
+  @IsIn(SAMPLE_MATERIALS)
+  material: (typeof SAMPLE_MATERIALS)[number];
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0, { message: 'depthM cannot be negative' })
+  @Max(10000)
+  depthM?: number | null;
+
+  @IsIn(AGE_RELATIONS)
+  ageRelation: (typeof AGE_RELATIONS)[number];
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0, { message: 'c14Age cannot be negative: a post-bomb (modern) sample cannot be calibrated on these curves' })
+  c14Age?: number | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @IsPositive({ message: 'c14Error must be greater than 0 (the 1-sigma error in 14C years)' })
+  c14Error?: number | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(-60)
+  @Max(20)
+  delta13C?: number | null;
+
+  @IsOptional()
+  @IsIn(CURVE_CODES)
+  curve?: CurveCode | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(-2000)
+  @Max(5000)
+  deltaR?: number | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0, { message: 'deltaRError cannot be negative' })
+  deltaRError?: number | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  calendarAgeBp?: number | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @IsPositive({ message: 'calendarErrorYears must be greater than 0' })
+  calendarErrorYears?: number | null;
+
+  @IsOptional()
+  @IsInt()
+  measurementYear?: number | null;
+
+  @IsOptional()
+  @IsBoolean()
+  excluded?: boolean;
+
+  @IsOptional()
+  @IsString()
+  @Length(0, 1000)
+  exclusionReason?: string | null;
+
+  @IsOptional()
+  @IsString()
+  @Length(0, 5000)
+  notes?: string | null;
+}
+
+export class UpdateSampleInput extends PartialType(OmitType(CreateSampleInput, ['siteId'] as const)) {}

@@ -1,0 +1,43 @@
+import { OmitType, PartialType } from '@nestjs/mapped-types';
+import { IsIn, IsInt, IsNumber, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
+
+export const FACIES = [
+  'SOIL', 'COLLUVIUM', 'PEAT', 'TIDAL_MUD', 'SAND_SHEET', 'TURBIDITE', 'HEMIPELAGIC_MUD', 'TEPHRA', 'OTHER',
+] as const;
+export type Facies = (typeof FACIES)[number];
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+export class CreateUnitInput {
+  @IsUUID()
+  siteId: string;
+
+  @IsInt()
+  @Min(1)
+  @Max(10000)
+  position: number;
+
+  @IsString()
+  @Length(1, 200)
+  name: string;
+
+  @IsNumber(finite)
+  @Min(0)
+  @Max(10000)
+  topDepthM: number;
+
+  @IsNumber(finite)
+  @Min(0)
+  @Max(10000)
+  baseDepthM: number;
+
+  @IsIn(FACIES)
+  facies: Facies;
+
+  @IsOptional()
+  @IsString()
+  @Length(0, 5000)
+  notes?: string | null;
+}
+
+export class UpdateUnitInput extends PartialType(OmitType(CreateUnitInput, ['siteId'] as const)) {}

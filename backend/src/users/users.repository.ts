@@ -1,0 +1,30 @@
+import { Injectable } from '@nestjs/common';
+import { eq, sql } from 'drizzle-orm';
+import { DatabaseService, Executor } from '../database/database.service';
+import { users } from '../database/schema';
+
+export type UserRow = typeof users.$inferSelect;
+
+@Injectable()
+export class UsersRepository {
+  constructor(private readonly database: DatabaseService) {}
+
+  async findByEmail(email: string, executor: Executor = this.database.db): Promise<UserRow | undefined> {
+    const [row] = await executor.select().from(users).where(eq(sql`lower(${users.email})`, email.toLowerCase())).limit(1);
+    return row;
+  }
+
+  async findById(id: string, executor: Executor = this.database.db): Promise<UserRow | undefined> {
+    const [row] = await executor.select().from(users).where(eq(users.id, id)).limit(1);
+    return row;
+  }
+
+  async insert(values: typeof users.$inferInsert, executor: Executor = this.database.db): Promise<UserRow> {
+    const [row] = await executor.insert(users).values(values).returning();
+    return row;
+  }
+
+  async setPasswordHash(id: string, passwordHash: string, executor: Executor = this.database.db): Promise<void> {
+    await executor.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, id));
+  }
+}
