@@ -71,10 +71,17 @@ export function benchmarkCorrelationChecks(): CorrelationBenchmark {
   let regionalEventCount = 0;
   checkHypothesis({ events, ties, tectonicSetting: 'SUBDUCTION_INTERFACE' }); // warm-up
   const checkHypothesisMs = medianMs(9, () => {
-    regionalEventCount = checkHypothesis({ events, ties, tectonicSetting: 'SUBDUCTION_INTERFACE' }).regionalEvents.length;
+    const check = checkHypothesis({ events, ties, tectonicSetting: 'SUBDUCTION_INTERFACE' });
+    regionalEventCount = check.regionalEvents.length;
   });
   const last = ties[ties.length - 1];
   const others = ties.slice(0, -1);
   const validateTieMs = medianMs(21, () => validateTie(events, others, last));
-  return { events: events.length, ties: ties.length, regionalEvents: regionalEventCount, checkHypothesisMs, validateTieMs };
+  return {
+    events: events.length,
+    ties: ties.length,
+    regionalEvents: regionalEventCount,
+    checkHypothesisMs,
+    validateTieMs,
+  };
 }

@@ -109,7 +109,12 @@ function formatNumber(x: number, digits: number): string {
  * Run every correlation check of a hypothesis. Throws `CorrelationInputError` when ties name
  * unknown events or put two events of one site together, or an event's data is unusable.
  */
-export function checkHypothesis({ events, ties, tectonicSetting, scalingRelation }: HypothesisInput): HypothesisCheck {
+export function checkHypothesis({
+  events,
+  ties,
+  tectonicSetting,
+  scalingRelation,
+}: HypothesisInput): HypothesisCheck {
   events.forEach(checkPosition);
   const groups = regionalEvents(events, ties);
   const eventsById = new Map(events.map((event) => [event.id, event]));
@@ -124,7 +129,9 @@ export function checkHypothesis({ events, ties, tectonicSetting, scalingRelation
     const { density, concordance } = combineAges(members.map((member) => member.posterior));
     const combined = density ? summarise(density) : null;
     if (!density) {
-      notes.push("The members' age densities share no year, so they cannot date one earthquake; no combined age is given.");
+      notes.push(
+        "The members' age densities share no year, so they cannot date one earthquake; no combined age is given.",
+      );
     }
     const single = members.length === 1;
     const concordanceWarning = !single && concordance < CONCORDANCE_WARNING_THRESHOLD;

@@ -130,7 +130,9 @@ function tieEnds(tie: Tie, index: Map<string, number>): [number, number] {
   const b = index.get(tie.eventBId);
   if (a === undefined || b === undefined) {
     const missing = a === undefined ? tie.eventAId : tie.eventBId;
-    throw new CorrelationInputError(`Tie ${tie.id} refers to event ${missing}, which is not in this project's events.`);
+    throw new CorrelationInputError(
+      `Tie ${tie.id} refers to event ${missing}, which is not in this project's events.`,
+    );
   }
   if (a === b) throw new CorrelationInputError(`Tie ${tie.id} ties an event to itself.`);
   return [a, b];
@@ -156,7 +158,10 @@ function applyTie(union: EventUnion, events: readonly SiteEvent[], tie: Tie, a: 
   union.join(a, b);
 }
 
-function buildUnion(events: readonly SiteEvent[], ties: readonly Tie[]): { union: EventUnion; index: Map<string, number> } {
+function buildUnion(
+  events: readonly SiteEvent[],
+  ties: readonly Tie[],
+): { union: EventUnion; index: Map<string, number> } {
   const index = indexEvents(events);
   const union = new EventUnion(events);
   for (const tie of ties) {
