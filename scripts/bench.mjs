@@ -1,0 +1,16 @@
+// `npm run bench`: build the backend and run its benchmark entry point, which prints the figures.
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { ensureBuilt } from './lib/build.mjs';
+import { ensureDependencies } from './lib/deps.mjs';
+import { ROOT, note, runInherit } from './lib/run.mjs';
+
+const BENCH_ENTRY = join(ROOT, 'backend', 'dist', 'bench', 'main.js');
+
+ensureDependencies();
+ensureBuilt('backend');
+if (existsSync(BENCH_ENTRY)) {
+  process.exitCode = runInherit(process.execPath, [BENCH_ENTRY]);
+} else {
+  note('no benchmarks yet (backend/dist/bench/main.js is not built)');
+}
