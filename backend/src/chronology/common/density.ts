@@ -116,20 +116,31 @@ export function quantile(density: CalendarDensity, q: number): number {
 }
 
 /**
+ * Relative slack on the HPD level: without it, rounding in the running sum decides ties (fifty
+ * years of 0.01 sum to 0.49999999999999994, so the 50 % range of a flat 100-year density took 51
+ * years).
+ */
+export const HPD_LEVEL_ROUNDING = 1e-12;
+
+/**
  * Highest-density ranges holding at least `level` of the mass: sort grid years by probability,
  * keep the highest until their sum reaches the level, then merge runs of kept years. Each range
- * reports its own mass. Ranges are returned oldest first.
+ * reports its own mass. Ranges are returned oldest first. Among years of equal probability at the
+ * cut, younger years are kept first. A sum within HPD_LEVEL_ROUNDING of the level counts as
+ * reaching it.
  */
 export function hpdRanges(density: CalendarDensity, level: number): HpdRange[] {
   const p = density.probabilities;
   const mass = totalMass(density);
-  const order = Array.from(p.keys()).sort((a, b) => p[b] - p[a] || a - b);
   const kept = new Uint8Array(p.length);
-  let cumulative = 0;
-  for (const i of order) {
-    if (cumulative >= level * mass) break;
-    kept[i] = 1;
-    cumulative += p[i];
+  const { cut, tiesKept } = hpdCut(p, level * mass * (1 - HPD_LEVEL_ROUNDING));
+  let ties = tiesKept;
+  for (let i = 0; i < p.length; i++) {
+    if (p[i] > cut) kept[i] = 1;
+    else if (p[i] === cut && ties > 0) {
+      kept[i] = 1;
+      ties--;
+    }
   }
   const ranges: HpdRange[] = [];
   let i = 0;
@@ -149,6 +160,71 @@ export function hpdRanges(density: CalendarDensity, level: number): HpdRange[] {
     i = j;
   }
   return ranges.reverse();
+}
+
+/**
+ * The HPD cut for `target` mass: the years kept are those above `cut` plus the first `tiesKept`
+ * (youngest) years equal to it. This is the set the sort-and-accumulate rule keeps, found by a
+ * weighted quickselect in expected linear time, because sorting every density is the slowest step
+ * of calibrating thousands of ages (a full sort of a few hundred values costs more than computing
+ * the likelihood). Sums are taken per partition rather than in sorted order; they differ from a
+ * sequential sum only in the last bits, far inside HPD_LEVEL_ROUNDING.
+ */
+function hpdCut(p: Float64Array, target: number): { cut: number; tiesKept: number } {
+  if (!(target > 0)) return { cut: Infinity, tiesKept: 0 };
+  const a = p.slice();
+  let lo = 0;
+  let hi = a.length;
+  let remaining = target;
+  let seed = 0x9e3779b9;
+  while (hi > lo) {
+    // Median of three pseudo-random picks: densities are unimodal, so a fixed position is a poor
+    // pivot. The picks only affect speed, never which years are kept.
+    seed = nextPivotSeed(seed);
+    const x = a[lo + (seed % (hi - lo))];
+    seed = nextPivotSeed(seed);
+    const y = a[lo + (seed % (hi - lo))];
+    seed = nextPivotSeed(seed);
+    const z = a[lo + (seed % (hi - lo))];
+    const pivot = Math.max(Math.min(x, y), Math.min(Math.max(x, y), z));
+    // Three-way partition of a[lo, hi) into [> pivot | == pivot | < pivot].
+    let greaterEnd = lo;
+    let lessStart = hi;
+    let i = lo;
+    let sumGreater = 0;
+    while (i < lessStart) {
+      const v = a[i];
+      if (v > pivot) {
+        a[i] = a[greaterEnd];
+        a[greaterEnd++] = v;
+        sumGreater += v;
+        i++;
+      } else if (v < pivot) {
+        a[i] = a[--lessStart];
+        a[lessStart] = v;
+      } else {
+        i++;
+      }
+    }
+    if (sumGreater >= remaining) {
+      hi = greaterEnd;
+      continue;
+    }
+    remaining -= sumGreater;
+    const equal = lessStart - greaterEnd;
+    if (pivot > 0 && equal * pivot >= remaining) {
+      return { cut: pivot, tiesKept: Math.min(equal, Math.max(1, Math.ceil(remaining / pivot))) };
+    }
+    remaining -= equal * pivot;
+    lo = lessStart;
+  }
+  // The level is never reached (a level of 1 or rounding): every year is kept.
+  return { cut: -Infinity, tiesKept: 0 };
+}
+
+/** A 32-bit linear congruential step (Numerical Recipes constants), for pivot picks only. */
+function nextPivotSeed(seed: number): number {
+  return (Math.imul(seed, 1664525) + 1013904223) >>> 0;
 }
 
 /** A normal density N(mean, sd) on the 1-year grid covering mean +- 6 sd (cal BP). */
