@@ -9,7 +9,7 @@
  *   L(t) = N(x; mu(t) + DeltaR, S(t)),  S(t)^2 = s^2 + sigma(t)^2 + sigma_DeltaR^2
  *
  * with mu, sigma the curve on its 1-year grid and DeltaR the local marine reservoir offset
- * (Stuiver, Pearson & Braziunas 1986, Radiocarbon 28(2B):980-1021, for the Delta-R convention).
+ * (Stuiver, Pearson & Braziunas 1986, Radiocarbon 28(2B), for the Delta-R convention [memory for pages]).
  * The 1/S(t) factor of the normal density is kept because S(t) changes along the curve. With a
  * uniform calendar prior the density is L(t) normalised over the grid.
  */
