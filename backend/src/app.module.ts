@@ -1,21 +1,25 @@
 import { ApolloDriver, ApolloDriverConfig } from '@nestjs/apollo';
 import { Module } from '@nestjs/common';
-import { APP_GUARD } from '@nestjs/core';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { GraphQLModule } from '@nestjs/graphql';
 import { join } from 'node:path';
 import { AccessModule } from './access/access.module';
+import { AgeModelsModule } from './age-models/age-models.module';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { CalibrationModule } from './calibration/calibration.module';
 import { formatGraphqlError } from './common/errors/format-graphql-error';
+import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { repositoryRoot } from './common/repo-paths';
 import { DateTimeScalar, JsonScalar } from './common/scalars/scalars';
 import { APP_CONFIG, AppConfig } from './config/config';
 import { ConfigModule } from './config/config.module';
 import { DatabaseModule } from './database/database.module';
+import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
+import { JobsModule } from './jobs/jobs.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
 import { SamplesModule } from './samples/samples.module';
@@ -42,7 +46,7 @@ import { UsersModule } from './users/users.module';
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
         context: ({ req }: { req: unknown }) => ({ req }),
-        formatError: (formatted, error) => formatGraphqlError(formatted, error, config.nodeEnv === 'production'),
+        formatError: (formatted) => formatGraphqlError(formatted, config.nodeEnv === 'production'),
       }),
     }),
     HealthModule,
@@ -55,7 +59,13 @@ import { UsersModule } from './users/users.module';
     EventHorizonsModule,
     CalibrationModule,
     SamplesModule,
+    DemoModule,
+    JobsModule,
+    AgeModelsModule,
   ],
-  providers: [{ provide: APP_GUARD, useClass: JwtAuthGuard }],
+  providers: [
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_FILTER, useClass: GraphqlExceptionFilter },
+  ],
 })
 export class AppModule {}

@@ -1,11 +1,14 @@
-import { HttpException, HttpStatus } from '@nestjs/common';
-import { GraphQLError, GraphQLFormattedError } from 'graphql';
-import { DomainError, ErrorCode } from './domain-error';
+import { HttpStatus } from '@nestjs/common';
+import { GraphQLFormattedError } from 'graphql';
+import { ErrorCode } from './domain-error';
 
-/** GraphQL's own codes for errors that never reached a resolver. */
-type ProtocolCode = 'GRAPHQL_PARSE_FAILED' | 'GRAPHQL_VALIDATION_FAILED' | 'INTERNAL_SERVER_ERROR';
+/** The codes clients may see; GraphQL's own for requests that never reached a resolver. */
+const CLIENT_CODES = new Set<string>([
+  'UNAUTHENTICATED', 'FORBIDDEN', 'BAD_USER_INPUT', 'NOT_FOUND', 'CONFLICT', 'TOO_MANY_REQUESTS',
+  'GRAPHQL_PARSE_FAILED', 'GRAPHQL_VALIDATION_FAILED', 'BAD_REQUEST', 'PERSISTED_QUERY_NOT_FOUND',
+]);
 
-function codeForStatus(status: number): ErrorCode | 'INTERNAL_SERVER_ERROR' {
+export function codeForStatus(status: number): ErrorCode | 'INTERNAL_SERVER_ERROR' {
   switch (status) {
     case HttpStatus.UNAUTHORIZED:
       return 'UNAUTHENTICATED';
@@ -26,34 +29,16 @@ function codeForStatus(status: number): ErrorCode | 'INTERNAL_SERVER_ERROR' {
 }
 
 /**
- * Map any error to what the client sees. Domain errors keep their message and field; unknown
- * errors become INTERNAL_SERVER_ERROR with a generic message in production (never a stack trace).
+ * The last word on what a client sees. Errors coded by GraphqlExceptionFilter (and GraphQL's
+ * own parse and validation errors) pass with their code; anything else is INTERNAL_SERVER_ERROR,
+ * with a generic message in production and never a stack trace.
  */
-export function formatGraphqlError(
-  formatted: GraphQLFormattedError,
-  error: unknown,
-  production: boolean,
-): GraphQLFormattedError {
-  const original = error instanceof GraphQLError ? error.originalError : error;
+export function formatGraphqlError(formatted: GraphQLFormattedError, production: boolean): GraphQLFormattedError {
+  const code = formatted.extensions?.code;
   const base = { message: formatted.message, locations: formatted.locations, path: formatted.path };
-  if (original instanceof DomainError) {
-    return {
-      ...base,
-      message: original.message,
-      extensions: { code: original.code, ...(original.field ? { field: original.field } : {}), ...original.details },
-    };
+  if (typeof code === 'string' && CLIENT_CODES.has(code)) {
+    const { stacktrace: _stacktrace, ...extensions } = formatted.extensions ?? {};
+    return { ...base, extensions };
   }
-  if (original instanceof HttpException) {
-    return { ...base, extensions: { code: codeForStatus(original.getStatus()) } };
-  }
-  const existing = formatted.extensions?.code as ProtocolCode | string | undefined;
-  if (existing && existing !== 'INTERNAL_SERVER_ERROR') {
-    // Parse and validation errors and the like: keep GraphQL's own code, drop internals.
-    return { ...base, extensions: { code: existing } };
-  }
-  return {
-    ...base,
-    message: production ? 'Internal server error' : formatted.message,
-    extensions: { code: 'INTERNAL_SERVER_ERROR' },
-  };
+  return { ...base, message: production ? 'Internal server error' : formatted.message, extensions: { code: 'INTERNAL_SERVER_ERROR' } };
 }

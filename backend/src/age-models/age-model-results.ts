@@ -1,0 +1,98 @@
+/**
+ * How an age model run's inputs and results are stored (JSON columns) and read back: densities as
+ * plain number arrays, joint event draws row-major. Pure functions, shared by the API and workers.
+ */
+import { createHash } from 'node:crypto';
+import { AgeModelResult } from '../chronology/age-model/age-model';
+import { AgeModelInput } from '../chronology/age-model/column';
+import { CalendarDensity, DensitySummary, trim } from '../chronology/common/density';
+
+export interface StoredDensity {
+  startCalBp: number;
+  probabilities: number[];
+}
+
+export interface StoredAgeModelInput {
+  units: AgeModelInput['units'];
+  eventHorizons: AgeModelInput['eventHorizons'];
+  samples: (Omit<AgeModelInput['samples'][number], 'likelihood'> & { likelihood: StoredDensity })[];
+  orderSamplesByDepth: boolean;
+}
+
+export interface StoredEventPosterior {
+  eventHorizonId: string;
+  summary: DensitySummary;
+  rhat: number;
+  ess: number;
+  density: StoredDensity;
+}
+
+export interface StoredSamplePosterior {
+  sampleId: string;
+  outlierProbability: number;
+  medianCalBp: number;
+  hpd95: DensitySummary['hpd95'];
+}
+
+export interface StoredAgeModelResults {
+  events: StoredEventPosterior[];
+  samples: StoredSamplePosterior[];
+  eventDraws: { eventHorizonIds: string[]; drawCount: number; draws: number[] };
+}
+
+export function storeDensity(density: CalendarDensity): StoredDensity {
+  const trimmed = trim(density, 1e-6);
+  return { startCalBp: trimmed.startCalBp, probabilities: Array.from(trimmed.probabilities, (p) => Number(p.toPrecision(6))) };
+}
+
+export function loadDensity(stored: StoredDensity): CalendarDensity {
+  return { startCalBp: stored.startCalBp, probabilities: Float64Array.from(stored.probabilities) };
+}
+
+export function storeInput(input: AgeModelInput): StoredAgeModelInput {
+  return {
+    units: input.units,
+    eventHorizons: input.eventHorizons,
+    samples: input.samples.map((s) => ({ ...s, likelihood: { startCalBp: s.likelihood.startCalBp, probabilities: Array.from(s.likelihood.probabilities) } })),
+    orderSamplesByDepth: input.orderSamplesByDepth ?? false,
+  };
+}
+
+export function loadInput(stored: StoredAgeModelInput): AgeModelInput {
+  return { ...stored, samples: stored.samples.map((s) => ({ ...s, likelihood: loadDensity(s.likelihood) })) };
+}
+
+export function storeResults(result: AgeModelResult): StoredAgeModelResults {
+  return {
+    events: result.events.map((e) => ({
+      eventHorizonId: e.eventHorizonId,
+      summary: e.summary,
+      rhat: e.rhat,
+      ess: e.ess,
+      density: storeDensity(e.density),
+    })),
+    samples: result.samples.map((s) => ({
+      sampleId: s.sampleId,
+      outlierProbability: s.outlierProbability,
+      medianCalBp: s.medianCalBp,
+      hpd95: s.summary.hpd95,
+    })),
+    eventDraws: {
+      eventHorizonIds: [...result.eventDraws.eventHorizonIds],
+      drawCount: result.eventDraws.drawCount,
+      draws: Array.from(result.eventDraws.draws, (v) => Math.round(v * 10) / 10),
+    },
+  };
+}
+
+/**
+ * A fingerprint of everything a run depends on (every unit, horizon and sample with its version):
+ * when the site's fingerprint differs from a run's, the run is out of date.
+ */
+export function columnFingerprint(parts: { units: { id: string; version: number }[]; eventHorizons: { id: string; version: number }[]; samples: { id: string; version: number }[] }): string {
+  const hash = createHash('sha256');
+  for (const [kind, rows] of Object.entries(parts)) {
+    for (const row of [...rows].sort((a, b) => a.id.localeCompare(b.id))) hash.update(`${kind}:${row.id}:${row.version};`);
+  }
+  return hash.digest('hex');
+}

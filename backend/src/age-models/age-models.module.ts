@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { EventHorizonsModule } from '../event-horizons/event-horizons.module';
+import { SamplesModule } from '../samples/samples.module';
+import { SitesModule } from '../sites/sites.module';
+import { UnitsModule } from '../units/units.module';
+import { AgeModelRunsRepository } from './age-model-runs.repository';
+import { AgeModelJob } from './age-model.job';
+import { AgeModelsResolver, EventHorizonPosteriorResolver, SiteAgeModelsResolver } from './age-models.resolver';
+import { AgeModelsService } from './age-models.service';
+
+@Module({
+  imports: [SitesModule, UnitsModule, EventHorizonsModule, SamplesModule],
+  providers: [AgeModelRunsRepository, AgeModelsService, AgeModelJob, AgeModelsResolver, SiteAgeModelsResolver, EventHorizonPosteriorResolver],
+  exports: [AgeModelsService, AgeModelJob, AgeModelRunsRepository],
+})
+export class AgeModelsModule {}

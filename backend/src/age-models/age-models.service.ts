@@ -1,0 +1,146 @@
+import { Injectable } from '@nestjs/common';
+import { AccessService } from '../access/access.service';
+import { Permission } from '../access/permissions';
+import { AuditService } from '../audit/audit.service';
+import { AuthUser } from '../auth/auth-user';
+import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
+import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
+import { CalendarDensity } from '../chronology/common/density';
+import { badInput, notFound } from '../common/errors/domain-error';
+import { DatabaseService } from '../database/database.service';
+import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
+import { QUEUES, JobQueueService } from '../jobs/job-queue.service';
+import { SamplesRepository } from '../samples/samples.repository';
+import { SiteRow } from '../sites/sites.repository';
+import { SitesService } from '../sites/sites.service';
+import { UnitsRepository } from '../units/units.repository';
+import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
+import { columnFingerprint, loadDensity, StoredAgeModelResults, StoredEventPosterior, storeInput } from './age-model-results';
+import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
+
+/** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
+export const DEFAULT_ITERATIONS = 20_000;
+
+@Injectable()
+export class AgeModelsService {
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly runs: AgeModelRunsRepository,
+    private readonly sites: SitesService,
+    private readonly units: UnitsRepository,
+    private readonly eventHorizons: EventHorizonsRepository,
+    private readonly samples: SamplesRepository,
+    private readonly jobs: JobQueueService,
+    private readonly access: AccessService,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** Validate the column, snapshot it and queue the run. Column problems are BAD_USER_INPUT before anything is queued. */
+  async start(user: AuthUser, input: StartAgeModelRunInput): Promise<AgeModelRunRow> {
+    const site = await this.sites.get(user, input.siteId, Permission.AgeModelRun);
+    return this.queue(site, input, user);
+  }
+
+  /** Queue a run without a user (the demo seed). */
+  async queue(site: SiteRow, input: Omit<StartAgeModelRunInput, 'siteId'>, user: AuthUser | null): Promise<AgeModelRunRow> {
+    const { model, fingerprint } = await this.columnOf(site);
+    const problems = validateColumn(model);
+    if (problems.length > 0) {
+      throw badInput('siteId', `the column cannot be modelled: ${problems.map((p) => p.message).join('; ')}`, {
+        problems: problems.map((p) => p.message),
+      });
+    }
+    const settings = {
+      ...DEFAULT_AGE_MODEL_SETTINGS,
+      iterations: input.iterations ?? DEFAULT_ITERATIONS,
+      chains: input.chains ?? DEFAULT_AGE_MODEL_SETTINGS.chains,
+      outlierPrior: input.outlierPrior ?? DEFAULT_AGE_MODEL_SETTINGS.outlierPrior,
+      inheritanceScaleYears: input.inheritanceScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.inheritanceScaleYears,
+      seed: input.seed ?? Math.floor(Math.random() * 2 ** 31),
+    };
+    const run = await this.database.transaction(async (tx) => {
+      const row = await this.runs.insert(
+        { siteId: site.id, requestedById: user?.id ?? null, seed: settings.seed, settings, inputSnapshot: storeInput(model), inputFingerprint: fingerprint },
+        tx,
+      );
+      await this.audit.record(tx, {
+        actor: user, projectId: site.projectId, action: 'run', objectType: 'ageModelRun', objectId: row.id, after: { siteId: site.id, settings },
+      });
+      return row;
+    });
+    await this.jobs.send(QUEUES.ageModel, { runId: run.id });
+    return run;
+  }
+
+  async get(user: AuthUser, id: string): Promise<AgeModelRunRow> {
+    const run = await this.runs.findById(id);
+    if (!run) throw notFound('age model run');
+    await this.sites.get(user, run.siteId);
+    return run;
+  }
+
+  async cancel(user: AuthUser, id: string): Promise<AgeModelRunRow> {
+    const run = await this.runs.findById(id);
+    if (!run) throw notFound('age model run');
+    const site = await this.sites.get(user, run.siteId, Permission.AgeModelRun);
+    const cancelled = await this.runs.cancel(id);
+    if (!cancelled) throw badInput('id', `the run has already ended (${run.status})`);
+    await this.audit.record(this.database.db, { actor: user, projectId: site.projectId, action: 'cancel', objectType: 'ageModelRun', objectId: id });
+    return cancelled;
+  }
+
+  listForSite(siteId: string): Promise<AgeModelRunRow[]> {
+    return this.runs.listForSite(siteId);
+  }
+
+  latestForSite(siteId: string): Promise<AgeModelRunRow | undefined> {
+    return this.runs.latestForSite(siteId);
+  }
+
+  /** True when the site's column or samples changed since the run was queued. */
+  async isStale(run: AgeModelRunRow): Promise<boolean> {
+    const site = await this.sites.findById(run.siteId);
+    if (!site) return true;
+    const { fingerprint } = await this.columnOf(site);
+    return fingerprint !== run.inputFingerprint;
+  }
+
+  /** Each event's posterior from its site's newest successful run (for the ladder and correlation). */
+  async latestPosteriors(siteIds: string[]): Promise<Map<string, StoredEventPosterior & { runId: string; densityGrid: CalendarDensity }>> {
+    const runs = await this.runs.latestSucceededForSites(siteIds);
+    const posteriors = new Map<string, StoredEventPosterior & { runId: string; densityGrid: CalendarDensity }>();
+    for (const run of runs) {
+      const results = run.results as StoredAgeModelResults | null;
+      for (const event of results?.events ?? []) {
+        posteriors.set(event.eventHorizonId, { ...event, runId: run.id, densityGrid: loadDensity(event.density) });
+      }
+    }
+    return posteriors;
+  }
+
+  /** The model input of a site's current column, with its fingerprint. */
+  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
+    const [units, horizons, samples] = await Promise.all([
+      this.units.listForSite(site.id),
+      this.eventHorizons.listForSite(site.id),
+      this.samples.listForSite(site.id),
+    ]);
+    const model: AgeModelInput = {
+      units: units.map((u) => ({ id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM })),
+      eventHorizons: horizons.map((h) => ({ id: h.id, name: h.name, unitBelowId: h.unitBelowId, unitAboveId: h.unitAboveId })),
+      samples: samples
+        .filter((s) => s.calibration)
+        .map((s) => ({
+          id: s.id,
+          name: s.labCode,
+          unitId: s.unitId,
+          depthM: s.depthM,
+          ageRelation: s.ageRelation,
+          excluded: s.excluded,
+          likelihood: loadDensity(s.calibration!.density),
+        })),
+      orderSamplesByDepth: site.kind === 'CORE',
+    };
+    return { model, fingerprint: columnFingerprint({ units, eventHorizons: horizons, samples }) };
+  }
+}

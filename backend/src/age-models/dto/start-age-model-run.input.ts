@@ -1,0 +1,37 @@
+import { IsInt, IsNumber, IsOptional, IsUUID, Max, Min } from 'class-validator';
+
+export class StartAgeModelRunInput {
+  @IsUUID()
+  siteId: string;
+
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  @Max(2_147_483_647)
+  seed?: number;
+
+  /** Sweeps per chain after burn-in. */
+  @IsOptional()
+  @IsInt()
+  @Min(500)
+  @Max(500_000)
+  iterations?: number;
+
+  @IsOptional()
+  @IsInt()
+  @Min(4, { message: 'chains must be at least 4 so that R-hat can compare them' })
+  @Max(16)
+  chains?: number;
+
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  @Min(0.001)
+  @Max(0.5)
+  outlierPrior?: number;
+
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  @Min(1)
+  @Max(5000)
+  inheritanceScaleYears?: number;
+}

@@ -1,0 +1,42 @@
+import { NestFactory } from '@nestjs/core';
+import { NestExpressApplication } from '@nestjs/platform-express';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { AppModule } from './app.module';
+import { createValidationPipe } from './common/errors/validation';
+import { repositoryRoot } from './common/repo-paths';
+import { AppConfig } from './config/config';
+import { runMigrations } from './database/migrate';
+import { seedDemoIfEmpty } from './demo/seed';
+
+/** Paths the single-page-app fallback leaves to the API. */
+const API_PREFIXES = ['/graphql', '/health', '/api', '/dev'];
+
+/**
+ * Build the HTTP application: migrations, pipes, the built frontend with its SPA fallback, and
+ * the demo seed when configured. `main.ts` listens on it; integration tests do the same on a
+ * free port.
+ */
+export async function createApp(config: AppConfig): Promise<NestExpressApplication> {
+  await runMigrations(config.databaseUrl);
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    logger: config.nodeEnv === 'test' ? ['error'] : ['log', 'error', 'warn'],
+  });
+  app.useGlobalPipes(createValidationPipe());
+  app.enableShutdownHooks();
+  app.set('trust proxy', 'loopback');
+  app.useBodyParser('json', { limit: '25mb' });
+
+  const frontendDist = config.frontendDist ?? join(repositoryRoot(), 'frontend', 'dist');
+  if (existsSync(join(frontendDist, 'index.html'))) {
+    app.useStaticAssets(frontendDist, { index: false, maxAge: '1h' });
+    const indexHtml = join(frontendDist, 'index.html');
+    app.use((req: { method: string; path: string }, res: { sendFile: (p: string) => void }, next: () => void) => {
+      if (req.method !== 'GET' || API_PREFIXES.some((p) => req.path.startsWith(p))) return next();
+      res.sendFile(indexHtml);
+    });
+  }
+
+  if (config.seedDemo) await seedDemoIfEmpty(app);
+  return app;
+}

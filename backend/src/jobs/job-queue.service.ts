@@ -1,0 +1,56 @@
+import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
+import PgBoss from 'pg-boss';
+import { APP_CONFIG, AppConfig } from '../config/config';
+
+export const QUEUES = { ageModel: 'age-model-run', recurrence: 'recurrence-analysis' } as const;
+export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
+
+export interface RunJob {
+  runId: string;
+}
+
+/**
+ * The PostgreSQL-backed job queue (pg-boss). API replicas only send; worker processes also work.
+ * Delivery is pg-boss's; retries after a lost worker are ours (see JobReaper), because a run's
+ * own row is the truth users see.
+ */
+@Injectable()
+export class JobQueueService implements OnModuleDestroy {
+  private readonly logger = new Logger(JobQueueService.name);
+  private boss: PgBoss | undefined;
+  private starting: Promise<PgBoss> | undefined;
+
+  constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {}
+
+  private start(): Promise<PgBoss> {
+    if (this.boss) return Promise.resolve(this.boss);
+    this.starting ??= (async () => {
+      const boss = new PgBoss({ connectionString: this.config.databaseUrl, max: 4 });
+      boss.on('error', (error: Error) => this.logger.warn(`job queue: ${error.message}`));
+      await boss.start();
+      for (const name of Object.values(QUEUES)) await boss.createQueue(name);
+      this.boss = boss;
+      return boss;
+    })();
+    return this.starting;
+  }
+
+  async send(queue: QueueName, job: RunJob): Promise<void> {
+    const boss = await this.start();
+    // No pg-boss retries: the reaper re-queues runs whose worker vanished, with the run's own attempt count.
+    await boss.send(queue, job, { retryLimit: 0, expireInSeconds: 3600 });
+  }
+
+  async work(queue: QueueName, concurrency: number, handler: (job: RunJob) => Promise<void>): Promise<void> {
+    const boss = await this.start();
+    for (let i = 0; i < concurrency; i++) {
+      await boss.work<RunJob>(queue, { batchSize: 1, pollingIntervalSeconds: 1 }, async (jobs) => {
+        for (const job of jobs) await handler(job.data);
+      });
+    }
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.boss?.stop({ graceful: true, timeout: 5000 }).catch(() => undefined);
+  }
+}

@@ -1,0 +1,15 @@
+import { Module } from '@nestjs/common';
+import { AccessModule } from './access/access.module';
+import { AgeModelsModule } from './age-models/age-models.module';
+import { AuditModule } from './audit/audit.module';
+import { ConfigModule } from './config/config.module';
+import { DatabaseModule } from './database/database.module';
+import { JobReaper } from './jobs/job-reaper';
+import { JobsModule } from './jobs/jobs.module';
+
+/** The worker process: the job handlers and what they need, no HTTP. */
+@Module({
+  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule],
+  providers: [JobReaper],
+})
+export class WorkerModule {}
