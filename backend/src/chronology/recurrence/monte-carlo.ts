@@ -1,0 +1,373 @@
+/**
+ * Recurrence statistics with their uncertainty, by Monte Carlo over joint draws of the event ages
+ * (SPEC "Computation 4"): every draw is one possible history, ordered; from it come the
+ * inter-event times, their mean, median, SD and coefficient of variation, the open interval to
+ * the forecast start, maximum-likelihood fits of every renewal model (the open interval
+ * censored) and each model's conditional probability for each forecast window. Each quantity is
+ * reported as the median and the 2.5-97.5 % range over draws. Point fits on the median sequence
+ * sit beside them, as analysts often quote those.
+ *
+ * Ages are cal BP (years before AD 1950), so a forecast starting in year Y CE is 1950 - Y cal BP
+ * and the open interval is (age of the last event) - (1950 - Y).
+ */
+import type { CalendarDensity } from '../common/density';
+import { SeededRandom } from '../common/random';
+import { RENEWAL_MODELS, type RenewalModel } from './distributions';
+import { RecurrenceCancelledError, RecurrenceInputError } from './errors';
+import {
+  compareModels,
+  distributionFromFit,
+  fitAllModels,
+  type ModelComparison,
+  prepareIntervals,
+  type RenewalFit,
+} from './fit';
+import { type HistogramBin, intervalHistogram } from './curves';
+import { orderedSequenceSampler } from './ordered-sequence';
+
+/** The median and central 95 % range of a quantity over Monte Carlo draws. */
+export interface CredibleRange {
+  readonly median: number;
+  readonly low95: number;
+  readonly high95: number;
+}
+
+export interface WindowProbability {
+  readonly windowYears: number;
+  readonly probability: CredibleRange;
+}
+
+export interface ModelRecurrence {
+  readonly model: RenewalModel;
+  readonly mu: CredibleRange;
+  readonly alpha: CredibleRange;
+  readonly probabilities: readonly WindowProbability[];
+  /** Share of draws in which this model has the lowest AIC. */
+  readonly preferredShare: number;
+  /** Draws whose fit did not converge (kept, but worth a warning above a few per cent). */
+  readonly unconvergedDraws: number;
+}
+
+export interface PointWindowProbability {
+  readonly windowYears: number;
+  readonly probability: number;
+}
+
+/** Fits and probabilities on the sequence of per-event median ages. */
+export interface MedianSequenceFits {
+  /** Median age of each event over the draws, cal BP, oldest first. */
+  readonly eventAgesCalBp: readonly number[];
+  readonly closedIntervals: readonly number[];
+  readonly openInterval: number;
+  readonly fits: readonly RenewalFit[];
+  readonly comparison: ModelComparison;
+  readonly probabilities: ReadonlyArray<{ readonly model: RenewalModel; readonly windows: readonly PointWindowProbability[] }>;
+  /** 1 - exp(-dT / mean recurrence) from the median sequence's mean interval. */
+  readonly poissonFromMeanRecurrence: readonly PointWindowProbability[];
+}
+
+export interface RecurrenceSummary {
+  readonly drawCount: number;
+  readonly eventCount: number;
+  readonly forecastStartYearCe: number;
+  readonly forecastStartCalBp: number;
+  readonly windowsYears: readonly number[];
+  /** Interval i runs from event i to event i + 1, oldest first. */
+  readonly intervals: readonly CredibleRange[];
+  readonly meanRecurrence: CredibleRange;
+  readonly medianRecurrence: CredibleRange;
+  readonly sdRecurrence: CredibleRange;
+  /** Coefficient of variation of the intervals, SD / mean (sample SD, n - 1). */
+  readonly aperiodicity: CredibleRange;
+  readonly openInterval: CredibleRange;
+  readonly models: readonly ModelRecurrence[];
+  /** The plain Poisson figure 1 - exp(-dT / mean recurrence), per draw, beside the models. */
+  readonly poissonFromMeanRecurrence: readonly WindowProbability[];
+  readonly medianSequence: MedianSequenceFits;
+  /** All draws' intervals pooled, for the interval histogram. */
+  readonly intervalHistogram: readonly HistogramBin[];
+}
+
+export interface RecurrenceOptions {
+  /** Calendar year (CE, astronomical) the forecast windows start from. */
+  readonly forecastStartYearCe: number;
+  /** Forecast window lengths, years (e.g. 30, 50, 100). */
+  readonly windowsYears: readonly number[];
+  /** Models to fit; all four by default. */
+  readonly models?: readonly RenewalModel[];
+  /** Called every `progressInterval` draws and at the end. */
+  readonly onProgress?: (completedDraws: number, totalDraws: number) => void;
+  /** Polled every `progressInterval` draws; returning true stops with RecurrenceCancelledError. */
+  readonly shouldCancel?: () => boolean;
+  /** Draws between progress reports and cancellation checks (default 200). */
+  readonly progressInterval?: number;
+}
+
+/**
+ * Recurrence statistics from joint event-age draws. Each draw is the ages of the same events in
+ * cal BP, in any order: a draw is sorted oldest first, so event k is the k-th oldest in every
+ * draw and interval i joins the i-th and (i+1)-th oldest events.
+ */
+export function summariseRecurrence(
+  eventAgeDraws: ReadonlyArray<ArrayLike<number>>,
+  options: RecurrenceOptions,
+): RecurrenceSummary {
+  const models = options.models ?? RENEWAL_MODELS;
+  const windows = checkOptions(options, models);
+  const drawCount = eventAgeDraws.length;
+  if (drawCount === 0) throw new RecurrenceInputError('eventAgeDraws', 'There are no event-age draws to summarise.');
+  const eventCount = eventAgeDraws[0].length;
+  if (eventCount < 3) {
+    throw new RecurrenceInputError(
+      'eventAgeDraws',
+      `At least 3 events (2 closed intervals) are needed for recurrence statistics; there are ${eventCount}.`,
+    );
+  }
+  const forecastStartCalBp = 1950 - options.forecastStartYearCe;
+  const intervalCount = eventCount - 1;
+  const progressInterval = Math.max(1, Math.floor(options.progressInterval ?? 200));
+
+  const sortedAges = Array.from({ length: eventCount }, () => new Float64Array(drawCount));
+  const intervalDraws = Array.from({ length: intervalCount }, () => new Float64Array(drawCount));
+  const meanDraws = new Float64Array(drawCount);
+  const medianDraws = new Float64Array(drawCount);
+  const sdDraws = new Float64Array(drawCount);
+  const cvDraws = new Float64Array(drawCount);
+  const openDraws = new Float64Array(drawCount);
+  const muDraws = models.map(() => new Float64Array(drawCount));
+  const alphaDraws = models.map(() => new Float64Array(drawCount));
+  const probabilityDraws = models.map(() => windows.map(() => new Float64Array(drawCount)));
+  const poissonDraws = windows.map(() => new Float64Array(drawCount));
+  const preferredCounts = new Float64Array(models.length);
+  const unconverged = new Float64Array(models.length);
+
+  const ages = new Float64Array(eventCount);
+  const intervals = new Float64Array(intervalCount);
+  const scratch = new Float64Array(intervalCount);
+  for (let d = 0; d < drawCount; d++) {
+    if (d % progressInterval === 0) {
+      if (options.shouldCancel?.()) throw new RecurrenceCancelledError(d);
+      if (d > 0) options.onProgress?.(d, drawCount);
+    }
+    readDraw(eventAgeDraws[d], d, eventCount, ages);
+    for (let k = 0; k < eventCount; k++) sortedAges[k][d] = ages[k];
+    for (let i = 0; i < intervalCount; i++) {
+      intervals[i] = ages[i] - ages[i + 1];
+      intervalDraws[i][d] = intervals[i];
+    }
+    const stats = intervalStatistics(intervals, scratch);
+    meanDraws[d] = stats.mean;
+    medianDraws[d] = stats.median;
+    sdDraws[d] = stats.sd;
+    cvDraws[d] = stats.sd / stats.mean;
+    const open = ages[eventCount - 1] - forecastStartCalBp;
+    if (open < 0) {
+      throw new RecurrenceInputError(
+        'forecastStartYearCe',
+        `The forecast starts before the last event in draw ${d + 1} (last event ${formatAge(ages[eventCount - 1])} cal BP, forecast start ${formatAge(forecastStartCalBp)} cal BP).`,
+      );
+    }
+    openDraws[d] = open;
+    for (let w = 0; w < windows.length; w++) poissonDraws[w][d] = -Math.expm1(-windows[w] / stats.mean);
+
+    const fits = fitAllModels(prepareIntervals({ closedIntervals: intervals, openInterval: open }), models);
+    let preferred = 0;
+    for (let m = 0; m < fits.length; m++) {
+      const fit = fits[m];
+      if (fit.aic < fits[preferred].aic) preferred = m;
+      if (!fit.converged) unconverged[m]++;
+      muDraws[m][d] = fit.mu;
+      alphaDraws[m][d] = fit.alpha;
+      const distribution = distributionFromFit(fit);
+      for (let w = 0; w < windows.length; w++) {
+        probabilityDraws[m][w][d] = distribution.conditionalProbability(open, windows[w]);
+      }
+    }
+    preferredCounts[preferred]++;
+  }
+  options.onProgress?.(drawCount, drawCount);
+
+  const medianAges = sortedAges.map((values) => credibleRange(values).median);
+  return {
+    drawCount,
+    eventCount,
+    forecastStartYearCe: options.forecastStartYearCe,
+    forecastStartCalBp,
+    windowsYears: windows,
+    intervals: intervalDraws.map(credibleRange),
+    meanRecurrence: credibleRange(meanDraws),
+    medianRecurrence: credibleRange(medianDraws),
+    sdRecurrence: credibleRange(sdDraws),
+    aperiodicity: credibleRange(cvDraws),
+    openInterval: credibleRange(openDraws),
+    models: models.map((model, m) => ({
+      model,
+      mu: credibleRange(muDraws[m]),
+      alpha: credibleRange(alphaDraws[m]),
+      probabilities: windows.map((windowYears, w) => ({ windowYears, probability: credibleRange(probabilityDraws[m][w]) })),
+      preferredShare: preferredCounts[m] / drawCount,
+      unconvergedDraws: unconverged[m],
+    })),
+    poissonFromMeanRecurrence: windows.map((windowYears, w) => ({
+      windowYears,
+      probability: credibleRange(poissonDraws[w]),
+    })),
+    medianSequence: fitMedianSequence(medianAges, forecastStartCalBp, windows, models),
+    intervalHistogram: intervalHistogram(concatenate(intervalDraws)),
+  };
+}
+
+export interface SimulationOptions extends RecurrenceOptions {
+  readonly drawCount: number;
+  /** Seed for SeededRandom, stored with the analysis so it can be rerun. */
+  readonly seed: number;
+}
+
+/**
+ * Recurrence statistics from the age densities of events in a known order (young to old, e.g.
+ * the combined densities of a hypothesis' regional events): `drawCount` exact ordered draws
+ * (see ordered-sequence.ts), then `summariseRecurrence`. The same seed gives the same result.
+ */
+export function simulateRecurrence(densities: readonly CalendarDensity[], options: SimulationOptions): RecurrenceSummary {
+  if (!Number.isInteger(options.drawCount) || options.drawCount < 1) {
+    throw new RecurrenceInputError('drawCount', `The number of draws must be a whole number of at least 1; it is ${options.drawCount}.`);
+  }
+  const sampler = orderedSequenceSampler(densities);
+  const rng = new SeededRandom(options.seed);
+  const draws: Float64Array[] = new Array(options.drawCount);
+  for (let d = 0; d < options.drawCount; d++) draws[d] = sampler(rng);
+  return summariseRecurrence(draws, options);
+}
+
+/** Median and 2.5 % / 97.5 % quantiles (linear interpolation between order statistics, Hyndman & Fan 1996 type 7). */
+export function credibleRange(values: ArrayLike<number>): CredibleRange {
+  const sorted = Float64Array.from(values).sort();
+  return {
+    median: sortedQuantile(sorted, 0.5),
+    low95: sortedQuantile(sorted, 0.025),
+    high95: sortedQuantile(sorted, 0.975),
+  };
+}
+
+function sortedQuantile(sorted: Float64Array, q: number): number {
+  if (sorted.length === 0) return Number.NaN;
+  const position = (sorted.length - 1) * q;
+  const below = Math.floor(position);
+  const above = Math.min(below + 1, sorted.length - 1);
+  return sorted[below] + (position - below) * (sorted[above] - sorted[below]);
+}
+
+export interface IntervalStatistics {
+  readonly mean: number;
+  readonly median: number;
+  /** Sample SD (n - 1 in the denominator). */
+  readonly sd: number;
+  /** SD / mean. */
+  readonly cv: number;
+}
+
+/** Mean, median, sample SD and CV of a set of inter-event times. */
+export function intervalStatistics(intervals: ArrayLike<number>, scratch?: Float64Array): IntervalStatistics {
+  const n = intervals.length;
+  const sorted = scratch && scratch.length === n ? scratch : new Float64Array(n);
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    sorted[i] = intervals[i];
+    sum += intervals[i];
+  }
+  const mean = sum / n;
+  let squares = 0;
+  for (let i = 0; i < n; i++) squares += (intervals[i] - mean) ** 2;
+  sorted.sort();
+  const median = n % 2 === 1 ? sorted[(n - 1) / 2] : 0.5 * (sorted[n / 2 - 1] + sorted[n / 2]);
+  const sd = n > 1 ? Math.sqrt(squares / (n - 1)) : Number.NaN;
+  return { mean, median, sd, cv: sd / mean };
+}
+
+function checkOptions(options: RecurrenceOptions, models: readonly RenewalModel[]): number[] {
+  if (!Number.isFinite(options.forecastStartYearCe)) {
+    throw new RecurrenceInputError('forecastStartYearCe', 'The forecast start year must be a calendar year.');
+  }
+  if (models.length === 0) throw new RecurrenceInputError('models', 'Choose at least one renewal model.');
+  const windows = [...options.windowsYears];
+  if (windows.length === 0) throw new RecurrenceInputError('windowsYears', 'Give at least one forecast window.');
+  for (const window of windows) {
+    if (!(window > 0) || !Number.isFinite(window)) {
+      throw new RecurrenceInputError('windowsYears', `Forecast windows must be positive numbers of years; one is ${window}.`);
+    }
+  }
+  return windows;
+}
+
+/** Copies a draw into `ages`, oldest first, checking it. */
+function readDraw(draw: ArrayLike<number>, index: number, eventCount: number, ages: Float64Array): void {
+  if (draw.length !== eventCount) {
+    throw new RecurrenceInputError(
+      'eventAgeDraws',
+      `Draw ${index + 1} has ${draw.length} event ages where the first draw has ${eventCount}.`,
+    );
+  }
+  for (let k = 0; k < eventCount; k++) {
+    if (!Number.isFinite(draw[k])) {
+      throw new RecurrenceInputError('eventAgeDraws', `Draw ${index + 1} has an age that is not a number.`);
+    }
+    ages[k] = draw[k];
+  }
+  ages.sort().reverse();
+  for (let k = 0; k + 1 < eventCount; k++) {
+    if (!(ages[k] > ages[k + 1])) {
+      throw new RecurrenceInputError(
+        'eventAgeDraws',
+        `Draw ${index + 1} puts two events at the same age (${formatAge(ages[k])} cal BP); intervals must be longer than zero.`,
+      );
+    }
+  }
+}
+
+function fitMedianSequence(
+  medianAges: readonly number[],
+  forecastStartCalBp: number,
+  windows: readonly number[],
+  models: readonly RenewalModel[],
+): MedianSequenceFits {
+  const closedIntervals = medianAges.slice(0, -1).map((age, i) => age - medianAges[i + 1]);
+  const openInterval = Math.max(0, medianAges[medianAges.length - 1] - forecastStartCalBp);
+  const fits = fitAllModels({ closedIntervals, openInterval }, models);
+  const mean = closedIntervals.reduce((sum, value) => sum + value, 0) / closedIntervals.length;
+  return {
+    eventAgesCalBp: medianAges,
+    closedIntervals,
+    openInterval,
+    fits,
+    comparison: compareModels(fits),
+    probabilities: fits.map((fit) => {
+      const distribution = distributionFromFit(fit);
+      return {
+        model: fit.model,
+        windows: windows.map((windowYears) => ({
+          windowYears,
+          probability: distribution.conditionalProbability(openInterval, windowYears),
+        })),
+      };
+    }),
+    poissonFromMeanRecurrence: windows.map((windowYears) => ({
+      windowYears,
+      probability: -Math.expm1(-windowYears / mean),
+    })),
+  };
+}
+
+function concatenate(arrays: readonly Float64Array[]): Float64Array {
+  const total = arrays.reduce((sum, array) => sum + array.length, 0);
+  const joined = new Float64Array(total);
+  let offset = 0;
+  for (const array of arrays) {
+    joined.set(array, offset);
+    offset += array.length;
+  }
+  return joined;
+}
+
+function formatAge(calBp: number): string {
+  return calBp.toFixed(0);
+}
