@@ -1,0 +1,44 @@
+/** The recurrence engine's public surface: import from here, not from the files behind it. */
+export type { RenewalDistribution, RenewalModel, RenewalParameters } from './distributions';
+export {
+  RENEWAL_MODEL_LABELS,
+  RENEWAL_MODELS,
+  bptDistribution,
+  bptHazardLimit,
+  distributionFromParameters,
+  lognormalDistribution,
+  lognormalFromLogParameters,
+  poissonDistribution,
+  renewalDistribution,
+  weibullDistribution,
+  weibullFromShapeScale,
+  weibullShapeFromAperiodicity,
+} from './distributions';
+export { RecurrenceCancelledError, RecurrenceInputError } from './errors';
+export type { ModelComparison, ModelComparisonRow, RecurrenceIntervals, RenewalFit } from './fit';
+export {
+  compareModels,
+  distributionFromFit,
+  fitAllModels,
+  fitBpt,
+  fitLognormal,
+  fitPoisson,
+  fitRenewalModel,
+  fitWeibull,
+} from './fit';
+export type {
+  CredibleRange,
+  IntervalStatistics,
+  MedianSequenceFits,
+  ModelRecurrence,
+  PointWindowProbability,
+  RecurrenceOptions,
+  RecurrenceSummary,
+  SimulationOptions,
+  WindowProbability,
+} from './monte-carlo';
+export { credibleRange, intervalStatistics, simulateRecurrence, summariseRecurrence } from './monte-carlo';
+export type { OrderedSequenceSampler } from './ordered-sequence';
+export { drawOrderedSequence, orderedSequenceSampler } from './ordered-sequence';
+export type { HistogramBin, HistogramOptions, RenewalCurve, RenewalCurves } from './curves';
+export { intervalHistogram, renewalCurves } from './curves';
