@@ -1,0 +1,1862 @@
+/* eslint-disable */
+import type { DocumentTypeDecoration } from '@graphql-typed-document-node/core';
+export type Maybe<T> = T | null;
+export type InputMaybe<T> = Maybe<T>;
+export type Exact<T extends { [key: string]: unknown }> = { [K in keyof T]: T[K] };
+export type MakeOptional<T, K extends keyof T> = Omit<T, K> & { [SubKey in K]?: Maybe<T[SubKey]> };
+export type MakeMaybe<T, K extends keyof T> = Omit<T, K> & { [SubKey in K]: Maybe<T[SubKey]> };
+export type MakeEmpty<T extends { [key: string]: unknown }, K extends keyof T> = { [_ in K]?: never };
+export type Incremental<T> = T | { [P in keyof T]?: P extends ' $fragmentName' | '__typename' ? T[P] : never };
+/** All built-in and custom scalars, mapped to their actual values */
+export type Scalars = {
+  ID: { input: string; output: string; }
+  String: { input: string; output: string; }
+  Boolean: { input: boolean; output: boolean; }
+  Int: { input: number; output: number; }
+  Float: { input: number; output: number; }
+  /** An ISO-8601 date-time string (UTC). */
+  DateTime: { input: string; output: string; }
+  /** Arbitrary JSON (settings snapshots, audit before/after images). */
+  JSON: { input: unknown; output: unknown; }
+};
+
+export type AcceptInvitationInput = {
+  displayName?: InputMaybe<Scalars['String']['input']>;
+  password: Scalars['String']['input'];
+  token: Scalars['String']['input'];
+};
+
+export type AddTieInput = {
+  /** 1 (certain) to 4 (possible). */
+  confidence: Scalars['Int']['input'];
+  eventAId: Scalars['ID']['input'];
+  eventBId: Scalars['ID']['input'];
+  evidence?: InputMaybe<Array<Scalars['String']['input']>>;
+  hypothesisId: Scalars['ID']['input'];
+  note?: InputMaybe<Scalars['String']['input']>;
+};
+
+export type AgeModelDiagnostics = {
+  __typename?: 'AgeModelDiagnostics';
+  converged: Scalars['Boolean']['output'];
+  maxRhat: Scalars['Float']['output'];
+  message: Scalars['String']['output'];
+  minEss: Scalars['Float']['output'];
+};
+
+/** One computation of a site's chronology from its column. */
+export type AgeModelRun = {
+  __typename?: 'AgeModelRun';
+  createdAt: Scalars['DateTime']['output'];
+  diagnostics?: Maybe<AgeModelDiagnostics>;
+  events: Array<EventPosterior>;
+  finishedAt?: Maybe<Scalars['DateTime']['output']>;
+  id: Scalars['ID']['output'];
+  message?: Maybe<Scalars['String']['output']>;
+  progress: Scalars['Float']['output'];
+  samples: Array<SamplePosterior>;
+  seed: Scalars['Int']['output'];
+  settings: Scalars['JSON']['output'];
+  site: Site;
+  /** True when the site's column or samples changed after this run was queued. */
+  stale: Scalars['Boolean']['output'];
+  status: JobStatus;
+};
+
+/** How a sample's age relates to the deposit it sits in. */
+export type AgeRelation =
+  /** The sample formed when the deposit formed. */
+  | 'DATES_DEPOSIT'
+  /** Detrital or inherited material: older than the deposit by an unknown offset. */
+  | 'OLDER_THAN_DEPOSIT'
+  /** Roots, burrows, intrusions: younger than the deposit by an unknown offset. */
+  | 'YOUNGER_THAN_DEPOSIT';
+
+/** A file on a site, unit or sample, kept in object storage. */
+export type Attachment = {
+  __typename?: 'Attachment';
+  contentType: Scalars['String']['output'];
+  createdAt: Scalars['DateTime']['output'];
+  fileName: Scalars['String']['output'];
+  id: Scalars['ID']['output'];
+  sizeBytes: Scalars['Int']['output'];
+  thumbnailUrl?: Maybe<Scalars['String']['output']>;
+  /** Relative URL to download (bearer token required). */
+  url: Scalars['String']['output'];
+};
+
+export type AuditConnection = {
+  __typename?: 'AuditConnection';
+  edges: Array<AuditEdge>;
+  pageInfo: PageInfo;
+};
+
+export type AuditEdge = {
+  __typename?: 'AuditEdge';
+  cursor: Scalars['String']['output'];
+  node: AuditRecord;
+};
+
+/** Who changed what and when. */
+export type AuditRecord = {
+  __typename?: 'AuditRecord';
+  action: Scalars['String']['output'];
+  actor?: Maybe<User>;
+  after?: Maybe<Scalars['JSON']['output']>;
+  at: Scalars['DateTime']['output'];
+  before?: Maybe<Scalars['JSON']['output']>;
+  id: Scalars['ID']['output'];
+  objectId: Scalars['ID']['output'];
+  objectType: Scalars['String']['output'];
+};
+
+export type AuditTrailInput = {
+  actorId?: InputMaybe<Scalars['ID']['input']>;
+  after?: InputMaybe<Scalars['String']['input']>;
+  first?: InputMaybe<Scalars['Int']['input']>;
+  from?: InputMaybe<Scalars['DateTime']['input']>;
+  objectId?: InputMaybe<Scalars['ID']['input']>;
+  objectType?: InputMaybe<Scalars['String']['input']>;
+  projectId: Scalars['ID']['input'];
+  to?: InputMaybe<Scalars['DateTime']['input']>;
+};
+
+/** A bearer token for later requests (`Authorization: Bearer <token>`). */
+export type AuthPayload = {
+  __typename?: 'AuthPayload';
+  token: Scalars['String']['output'];
+  user: User;
+};
+
+export type CalibrateInput = {
+  c14Age: Scalars['Float']['input'];
+  c14Error: Scalars['Float']['input'];
+  curve: CurveCode;
+  deltaR?: InputMaybe<Scalars['Float']['input']>;
+  deltaRError?: InputMaybe<Scalars['Float']['input']>;
+  /** Sample latitude; Marine20 warns above 60 degrees. */
+  latitude?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type CalibrateLuminescenceInput = {
+  /** Age in years before the measurement year. */
+  ageYears: Scalars['Float']['input'];
+  errorYears: Scalars['Float']['input'];
+  measurementYear: Scalars['Int']['input'];
+};
+
+/** A calendar-age density with its summaries. */
+export type Calibration = {
+  __typename?: 'Calibration';
+  curve?: Maybe<CurveCode>;
+  /** The 1-year grid where the probability is above 1e-6 of the total. */
+  density: Array<DensityPoint>;
+  hpd68: Array<HpdRange>;
+  hpd95: Array<HpdRange>;
+  meanCalBp: Scalars['Float']['output'];
+  medianCalBp: Scalars['Float']['output'];
+  sdYears: Scalars['Float']['output'];
+  warnings: Array<Scalars['String']['output']>;
+};
+
+export type CalibrationCurveInfo = {
+  __typename?: 'CalibrationCurveInfo';
+  builtIn: Scalars['Boolean']['output'];
+  code: Scalars['String']['output'];
+  marine: Scalars['Boolean']['output'];
+  name: Scalars['String']['output'];
+  oldestCalBp: Scalars['Int']['output'];
+  youngestCalBp: Scalars['Int']['output'];
+};
+
+export type ChiSquareTest = {
+  __typename?: 'ChiSquareTest';
+  critical5: Scalars['Float']['output'];
+  df: Scalars['Int']['output'];
+  passes: Scalars['Boolean']['output'];
+  /** Ward & Wilson (1978) statistic. */
+  t: Scalars['Float']['output'];
+};
+
+export type CreateEventHorizonInput = {
+  evidence?: InputMaybe<Array<Scalars['String']['input']>>;
+  name: Scalars['String']['input'];
+  notes?: InputMaybe<Scalars['String']['input']>;
+  quality: Scalars['Int']['input'];
+  siteId: Scalars['ID']['input'];
+  unitAboveId: Scalars['ID']['input'];
+  unitBelowId: Scalars['ID']['input'];
+};
+
+export type CreateHypothesisInput = {
+  /** Copy every tie of this hypothesis. */
+  copyFromId?: InputMaybe<Scalars['ID']['input']>;
+  description?: InputMaybe<Scalars['String']['input']>;
+  name: Scalars['String']['input'];
+  projectId: Scalars['ID']['input'];
+};
+
+export type CreateProjectInput = {
+  description?: InputMaybe<Scalars['String']['input']>;
+  name: Scalars['String']['input'];
+  tectonicSetting?: InputMaybe<TectonicSetting>;
+};
+
+export type CreateReleaseInput = {
+  note: Scalars['String']['input'];
+  projectId: Scalars['ID']['input'];
+};
+
+export type CreateSampleInput = {
+  ageRelation: AgeRelation;
+  c14Age?: InputMaybe<Scalars['Float']['input']>;
+  c14Error?: InputMaybe<Scalars['Float']['input']>;
+  calendarAgeBp?: InputMaybe<Scalars['Float']['input']>;
+  calendarErrorYears?: InputMaybe<Scalars['Float']['input']>;
+  curve?: InputMaybe<CurveCode>;
+  delta13C?: InputMaybe<Scalars['Float']['input']>;
+  deltaR?: InputMaybe<Scalars['Float']['input']>;
+  deltaRError?: InputMaybe<Scalars['Float']['input']>;
+  depthM?: InputMaybe<Scalars['Float']['input']>;
+  excluded?: InputMaybe<Scalars['Boolean']['input']>;
+  exclusionReason?: InputMaybe<Scalars['String']['input']>;
+  labCode: Scalars['String']['input'];
+  material: SampleMaterial;
+  measurementYear?: InputMaybe<Scalars['Int']['input']>;
+  method: DatingMethod;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  siteId: Scalars['ID']['input'];
+  unitId: Scalars['ID']['input'];
+};
+
+export type CreateSegmentInput = {
+  endKm: Scalars['Float']['input'];
+  name: Scalars['String']['input'];
+  notes?: InputMaybe<Scalars['String']['input']>;
+  projectId: Scalars['ID']['input'];
+  startKm: Scalars['Float']['input'];
+};
+
+export type CreateSiteInput = {
+  alongStrikeKm: Scalars['Float']['input'];
+  elevationM?: InputMaybe<Scalars['Float']['input']>;
+  kind: SiteKind;
+  latitude: Scalars['Float']['input'];
+  longitude: Scalars['Float']['input'];
+  name: Scalars['String']['input'];
+  notes?: InputMaybe<Scalars['String']['input']>;
+  projectId: Scalars['ID']['input'];
+  segmentId?: InputMaybe<Scalars['ID']['input']>;
+  waterDepthM?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type CreateUnitInput = {
+  baseDepthM: Scalars['Float']['input'];
+  facies: Facies;
+  name: Scalars['String']['input'];
+  notes?: InputMaybe<Scalars['String']['input']>;
+  position: Scalars['Int']['input'];
+  siteId: Scalars['ID']['input'];
+  topDepthM: Scalars['Float']['input'];
+};
+
+export type CurveBandPoint = {
+  __typename?: 'CurveBandPoint';
+  c14Age: Scalars['Float']['output'];
+  c14Sigma: Scalars['Float']['output'];
+  calBp: Scalars['Int']['output'];
+};
+
+/** Calibration curve code. SHCAL20 must be installed by an administrator before use. */
+export type CurveCode =
+  | 'INTCAL20'
+  | 'MARINE20'
+  | 'SHCAL20';
+
+export type CurvePoint = {
+  __typename?: 'CurvePoint';
+  value: Scalars['Float']['output'];
+  years: Scalars['Float']['output'];
+};
+
+/** How a sample was dated. */
+export type DatingMethod =
+  | 'HISTORICAL'
+  | 'LUMINESCENCE'
+  | 'RADIOCARBON'
+  | 'TEPHRA';
+
+/** One year of a calendar-age density. */
+export type DensityPoint = {
+  __typename?: 'DensityPoint';
+  calBp: Scalars['Int']['output'];
+  probability: Scalars['Float']['output'];
+};
+
+/** The contact at which an earthquake is interpreted: one site's event. */
+export type EventHorizon = {
+  __typename?: 'EventHorizon';
+  evidence: Array<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  /** Posterior summary from the site's latest successful age model run, if any. */
+  latestPosterior?: Maybe<EventPosterior>;
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  /** 1 (certain) to 4 (possible). */
+  quality: Scalars['Int']['output'];
+  site: Site;
+  /** The first post-event unit. */
+  unitAbove: Unit;
+  /** The unit holding pre-event deposits. */
+  unitBelow: Unit;
+  version: Scalars['Int']['output'];
+};
+
+export type EventLadder = {
+  __typename?: 'EventLadder';
+  columns: Array<LadderColumn>;
+  project: Project;
+};
+
+/** Posterior age of one event horizon. */
+export type EventPosterior = {
+  __typename?: 'EventPosterior';
+  density: Array<DensityPoint>;
+  ess?: Maybe<Scalars['Float']['output']>;
+  eventHorizon: EventHorizon;
+  hpd68: Array<HpdRange>;
+  hpd95: Array<HpdRange>;
+  meanCalBp: Scalars['Float']['output'];
+  medianCalBp: Scalars['Float']['output'];
+  rhat?: Maybe<Scalars['Float']['output']>;
+};
+
+/** Lithology or facies of a stratigraphic unit. */
+export type Facies =
+  | 'COLLUVIUM'
+  | 'HEMIPELAGIC_MUD'
+  | 'OTHER'
+  | 'PEAT'
+  | 'SAND_SHEET'
+  | 'SOIL'
+  | 'TEPHRA'
+  | 'TIDAL_MUD'
+  | 'TURBIDITE';
+
+export type FitRenewalInput = {
+  intervalsYears: Array<Scalars['Float']['input']>;
+  model: RenewalModel;
+  /** Years since the last event (right-censored). */
+  openIntervalYears?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type HistogramBin = {
+  __typename?: 'HistogramBin';
+  count: Scalars['Float']['output'];
+  fromYears: Scalars['Float']['output'];
+  toYears: Scalars['Float']['output'];
+};
+
+/** A highest-density range; olderCalBp >= youngerCalBp. */
+export type HpdRange = {
+  __typename?: 'HpdRange';
+  olderCalBp: Scalars['Float']['output'];
+  probability: Scalars['Float']['output'];
+  youngerCalBp: Scalars['Float']['output'];
+};
+
+/** A named, versioned set of ties. */
+export type Hypothesis = {
+  __typename?: 'Hypothesis';
+  author: User;
+  copiedFrom?: Maybe<Hypothesis>;
+  createdAt: Scalars['DateTime']['output'];
+  description?: Maybe<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  orderConflicts: Array<OrderConflict>;
+  preferred: Scalars['Boolean']['output'];
+  project: Project;
+  regionalEvents: Array<RegionalEvent>;
+  ties: Array<Tie>;
+  version: Scalars['Int']['output'];
+};
+
+export type ImportPreviewRow = {
+  __typename?: 'ImportPreviewRow';
+  hpd95: Array<HpdRange>;
+  labCode: Scalars['String']['output'];
+  medianCalBp?: Maybe<Scalars['Float']['output']>;
+  row: Scalars['Int']['output'];
+  unitName: Scalars['String']['output'];
+  warnings: Array<Scalars['String']['output']>;
+};
+
+export type ImportResult = {
+  __typename?: 'ImportResult';
+  committed: Scalars['Boolean']['output'];
+  errors: Array<ImportRowError>;
+  /** Calibrated preview of the valid rows (lab code, median and 95.4 % ranges). */
+  preview: Array<ImportPreviewRow>;
+  rowCount: Scalars['Int']['output'];
+};
+
+/** One problem in one row of a lab sheet; row 1 is the first data row after the header. */
+export type ImportRowError = {
+  __typename?: 'ImportRowError';
+  field: Scalars['String']['output'];
+  message: Scalars['String']['output'];
+  row: Scalars['Int']['output'];
+};
+
+export type ImportSamplesInput = {
+  /** false: validate only. true: write all rows in one transaction, or none when any row has an error. */
+  commit: Scalars['Boolean']['input'];
+  /** CSV text with the documented header (see the template). */
+  csv: Scalars['String']['input'];
+  siteId: Scalars['ID']['input'];
+};
+
+export type InstallCurveInput = {
+  code: CurveCode;
+  marine: Scalars['Boolean']['input'];
+  name: Scalars['String']['input'];
+  /** The curve file: cal BP, 14C age, sigma, then optional columns. */
+  text: Scalars['String']['input'];
+};
+
+export type IntervalEstimate = {
+  __typename?: 'IntervalEstimate';
+  high95: Scalars['Float']['output'];
+  /** Inter-event time from event index+1 (older) to event index (younger), years. */
+  index: Scalars['Int']['output'];
+  low95: Scalars['Float']['output'];
+  medianYears: Scalars['Float']['output'];
+};
+
+export type Invitation = {
+  __typename?: 'Invitation';
+  acceptedAt?: Maybe<Scalars['DateTime']['output']>;
+  email: Scalars['String']['output'];
+  expiresAt: Scalars['DateTime']['output'];
+  id: Scalars['ID']['output'];
+  role: Role;
+};
+
+export type InviteMemberInput = {
+  email: Scalars['String']['input'];
+  projectId: Scalars['ID']['input'];
+  role: Role;
+};
+
+/** State of a long computation run as a job. */
+export type JobStatus =
+  | 'CANCELLED'
+  | 'FAILED'
+  | 'QUEUED'
+  | 'RUNNING'
+  | 'SUCCEEDED';
+
+export type LadderColumn = {
+  __typename?: 'LadderColumn';
+  events: Array<LadderEvent>;
+  latestAgeModelRun?: Maybe<AgeModelRun>;
+  site: Site;
+};
+
+export type LadderEvent = {
+  __typename?: 'LadderEvent';
+  density: Array<DensityPoint>;
+  eventHorizon: EventHorizon;
+  hpd95: Array<HpdRange>;
+  medianCalBp?: Maybe<Scalars['Float']['output']>;
+};
+
+export type MagnitudeEstimate = {
+  __typename?: 'MagnitudeEstimate';
+  mw: Scalars['Float']['output'];
+  relation: Scalars['String']['output'];
+  sigma: Scalars['Float']['output'];
+};
+
+/** A user's role in one project. */
+export type Membership = {
+  __typename?: 'Membership';
+  id: Scalars['ID']['output'];
+  project: Project;
+  role: Role;
+  user: User;
+};
+
+export type ModelCurves = {
+  __typename?: 'ModelCurves';
+  density: Array<CurvePoint>;
+  hazard: Array<CurvePoint>;
+  model: RenewalModel;
+  survival: Array<CurvePoint>;
+};
+
+export type ModelResult = {
+  __typename?: 'ModelResult';
+  aic: Scalars['Float']['output'];
+  akaikeWeight: Scalars['Float']['output'];
+  aperiodicity: Scalars['Float']['output'];
+  deltaAic: Scalars['Float']['output'];
+  logLikelihood: Scalars['Float']['output'];
+  meanRecurrenceYears: Scalars['Float']['output'];
+  model: RenewalModel;
+  probabilities: Array<WindowProbability>;
+};
+
+export type Mutation = {
+  __typename?: 'Mutation';
+  acceptInvitation: AuthPayload;
+  addTie: Tie;
+  cancelAgeModelRun: AgeModelRun;
+  cancelRecurrenceAnalysis: RecurrenceAnalysis;
+  createEventHorizon: EventHorizon;
+  createHypothesis: Hypothesis;
+  createProject: Project;
+  createRelease: Release;
+  createSample: Sample;
+  createSegment: Segment;
+  createSite: Site;
+  createUnit: Unit;
+  deleteAttachment: Scalars['Boolean']['output'];
+  deleteEventHorizon: Scalars['Boolean']['output'];
+  deleteHypothesis: Scalars['Boolean']['output'];
+  deleteSample: Scalars['Boolean']['output'];
+  deleteSegment: Scalars['Boolean']['output'];
+  deleteSite: Scalars['Boolean']['output'];
+  deleteUnit: Scalars['Boolean']['output'];
+  /** Validate a lab sheet (CSV) for a site; with commit true, write every row in one transaction or none. */
+  importSamples: ImportResult;
+  /** Install a calibration curve (e.g. SHCal20) from its published five-column file (ADMIN of any project). */
+  installCalibrationCurve: CalibrationCurveInfo;
+  inviteMember: Invitation;
+  removeMember: Scalars['Boolean']['output'];
+  removeTie: Scalars['Boolean']['output'];
+  requestPasswordReset: Scalars['Boolean']['output'];
+  resetPassword: Scalars['Boolean']['output'];
+  setMemberRole: Membership;
+  setPreferredHypothesis: Hypothesis;
+  /** Sign in with e-mail and password; returns a bearer token. */
+  signIn: AuthPayload;
+  startAgeModelRun: AgeModelRun;
+  startRecurrenceAnalysis: RecurrenceAnalysis;
+  updateEventHorizon: EventHorizon;
+  updateHypothesis: Hypothesis;
+  updateSample: Sample;
+  updateSegment: Segment;
+  updateSite: Site;
+  updateUnit: Unit;
+};
+
+
+export type MutationAcceptInvitationArgs = {
+  input: AcceptInvitationInput;
+};
+
+
+export type MutationAddTieArgs = {
+  input: AddTieInput;
+};
+
+
+export type MutationCancelAgeModelRunArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationCancelRecurrenceAnalysisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationCreateEventHorizonArgs = {
+  input: CreateEventHorizonInput;
+};
+
+
+export type MutationCreateHypothesisArgs = {
+  input: CreateHypothesisInput;
+};
+
+
+export type MutationCreateProjectArgs = {
+  input: CreateProjectInput;
+};
+
+
+export type MutationCreateReleaseArgs = {
+  input: CreateReleaseInput;
+};
+
+
+export type MutationCreateSampleArgs = {
+  input: CreateSampleInput;
+};
+
+
+export type MutationCreateSegmentArgs = {
+  input: CreateSegmentInput;
+};
+
+
+export type MutationCreateSiteArgs = {
+  input: CreateSiteInput;
+};
+
+
+export type MutationCreateUnitArgs = {
+  input: CreateUnitInput;
+};
+
+
+export type MutationDeleteAttachmentArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteEventHorizonArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteHypothesisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteSampleArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteSegmentArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteSiteArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteUnitArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationImportSamplesArgs = {
+  input: ImportSamplesInput;
+};
+
+
+export type MutationInstallCalibrationCurveArgs = {
+  input: InstallCurveInput;
+};
+
+
+export type MutationInviteMemberArgs = {
+  input: InviteMemberInput;
+};
+
+
+export type MutationRemoveMemberArgs = {
+  projectId: Scalars['ID']['input'];
+  userId: Scalars['ID']['input'];
+};
+
+
+export type MutationRemoveTieArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationRequestPasswordResetArgs = {
+  email: Scalars['String']['input'];
+};
+
+
+export type MutationResetPasswordArgs = {
+  input: ResetPasswordInput;
+};
+
+
+export type MutationSetMemberRoleArgs = {
+  input: SetMemberRoleInput;
+};
+
+
+export type MutationSetPreferredHypothesisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationSignInArgs = {
+  email: Scalars['String']['input'];
+  password: Scalars['String']['input'];
+};
+
+
+export type MutationStartAgeModelRunArgs = {
+  input: StartAgeModelRunInput;
+};
+
+
+export type MutationStartRecurrenceAnalysisArgs = {
+  input: StartRecurrenceAnalysisInput;
+};
+
+
+export type MutationUpdateEventHorizonArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateEventHorizonInput;
+  version: Scalars['Int']['input'];
+};
+
+
+export type MutationUpdateHypothesisArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateHypothesisInput;
+};
+
+
+export type MutationUpdateSampleArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateSampleInput;
+  version: Scalars['Int']['input'];
+};
+
+
+export type MutationUpdateSegmentArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateSegmentInput;
+  version: Scalars['Int']['input'];
+};
+
+
+export type MutationUpdateSiteArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateSiteInput;
+  version: Scalars['Int']['input'];
+};
+
+
+export type MutationUpdateUnitArgs = {
+  id: Scalars['ID']['input'];
+  input: UpdateUnitInput;
+  version: Scalars['Int']['input'];
+};
+
+export type OrderConflict = {
+  __typename?: 'OrderConflict';
+  message: Scalars['String']['output'];
+  tieA: Tie;
+  tieB: Tie;
+};
+
+export type PageInfo = {
+  __typename?: 'PageInfo';
+  endCursor?: Maybe<Scalars['String']['output']>;
+  hasNextPage: Scalars['Boolean']['output'];
+};
+
+/** A study: all data belongs to exactly one project. */
+export type Project = {
+  __typename?: 'Project';
+  createdAt: Scalars['DateTime']['output'];
+  description?: Maybe<Scalars['String']['output']>;
+  hypotheses: Array<Hypothesis>;
+  id: Scalars['ID']['output'];
+  invitations: Array<Invitation>;
+  members: Array<Membership>;
+  /** The caller's role in this project. */
+  myRole: Role;
+  name: Scalars['String']['output'];
+  preferredHypothesis?: Maybe<Hypothesis>;
+  recurrenceAnalyses: Array<RecurrenceAnalysis>;
+  releases: Array<Release>;
+  segments: Array<Segment>;
+  sites: Array<Site>;
+  tectonicSetting: TectonicSetting;
+};
+
+export type Query = {
+  __typename?: 'Query';
+  ageModelRun: AgeModelRun;
+  auditTrail: AuditConnection;
+  /** Calibrate a conventional radiocarbon age (any signed-in user). */
+  calibrate: Calibration;
+  /** Turn a luminescence age (years before its measurement year) into cal BP. */
+  calibrateLuminescence: Calibration;
+  /** A calibration curve's tabulated values on a calendar range (for the calibration view). */
+  calibrationCurveBand: Array<CurveBandPoint>;
+  /** Calibration curves usable in a project: the built-ins and any installed ones. */
+  calibrationCurves: Array<CalibrationCurveInfo>;
+  /** The event ladder: every site of a project with its events' posterior densities. */
+  eventLadder: EventLadder;
+  fitRenewal: RenewalFit;
+  hypothesis: Hypothesis;
+  /** The signed-in user. */
+  me: User;
+  project: Project;
+  /** Projects the caller is a member of. */
+  projects: Array<Project>;
+  recurrenceAnalysis: RecurrenceAnalysis;
+  release: Release;
+  releaseDiff: ReleaseDiff;
+  renewalProbability: RenewalProbability;
+  sample: Sample;
+  segment: Segment;
+  site: Site;
+};
+
+
+export type QueryAgeModelRunArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryAuditTrailArgs = {
+  input: AuditTrailInput;
+};
+
+
+export type QueryCalibrateArgs = {
+  input: CalibrateInput;
+};
+
+
+export type QueryCalibrateLuminescenceArgs = {
+  input: CalibrateLuminescenceInput;
+};
+
+
+export type QueryCalibrationCurveBandArgs = {
+  curve: CurveCode;
+  olderCalBp: Scalars['Int']['input'];
+  youngerCalBp: Scalars['Int']['input'];
+};
+
+
+export type QueryEventLadderArgs = {
+  projectId: Scalars['ID']['input'];
+};
+
+
+export type QueryFitRenewalArgs = {
+  input: FitRenewalInput;
+};
+
+
+export type QueryHypothesisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryProjectArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryRecurrenceAnalysisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryReleaseArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryReleaseDiffArgs = {
+  fromId: Scalars['ID']['input'];
+  toId: Scalars['ID']['input'];
+};
+
+
+export type QueryRenewalProbabilityArgs = {
+  input: RenewalProbabilityInput;
+};
+
+
+export type QuerySampleArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QuerySegmentArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QuerySiteArgs = {
+  id: Scalars['ID']['input'];
+};
+
+/** A median with its 2.5-97.5 % Monte Carlo range. */
+export type RangeEstimate = {
+  __typename?: 'RangeEstimate';
+  high95: Scalars['Float']['output'];
+  low95: Scalars['Float']['output'];
+  median: Scalars['Float']['output'];
+};
+
+/** Interval statistics, renewal fits and forecasts for a segment or site, with their inputs. */
+export type RecurrenceAnalysis = {
+  __typename?: 'RecurrenceAnalysis';
+  aperiodicity?: Maybe<RangeEstimate>;
+  /** The caution every recurrence figure carries. */
+  caution: Scalars['String']['output'];
+  createdAt: Scalars['DateTime']['output'];
+  curves: Array<ModelCurves>;
+  draws: Scalars['Int']['output'];
+  eventCount?: Maybe<Scalars['Int']['output']>;
+  finishedAt?: Maybe<Scalars['DateTime']['output']>;
+  forecastStartYear: Scalars['Int']['output'];
+  histogram: Array<HistogramBin>;
+  hypothesis?: Maybe<Hypothesis>;
+  hypothesisVersion?: Maybe<Scalars['Int']['output']>;
+  id: Scalars['ID']['output'];
+  intervals: Array<IntervalEstimate>;
+  lastEventMedianCalBp?: Maybe<Scalars['Float']['output']>;
+  meanRecurrence?: Maybe<RangeEstimate>;
+  medianRecurrence?: Maybe<RangeEstimate>;
+  message?: Maybe<Scalars['String']['output']>;
+  modelComparisonNote?: Maybe<Scalars['String']['output']>;
+  models: Array<ModelResult>;
+  openInterval?: Maybe<RangeEstimate>;
+  poisson: Array<WindowProbability>;
+  progress: Scalars['Float']['output'];
+  project: Project;
+  release?: Maybe<Release>;
+  sdRecurrence?: Maybe<RangeEstimate>;
+  seed: Scalars['Int']['output'];
+  segment?: Maybe<Segment>;
+  settings: Scalars['JSON']['output'];
+  site?: Maybe<Site>;
+  status: JobStatus;
+  windowsYears: Array<Scalars['Float']['output']>;
+};
+
+/** A connected group of tied events: one inferred earthquake. */
+export type RegionalEvent = {
+  __typename?: 'RegionalEvent';
+  chiSquare?: Maybe<ChiSquareTest>;
+  combinedDensity: Array<DensityPoint>;
+  combinedHpd95: Array<HpdRange>;
+  combinedMedianCalBp?: Maybe<Scalars['Float']['output']>;
+  /** 0-1: how well the members' age densities agree (1 = identical). */
+  concordance?: Maybe<Scalars['Float']['output']>;
+  id: Scalars['ID']['output'];
+  magnitude?: Maybe<MagnitudeEstimate>;
+  members: Array<EventHorizon>;
+  ruptureLengthKm?: Maybe<Scalars['Float']['output']>;
+  warnings: Array<Scalars['String']['output']>;
+};
+
+/** A frozen, numbered snapshot of a project's data for citation. */
+export type Release = {
+  __typename?: 'Release';
+  createdAt: Scalars['DateTime']['output'];
+  createdBy: User;
+  id: Scalars['ID']['output'];
+  note: Scalars['String']['output'];
+  number: Scalars['Int']['output'];
+  project: Project;
+  segments: Array<Segment>;
+  sites: Array<Site>;
+};
+
+export type ReleaseChange = {
+  __typename?: 'ReleaseChange';
+  change: Scalars['String']['output'];
+  label: Scalars['String']['output'];
+  objectId: Scalars['ID']['output'];
+  objectType: Scalars['String']['output'];
+};
+
+export type ReleaseDiff = {
+  __typename?: 'ReleaseDiff';
+  changes: Array<ReleaseChange>;
+  from: Release;
+  to: Release;
+};
+
+export type RenewalFit = {
+  __typename?: 'RenewalFit';
+  aic: Scalars['Float']['output'];
+  aperiodicity: Scalars['Float']['output'];
+  logLikelihood: Scalars['Float']['output'];
+  meanRecurrenceYears: Scalars['Float']['output'];
+  model: RenewalModel;
+};
+
+/** Renewal model of earthquake recurrence. */
+export type RenewalModel =
+  /** Brownian Passage Time: the inverse Gaussian (Matthews, Ellsworth & Reasenberg 2002). */
+  | 'BPT'
+  | 'LOGNORMAL'
+  /** Exponential inter-event times (time-independent). */
+  | 'POISSON'
+  | 'WEIBULL';
+
+export type RenewalProbability = {
+  __typename?: 'RenewalProbability';
+  conditionalProbability: Scalars['Float']['output'];
+  hazardRatePerYear: Scalars['Float']['output'];
+  poissonProbability: Scalars['Float']['output'];
+};
+
+export type RenewalProbabilityInput = {
+  /** Coefficient of variation; ignored for POISSON. */
+  aperiodicity: Scalars['Float']['input'];
+  /** Years since the last event at the start of the window. */
+  elapsedYears: Scalars['Float']['input'];
+  meanRecurrenceYears: Scalars['Float']['input'];
+  model: RenewalModel;
+  windowYears: Scalars['Float']['input'];
+};
+
+export type ResetPasswordInput = {
+  password: Scalars['String']['input'];
+  token: Scalars['String']['input'];
+};
+
+/** A member's role in one project; it decides what the member may change. */
+export type Role =
+  | 'ADMIN'
+  | 'ANALYST'
+  | 'CORRELATOR'
+  | 'RESEARCHER'
+  | 'VIEWER';
+
+/** A dated sample and its lab values. */
+export type Sample = {
+  __typename?: 'Sample';
+  ageRelation: AgeRelation;
+  attachments: Array<Attachment>;
+  /** Conventional radiocarbon age, 14C yr BP (Stuiver & Polach 1977). */
+  c14Age?: Maybe<Scalars['Float']['output']>;
+  /** 1-sigma error of the conventional age, 14C yr. */
+  c14Error?: Maybe<Scalars['Float']['output']>;
+  /** Luminescence: years before measurementYear; historical/tephra: centre of the calendar range, cal BP. */
+  calendarAgeBp?: Maybe<Scalars['Float']['output']>;
+  /** Luminescence: 1 sigma; historical/tephra: half-width of the range. */
+  calendarErrorYears?: Maybe<Scalars['Float']['output']>;
+  /** Calendar-age calibration, or null with calibrationError set when it cannot be calibrated. */
+  calibration?: Maybe<Calibration>;
+  calibrationError?: Maybe<Scalars['String']['output']>;
+  curve?: Maybe<CurveCode>;
+  delta13C?: Maybe<Scalars['Float']['output']>;
+  deltaR?: Maybe<Scalars['Float']['output']>;
+  deltaRError?: Maybe<Scalars['Float']['output']>;
+  depthM?: Maybe<Scalars['Float']['output']>;
+  excluded: Scalars['Boolean']['output'];
+  exclusionReason?: Maybe<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  labCode: Scalars['String']['output'];
+  material: SampleMaterial;
+  measurementYear?: Maybe<Scalars['Int']['output']>;
+  method: DatingMethod;
+  notes?: Maybe<Scalars['String']['output']>;
+  site: Site;
+  unit: Unit;
+  version: Scalars['Int']['output'];
+};
+
+/** What was dated. */
+export type SampleMaterial =
+  | 'BENTHIC_FORAMS'
+  | 'BULK_SEDIMENT'
+  | 'DETRITAL_CHARCOAL'
+  | 'IN_SITU_PLANT'
+  | 'OTHER'
+  | 'PLANKTIC_FORAMS'
+  | 'PLANT_MACROFOSSIL'
+  | 'SHELL';
+
+/** Posterior of one sample: its outlier probability and calendar age. */
+export type SamplePosterior = {
+  __typename?: 'SamplePosterior';
+  hpd95: Array<HpdRange>;
+  medianCalBp: Scalars['Float']['output'];
+  outlierProbability: Scalars['Float']['output'];
+  sample: Sample;
+};
+
+/** A fault or subduction-zone segment with its along-strike extent. */
+export type Segment = {
+  __typename?: 'Segment';
+  endKm: Scalars['Float']['output'];
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  project: Project;
+  sites: Array<Site>;
+  startKm: Scalars['Float']['output'];
+  version: Scalars['Int']['output'];
+};
+
+export type SetMemberRoleInput = {
+  projectId: Scalars['ID']['input'];
+  role: Role;
+  userId: Scalars['ID']['input'];
+};
+
+/** A place with evidence: a trench, core, outcrop, marsh or lake site. */
+export type Site = {
+  __typename?: 'Site';
+  ageModelRuns: Array<AgeModelRun>;
+  alongStrikeKm: Scalars['Float']['output'];
+  attachments: Array<Attachment>;
+  /** Ground elevation (m above sea level) for land sites. */
+  elevationM?: Maybe<Scalars['Float']['output']>;
+  /** Event horizons, oldest first. */
+  eventHorizons: Array<EventHorizon>;
+  id: Scalars['ID']['output'];
+  kind: SiteKind;
+  latestAgeModelRun?: Maybe<AgeModelRun>;
+  /** WGS84 latitude, degrees. */
+  latitude: Scalars['Float']['output'];
+  /** WGS84 longitude, degrees. */
+  longitude: Scalars['Float']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  project: Project;
+  samples: Array<Sample>;
+  segment?: Maybe<Segment>;
+  /** Units in stratigraphic order, oldest (position 1) first. */
+  units: Array<Unit>;
+  version: Scalars['Int']['output'];
+  /** Water depth (m) for cores. */
+  waterDepthM?: Maybe<Scalars['Float']['output']>;
+};
+
+/** Kind of place that holds paleoseismic evidence. */
+export type SiteKind =
+  | 'CORE'
+  | 'LAKE'
+  | 'MARSH'
+  | 'OUTCROP'
+  | 'TRENCH';
+
+export type StartAgeModelRunInput = {
+  chains?: InputMaybe<Scalars['Int']['input']>;
+  /** Scale of the exponential prior on inherited age offsets, years (default 100). */
+  inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
+  /** Iterations per chain after burn-in. */
+  iterations?: InputMaybe<Scalars['Int']['input']>;
+  /** Prior probability that any one sample is an outlier (default 0.05). */
+  outlierPrior?: InputMaybe<Scalars['Float']['input']>;
+  seed?: InputMaybe<Scalars['Int']['input']>;
+  siteId: Scalars['ID']['input'];
+};
+
+export type StartRecurrenceAnalysisInput = {
+  draws?: InputMaybe<Scalars['Int']['input']>;
+  /** Start of the forecast windows, calendar year CE (default: this year). */
+  forecastStartYear?: InputMaybe<Scalars['Int']['input']>;
+  hypothesisId?: InputMaybe<Scalars['ID']['input']>;
+  /** Pin the analysis to a release. */
+  releaseId?: InputMaybe<Scalars['ID']['input']>;
+  seed?: InputMaybe<Scalars['Int']['input']>;
+  segmentId?: InputMaybe<Scalars['ID']['input']>;
+  siteId?: InputMaybe<Scalars['ID']['input']>;
+  windowsYears?: InputMaybe<Array<Scalars['Float']['input']>>;
+};
+
+/** Tectonic setting of a project's faults; chooses the rupture-scaling relation. */
+export type TectonicSetting =
+  | 'CRUSTAL'
+  | 'SUBDUCTION_INTERFACE';
+
+/** A link between two site events asserting they record the same earthquake. */
+export type Tie = {
+  __typename?: 'Tie';
+  confidence: Scalars['Int']['output'];
+  eventA: EventHorizon;
+  eventB: EventHorizon;
+  evidence: Array<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  note?: Maybe<Scalars['String']['output']>;
+};
+
+/** A stratigraphic unit in a site's column. */
+export type Unit = {
+  __typename?: 'Unit';
+  baseDepthM: Scalars['Float']['output'];
+  facies: Facies;
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  /** Order from the base: 1 is the oldest unit. */
+  position: Scalars['Int']['output'];
+  site: Site;
+  topDepthM: Scalars['Float']['output'];
+  version: Scalars['Int']['output'];
+};
+
+export type UpdateEventHorizonInput = {
+  evidence?: InputMaybe<Array<Scalars['String']['input']>>;
+  name?: InputMaybe<Scalars['String']['input']>;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  quality?: InputMaybe<Scalars['Int']['input']>;
+  unitAboveId?: InputMaybe<Scalars['ID']['input']>;
+  unitBelowId?: InputMaybe<Scalars['ID']['input']>;
+};
+
+export type UpdateHypothesisInput = {
+  description?: InputMaybe<Scalars['String']['input']>;
+  name?: InputMaybe<Scalars['String']['input']>;
+};
+
+export type UpdateSampleInput = {
+  ageRelation?: InputMaybe<AgeRelation>;
+  c14Age?: InputMaybe<Scalars['Float']['input']>;
+  c14Error?: InputMaybe<Scalars['Float']['input']>;
+  calendarAgeBp?: InputMaybe<Scalars['Float']['input']>;
+  calendarErrorYears?: InputMaybe<Scalars['Float']['input']>;
+  curve?: InputMaybe<CurveCode>;
+  delta13C?: InputMaybe<Scalars['Float']['input']>;
+  deltaR?: InputMaybe<Scalars['Float']['input']>;
+  deltaRError?: InputMaybe<Scalars['Float']['input']>;
+  depthM?: InputMaybe<Scalars['Float']['input']>;
+  excluded?: InputMaybe<Scalars['Boolean']['input']>;
+  exclusionReason?: InputMaybe<Scalars['String']['input']>;
+  labCode?: InputMaybe<Scalars['String']['input']>;
+  material?: InputMaybe<SampleMaterial>;
+  measurementYear?: InputMaybe<Scalars['Int']['input']>;
+  method?: InputMaybe<DatingMethod>;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  unitId?: InputMaybe<Scalars['ID']['input']>;
+};
+
+export type UpdateSegmentInput = {
+  endKm?: InputMaybe<Scalars['Float']['input']>;
+  name?: InputMaybe<Scalars['String']['input']>;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  startKm?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type UpdateSiteInput = {
+  alongStrikeKm?: InputMaybe<Scalars['Float']['input']>;
+  elevationM?: InputMaybe<Scalars['Float']['input']>;
+  kind?: InputMaybe<SiteKind>;
+  latitude?: InputMaybe<Scalars['Float']['input']>;
+  longitude?: InputMaybe<Scalars['Float']['input']>;
+  name?: InputMaybe<Scalars['String']['input']>;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  segmentId?: InputMaybe<Scalars['ID']['input']>;
+  waterDepthM?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type UpdateUnitInput = {
+  baseDepthM?: InputMaybe<Scalars['Float']['input']>;
+  facies?: InputMaybe<Facies>;
+  name?: InputMaybe<Scalars['String']['input']>;
+  notes?: InputMaybe<Scalars['String']['input']>;
+  position?: InputMaybe<Scalars['Int']['input']>;
+  topDepthM?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type User = {
+  __typename?: 'User';
+  displayName: Scalars['String']['output'];
+  email: Scalars['String']['output'];
+  id: Scalars['ID']['output'];
+  memberships: Array<Membership>;
+};
+
+export type WindowProbability = {
+  __typename?: 'WindowProbability';
+  high95: Scalars['Float']['output'];
+  low95: Scalars['Float']['output'];
+  median: Scalars['Float']['output'];
+  windowYears: Scalars['Float']['output'];
+};
+
+export type SignInMutationVariables = Exact<{
+  email: Scalars['String']['input'];
+  password: Scalars['String']['input'];
+}>;
+
+
+export type SignInMutation = { __typename?: 'Mutation', signIn: { __typename?: 'AuthPayload', token: string, user: { __typename?: 'User', id: string, email: string, displayName: string } } };
+
+export type MeQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type MeQuery = { __typename?: 'Query', me: { __typename?: 'User', id: string, email: string, displayName: string } };
+
+export type CalibrateQueryVariables = Exact<{
+  input: CalibrateInput;
+}>;
+
+
+export type CalibrateQuery = { __typename?: 'Query', calibrate: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } };
+
+export type CalibrationCurvesQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type CalibrationCurvesQuery = { __typename?: 'Query', calibrationCurves: Array<{ __typename?: 'CalibrationCurveInfo', code: string, name: string, marine: boolean, builtIn: boolean, youngestCalBp: number, oldestCalBp: number }> };
+
+export type CalibrationCurveBandQueryVariables = Exact<{
+  curve: CurveCode;
+  youngerCalBp: Scalars['Int']['input'];
+  olderCalBp: Scalars['Int']['input'];
+}>;
+
+
+export type CalibrationCurveBandQuery = { __typename?: 'Query', calibrationCurveBand: Array<{ __typename?: 'CurveBandPoint', calBp: number, c14Age: number, c14Sigma: number }> };
+
+export type SiteCalibrationsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+
+export type ImportSamplesMutationVariables = Exact<{
+  input: ImportSamplesInput;
+}>;
+
+
+export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+
+export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type ProjectsQuery = { __typename?: 'Query', projects: Array<{ __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role }> };
+
+export type ProjectOverviewQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type ProjectOverviewQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, segments: Array<{ __typename?: 'Segment', id: string, version: number, name: string, startKm: number, endKm: number, notes?: string | null }>, sites: Array<{ __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, segment?: { __typename?: 'Segment', id: string, name: string } | null, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string }>, samples: Array<{ __typename?: 'Sample', id: string }> }> } };
+
+export type CreateSegmentMutationVariables = Exact<{
+  input: CreateSegmentInput;
+}>;
+
+
+export type CreateSegmentMutation = { __typename?: 'Mutation', createSegment: { __typename?: 'Segment', id: string } };
+
+export type UpdateSegmentMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+  version: Scalars['Int']['input'];
+  input: UpdateSegmentInput;
+}>;
+
+
+export type UpdateSegmentMutation = { __typename?: 'Mutation', updateSegment: { __typename?: 'Segment', id: string, version: number } };
+
+export type DeleteSegmentMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteSegmentMutation = { __typename?: 'Mutation', deleteSegment: boolean };
+
+export type CreateSiteMutationVariables = Exact<{
+  input: CreateSiteInput;
+}>;
+
+
+export type CreateSiteMutation = { __typename?: 'Mutation', createSite: { __typename?: 'Site', id: string } };
+
+export type UpdateSiteMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+  version: Scalars['Int']['input'];
+  input: UpdateSiteInput;
+}>;
+
+
+export type UpdateSiteMutation = { __typename?: 'Mutation', updateSite: { __typename?: 'Site', id: string, version: number } };
+
+export type DeleteSiteMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteSiteMutation = { __typename?: 'Mutation', deleteSite: boolean };
+
+export type CreateSampleMutationVariables = Exact<{
+  input: CreateSampleInput;
+}>;
+
+
+export type CreateSampleMutation = { __typename?: 'Mutation', createSample: { __typename?: 'Sample', id: string } };
+
+export type UpdateSampleMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+  version: Scalars['Int']['input'];
+  input: UpdateSampleInput;
+}>;
+
+
+export type UpdateSampleMutation = { __typename?: 'Mutation', updateSample: { __typename?: 'Sample', id: string, version: number } };
+
+export type DeleteSampleMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteSampleMutation = { __typename?: 'Mutation', deleteSample: boolean };
+
+export type SiteQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+
+export type CreateUnitMutationVariables = Exact<{
+  input: CreateUnitInput;
+}>;
+
+
+export type CreateUnitMutation = { __typename?: 'Mutation', createUnit: { __typename?: 'Unit', id: string } };
+
+export type UpdateUnitMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+  version: Scalars['Int']['input'];
+  input: UpdateUnitInput;
+}>;
+
+
+export type UpdateUnitMutation = { __typename?: 'Mutation', updateUnit: { __typename?: 'Unit', id: string, version: number } };
+
+export type DeleteUnitMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteUnitMutation = { __typename?: 'Mutation', deleteUnit: boolean };
+
+export type CreateEventHorizonMutationVariables = Exact<{
+  input: CreateEventHorizonInput;
+}>;
+
+
+export type CreateEventHorizonMutation = { __typename?: 'Mutation', createEventHorizon: { __typename?: 'EventHorizon', id: string } };
+
+export type UpdateEventHorizonMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+  version: Scalars['Int']['input'];
+  input: UpdateEventHorizonInput;
+}>;
+
+
+export type UpdateEventHorizonMutation = { __typename?: 'Mutation', updateEventHorizon: { __typename?: 'EventHorizon', id: string, version: number } };
+
+export type DeleteEventHorizonMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteEventHorizonMutation = { __typename?: 'Mutation', deleteEventHorizon: boolean };
+
+export class TypedDocumentString<TResult, TVariables>
+  extends String
+  implements DocumentTypeDecoration<TResult, TVariables>
+{
+  __apiType?: NonNullable<DocumentTypeDecoration<TResult, TVariables>['__apiType']>;
+  private value: string;
+  public __meta__?: Record<string, any> | undefined;
+
+  constructor(value: string, __meta__?: Record<string, any> | undefined) {
+    super(value);
+    this.value = value;
+    this.__meta__ = __meta__;
+  }
+
+  override toString(): string & DocumentTypeDecoration<TResult, TVariables> {
+    return this.value;
+  }
+}
+
+export const SignInDocument = new TypedDocumentString(`
+    mutation SignIn($email: String!, $password: String!) {
+  signIn(email: $email, password: $password) {
+    token
+    user {
+      id
+      email
+      displayName
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SignInMutation, SignInMutationVariables>;
+export const MeDocument = new TypedDocumentString(`
+    query Me {
+  me {
+    id
+    email
+    displayName
+  }
+}
+    `) as unknown as TypedDocumentString<MeQuery, MeQueryVariables>;
+export const CalibrateDocument = new TypedDocumentString(`
+    query Calibrate($input: CalibrateInput!) {
+  calibrate(input: $input) {
+    curve
+    medianCalBp
+    meanCalBp
+    sdYears
+    hpd68 {
+      olderCalBp
+      youngerCalBp
+      probability
+    }
+    hpd95 {
+      olderCalBp
+      youngerCalBp
+      probability
+    }
+    density {
+      calBp
+      probability
+    }
+    warnings
+  }
+}
+    `) as unknown as TypedDocumentString<CalibrateQuery, CalibrateQueryVariables>;
+export const CalibrationCurvesDocument = new TypedDocumentString(`
+    query CalibrationCurves {
+  calibrationCurves {
+    code
+    name
+    marine
+    builtIn
+    youngestCalBp
+    oldestCalBp
+  }
+}
+    `) as unknown as TypedDocumentString<CalibrationCurvesQuery, CalibrationCurvesQueryVariables>;
+export const CalibrationCurveBandDocument = new TypedDocumentString(`
+    query CalibrationCurveBand($curve: CurveCode!, $youngerCalBp: Int!, $olderCalBp: Int!) {
+  calibrationCurveBand(
+    curve: $curve
+    youngerCalBp: $youngerCalBp
+    olderCalBp: $olderCalBp
+  ) {
+    calBp
+    c14Age
+    c14Sigma
+  }
+}
+    `) as unknown as TypedDocumentString<CalibrationCurveBandQuery, CalibrationCurveBandQueryVariables>;
+export const SiteCalibrationsDocument = new TypedDocumentString(`
+    query SiteCalibrations($id: ID!) {
+  site(id: $id) {
+    id
+    samples {
+      id
+      labCode
+      method
+      c14Age
+      c14Error
+      curve
+      deltaR
+      deltaRError
+      excluded
+      unit {
+        id
+        name
+        position
+      }
+      calibration {
+        curve
+        medianCalBp
+        hpd68 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        density {
+          calBp
+          probability
+        }
+        warnings
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+export const ImportSamplesDocument = new TypedDocumentString(`
+    mutation ImportSamples($input: ImportSamplesInput!) {
+  importSamples(input: $input) {
+    rowCount
+    committed
+    errors {
+      row
+      field
+      message
+    }
+    preview {
+      row
+      labCode
+      unitName
+      medianCalBp
+      hpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+      warnings
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
+export const ProjectsDocument = new TypedDocumentString(`
+    query Projects {
+  projects {
+    id
+    name
+    description
+    tectonicSetting
+    myRole
+  }
+}
+    `) as unknown as TypedDocumentString<ProjectsQuery, ProjectsQueryVariables>;
+export const ProjectOverviewDocument = new TypedDocumentString(`
+    query ProjectOverview($id: ID!) {
+  project(id: $id) {
+    id
+    name
+    description
+    tectonicSetting
+    myRole
+    segments {
+      id
+      version
+      name
+      startKm
+      endKm
+      notes
+    }
+    sites {
+      id
+      version
+      name
+      kind
+      latitude
+      longitude
+      alongStrikeKm
+      elevationM
+      waterDepthM
+      notes
+      segment {
+        id
+        name
+      }
+      eventHorizons {
+        id
+      }
+      samples {
+        id
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ProjectOverviewQuery, ProjectOverviewQueryVariables>;
+export const CreateSegmentDocument = new TypedDocumentString(`
+    mutation CreateSegment($input: CreateSegmentInput!) {
+  createSegment(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<CreateSegmentMutation, CreateSegmentMutationVariables>;
+export const UpdateSegmentDocument = new TypedDocumentString(`
+    mutation UpdateSegment($id: ID!, $version: Int!, $input: UpdateSegmentInput!) {
+  updateSegment(id: $id, version: $version, input: $input) {
+    id
+    version
+  }
+}
+    `) as unknown as TypedDocumentString<UpdateSegmentMutation, UpdateSegmentMutationVariables>;
+export const DeleteSegmentDocument = new TypedDocumentString(`
+    mutation DeleteSegment($id: ID!) {
+  deleteSegment(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteSegmentMutation, DeleteSegmentMutationVariables>;
+export const CreateSiteDocument = new TypedDocumentString(`
+    mutation CreateSite($input: CreateSiteInput!) {
+  createSite(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<CreateSiteMutation, CreateSiteMutationVariables>;
+export const UpdateSiteDocument = new TypedDocumentString(`
+    mutation UpdateSite($id: ID!, $version: Int!, $input: UpdateSiteInput!) {
+  updateSite(id: $id, version: $version, input: $input) {
+    id
+    version
+  }
+}
+    `) as unknown as TypedDocumentString<UpdateSiteMutation, UpdateSiteMutationVariables>;
+export const DeleteSiteDocument = new TypedDocumentString(`
+    mutation DeleteSite($id: ID!) {
+  deleteSite(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteSiteMutation, DeleteSiteMutationVariables>;
+export const CreateSampleDocument = new TypedDocumentString(`
+    mutation CreateSample($input: CreateSampleInput!) {
+  createSample(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<CreateSampleMutation, CreateSampleMutationVariables>;
+export const UpdateSampleDocument = new TypedDocumentString(`
+    mutation UpdateSample($id: ID!, $version: Int!, $input: UpdateSampleInput!) {
+  updateSample(id: $id, version: $version, input: $input) {
+    id
+    version
+  }
+}
+    `) as unknown as TypedDocumentString<UpdateSampleMutation, UpdateSampleMutationVariables>;
+export const DeleteSampleDocument = new TypedDocumentString(`
+    mutation DeleteSample($id: ID!) {
+  deleteSample(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteSampleMutation, DeleteSampleMutationVariables>;
+export const SiteDocument = new TypedDocumentString(`
+    query Site($id: ID!) {
+  site(id: $id) {
+    id
+    version
+    name
+    kind
+    latitude
+    longitude
+    alongStrikeKm
+    elevationM
+    waterDepthM
+    notes
+    project {
+      id
+      name
+      myRole
+    }
+    segment {
+      id
+      name
+    }
+    units {
+      id
+      version
+      position
+      name
+      topDepthM
+      baseDepthM
+      facies
+      notes
+    }
+    eventHorizons {
+      id
+      version
+      name
+      quality
+      evidence
+      notes
+      unitBelow {
+        id
+      }
+      unitAbove {
+        id
+      }
+    }
+    samples {
+      id
+      version
+      labCode
+      method
+      material
+      depthM
+      ageRelation
+      c14Age
+      c14Error
+      delta13C
+      curve
+      deltaR
+      deltaRError
+      calendarAgeBp
+      calendarErrorYears
+      measurementYear
+      excluded
+      exclusionReason
+      notes
+      unit {
+        id
+      }
+      calibrationError
+      calibration {
+        curve
+        medianCalBp
+        meanCalBp
+        sdYears
+        hpd68 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        warnings
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteQuery, SiteQueryVariables>;
+export const CreateUnitDocument = new TypedDocumentString(`
+    mutation CreateUnit($input: CreateUnitInput!) {
+  createUnit(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<CreateUnitMutation, CreateUnitMutationVariables>;
+export const UpdateUnitDocument = new TypedDocumentString(`
+    mutation UpdateUnit($id: ID!, $version: Int!, $input: UpdateUnitInput!) {
+  updateUnit(id: $id, version: $version, input: $input) {
+    id
+    version
+  }
+}
+    `) as unknown as TypedDocumentString<UpdateUnitMutation, UpdateUnitMutationVariables>;
+export const DeleteUnitDocument = new TypedDocumentString(`
+    mutation DeleteUnit($id: ID!) {
+  deleteUnit(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteUnitMutation, DeleteUnitMutationVariables>;
+export const CreateEventHorizonDocument = new TypedDocumentString(`
+    mutation CreateEventHorizon($input: CreateEventHorizonInput!) {
+  createEventHorizon(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<CreateEventHorizonMutation, CreateEventHorizonMutationVariables>;
+export const UpdateEventHorizonDocument = new TypedDocumentString(`
+    mutation UpdateEventHorizon($id: ID!, $version: Int!, $input: UpdateEventHorizonInput!) {
+  updateEventHorizon(id: $id, version: $version, input: $input) {
+    id
+    version
+  }
+}
+    `) as unknown as TypedDocumentString<UpdateEventHorizonMutation, UpdateEventHorizonMutationVariables>;
+export const DeleteEventHorizonDocument = new TypedDocumentString(`
+    mutation DeleteEventHorizon($id: ID!) {
+  deleteEventHorizon(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteEventHorizonMutation, DeleteEventHorizonMutationVariables>;

@@ -1,0 +1,70 @@
+/**
+ * How ages are shown. Everything is stored and computed in cal BP (calendar years before
+ * AD 1950); the reader chooses to see cal BP or calendar years CE/BCE.
+ */
+export type AgeScale = 'CAL_BP' | 'CE_BCE';
+
+export const AGE_SCALES: readonly AgeScale[] = ['CAL_BP', 'CE_BCE'];
+
+/** The "present" of cal BP: AD 1950 (Stuiver & Polach 1977). */
+export const BP_ZERO_YEAR_CE = 1950;
+
+/** Short name of a scale, for switches and axis titles. */
+export function ageScaleLabel(scale: AgeScale): string {
+  return scale === 'CAL_BP' ? 'cal BP' : 'CE/BCE';
+}
+
+/**
+ * Astronomical calendar year of a cal BP age: 1950 - calBp. Astronomical numbering has a
+ * year 0, which is 1 BCE (there is no year 0 between 1 BCE and 1 CE in the historical count).
+ */
+export function calBpToAstronomicalYear(calBp: number): number {
+  return BP_ZERO_YEAR_CE - Math.round(calBp);
+}
+
+/** An astronomical year as a historical year: 1 and later are CE, 0 is 1 BCE, -1 is 2 BCE. */
+export function formatCalendarYear(astronomicalYear: number): string {
+  return astronomicalYear >= 1 ? `${astronomicalYear} CE` : `${1 - astronomicalYear} BCE`;
+}
+
+/** A single age in the chosen scale, e.g. "1250 cal BP" or "700 CE". */
+export function formatAge(calBp: number, scale: AgeScale): string {
+  if (scale === 'CAL_BP') {
+    return `${Math.round(calBp)} cal BP`;
+  }
+  return formatCalendarYear(calBpToAstronomicalYear(calBp));
+}
+
+/**
+ * A range, oldest end first in both scales: "1290–1180 cal BP", "660–770 CE", "120 BCE–40 CE".
+ * The era is written once when both ends share it.
+ */
+export function formatAgeRange(olderCalBp: number, youngerCalBp: number, scale: AgeScale): string {
+  const older = Math.max(olderCalBp, youngerCalBp);
+  const younger = Math.min(olderCalBp, youngerCalBp);
+  if (scale === 'CAL_BP') {
+    return `${Math.round(older)}–${Math.round(younger)} cal BP`;
+  }
+  const from = calBpToAstronomicalYear(older);
+  const to = calBpToAstronomicalYear(younger);
+  if (from >= 1) {
+    return `${from}–${to} CE`;
+  }
+  if (to <= 0) {
+    return `${1 - from}–${1 - to} BCE`;
+  }
+  return `${formatCalendarYear(from)}–${formatCalendarYear(to)}`;
+}
+
+/**
+ * An axis tick: the bare number in cal BP (the axis title carries the unit), and the year with
+ * its era in CE/BCE because the era changes along the axis.
+ */
+export function formatAgeTick(calBp: number, scale: AgeScale): string {
+  return scale === 'CAL_BP' ? String(Math.round(calBp)) : formatCalendarYear(calBpToAstronomicalYear(calBp));
+}
+
+/** A radiocarbon age with its 1-sigma error, "1830 ± 25" (the unit, 14C yr BP, goes in the column or label). */
+export function formatRadiocarbonAge(c14Age: number, c14Error: number): string {
+  return `${Math.round(c14Age)} ± ${Math.round(c14Error)}`;
+}

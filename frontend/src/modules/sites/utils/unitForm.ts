@@ -1,0 +1,64 @@
+import type { CreateUnitInput, Facies } from '@/gql/graphql';
+import { FieldReader, numberText, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
+
+export type UnitFormValues = {
+  position: string;
+  name: string;
+  topDepthM: string;
+  baseDepthM: string;
+  facies: Facies;
+  notes: string;
+};
+
+export type UnitFormField = keyof UnitFormValues;
+
+export const UNIT_FORM_FIELDS: readonly UnitFormField[] = ['position', 'name', 'topDepthM', 'baseDepthM', 'facies', 'notes'];
+
+type StoredUnit = { position: number; name: string; topDepthM: number; baseDepthM: number; facies: Facies; notes?: string | null };
+
+/**
+ * A new unit's form: the next position up, its base at the top of the youngest unit, since a
+ * column is built from its base (position 1, oldest) upwards.
+ */
+export function emptyUnitForm(existing: readonly StoredUnit[]): UnitFormValues {
+  const top = [...existing].sort((a, b) => b.position - a.position)[0];
+  return {
+    position: String((top?.position ?? 0) + 1),
+    name: '',
+    topDepthM: '',
+    baseDepthM: top ? numberText(top.topDepthM) : '',
+    facies: 'OTHER',
+    notes: '',
+  };
+}
+
+export function unitFormFrom(unit: StoredUnit): UnitFormValues {
+  return {
+    position: String(unit.position),
+    name: unit.name,
+    topDepthM: numberText(unit.topDepthM),
+    baseDepthM: numberText(unit.baseDepthM),
+    facies: unit.facies,
+    notes: unit.notes ?? '',
+  };
+}
+
+/** Check a unit form: a whole position from 1, depths in metres with the base below the top. */
+export function readUnitForm(values: UnitFormValues): FormResult<Omit<CreateUnitInput, 'siteId'>, UnitFormField> {
+  const reader = new FieldReader<UnitFormField>();
+  const position = reader.number('position', values.position, { required: true, integer: true, min: 1 });
+  const name = reader.text('name', values.name, { required: true });
+  const topDepthM = reader.number('topDepthM', values.topDepthM, { required: true, min: 0 });
+  const baseDepthM = reader.number('baseDepthM', values.baseDepthM, { required: true, min: 0 });
+  if (topDepthM !== null && baseDepthM !== null && !(baseDepthM > topDepthM)) {
+    reader.fail('baseDepthM', 'the base must be deeper than the top');
+  }
+  return reader.result({
+    position: position ?? 0,
+    name,
+    topDepthM: topDepthM ?? 0,
+    baseDepthM: baseDepthM ?? 0,
+    facies: values.facies,
+    notes: optionalText(values.notes),
+  });
+}
