@@ -6,6 +6,7 @@ import { AppModule } from './app.module';
 import { createValidationPipe } from './common/errors/validation';
 import { repositoryRoot } from './common/repo-paths';
 import { AppConfig } from './config/config';
+import { provideBootConfig } from './config/config.module';
 import { runMigrations } from './database/migrate';
 import { seedDemoIfEmpty } from './demo/seed';
 
@@ -19,6 +20,7 @@ const API_PREFIXES = ['/graphql', '/health', '/api', '/dev'];
  */
 export async function createApp(config: AppConfig): Promise<NestExpressApplication> {
   await runMigrations(config.databaseUrl);
+  provideBootConfig(config);
   const app = await NestFactory.create<NestExpressApplication>(AppModule, {
     logger: config.nodeEnv === 'test' ? ['error'] : ['log', 'error', 'warn'],
   });

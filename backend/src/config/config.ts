@@ -15,6 +15,8 @@ export interface AppConfig {
   /** Public base URL used in e-mailed links. */
   readonly publicUrl: string;
   readonly smtp: { host: string; port: number; secure: boolean; user?: string; password?: string; from: string };
+  /** HTTP listing of the local SMTP fake, read by the development mail page; never set in production. */
+  readonly mailFakeUrl?: string;
   readonly s3: {
     endpoint?: string;
     region: string;
@@ -80,6 +82,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
       password: env.SMTP_PASSWORD,
       from: env.MAIL_FROM ?? 'Stratochron <no-reply@stratochron.test>',
     },
+    mailFakeUrl: nodeEnv === 'production' ? undefined : (env.MAIL_FAKE_URL || 'http://127.0.0.1:2526'),
     s3: {
       endpoint: env.S3_ENDPOINT || undefined,
       region: env.S3_REGION ?? 'us-east-1',
