@@ -1278,6 +1278,34 @@ export type WindowProbability = {
   windowYears: Scalars['Float']['output'];
 };
 
+export type AgeModelRunQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+
+export type AgeModelSiteQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
+
+export type StartAgeModelRunMutationVariables = Exact<{
+  input: StartAgeModelRunInput;
+}>;
+
+
+export type StartAgeModelRunMutation = { __typename?: 'Mutation', startAgeModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus } };
+
+export type CancelAgeModelRunMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type CancelAgeModelRunMutation = { __typename?: 'Mutation', cancelAgeModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus } };
+
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
   password: Scalars['String']['input'];
@@ -1325,6 +1353,48 @@ export type ImportSamplesMutationVariables = Exact<{
 
 
 export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+
+export type EventLadderQueryVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
+
+export type HypothesisQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author: { __typename?: 'User', id: string, displayName: string }, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string } }> } };
+
+export type AddTieMutationVariables = Exact<{
+  input: AddTieInput;
+}>;
+
+
+export type AddTieMutation = { __typename?: 'Mutation', addTie: { __typename?: 'Tie', id: string } };
+
+export type RemoveTieMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type RemoveTieMutation = { __typename?: 'Mutation', removeTie: boolean };
+
+export type CreateHypothesisMutationVariables = Exact<{
+  input: CreateHypothesisInput;
+}>;
+
+
+export type CreateHypothesisMutation = { __typename?: 'Mutation', createHypothesis: { __typename?: 'Hypothesis', id: string, name: string } };
+
+export type SetPreferredHypothesisMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SetPreferredHypothesisMutation = { __typename?: 'Mutation', setPreferredHypothesis: { __typename?: 'Hypothesis', id: string, preferred: boolean } };
 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
@@ -1383,6 +1453,34 @@ export type DeleteSiteMutationVariables = Exact<{
 
 
 export type DeleteSiteMutation = { __typename?: 'Mutation', deleteSite: boolean };
+
+export type RecurrenceSetupQueryVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type RecurrenceSetupQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, segments: Array<{ __typename?: 'Segment', id: string, name: string }>, sites: Array<{ __typename?: 'Site', id: string, name: string, kind: SiteKind }>, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean }>, preferredHypothesis?: { __typename?: 'Hypothesis', id: string } | null, recurrenceAnalyses: Array<{ __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, createdAt: string, forecastStartYear: number, draws: number, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null }> } };
+
+export type RecurrenceAnalysisQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }> }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+
+export type StartRecurrenceAnalysisMutationVariables = Exact<{
+  input: StartRecurrenceAnalysisInput;
+}>;
+
+
+export type StartRecurrenceAnalysisMutation = { __typename?: 'Mutation', startRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
+
+export type CancelRecurrenceAnalysisMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type CancelRecurrenceAnalysisMutation = { __typename?: 'Mutation', cancelRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
 
 export type CreateSampleMutationVariables = Exact<{
   input: CreateSampleInput;
@@ -1479,6 +1577,138 @@ export class TypedDocumentString<TResult, TVariables>
   }
 }
 
+export const AgeModelRunDocument = new TypedDocumentString(`
+    query AgeModelRun($id: ID!) {
+  ageModelRun(id: $id) {
+    id
+    status
+    progress
+    message
+    seed
+    settings
+    stale
+    createdAt
+    finishedAt
+    diagnostics {
+      converged
+      maxRhat
+      minEss
+      message
+    }
+    events {
+      medianCalBp
+      meanCalBp
+      rhat
+      ess
+      eventHorizon {
+        id
+        name
+      }
+      hpd68 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+      hpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+      density {
+        calBp
+        probability
+      }
+    }
+    samples {
+      outlierProbability
+      medianCalBp
+      sample {
+        id
+        labCode
+      }
+      hpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<AgeModelRunQuery, AgeModelRunQueryVariables>;
+export const AgeModelSiteDocument = new TypedDocumentString(`
+    query AgeModelSite($id: ID!) {
+  site(id: $id) {
+    id
+    name
+    kind
+    project {
+      id
+      name
+      myRole
+    }
+    units {
+      id
+      position
+      name
+    }
+    eventHorizons {
+      id
+      name
+      quality
+      unitBelow {
+        id
+        position
+      }
+      unitAbove {
+        id
+        position
+      }
+    }
+    samples {
+      id
+      labCode
+      method
+      material
+      ageRelation
+      excluded
+      unit {
+        id
+        position
+      }
+      depthM
+      calibrationError
+      calibration {
+        medianCalBp
+        density {
+          calBp
+          probability
+        }
+      }
+    }
+    latestAgeModelRun {
+      id
+      status
+      stale
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<AgeModelSiteQuery, AgeModelSiteQueryVariables>;
+export const StartAgeModelRunDocument = new TypedDocumentString(`
+    mutation StartAgeModelRun($input: StartAgeModelRunInput!) {
+  startAgeModelRun(input: $input) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<StartAgeModelRunMutation, StartAgeModelRunMutationVariables>;
+export const CancelAgeModelRunDocument = new TypedDocumentString(`
+    mutation CancelAgeModelRun($id: ID!) {
+  cancelAgeModelRun(id: $id) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<CancelAgeModelRunMutation, CancelAgeModelRunMutationVariables>;
 export const SignInDocument = new TypedDocumentString(`
     mutation SignIn($email: String!, $password: String!) {
   signIn(email: $email, password: $password) {
@@ -1617,6 +1847,154 @@ export const ImportSamplesDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
+export const EventLadderDocument = new TypedDocumentString(`
+    query EventLadder($projectId: ID!) {
+  eventLadder(projectId: $projectId) {
+    columns {
+      site {
+        id
+        name
+        kind
+        alongStrikeKm
+        segment {
+          id
+          name
+        }
+      }
+      latestAgeModelRun {
+        id
+        stale
+      }
+      events {
+        medianCalBp
+        eventHorizon {
+          id
+          name
+          quality
+        }
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        density {
+          calBp
+          probability
+        }
+      }
+    }
+  }
+  project(id: $projectId) {
+    id
+    name
+    myRole
+    tectonicSetting
+    hypotheses {
+      id
+      name
+      preferred
+      version
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<EventLadderQuery, EventLadderQueryVariables>;
+export const HypothesisDocument = new TypedDocumentString(`
+    query Hypothesis($id: ID!) {
+  hypothesis(id: $id) {
+    id
+    name
+    description
+    preferred
+    version
+    author {
+      id
+      displayName
+    }
+    copiedFrom {
+      id
+      name
+    }
+    ties {
+      id
+      confidence
+      evidence
+      note
+      eventA {
+        id
+        name
+      }
+      eventB {
+        id
+        name
+      }
+    }
+    regionalEvents {
+      id
+      combinedMedianCalBp
+      concordance
+      warnings
+      ruptureLengthKm
+      members {
+        id
+        name
+      }
+      combinedHpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+      chiSquare {
+        t
+        df
+        critical5
+        passes
+      }
+      magnitude {
+        mw
+        sigma
+        relation
+      }
+    }
+    orderConflicts {
+      message
+      tieA {
+        id
+      }
+      tieB {
+        id
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<HypothesisQuery, HypothesisQueryVariables>;
+export const AddTieDocument = new TypedDocumentString(`
+    mutation AddTie($input: AddTieInput!) {
+  addTie(input: $input) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<AddTieMutation, AddTieMutationVariables>;
+export const RemoveTieDocument = new TypedDocumentString(`
+    mutation RemoveTie($id: ID!) {
+  removeTie(id: $id)
+}
+    `) as unknown as TypedDocumentString<RemoveTieMutation, RemoveTieMutationVariables>;
+export const CreateHypothesisDocument = new TypedDocumentString(`
+    mutation CreateHypothesis($input: CreateHypothesisInput!) {
+  createHypothesis(input: $input) {
+    id
+    name
+  }
+}
+    `) as unknown as TypedDocumentString<CreateHypothesisMutation, CreateHypothesisMutationVariables>;
+export const SetPreferredHypothesisDocument = new TypedDocumentString(`
+    mutation SetPreferredHypothesis($id: ID!) {
+  setPreferredHypothesis(id: $id) {
+    id
+    preferred
+  }
+}
+    `) as unknown as TypedDocumentString<SetPreferredHypothesisMutation, SetPreferredHypothesisMutationVariables>;
 export const ProjectsDocument = new TypedDocumentString(`
     query Projects {
   projects {
@@ -1709,6 +2087,172 @@ export const DeleteSiteDocument = new TypedDocumentString(`
   deleteSite(id: $id)
 }
     `) as unknown as TypedDocumentString<DeleteSiteMutation, DeleteSiteMutationVariables>;
+export const RecurrenceSetupDocument = new TypedDocumentString(`
+    query RecurrenceSetup($projectId: ID!) {
+  project(id: $projectId) {
+    id
+    name
+    myRole
+    segments {
+      id
+      name
+    }
+    sites {
+      id
+      name
+      kind
+    }
+    hypotheses {
+      id
+      name
+      preferred
+    }
+    preferredHypothesis {
+      id
+    }
+    recurrenceAnalyses {
+      id
+      status
+      createdAt
+      forecastStartYear
+      draws
+      segment {
+        id
+        name
+      }
+      site {
+        id
+        name
+      }
+      hypothesis {
+        id
+        name
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<RecurrenceSetupQuery, RecurrenceSetupQueryVariables>;
+export const RecurrenceAnalysisDocument = new TypedDocumentString(`
+    query RecurrenceAnalysis($id: ID!) {
+  recurrenceAnalysis(id: $id) {
+    id
+    status
+    progress
+    message
+    seed
+    forecastStartYear
+    windowsYears
+    draws
+    createdAt
+    finishedAt
+    hypothesisVersion
+    segment {
+      id
+      name
+    }
+    site {
+      id
+      name
+    }
+    hypothesis {
+      id
+      name
+    }
+    eventCount
+    lastEventMedianCalBp
+    openInterval {
+      median
+      low95
+      high95
+    }
+    intervals {
+      index
+      medianYears
+      low95
+      high95
+    }
+    meanRecurrence {
+      median
+      low95
+      high95
+    }
+    medianRecurrence {
+      median
+      low95
+      high95
+    }
+    sdRecurrence {
+      median
+      low95
+      high95
+    }
+    aperiodicity {
+      median
+      low95
+      high95
+    }
+    poisson {
+      windowYears
+      median
+      low95
+      high95
+    }
+    models {
+      model
+      aic
+      deltaAic
+      akaikeWeight
+      meanRecurrenceYears
+      aperiodicity
+      logLikelihood
+      probabilities {
+        windowYears
+        median
+        low95
+        high95
+      }
+    }
+    modelComparisonNote
+    curves {
+      model
+      density {
+        years
+        value
+      }
+      hazard {
+        years
+        value
+      }
+      survival {
+        years
+        value
+      }
+    }
+    histogram {
+      fromYears
+      toYears
+      count
+    }
+    caution
+  }
+}
+    `) as unknown as TypedDocumentString<RecurrenceAnalysisQuery, RecurrenceAnalysisQueryVariables>;
+export const StartRecurrenceAnalysisDocument = new TypedDocumentString(`
+    mutation StartRecurrenceAnalysis($input: StartRecurrenceAnalysisInput!) {
+  startRecurrenceAnalysis(input: $input) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<StartRecurrenceAnalysisMutation, StartRecurrenceAnalysisMutationVariables>;
+export const CancelRecurrenceAnalysisDocument = new TypedDocumentString(`
+    mutation CancelRecurrenceAnalysis($id: ID!) {
+  cancelRecurrenceAnalysis(id: $id) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<CancelRecurrenceAnalysisMutation, CancelRecurrenceAnalysisMutationVariables>;
 export const CreateSampleDocument = new TypedDocumentString(`
     mutation CreateSample($input: CreateSampleInput!) {
   createSample(input: $input) {

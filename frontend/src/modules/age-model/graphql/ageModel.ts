@@ -1,0 +1,139 @@
+import { graphql } from '@/gql';
+
+/** Everything of one run the age model view draws: status, diagnostics and posteriors. */
+export const AgeModelRunDocument = graphql(`
+  query AgeModelRun($id: ID!) {
+    ageModelRun(id: $id) {
+      id
+      status
+      progress
+      message
+      seed
+      settings
+      stale
+      createdAt
+      finishedAt
+      diagnostics {
+        converged
+        maxRhat
+        minEss
+        message
+      }
+      events {
+        medianCalBp
+        meanCalBp
+        rhat
+        ess
+        eventHorizon {
+          id
+          name
+        }
+        hpd68 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        density {
+          calBp
+          probability
+        }
+      }
+      samples {
+        outlierProbability
+        medianCalBp
+        sample {
+          id
+          labCode
+        }
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+      }
+    }
+  }
+`);
+
+/** The site's column with every sample's calibrated likelihood, and the id of its latest run. */
+export const AgeModelSiteDocument = graphql(`
+  query AgeModelSite($id: ID!) {
+    site(id: $id) {
+      id
+      name
+      kind
+      project {
+        id
+        name
+        myRole
+      }
+      units {
+        id
+        position
+        name
+      }
+      eventHorizons {
+        id
+        name
+        quality
+        unitBelow {
+          id
+          position
+        }
+        unitAbove {
+          id
+          position
+        }
+      }
+      samples {
+        id
+        labCode
+        method
+        material
+        ageRelation
+        excluded
+        unit {
+          id
+          position
+        }
+        depthM
+        calibrationError
+        calibration {
+          medianCalBp
+          density {
+            calBp
+            probability
+          }
+        }
+      }
+      latestAgeModelRun {
+        id
+        status
+        stale
+      }
+    }
+  }
+`);
+
+export const StartAgeModelRunDocument = graphql(`
+  mutation StartAgeModelRun($input: StartAgeModelRunInput!) {
+    startAgeModelRun(input: $input) {
+      id
+      status
+    }
+  }
+`);
+
+export const CancelAgeModelRunDocument = graphql(`
+  mutation CancelAgeModelRun($id: ID!) {
+    cancelAgeModelRun(id: $id) {
+      id
+      status
+    }
+  }
+`);

@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import { figureFileName, svgDocumentText } from './figureExport';
+
+describe(svgDocumentText.name, () => {
+  const markup = '<svg width="640" height="400" class="sc-chart" role="img"><g><path d="M0 0L1 1" fill="#8a6d4b"></path></g></svg>';
+
+  it('makes a stand-alone document with namespaces, size, viewBox and a background first', () => {
+    const text = svgDocumentText(markup, { width: 800, height: 500, title: 'Ladder A & B' });
+    expect(text.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(text).toContain('width="800" height="500" viewBox="0 0 800 500"');
+    expect(text).not.toContain('width="640"');
+    expect(text).toContain('class="sc-chart" role="img"');
+    expect(text).toContain('<title>Ladder A &amp; B</title>');
+    expect(text.indexOf('<rect x="0" y="0" width="800" height="500" fill="#ffffff"/>')).toBeLessThan(text.indexOf('<path'));
+    expect(text.trimEnd().endsWith('</g></svg>')).toBe(true);
+  });
+
+  it('keeps a single xmlns when the markup already has one, and parses as XML', async () => {
+    const text = svgDocumentText('<svg xmlns="http://www.w3.org/2000/svg"><text class="num">1 &lt; 2</text></svg>', {
+      width: 10,
+      height: 10,
+      background: null,
+    });
+    expect(text.match(/xmlns="/g)).toHaveLength(1);
+    expect(text).not.toContain('<rect');
+    // Well-formedness check without a DOM: every opened element is closed in order.
+    const stack: string[] = [];
+    for (const [, closing, name, selfClosing] of text.matchAll(/<(\/?)([a-zA-Z][\w:-]*)[^>]*?(\/?)>/g)) {
+      if (closing) expect(stack.pop()).toBe(name);
+      else if (!selfClosing) stack.push(name!);
+    }
+    expect(stack).toEqual([]);
+  });
+
+  it('refuses markup that is not an svg element', () => {
+    expect(() => svgDocumentText('<div></div>', { width: 1, height: 1 })).toThrow(/not an <svg>/);
+  });
+});
+
+describe(figureFileName.name, () => {
+  it('turns a title into a safe file name', () => {
+    expect(figureFileName('Event ladder — Velmora Margin (Hypothèse 2)', 'png')).toBe('event-ladder-velmora-margin-hypothese-2.png');
+    expect(figureFileName('***', 'svg')).toBe('figure.svg');
+  });
+});

@@ -1,0 +1,173 @@
+import { graphql } from '@/gql';
+
+/** What a recurrence analysis can be run on, and the analyses already run in the project. */
+export const RecurrenceSetupDocument = graphql(`
+  query RecurrenceSetup($projectId: ID!) {
+    project(id: $projectId) {
+      id
+      name
+      myRole
+      segments {
+        id
+        name
+      }
+      sites {
+        id
+        name
+        kind
+      }
+      hypotheses {
+        id
+        name
+        preferred
+      }
+      preferredHypothesis {
+        id
+      }
+      recurrenceAnalyses {
+        id
+        status
+        createdAt
+        forecastStartYear
+        draws
+        segment {
+          id
+          name
+        }
+        site {
+          id
+          name
+        }
+        hypothesis {
+          id
+          name
+        }
+      }
+    }
+  }
+`);
+
+/** One analysis with every figure the recurrence view shows. */
+export const RecurrenceAnalysisDocument = graphql(`
+  query RecurrenceAnalysis($id: ID!) {
+    recurrenceAnalysis(id: $id) {
+      id
+      status
+      progress
+      message
+      seed
+      forecastStartYear
+      windowsYears
+      draws
+      createdAt
+      finishedAt
+      hypothesisVersion
+      segment {
+        id
+        name
+      }
+      site {
+        id
+        name
+      }
+      hypothesis {
+        id
+        name
+      }
+      eventCount
+      lastEventMedianCalBp
+      openInterval {
+        median
+        low95
+        high95
+      }
+      intervals {
+        index
+        medianYears
+        low95
+        high95
+      }
+      meanRecurrence {
+        median
+        low95
+        high95
+      }
+      medianRecurrence {
+        median
+        low95
+        high95
+      }
+      sdRecurrence {
+        median
+        low95
+        high95
+      }
+      aperiodicity {
+        median
+        low95
+        high95
+      }
+      poisson {
+        windowYears
+        median
+        low95
+        high95
+      }
+      models {
+        model
+        aic
+        deltaAic
+        akaikeWeight
+        meanRecurrenceYears
+        aperiodicity
+        logLikelihood
+        probabilities {
+          windowYears
+          median
+          low95
+          high95
+        }
+      }
+      modelComparisonNote
+      curves {
+        model
+        density {
+          years
+          value
+        }
+        hazard {
+          years
+          value
+        }
+        survival {
+          years
+          value
+        }
+      }
+      histogram {
+        fromYears
+        toYears
+        count
+      }
+      caution
+    }
+  }
+`);
+
+export const StartRecurrenceAnalysisDocument = graphql(`
+  mutation StartRecurrenceAnalysis($input: StartRecurrenceAnalysisInput!) {
+    startRecurrenceAnalysis(input: $input) {
+      id
+      status
+    }
+  }
+`);
+
+export const CancelRecurrenceAnalysisDocument = graphql(`
+  mutation CancelRecurrenceAnalysis($id: ID!) {
+    cancelRecurrenceAnalysis(id: $id) {
+      id
+      status
+    }
+  }
+`);
