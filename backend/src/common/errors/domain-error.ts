@@ -2,7 +2,15 @@
  * Every error a user may see carries one of these codes in GraphQL `extensions.code`.
  * Services throw `DomainError`s; `formatGraphqlError` maps them (and framework errors) in one place.
  */
-export type ErrorCode = 'UNAUTHENTICATED' | 'FORBIDDEN' | 'BAD_USER_INPUT' | 'NOT_FOUND' | 'CONFLICT' | 'TOO_MANY_REQUESTS';
+export type ErrorCode =
+  | 'UNAUTHENTICATED'
+  | 'FORBIDDEN'
+  | 'BAD_USER_INPUT'
+  | 'NOT_FOUND'
+  | 'CONFLICT'
+  | 'TOO_MANY_REQUESTS'
+  /** A service the API depends on (mail server, object storage) failed; nothing was saved. */
+  | 'SERVICE_UNAVAILABLE';
 
 export class DomainError extends Error {
   constructor(
@@ -23,3 +31,4 @@ export const notFound = (what: string) => new DomainError('NOT_FOUND', `${what} 
 export const forbidden = (message = 'your role in this project does not allow this') => new DomainError('FORBIDDEN', message);
 export const conflict = (message: string) => new DomainError('CONFLICT', message);
 export const unauthenticated = (message = 'sign in first') => new DomainError('UNAUTHENTICATED', message);
+export const unavailable = (message: string) => new DomainError('SERVICE_UNAVAILABLE', message);

@@ -4,7 +4,7 @@ import { ErrorCode } from './domain-error';
 
 /** The codes clients may see; GraphQL's own for requests that never reached a resolver. */
 const CLIENT_CODES = new Set<string>([
-  'UNAUTHENTICATED', 'FORBIDDEN', 'BAD_USER_INPUT', 'NOT_FOUND', 'CONFLICT', 'TOO_MANY_REQUESTS',
+  'UNAUTHENTICATED', 'FORBIDDEN', 'BAD_USER_INPUT', 'NOT_FOUND', 'CONFLICT', 'TOO_MANY_REQUESTS', 'SERVICE_UNAVAILABLE',
   'GRAPHQL_PARSE_FAILED', 'GRAPHQL_VALIDATION_FAILED', 'BAD_REQUEST', 'PERSISTED_QUERY_NOT_FOUND',
 ]);
 

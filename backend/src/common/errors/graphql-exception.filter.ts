@@ -12,6 +12,7 @@ const HTTP_STATUS: Record<ErrorCode, HttpStatus> = {
   NOT_FOUND: HttpStatus.NOT_FOUND,
   CONFLICT: HttpStatus.CONFLICT,
   TOO_MANY_REQUESTS: HttpStatus.TOO_MANY_REQUESTS,
+  SERVICE_UNAVAILABLE: HttpStatus.SERVICE_UNAVAILABLE,
 };
 
 /**
