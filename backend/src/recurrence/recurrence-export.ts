@@ -1,0 +1,141 @@
+/**
+ * The tables of a finished recurrence analysis as CSV and JSON downloads: its inputs, the
+ * inter-event intervals, the interval statistics, the model table and the probabilities, each
+ * carrying the caution (the CSV's first line, the JSON's `caution` field). Pure functions.
+ */
+import { RENEWAL_MODEL_LABELS } from '../chronology/recurrence';
+import { type CsvValue, toCsv } from '../common/csv';
+import { RECURRENCE_CAUTION } from './recurrence-caution';
+import type { StoredRange, StoredRecurrenceResults } from './recurrence-results';
+
+/** What an export says about the analysis itself, so the numbers can be traced and rerun. */
+export interface RecurrenceExportHeader {
+  id: string;
+  projectId: string;
+  segmentId: string | null;
+  siteId: string | null;
+  hypothesisId: string | null;
+  hypothesisVersion: number | null;
+  ageModelRunIds: string[];
+  seed: number;
+  forecastStartYear: number;
+  windowsYears: number[];
+  draws: number;
+  createdAt: string;
+  finishedAt: string | null;
+}
+
+export interface RecurrenceExport {
+  caution: string;
+  analysis: RecurrenceExportHeader;
+  eventAgesCalBp: number[];
+  intervals: StoredRecurrenceResults['intervals'];
+  statistics: { quantity: string; unit: string; median: number; low95: number; high95: number }[];
+  models: {
+    model: string;
+    aic: number;
+    deltaAic: number;
+    akaikeWeight: number;
+    meanRecurrenceYears: number;
+    aperiodicity: number;
+    logLikelihood: number;
+    meanRecurrenceRange: StoredRange;
+    aperiodicityRange: StoredRange;
+    preferredShare: number;
+  }[];
+  modelComparisonNote: string;
+  probabilities: { model: string; windowYears: number; median: number; low95: number; high95: number }[];
+  histogram: StoredRecurrenceResults['histogram'];
+}
+
+/** The JSON export. */
+export function recurrenceExport(header: RecurrenceExportHeader, results: StoredRecurrenceResults): RecurrenceExport {
+  const statistic = (quantity: string, unit: string, value: StoredRange) => ({ quantity, unit, ...value });
+  return {
+    caution: RECURRENCE_CAUTION,
+    analysis: header,
+    eventAgesCalBp: results.eventAgesCalBp,
+    intervals: results.intervals,
+    statistics: [
+      statistic('mean recurrence', 'years', results.meanRecurrence),
+      statistic('median recurrence', 'years', results.medianRecurrence),
+      statistic('standard deviation of intervals', 'years', results.sdRecurrence),
+      statistic('aperiodicity (coefficient of variation)', '', results.aperiodicity),
+      statistic('open interval since the last event', 'years', results.openInterval),
+    ],
+    models: results.models.map((m) => ({
+      model: m.model,
+      aic: m.aic,
+      deltaAic: m.deltaAic,
+      akaikeWeight: m.akaikeWeight,
+      meanRecurrenceYears: m.meanRecurrenceYears,
+      aperiodicity: m.aperiodicity,
+      logLikelihood: m.logLikelihood,
+      meanRecurrenceRange: m.meanRecurrenceRange,
+      aperiodicityRange: m.aperiodicityRange,
+      preferredShare: m.preferredShare,
+    })),
+    modelComparisonNote: results.modelComparisonNote,
+    probabilities: [
+      ...results.poisson.map((w) => ({ model: 'POISSON_FROM_MEAN_RECURRENCE', ...w })),
+      ...results.models.flatMap((m) => m.probabilities.map((w) => ({ model: m.model, ...w }))),
+    ],
+    histogram: results.histogram,
+  };
+}
+
+/** The CSV export: the caution first, then one titled table after another, blank lines between. */
+export function recurrenceExportCsv(header: RecurrenceExportHeader, results: StoredRecurrenceResults): string {
+  const data = recurrenceExport(header, results);
+  const rows: CsvValue[][] = [
+    [RECURRENCE_CAUTION],
+    [],
+    ['analysis'],
+    ['field', 'value'],
+    ['id', header.id],
+    ['project', header.projectId],
+    ['segment', header.segmentId],
+    ['site', header.siteId],
+    ['hypothesis', header.hypothesisId],
+    ['hypothesis version', header.hypothesisVersion],
+    ['age model runs', header.ageModelRunIds.join(' ')],
+    ['seed', header.seed],
+    ['forecast start year (CE)', header.forecastStartYear],
+    ['windows (years)', header.windowsYears.join(' ')],
+    ['draws', header.draws],
+    ['created', header.createdAt],
+    ['finished', header.finishedAt],
+    [],
+    ['intervals'],
+    ['index (0 = youngest)', 'median years', 'low95', 'high95'],
+    ...data.intervals.map((i) => [i.index, i.medianYears, i.low95, i.high95]),
+    [],
+    ['statistics'],
+    ['quantity', 'unit', 'median', 'low95', 'high95'],
+    ...data.statistics.map((s) => [s.quantity, s.unit, s.median, s.low95, s.high95]),
+    [],
+    ['models'],
+    ['model', 'AIC', 'delta AIC', 'Akaike weight', 'mean recurrence (years)', 'aperiodicity', 'log likelihood', 'share of draws preferred'],
+    ...data.models.map((m) => [
+      RENEWAL_MODEL_LABELS[m.model as keyof typeof RENEWAL_MODEL_LABELS] ?? m.model,
+      m.aic,
+      m.deltaAic,
+      m.akaikeWeight,
+      m.meanRecurrenceYears,
+      m.aperiodicity,
+      m.logLikelihood,
+      m.preferredShare,
+    ]),
+    ['note', data.modelComparisonNote],
+    [],
+    ['probabilities'],
+    ['model', 'window (years)', 'median', 'low95', 'high95'],
+    ...data.probabilities.map((p) => [probabilityLabel(p.model), p.windowYears, p.median, p.low95, p.high95]),
+  ];
+  return toCsv(rows);
+}
+
+function probabilityLabel(model: string): string {
+  if (model === 'POISSON_FROM_MEAN_RECURRENCE') return 'Poisson 1 - exp(-dT/mean recurrence)';
+  return RENEWAL_MODEL_LABELS[model as keyof typeof RENEWAL_MODEL_LABELS] ?? model;
+}

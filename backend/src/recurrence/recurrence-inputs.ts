@@ -1,0 +1,117 @@
+/**
+ * The event sequence a recurrence analysis runs on, chosen before it is queued so that unusable
+ * input is refused at once: the regional events of a hypothesis on a segment (with their
+ * combined age densities, young to old) or a site age model's joint draws. Pure functions.
+ */
+import type { CalendarDensity } from '../chronology/common/density';
+import {
+  checkHypothesis,
+  CorrelationInputError,
+  type OrderConflict,
+  type SiteEvent,
+  type TectonicSetting,
+  type Tie,
+} from '../chronology/correlation';
+import { RecurrenceInputError } from '../chronology/recurrence';
+
+/** Fewest events with which intervals can be fitted: 3 events give 2 closed intervals. */
+export const MINIMUM_EVENTS = 3;
+
+export interface SegmentEventsInput {
+  /** Site events of the whole project that have an age model posterior. */
+  readonly events: readonly SiteEvent[];
+  /** The hypothesis' ties; ties naming events without a posterior are left out. */
+  readonly ties: readonly Tie[];
+  readonly tectonicSetting: TectonicSetting;
+  /** Sites lying in the segment. */
+  readonly segmentSiteIds: ReadonlySet<string>;
+}
+
+export interface SegmentRegionalEvent {
+  readonly id: string;
+  readonly memberIds: readonly string[];
+  readonly siteIds: readonly string[];
+  readonly medianCalBp: number;
+  readonly density: CalendarDensity;
+}
+
+export interface SegmentEvents {
+  /** Young to old by combined median. */
+  readonly regionalEvents: readonly SegmentRegionalEvent[];
+  /** Ties skipped because one of their events has no posterior yet. */
+  readonly skippedTieIds: readonly string[];
+  /** Order conflicts of the hypothesis among the chosen regional events. */
+  readonly orderConflictCount: number;
+}
+
+/**
+ * The regional events of a hypothesis recorded at any site of the segment. The whole project's
+ * events and ties are checked together, so an earthquake that also ruptured a neighbouring
+ * segment keeps the ages of all its members in its combined density. Throws
+ * `RecurrenceInputError` when a regional event has no combined age or there are too few events.
+ */
+export function segmentRegionalEvents(input: SegmentEventsInput): SegmentEvents {
+  const known = new Set(input.events.map((event) => event.id));
+  const ties = input.ties.filter((tie) => known.has(tie.eventAId) && known.has(tie.eventBId));
+  let check;
+  try {
+    check = checkHypothesis({ events: input.events, ties, tectonicSetting: input.tectonicSetting });
+  } catch (error) {
+    if (error instanceof CorrelationInputError) throw new RecurrenceInputError('hypothesisId', error.message);
+    throw error;
+  }
+  const chosen = check.regionalEvents.filter((event) => event.siteIds.some((siteId) => input.segmentSiteIds.has(siteId)));
+  const regionalEvents = chosen.map((event): SegmentRegionalEvent => {
+    if (!event.combinedDensity || !event.combined) {
+      throw new RecurrenceInputError(
+        'hypothesisId',
+        `The members of regional event ${event.memberIds.join(' + ')} share no calendar year, so it has no age; correct the hypothesis first.`,
+      );
+    }
+    return {
+      id: event.id,
+      memberIds: event.memberIds,
+      siteIds: event.siteIds,
+      medianCalBp: event.combined.medianCalBp,
+      density: event.combinedDensity,
+    };
+  });
+  if (regionalEvents.length < MINIMUM_EVENTS) {
+    throw new RecurrenceInputError(
+      'segmentId',
+      `The segment has ${regionalEvents.length} dated regional events under this hypothesis; at least ${MINIMUM_EVENTS} are needed (2 closed intervals). Run the sites' age models first.`,
+    );
+  }
+  const chosenIds = new Set(chosen.map((event) => event.id));
+  return {
+    regionalEvents,
+    skippedTieIds: input.ties.filter((tie) => !ties.includes(tie)).map((tie) => tie.id),
+    orderConflictCount: check.orderConflicts.filter((conflict) => conflictTouches(conflict, chosenIds)).length,
+  };
+}
+
+function conflictTouches(conflict: OrderConflict, ids: ReadonlySet<string>): boolean {
+  return ids.has(conflict.regionalEventAId) || ids.has(conflict.regionalEventBId);
+}
+
+/**
+ * Refuses a forecast that starts before the youngest event could have happened: the open
+ * interval would be negative in some draws. `youngestPossibleCalBp` is the youngest age the last
+ * event can take (grid years stand for +-0.5 year).
+ */
+export function checkForecastStart(youngestPossibleCalBp: number, forecastStartYearCe: number): void {
+  const forecastStartCalBp = 1950 - forecastStartYearCe;
+  if (forecastStartCalBp > youngestPossibleCalBp) {
+    throw new RecurrenceInputError(
+      'forecastStartYear',
+      `The forecast starts in ${forecastStartYearCe} CE, before the last event may have happened (as young as ${Math.round(1950 - youngestPossibleCalBp)} CE); choose a later start year.`,
+    );
+  }
+}
+
+/** The youngest age a site's joint draws give the youngest event, cal BP. */
+export function youngestDrawnAge(draws: ArrayLike<number>): number {
+  let youngest = Infinity;
+  for (let i = 0; i < draws.length; i++) if (draws[i] < youngest) youngest = draws[i];
+  return youngest;
+}
