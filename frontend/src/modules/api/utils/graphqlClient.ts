@@ -4,18 +4,16 @@ import { ApiError, readGraphqlErrors } from './apiError';
 
 const GRAPHQL_ENDPOINT = '/graphql';
 
-/** Variables are optional for operations that take none. */
-type VariablesArgument<TVariables> = TVariables extends Record<string, never> ? [] : [variables: TVariables];
-
 /**
- * Send one typed GraphQL operation with the session's bearer token. Resolves with `data`, or
+ * Send one typed GraphQL operation (pass `{}` for an operation without variables) with the
+ * session's bearer token. Resolves with `data`, or
  * rejects with an ApiError carrying the server's `extensions.code` and `extensions.field`.
  * An UNAUTHENTICATED answer to a request that carried a token ends the session, which sends
  * the app back to the sign-in page.
  */
 export async function graphqlRequest<TResult, TVariables>(
   document: TypedDocumentString<TResult, TVariables>,
-  ...[variables]: VariablesArgument<TVariables>
+  variables: TVariables,
 ): Promise<TResult> {
   const token = sessionStore.get()?.token;
   let response: Response;
@@ -27,7 +25,7 @@ export async function graphqlRequest<TResult, TVariables>(
         Accept: 'application/graphql-response+json, application/json',
         ...(token ? { Authorization: `Bearer ${token}` } : {}),
       },
-      body: JSON.stringify({ query: document.toString(), variables: variables ?? {} }),
+      body: JSON.stringify({ query: document.toString(), variables }),
     });
   } catch {
     throw new ApiError([{ message: 'The server cannot be reached. Check your connection and try again.', code: 'NETWORK' }]);

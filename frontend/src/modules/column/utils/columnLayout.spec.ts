@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import {
   columnDepthDomain,
+  columnLanes,
+  truncateLabel,
   columnHeightFor,
   createDepthScale,
   eventContactDepth,
@@ -115,5 +117,31 @@ describe(spreadLabels.name, () => {
 
   it('returns nothing for no labels', () => {
     expect(spreadLabels([], 10, [0, 100])).toEqual([]);
+  });
+});
+
+describe(columnLanes.name, () => {
+  it('gives the column what the fixed lanes leave, within 72 to 200 px', () => {
+    // 44 axis + 104 horizon labels + 104 sample labels + 24 gaps = 276 px of fixed lanes
+    expect(columnLanes(400).columnWidth).toBe(124);
+    expect(columnLanes(300).columnWidth).toBe(72);
+    expect(columnLanes(900).columnWidth).toBe(200);
+  });
+
+  it('places the lanes left to right without overlap', () => {
+    const lanes = columnLanes(420);
+    expect(lanes.axisX).toBeLessThan(lanes.horizonLabelX);
+    expect(lanes.horizonLabelX).toBeLessThan(lanes.columnX);
+    expect(lanes.columnX + lanes.columnWidth).toBeLessThan(lanes.sampleMarkerX);
+    expect(lanes.sampleMarkerX).toBeLessThan(lanes.sampleLabelX);
+  });
+});
+
+describe(truncateLabel.name, () => {
+  it('keeps short labels and cuts long ones with an ellipsis within the limit', () => {
+    expect(truncateLabel('peat', 10)).toBe('peat');
+    expect(truncateLabel('hemipelagic mud', 8)).toBe('hemipel…');
+    expect(truncateLabel('hemipelagic mud', 8)).toHaveLength(8);
+    expect(truncateLabel('mud', 0)).toBe('');
   });
 });

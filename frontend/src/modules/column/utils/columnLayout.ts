@@ -140,3 +140,43 @@ export function spreadLabels(anchors: readonly number[], minGap: number, [min, m
   });
   return placed;
 }
+
+/** Horizontal lanes of the column drawing, left to right. */
+export type ColumnLanes = {
+  /** Right edge of the depth axis labels. */
+  axisX: number;
+  /** Right edge of the event horizon labels (right-aligned). */
+  horizonLabelX: number;
+  columnX: number;
+  columnWidth: number;
+  /** Centre of the sample markers. */
+  sampleMarkerX: number;
+  /** Left edge of the sample labels. */
+  sampleLabelX: number;
+};
+
+const AXIS_WIDTH = 44;
+const HORIZON_LABEL_WIDTH = 104;
+const SAMPLE_LABEL_WIDTH = 104;
+const MIN_COLUMN_WIDTH = 72;
+const MAX_COLUMN_WIDTH = 200;
+
+/**
+ * Share a width between the lanes: the axis, the horizon labels and the sample labels keep
+ * fixed widths, the column takes the rest within 72 to 200 px.
+ */
+export function columnLanes(width: number): ColumnLanes {
+  const spare = width - AXIS_WIDTH - HORIZON_LABEL_WIDTH - SAMPLE_LABEL_WIDTH - 24;
+  const columnWidth = Math.min(MAX_COLUMN_WIDTH, Math.max(MIN_COLUMN_WIDTH, spare));
+  const axisX = AXIS_WIDTH;
+  const horizonLabelX = axisX + HORIZON_LABEL_WIDTH - 6;
+  const columnX = axisX + HORIZON_LABEL_WIDTH;
+  const sampleMarkerX = columnX + columnWidth + 12;
+  return { axisX, horizonLabelX, columnX, columnWidth, sampleMarkerX, sampleLabelX: sampleMarkerX + 10 };
+}
+
+/** A label cut to at most `maxChars` characters, ending in an ellipsis when cut. */
+export function truncateLabel(text: string, maxChars: number): string {
+  if (maxChars < 1) return '';
+  return text.length <= maxChars ? text : `${text.slice(0, Math.max(0, maxChars - 1)).trimEnd()}…`;
+}

@@ -1,0 +1,32 @@
+/**
+ * Every route pattern of the app and a builder for its links; router.tsx mounts the patterns
+ * and everything else links through the builders. Planned next, each under its feature module:
+ * `/projects/:projectId/ladder` (event ladder), `/projects/:projectId/recurrence`,
+ * `/projects/:projectId/admin` and `/projects/:projectId/sites/:siteId/age-model`.
+ */
+export const routePatterns = {
+  root: '/',
+  signIn: '/signin',
+  projects: '/projects',
+  project: '/projects/:projectId',
+  site: '/projects/:projectId/sites/:siteId',
+  calibrate: '/calibrate',
+} as const;
+
+/** Tabs of the site page, kept in the `tab` search parameter so each can be linked to. */
+export type SiteTab = 'column' | 'samples' | 'calibration';
+
+export const paths = {
+  signIn: ({ next }: { next?: string } = {}) =>
+    next && next !== routePatterns.signIn ? `${routePatterns.signIn}?next=${encodeURIComponent(next)}` : routePatterns.signIn,
+  projects: () => routePatterns.projects,
+  project: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
+  site: (projectId: string, siteId: string, tab?: SiteTab) =>
+    `/projects/${encodeURIComponent(projectId)}/sites/${encodeURIComponent(siteId)}${tab && tab !== 'column' ? `?tab=${tab}` : ''}`,
+  calibrate: () => routePatterns.calibrate,
+};
+
+/** Where to go after sign-in: a path inside the app from `?next=`, else the project list. */
+export function afterSignInPath(next: string | null): string {
+  return next && next.startsWith('/') && !next.startsWith('//') ? next : paths.projects();
+}
