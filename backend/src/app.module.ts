@@ -19,6 +19,7 @@ import { DatabaseModule } from './database/database.module';
 import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
+import { HypothesesModule } from './hypotheses/hypotheses.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
@@ -62,6 +63,7 @@ import { UsersModule } from './users/users.module';
     DemoModule,
     JobsModule,
     AgeModelsModule,
+    HypothesesModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -22,7 +22,7 @@ export type SampleLike = {
   labCode: string;
   excluded: boolean;
   unit: { position: number };
-  calibration: { density: readonly DensityPoint[] } | null;
+  calibration?: { density: readonly DensityPoint[] } | null;
 };
 
 /** A sample drawn beside an event: below the horizon (pre-event, older) or above it. */

@@ -1,0 +1,265 @@
+import { Callout, HTMLTable, Intent, NonIdealState, Tag } from '@blueprintjs/core';
+import { IconNames } from '@blueprintjs/icons';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/app/paths';
+import type { AgeModelRunQuery } from '@/gql/graphql';
+import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
+import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
+import { bracketingSamples, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
+import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
+import { formErrorOf } from '@/modules/api/utils/apiError';
+import { roleAllows } from '@/modules/auth/utils/permissions';
+import { calendarWindow } from '@/modules/calibration/utils/calibrationChart';
+import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
+import { projectQueries } from '@/modules/projects/hooks/projectQueries';
+import { LoadingState } from '@/modules/ui/components/LoadingState';
+import { CompactSiteLadder } from './CompactSiteLadder';
+import { EventPosteriorChart, type LikelihoodOutline } from './EventPosteriorChart';
+import { RunDiagnostics } from './RunDiagnostics';
+import { RunSettingsForm } from './RunSettingsForm';
+import { RunStatusPanel } from './RunStatusPanel';
+import '@/modules/ladder/components/charts.css';
+
+export type AgeModelViewProps = { projectId: string; siteId: string };
+
+/**
+ * A site's age model: start a run, follow it, and read each event's posterior beside the
+ * calibrated likelihoods it came from, with diagnostics and flagged samples.
+ */
+export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
+  const queryClient = useQueryClient();
+  const siteQuery = useQuery(ageModelQueries.site(projectId, siteId));
+  const [startedRunId, setStartedRunId] = useState<string | null>(null);
+  const runId = startedRunId ?? siteQuery.data?.latestAgeModelRun?.id ?? null;
+  const runQuery = useQuery({ ...ageModelQueries.run(projectId, runId ?? ''), enabled: runId !== null });
+  const invalidates = [ageModelQueries.all(projectId)];
+  const start = useGraphqlMutation(StartAgeModelRunDocument, { invalidates });
+  const cancel = useGraphqlMutation(CancelAgeModelRunDocument, { invalidates });
+
+  // A run that has just finished changes every event's age in the project: refresh it all.
+  const run = runQuery.data;
+  const wasActive = useRef(false);
+  useEffect(() => {
+    if (!run) return;
+    const active = isRunActive(run.status);
+    if (wasActive.current && !active) void queryClient.invalidateQueries({ queryKey: projectQueries.detail(projectId) });
+    wasActive.current = active;
+  }, [run, projectId, queryClient]);
+
+  const site = siteQuery.data;
+  const events = useMemo(() => {
+    if (!site || !run) return [];
+    const horizons = new Map(site.eventHorizons.map((horizon) => [horizon.id, horizon]));
+    return run.events
+      .map((posterior) => {
+        const horizon = horizons.get(posterior.eventHorizon.id);
+        const likelihoods: LikelihoodOutline[] = horizon
+          ? bracketingSamples(horizon, site.samples).map(({ sample, side }) => ({
+              id: sample.id,
+              labCode: sample.labCode,
+              side,
+              density: sample.calibration?.density ?? [],
+            }))
+          : [];
+        return { posterior, likelihoods };
+      })
+      .sort((a, b) => a.posterior.medianCalBp - b.posterior.medianCalBp);
+  }, [site, run]);
+
+  if (siteQuery.isPending) return <LoadingState />;
+  if (siteQuery.isError) {
+    return <NonIdealState icon={IconNames.ERROR} title="The site could not be loaded" description={siteQuery.error.message} />;
+  }
+  const loadedSite = siteQuery.data;
+  const mayRun = roleAllows(loadedSite.project.myRole, 'age-model.run');
+  const busy = run ? isRunActive(run.status) : false;
+
+  const handleStart = (settings: RunSettingsInput) => {
+    start.mutate(
+      { input: { siteId, ...settings } },
+      { onSuccess: ({ startAgeModelRun }) => setStartedRunId(startAgeModelRun.id) },
+    );
+  };
+  const handleCancel = () => {
+    if (run) cancel.mutate({ id: run.id });
+  };
+
+  return (
+    <div className="sc-age-model">
+      <header className="sc-page-header">
+        <h2>
+          Age model · {loadedSite.name} <Tag minimal>{loadedSite.kind.toLowerCase()}</Tag>
+        </h2>
+        <Link to={paths.site(projectId, siteId)}>Back to the column</Link>
+      </header>
+
+      {mayRun && (
+        <section className="sc-panel">
+          <h3>New run</h3>
+          <RunSettingsForm onStart={handleStart} starting={start.isPending} busy={busy} error={formErrorOf(start.error, [])} />
+        </section>
+      )}
+
+      {runId === null ? (
+        <NonIdealState
+          icon={IconNames.TIMELINE_EVENTS}
+          title="No age model yet"
+          description={mayRun ? 'Start a run to model this column.' : 'A researcher or admin can start a run for this site.'}
+        />
+      ) : runQuery.isPending ? (
+        <LoadingState label="Loading the run" />
+      ) : runQuery.isError ? (
+        <Callout intent={Intent.DANGER} icon={IconNames.ERROR} title="The run could not be loaded">
+          {runQuery.error.message}
+        </Callout>
+      ) : (
+        <RunResults
+          run={runQuery.data}
+          events={events}
+          canCancel={mayRun}
+          cancelling={cancel.isPending}
+          onCancel={handleCancel}
+        />
+      )}
+    </div>
+  );
+}
+
+type RunData = AgeModelRunQuery['ageModelRun'];
+
+type RunResultsProps = {
+  run: RunData;
+  events: { posterior: RunData['events'][number]; likelihoods: LikelihoodOutline[] }[];
+  canCancel: boolean;
+  cancelling: boolean;
+  onCancel: () => void;
+};
+
+function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResultsProps) {
+  const window = useMemo(() => {
+    const found = calendarWindow(events.flatMap(({ posterior, likelihoods }) => [posterior.density, ...likelihoods.map((likelihood) => likelihood.density)]));
+    return found ? ([found.youngerCalBp, found.olderCalBp] as const) : ([0, 1000] as const);
+  }, [events]);
+  const compactEvents = useMemo(
+    () =>
+      events.map(({ posterior }) => ({
+        id: posterior.eventHorizon.id,
+        name: posterior.eventHorizon.name,
+        medianCalBp: posterior.medianCalBp,
+        density: posterior.density,
+      })),
+    [events],
+  );
+  const samples = [...run.samples].sort((a, b) => b.outlierProbability - a.outlierProbability);
+  const flaggedCount = samples.filter((sample) => isFlaggedOutlier(sample.outlierProbability)).length;
+
+  return (
+    <>
+      <RunStatusPanel
+        status={run.status}
+        progress={run.progress}
+        message={run.message}
+        seed={run.seed}
+        stale={run.stale}
+        canCancel={canCancel}
+        cancelling={cancelling}
+        onCancel={onCancel}
+      />
+      {run.diagnostics && <RunDiagnostics {...run.diagnostics} />}
+      {run.status === 'SUCCEEDED' && (
+        <div className="sc-age-model-results">
+          <section className="sc-panel sc-age-model-events">
+            <h3>Event posteriors</h3>
+            <p className="sc-chart-legend">
+              <span style={{ color: CHART_COLOURS.posterior }}>■</span> posterior · <span style={{ color: CHART_COLOURS.likelihoodAbove }}>—</span> sample in the unit above ·{' '}
+              <span style={{ color: CHART_COLOURS.likelihoodBelow }}>- -</span> sample in the unit below (each curve scaled to its own peak)
+            </p>
+            {events.map(({ posterior, likelihoods }) => (
+              <div key={posterior.eventHorizon.id} className="sc-event-posterior">
+                <h4>
+                  {posterior.eventHorizon.name} <AgeValue calBp={posterior.medianCalBp} />
+                </h4>
+                <EventPosteriorChart eventName={posterior.eventHorizon.name} posterior={posterior.density} likelihoods={likelihoods} window={window} />
+              </div>
+            ))}
+            <HTMLTable compact striped className="sc-table">
+              <thead>
+                <tr>
+                  <th>Event</th>
+                  <th>Median</th>
+                  <th>68.3 % range</th>
+                  <th>95.4 % range</th>
+                  <th>R-hat</th>
+                  <th>ESS</th>
+                </tr>
+              </thead>
+              <tbody>
+                {events.map(({ posterior }) => (
+                  <tr key={posterior.eventHorizon.id}>
+                    <td>{posterior.eventHorizon.name}</td>
+                    <td>
+                      <AgeValue calBp={posterior.medianCalBp} />
+                    </td>
+                    <td>
+                      <AgeRangesValue ranges={posterior.hpd68} withProbability />
+                    </td>
+                    <td>
+                      <AgeRangesValue ranges={posterior.hpd95} withProbability />
+                    </td>
+                    <td className="num">{posterior.rhat === null || posterior.rhat === undefined ? '–' : posterior.rhat.toFixed(3)}</td>
+                    <td className="num">{posterior.ess === null || posterior.ess === undefined ? '–' : Math.round(posterior.ess)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </HTMLTable>
+          </section>
+          <aside className="sc-panel sc-age-model-side">
+            <h3>Down the column</h3>
+            <CompactSiteLadder events={compactEvents} />
+            <h3>Samples</h3>
+            {flaggedCount > 0 && (
+              <Callout intent={Intent.WARNING} icon={IconNames.FLAG}>
+                {flaggedCount} sample{flaggedCount === 1 ? '' : 's'} with an outlier probability above{' '}
+                <span className="num">{OUTLIER_FLAG_PROBABILITY}</span>: check the material and its position.
+              </Callout>
+            )}
+            <HTMLTable compact striped className="sc-table">
+              <thead>
+                <tr>
+                  <th>Lab code</th>
+                  <th>Median</th>
+                  <th>95.4 % range</th>
+                  <th>Outlier p</th>
+                </tr>
+              </thead>
+              <tbody>
+                {samples.map((entry) => (
+                  <tr key={entry.sample.id}>
+                    <td className="num">{entry.sample.labCode}</td>
+                    <td>
+                      <AgeValue calBp={entry.medianCalBp} />
+                    </td>
+                    <td>
+                      <AgeRangesValue ranges={entry.hpd95} />
+                    </td>
+                    <td>
+                      <span className="num">{entry.outlierProbability.toFixed(2)}</span>{' '}
+                      {isFlaggedOutlier(entry.outlierProbability) && (
+                        <Tag intent={Intent.WARNING} minimal icon={IconNames.FLAG}>
+                          outlier?
+                        </Tag>
+                      )}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </HTMLTable>
+          </aside>
+        </div>
+      )}
+    </>
+  );
+}
