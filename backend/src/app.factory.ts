@@ -1,5 +1,6 @@
 import { NestFactory } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
+import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AppModule } from './app.module';
@@ -28,6 +29,14 @@ export async function createApp(config: AppConfig): Promise<NestExpressApplicati
   app.enableShutdownHooks();
   app.set('trust proxy', 'loopback');
   app.useBodyParser('json', { limit: '25mb' });
+  // Security headers; the UI is served from this origin only and loads nothing from elsewhere.
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { defaultSrc: ["'self'"], styleSrc: ["'self'", "'unsafe-inline'"], imgSrc: ["'self'", 'data:', 'blob:'], fontSrc: ["'self'", 'data:'] },
+      },
+    }),
+  );
 
   const frontendDist = config.frontendDist ?? join(repositoryRoot(), 'frontend', 'dist');
   if (existsSync(join(frontendDist, 'index.html'))) {

@@ -11,6 +11,7 @@ import { CalibrationModule } from './calibration/calibration.module';
 import { formatGraphqlError } from './common/errors/format-graphql-error';
 import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { complexityLimitPlugin, depthLimitRule } from './common/graphql-limits';
 import { repositoryRoot } from './common/repo-paths';
 import { DateTimeScalar, JsonScalar } from './common/scalars/scalars';
 import { APP_CONFIG, AppConfig } from './config/config';
@@ -23,11 +24,15 @@ import { HypothesesModule } from './hypotheses/hypotheses.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
+import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
 import { SegmentsModule } from './segments/segments.module';
 import { SitesModule } from './sites/sites.module';
 import { UnitsModule } from './units/units.module';
 import { UsersModule } from './users/users.module';
+import { AttachmentsModule } from './attachments/attachments.module';
+import { ExchangeModule } from './exchange/exchange.module';
+import { ReleasesModule } from './releases/releases.module';
 
 @Module({
   imports: [
@@ -44,6 +49,8 @@ import { UsersModule } from './users/users.module';
         path: '/graphql',
         resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar },
         playground: false,
+        validationRules: [depthLimitRule()],
+        plugins: [complexityLimitPlugin()],
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
         context: ({ req }: { req: unknown }) => ({ req }),
@@ -60,10 +67,14 @@ import { UsersModule } from './users/users.module';
     EventHorizonsModule,
     CalibrationModule,
     SamplesModule,
+    SampleImportModule,
     DemoModule,
     JobsModule,
     AgeModelsModule,
     HypothesesModule,
+    AttachmentsModule,
+    ExchangeModule,
+    ReleasesModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -3,6 +3,9 @@ import type { AddressInfo } from 'node:net';
 import { createApp } from '../../backend/src/app.factory';
 import { loadConfig } from '../../backend/src/config/config';
 
+/** The signing secret of every test server (tests forge tokens with it). */
+export const TEST_JWT_SECRET = 'integration-test-secret-0123456789abcdef';
+
 export interface TestServer {
   app: NestExpressApplication;
   url: string;
@@ -15,7 +18,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const config = loadConfig({
     ...process.env,
     NODE_ENV: 'test',
-    JWT_SECRET: 'integration-test-secret-0123456789abcdef',
+    JWT_SECRET: TEST_JWT_SECRET,
     SEED_DEMO: 'false',
     PORT: '3000',
     FRONTEND_DIST: '/nonexistent',

@@ -1,4 +1,5 @@
-import { Args, Mutation, Resolver } from '@nestjs/graphql';
+import { Args, Context, Mutation, Resolver } from '@nestjs/graphql';
+import type { Request } from 'express';
 import { Public } from '../common/decorators/public.decorator';
 import { AuthPayload, AuthService } from './auth.service';
 
@@ -8,7 +9,11 @@ export class AuthResolver {
 
   @Public()
   @Mutation('signIn')
-  signIn(@Args('email') email: string, @Args('password') password: string): Promise<AuthPayload> {
-    return this.auth.signIn(email, password);
+  signIn(
+    @Args('email') email: string,
+    @Args('password') password: string,
+    @Context('req') req: Request,
+  ): Promise<AuthPayload> {
+    return this.auth.signIn(email, password, req.ip ?? 'unknown');
   }
 }

@@ -1,7 +1,8 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { APP_CONFIG, AppConfig } from '../config/config';
-import { unauthenticated } from '../common/errors/domain-error';
+import { DomainError, unauthenticated } from '../common/errors/domain-error';
+import { SignInLimiter } from './sign-in-limiter';
 import { UserRow, UsersRepository } from '../users/users.repository';
 import { DUMMY_HASH, verifyPassword } from './passwords';
 
@@ -12,6 +13,8 @@ export interface AuthPayload {
 
 @Injectable()
 export class AuthService {
+  private readonly limiter = new SignInLimiter();
+
   constructor(
     private readonly users: UsersRepository,
     private readonly jwt: JwtService,
@@ -19,10 +22,17 @@ export class AuthService {
   ) {}
 
   /** Check e-mail and password; the same error for an unknown e-mail and a wrong password. */
-  async signIn(email: string, password: string): Promise<AuthPayload> {
+  async signIn(email: string, password: string, clientAddress: string): Promise<AuthPayload> {
+    const keys = [`email:${email.trim().toLowerCase()}`, `ip:${clientAddress}`];
+    const wait = this.limiter.retryAfterSeconds(keys);
+    if (wait > 0) throw new DomainError('TOO_MANY_REQUESTS', `too many failed sign-ins; try again in ${Math.ceil(wait / 60)} minutes`);
     const user = await this.users.findByEmail(email.trim());
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
-    if (!user || !user.passwordHash || !ok) throw unauthenticated('e-mail or password is wrong');
+    if (!user || !user.passwordHash || !ok) {
+      this.limiter.recordFailure(keys);
+      throw unauthenticated('e-mail or password is wrong');
+    }
+    this.limiter.recordSuccess(keys);
     return this.issue(user);
   }
 
