@@ -13,10 +13,10 @@ import { SitesService } from '../sites/sites.service';
 import { UnitRow, UnitsRepository } from '../units/units.repository';
 import { stripUndefined } from '../units/units.service';
 import { CreateSampleInput, UpdateSampleInput } from './dto/create-sample.input';
+import { depthOutsideUnit } from './sample-rules';
 import { SampleInsert, SampleRow, SamplesRepository } from './samples.repository';
 
-/** Depths are measured by hand; a sample logged this close outside its unit's contact still belongs to it. */
-export const DEPTH_TOLERANCE_M = 0.005;
+export { DEPTH_TOLERANCE_M } from './sample-rules';
 
 @Injectable()
 export class SamplesService {
@@ -109,8 +109,6 @@ export class SamplesService {
 
 /** A sample's depth, when given, lies within its unit. */
 export function checkDepthInUnit(depthM: number | null, unit: UnitRow): void {
-  if (depthM === null) return;
-  if (depthM < unit.topDepthM - DEPTH_TOLERANCE_M || depthM > unit.baseDepthM + DEPTH_TOLERANCE_M) {
-    throw badInput('depthM', `depth ${depthM} m is outside unit "${unit.name}" (${unit.topDepthM}-${unit.baseDepthM} m)`);
-  }
+  const problem = depthOutsideUnit(depthM, unit);
+  if (problem) throw badInput('depthM', problem);
 }

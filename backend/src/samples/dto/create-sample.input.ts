@@ -1,12 +1,9 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, IsUUID, Length, Matches, Max, Min } from 'class-validator';
 import { CURVE_CODES, CurveCode } from '../../calibration/dto/calibrate.input';
+import { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS } from '../sample-rules';
 
-export const DATING_METHODS = ['RADIOCARBON', 'LUMINESCENCE', 'HISTORICAL', 'TEPHRA'] as const;
-export const SAMPLE_MATERIALS = [
-  'DETRITAL_CHARCOAL', 'IN_SITU_PLANT', 'PLANT_MACROFOSSIL', 'PLANKTIC_FORAMS', 'BENTHIC_FORAMS', 'SHELL', 'BULK_SEDIMENT', 'OTHER',
-] as const;
-export const AGE_RELATIONS = ['DATES_DEPOSIT', 'OLDER_THAN_DEPOSIT', 'YOUNGER_THAN_DEPOSIT'] as const;
+export { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS };
 
 const finite = { allowNaN: false, allowInfinity: false };
 
