@@ -1,0 +1,69 @@
+import { Injectable } from '@nestjs/common';
+import { AccessService } from '../access/access.service';
+import { Permission } from '../access/permissions';
+import type { AgeModelRunRow } from '../age-models/age-model-runs.repository';
+import { AuthUser } from '../auth/auth-user';
+import type { HpdRange } from '../chronology/common/density';
+import { notFound } from '../common/errors/domain-error';
+import type { EventHorizonRow } from '../event-horizons/event-horizons.repository';
+import { ProjectRow, ProjectsRepository } from '../projects/projects.repository';
+import type { SiteRow } from '../sites/sites.repository';
+import type { DensityPoint } from './correlation-adapter';
+import { CorrelationDataService, posteriorOf } from './correlation-data.service';
+
+export interface LadderEventView {
+  eventHorizon: EventHorizonRow;
+  medianCalBp: number | null;
+  hpd95: readonly HpdRange[];
+  /** Thinned to at most `MAX_DENSITY_POINTS` points. */
+  density: readonly DensityPoint[];
+}
+
+export interface LadderColumnView {
+  site: SiteRow;
+  /** The newest successful run, the one whose posteriors the column shows. */
+  latestAgeModelRun: AgeModelRunRow | null;
+  events: LadderEventView[];
+}
+
+export interface EventLadderView {
+  project: ProjectRow;
+  columns: LadderColumnView[];
+}
+
+@Injectable()
+export class EventLadderService {
+  constructor(
+    private readonly projects: ProjectsRepository,
+    private readonly correlationData: CorrelationDataService,
+    private readonly access: AccessService,
+  ) {}
+
+  /**
+   * Every site of the project along strike with its events (oldest first) and their posteriors
+   * from the site's newest successful age model run; events without one have no age.
+   */
+  async get(user: AuthUser, projectId: string): Promise<EventLadderView> {
+    await this.access.requireAccess({ user, permission: Permission.ProjectRead, projectId });
+    const [project, data] = await Promise.all([this.projects.findById(projectId), this.correlationData.load(projectId)]);
+    if (!project) throw notFound('project');
+    const eventsBySite = new Map<string, LadderEventView[]>(data.sites.map((site) => [site.id, []]));
+    for (const event of data.events) {
+      const posterior = posteriorOf(data, event);
+      eventsBySite.get(event.site.id)?.push({
+        eventHorizon: event.eventHorizon,
+        medianCalBp: posterior?.summary.medianCalBp ?? null,
+        hpd95: posterior?.summary.hpd95 ?? [],
+        density: posterior?.points ?? [],
+      });
+    }
+    return {
+      project,
+      columns: data.sites.map((site) => ({
+        site,
+        latestAgeModelRun: data.runsBySite.get(site.id)?.row ?? null,
+        events: eventsBySite.get(site.id) ?? [],
+      })),
+    };
+  }
+}

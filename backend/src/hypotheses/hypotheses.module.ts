@@ -1,0 +1,25 @@
+import { Module } from '@nestjs/common';
+import { ProjectsModule } from '../projects/projects.module';
+import { SitesModule } from '../sites/sites.module';
+import { UsersModule } from '../users/users.module';
+import { CorrelationDataService } from './correlation-data.service';
+import { EventLadderService } from './event-ladder.service';
+import { HypothesesRepository } from './hypotheses.repository';
+import { EventLadderResolver, HypothesesResolver, ProjectHypothesesResolver } from './hypotheses.resolver';
+import { HypothesesService } from './hypotheses.service';
+
+/** Correlation hypotheses, their ties and checks, and the event ladder. */
+@Module({
+  imports: [ProjectsModule, SitesModule, UsersModule],
+  providers: [
+    HypothesesRepository,
+    CorrelationDataService,
+    HypothesesService,
+    EventLadderService,
+    HypothesesResolver,
+    ProjectHypothesesResolver,
+    EventLadderResolver,
+  ],
+  exports: [HypothesesService, CorrelationDataService],
+})
+export class HypothesesModule {}
