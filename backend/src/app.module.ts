@@ -33,9 +33,6 @@ import { UsersModule } from './users/users.module';
 import { AttachmentsModule } from './attachments/attachments.module';
 import { ExchangeModule } from './exchange/exchange.module';
 import { ReleasesModule } from './releases/releases.module';
-import { AttachmentsModule } from './attachments/attachments.module';
-import { ExchangeModule } from './exchange/exchange.module';
-import { ReleasesModule } from './releases/releases.module';
 
 @Module({
   imports: [
@@ -75,9 +72,6 @@ import { ReleasesModule } from './releases/releases.module';
     JobsModule,
     AgeModelsModule,
     HypothesesModule,
-    AttachmentsModule,
-    ExchangeModule,
-    ReleasesModule,
     AttachmentsModule,
     ExchangeModule,
     ReleasesModule,
