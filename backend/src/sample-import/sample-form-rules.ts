@@ -13,7 +13,7 @@ const CONTEXT_FIELDS = new Set(['siteId', 'unitId']);
  */
 export function sampleFormRules(sample: LabSheetSample): FieldProblem[] {
   const { row: _row, unit: _unit, ...fields } = sample;
-  const errors = validateSync(plainToInstance(CreateSampleInput, fields), { whitelist: true });
+  const errors = validateSync(plainToInstance(CreateSampleInput, fields));
   const problems: FieldProblem[] = [];
   for (const error of errors) {
     if (CONTEXT_FIELDS.has(error.property) || !error.constraints) continue;
