@@ -24,6 +24,7 @@ import { HypothesesModule } from './hypotheses/hypotheses.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
+import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
 import { SegmentsModule } from './segments/segments.module';
@@ -71,6 +72,7 @@ import { ReleasesModule } from './releases/releases.module';
     DemoModule,
     JobsModule,
     AgeModelsModule,
+    RecurrenceModule,
     HypothesesModule,
     AttachmentsModule,
     ExchangeModule,

@@ -6,10 +6,11 @@ import { ConfigModule } from './config/config.module';
 import { DatabaseModule } from './database/database.module';
 import { JobReaper } from './jobs/job-reaper';
 import { JobsModule } from './jobs/jobs.module';
+import { RecurrenceModule } from './recurrence/recurrence.module';
 
 /** The worker process: the job handlers and what they need, no HTTP. */
 @Module({
-  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule],
+  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule, RecurrenceModule],
   providers: [JobReaper],
 })
 export class WorkerModule {}

@@ -5,6 +5,7 @@ import { loadConfig } from './config/config';
 import { runMigrations } from './database/migrate';
 import { JobQueueService, QUEUES } from './jobs/job-queue.service';
 import { JobReaper } from './jobs/job-reaper';
+import { RecurrenceJob } from './recurrence/recurrence.job';
 import { WorkerModule } from './worker.module';
 
 /** How often each worker looks for runs whose worker died. */
@@ -18,6 +19,8 @@ async function bootstrap(): Promise<void> {
   const jobs = app.get(JobQueueService);
   const ageModel = app.get(AgeModelJob);
   await jobs.work(QUEUES.ageModel, config.workerConcurrency, ({ runId }) => ageModel.execute(runId));
+  const recurrence = app.get(RecurrenceJob);
+  await jobs.work(QUEUES.recurrence, config.workerConcurrency, ({ runId }) => recurrence.execute(runId));
   const reaper = app.get(JobReaper);
   setInterval(() => void reaper.reapOnce().catch(() => undefined), REAP_INTERVAL_MS).unref();
   console.log(`Stratochron worker ${process.pid} ready (concurrency ${config.workerConcurrency})`);

@@ -4,6 +4,12 @@
  */
 import { AgeModelResult, AgeModelSettings, runAgeModel } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
+import {
+  computeRecurrence,
+  RecurrenceComputeSettings,
+  RecurrenceSource,
+  StoredRecurrenceResults,
+} from '../recurrence/recurrence-results';
 
 export interface AgeModelRequest {
   kind: 'age-model';
@@ -11,13 +17,25 @@ export interface AgeModelRequest {
   settings: AgeModelSettings;
 }
 
-export type ComputeRequest = AgeModelRequest;
+export interface RecurrenceRequest {
+  kind: 'recurrence';
+  source: RecurrenceSource;
+  settings: RecurrenceComputeSettings;
+}
 
-export type ComputeResult<K extends ComputeRequest['kind']> = K extends 'age-model' ? AgeModelResult : never;
+export type ComputeRequest = AgeModelRequest | RecurrenceRequest;
+
+export type ComputeResult<K extends ComputeRequest['kind']> = K extends 'age-model'
+  ? AgeModelResult
+  : K extends 'recurrence'
+    ? StoredRecurrenceResults
+    : never;
 
 export function runCompute(request: ComputeRequest, onProgress: (fraction: number) => void): ComputeResult<ComputeRequest['kind']> {
   switch (request.kind) {
     case 'age-model':
       return runAgeModel(request.input, request.settings, { onProgress });
+    case 'recurrence':
+      return computeRecurrence(request.source, request.settings, onProgress);
   }
 }

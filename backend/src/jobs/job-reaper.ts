@@ -1,36 +1,68 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
 import { MAX_ATTEMPTS } from '../age-models/age-model.job';
-import { JobQueueService, QUEUES } from './job-queue.service';
+import { RECURRENCE_MAX_ATTEMPTS } from '../recurrence/recurrence.job';
+import { RecurrenceRepository } from '../recurrence/recurrence.repository';
+import { JobQueueService, QueueName, QUEUES } from './job-queue.service';
 
 /** A running job writes progress at least every second; silence this long means its worker is gone. */
 export const HEARTBEAT_TIMEOUT_MS = 20_000;
 
+/** What the reaper needs of a kind of job row (age model runs, recurrence analyses). */
+interface ReapableJobs {
+  readonly label: string;
+  readonly queue: QueueName;
+  readonly maxAttempts: number;
+  listAbandoned(heartbeatBefore: Date): Promise<{ id: string; attempts: number }[]>;
+  requeue(id: string): Promise<boolean>;
+  fail(id: string, message: string): Promise<void>;
+}
+
 /**
  * Finds runs whose worker died (no heartbeat) and queues them again, or marks them failed after
- * MAX_ATTEMPTS, so no run stays RUNNING forever. Every worker runs it; the row updates are
- * conditional, so two workers reaping at once do no harm.
+ * their kind's attempt limit, so no run stays RUNNING forever. Every worker runs it; the row
+ * updates are conditional, so two workers reaping at once do no harm.
  */
 @Injectable()
 export class JobReaper {
   private readonly logger = new Logger(JobReaper.name);
+  private readonly kinds: readonly ReapableJobs[];
 
   constructor(
-    private readonly runs: AgeModelRunsRepository,
+    runs: AgeModelRunsRepository,
+    analyses: RecurrenceRepository,
     private readonly jobs: JobQueueService,
-  ) {}
+  ) {
+    const kind = (label: string, queue: QueueName, maxAttempts: number, rows: Omit<ReapableJobs, 'label' | 'queue' | 'maxAttempts'>): ReapableJobs => ({
+      label,
+      queue,
+      maxAttempts,
+      listAbandoned: (before) => rows.listAbandoned(before),
+      requeue: (id) => rows.requeue(id),
+      fail: (id, message) => rows.fail(id, message),
+    });
+    this.kinds = [
+      kind('age model run', QUEUES.ageModel, MAX_ATTEMPTS, runs),
+      kind('recurrence analysis', QUEUES.recurrence, RECURRENCE_MAX_ATTEMPTS, analyses),
+    ];
+  }
 
   async reapOnce(now = new Date()): Promise<number> {
-    const abandoned = await this.runs.listAbandoned(new Date(now.getTime() - HEARTBEAT_TIMEOUT_MS));
-    for (const run of abandoned) {
-      if (run.attempts >= MAX_ATTEMPTS) {
-        await this.runs.fail(run.id, `the worker stopped during the run ${run.attempts} times; the run was given up`);
-        this.logger.warn(`age model run ${run.id} failed after ${run.attempts} lost attempts`);
-      } else if (await this.runs.requeue(run.id)) {
-        await this.jobs.send(QUEUES.ageModel, { runId: run.id });
-        this.logger.warn(`age model run ${run.id} lost its worker; queued again`);
+    const heartbeatBefore = new Date(now.getTime() - HEARTBEAT_TIMEOUT_MS);
+    let reaped = 0;
+    for (const kind of this.kinds) {
+      const abandoned = await kind.listAbandoned(heartbeatBefore);
+      for (const run of abandoned) {
+        if (run.attempts >= kind.maxAttempts) {
+          await kind.fail(run.id, `the worker stopped during the run ${run.attempts} times; the run was given up`);
+          this.logger.warn(`${kind.label} ${run.id} failed after ${run.attempts} lost attempts`);
+        } else if (await kind.requeue(run.id)) {
+          await this.jobs.send(kind.queue, { runId: run.id });
+          this.logger.warn(`${kind.label} ${run.id} lost its worker; queued again`);
+        }
       }
+      reaped += abandoned.length;
     }
-    return abandoned.length;
+    return reaped;
   }
 }

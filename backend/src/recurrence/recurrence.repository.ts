@@ -1,0 +1,161 @@
+import { Injectable } from '@nestjs/common';
+import { and, desc, eq, inArray, lt, sql } from 'drizzle-orm';
+import { DatabaseService, Executor } from '../database/database.service';
+import { eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, sites, ties, units } from '../database/schema';
+
+export type RecurrenceAnalysisRow = typeof recurrenceAnalyses.$inferSelect;
+export type HypothesisRow = typeof hypotheses.$inferSelect;
+export type ReleaseRow = typeof releases.$inferSelect;
+
+/** An event horizon with what the correlation checks need of its site and column. */
+export interface ProjectEventRow {
+  id: string;
+  name: string;
+  siteId: string;
+  siteName: string;
+  alongStrikeKm: number;
+  /** Position of the unit below the horizon, counted from the base (larger is younger). */
+  unitBelowPosition: number;
+}
+
+/**
+ * Recurrence analyses, and the few reads of hypotheses, ties, releases and event horizons an
+ * analysis needs (kept here so this module does not depend on the correlation feature module).
+ */
+@Injectable()
+export class RecurrenceRepository {
+  constructor(private readonly database: DatabaseService) {}
+
+  async insert(values: typeof recurrenceAnalyses.$inferInsert, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow> {
+    const [row] = await executor.insert(recurrenceAnalyses).values(values).returning();
+    return row;
+  }
+
+  async findById(id: string, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow | undefined> {
+    const [row] = await executor.select().from(recurrenceAnalyses).where(eq(recurrenceAnalyses.id, id)).limit(1);
+    return row;
+  }
+
+  listForProject(projectId: string, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow[]> {
+    return executor
+      .select()
+      .from(recurrenceAnalyses)
+      .where(eq(recurrenceAnalyses.projectId, projectId))
+      .orderBy(desc(recurrenceAnalyses.createdAt))
+      .limit(100);
+  }
+
+  /** Claim a queued analysis for a worker: QUEUED -> RUNNING, counting the attempt. */
+  async claim(id: string): Promise<RecurrenceAnalysisRow | undefined> {
+    const [row] = await this.database.db
+      .update(recurrenceAnalyses)
+      .set({ status: 'RUNNING', attempts: sql`${recurrenceAnalyses.attempts} + 1`, startedAt: new Date(), updatedAt: new Date(), progress: 0 })
+      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'QUEUED')))
+      .returning();
+    return row;
+  }
+
+  /** Progress doubles as the worker's heartbeat (updated_at). */
+  async setProgress(id: string, progress: number): Promise<void> {
+    await this.database.db
+      .update(recurrenceAnalyses)
+      .set({ progress, updatedAt: new Date() })
+      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')));
+  }
+
+  async finish(id: string, values: Partial<typeof recurrenceAnalyses.$inferInsert>): Promise<void> {
+    await this.database.db
+      .update(recurrenceAnalyses)
+      .set({ ...values, finishedAt: new Date(), updatedAt: new Date() })
+      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')));
+  }
+
+  async cancel(id: string, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow | undefined> {
+    const [row] = await executor
+      .update(recurrenceAnalyses)
+      .set({ status: 'CANCELLED', message: 'cancelled by a user', finishedAt: new Date(), updatedAt: new Date() })
+      .where(and(eq(recurrenceAnalyses.id, id), inArray(recurrenceAnalyses.status, ['QUEUED', 'RUNNING'])))
+      .returning();
+    return row;
+  }
+
+  async statusOf(id: string): Promise<RecurrenceAnalysisRow['status'] | undefined> {
+    const [row] = await this.database.db
+      .select({ status: recurrenceAnalyses.status })
+      .from(recurrenceAnalyses)
+      .where(eq(recurrenceAnalyses.id, id));
+    return row?.status;
+  }
+
+  /** Analyses whose worker stopped sending heartbeats. */
+  listAbandoned(heartbeatBefore: Date): Promise<RecurrenceAnalysisRow[]> {
+    return this.database.db
+      .select()
+      .from(recurrenceAnalyses)
+      .where(and(eq(recurrenceAnalyses.status, 'RUNNING'), lt(recurrenceAnalyses.updatedAt, heartbeatBefore)));
+  }
+
+  async requeue(id: string): Promise<boolean> {
+    const rows = await this.database.db
+      .update(recurrenceAnalyses)
+      .set({ status: 'QUEUED', progress: 0, message: 'the worker stopped during the analysis; queued again', updatedAt: new Date() })
+      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')))
+      .returning({ id: recurrenceAnalyses.id });
+    return rows.length > 0;
+  }
+
+  async fail(id: string, message: string): Promise<void> {
+    await this.database.db
+      .update(recurrenceAnalyses)
+      .set({ status: 'FAILED', message, finishedAt: new Date(), updatedAt: new Date() })
+      .where(and(eq(recurrenceAnalyses.id, id), inArray(recurrenceAnalyses.status, ['RUNNING', 'QUEUED'])));
+  }
+
+  async findHypothesis(id: string, executor: Executor = this.database.db): Promise<HypothesisRow | undefined> {
+    const [row] = await executor.select().from(hypotheses).where(eq(hypotheses.id, id)).limit(1);
+    return row;
+  }
+
+  async preferredHypothesis(projectId: string, executor: Executor = this.database.db): Promise<HypothesisRow | undefined> {
+    const [row] = await executor
+      .select()
+      .from(hypotheses)
+      .where(and(eq(hypotheses.projectId, projectId), eq(hypotheses.preferred, true)))
+      .limit(1);
+    return row;
+  }
+
+  tiesOf(hypothesisId: string, executor: Executor = this.database.db): Promise<{ id: string; eventAId: string; eventBId: string }[]> {
+    return executor
+      .select({ id: ties.id, eventAId: ties.eventAId, eventBId: ties.eventBId })
+      .from(ties)
+      .where(eq(ties.hypothesisId, hypothesisId));
+  }
+
+  async findRelease(id: string, executor: Executor = this.database.db): Promise<ReleaseRow | undefined> {
+    const [row] = await executor.select().from(releases).where(eq(releases.id, id)).limit(1);
+    return row;
+  }
+
+  async tectonicSetting(projectId: string, executor: Executor = this.database.db): Promise<'SUBDUCTION_INTERFACE' | 'CRUSTAL'> {
+    const [row] = await executor.select({ setting: projects.tectonicSetting }).from(projects).where(eq(projects.id, projectId));
+    return row?.setting ?? 'SUBDUCTION_INTERFACE';
+  }
+
+  /** Every event horizon of a project's sites, with its site and the position of the unit below it. */
+  eventsOfProject(projectId: string, executor: Executor = this.database.db): Promise<ProjectEventRow[]> {
+    return executor
+      .select({
+        id: eventHorizons.id,
+        name: eventHorizons.name,
+        siteId: sites.id,
+        siteName: sites.name,
+        alongStrikeKm: sites.alongStrikeKm,
+        unitBelowPosition: units.position,
+      })
+      .from(eventHorizons)
+      .innerJoin(sites, eq(sites.id, eventHorizons.siteId))
+      .innerJoin(units, eq(units.id, eventHorizons.unitBelowId))
+      .where(eq(sites.projectId, projectId));
+  }
+}

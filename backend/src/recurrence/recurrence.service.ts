@@ -1,0 +1,349 @@
+import { Injectable } from '@nestjs/common';
+import { isUUID } from 'class-validator';
+import { AccessService } from '../access/access.service';
+import { Permission } from '../access/permissions';
+import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
+import { StoredAgeModelResults, storeDensity } from '../age-models/age-model-results';
+import { AgeModelsService } from '../age-models/age-models.service';
+import { AuditService } from '../audit/audit.service';
+import { AuthUser } from '../auth/auth-user';
+import type { SiteEvent } from '../chronology/correlation';
+import { fitRenewalModel, RecurrenceInputError, RENEWAL_MODELS, renewalDistribution } from '../chronology/recurrence';
+import { badInput, conflict, notFound } from '../common/errors/domain-error';
+import { DatabaseService } from '../database/database.service';
+import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
+import { SegmentRow } from '../segments/segments.repository';
+import { SegmentsService } from '../segments/segments.service';
+import { SiteRow } from '../sites/sites.repository';
+import { SitesService } from '../sites/sites.service';
+import { FitRenewalInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
+import { RECURRENCE_CAUTION } from './recurrence-caution';
+import { RecurrenceExport, recurrenceExport, recurrenceExportCsv, RecurrenceExportHeader } from './recurrence-export';
+import { checkForecastStart, MINIMUM_EVENTS, segmentRegionalEvents, youngestDrawnAge } from './recurrence-inputs';
+import { StoredRecurrenceResults } from './recurrence-results';
+import { HypothesisRow, RecurrenceAnalysisRow, RecurrenceRepository, ReleaseRow } from './recurrence.repository';
+
+/** What an analysis was computed from, stored in `input_snapshot` so it can be rerun and cited. */
+export type RecurrenceInputSnapshot =
+  | {
+      kind: 'site';
+      siteId: string;
+      ageModelRunId: string;
+      /** The run's events, oldest first. */
+      eventHorizonIds: string[];
+      availableDraws: number;
+    }
+  | {
+      kind: 'segment';
+      segmentId: string;
+      hypothesisId: string;
+      hypothesisVersion: number;
+      ageModelRunIds: string[];
+      /** Young to old, each with the combined density the draws come from. */
+      regionalEvents: { id: string; memberIds: string[]; siteIds: string[]; medianCalBp: number; density: { startCalBp: number; probabilities: number[] } }[];
+      skippedTieIds: string[];
+      orderConflictCount: number;
+    };
+
+/** The analysis as the API serves it: the row, its stored results spread in, and the caution. */
+export type RecurrenceAnalysisView = RecurrenceAnalysisRow &
+  Partial<StoredRecurrenceResults> &
+  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { caution: string };
+
+const NO_RESULTS = { intervals: [], poisson: [], models: [], curves: [], histogram: [] };
+
+@Injectable()
+export class RecurrenceService {
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly analyses: RecurrenceRepository,
+    private readonly segments: SegmentsService,
+    private readonly sites: SitesService,
+    private readonly ageModels: AgeModelsService,
+    private readonly ageModelRuns: AgeModelRunsRepository,
+    private readonly jobs: JobQueueService,
+    private readonly access: AccessService,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** Conditional probability of one renewal model in a window, beside the Poisson figure, and the hazard at the elapsed time. */
+  renewalProbability(input: RenewalProbabilityInput) {
+    const alpha = input.model === 'POISSON' ? 1 : input.aperiodicity;
+    if (!(alpha > 0)) throw badInput('aperiodicity', `aperiodicity must be a positive number for ${input.model}`);
+    const distribution = refuseRange('aperiodicity', () => renewalDistribution(input.model, input.meanRecurrenceYears, alpha));
+    const hazardRatePerYear = distribution.hazard(input.elapsedYears);
+    if (!Number.isFinite(hazardRatePerYear)) {
+      throw badInput('elapsedYears', `the ${input.model} hazard rate is infinite at ${input.elapsedYears} years; give a later elapsed time`);
+    }
+    return {
+      conditionalProbability: refuseRange('elapsedYears', () => distribution.conditionalProbability(input.elapsedYears, input.windowYears)),
+      // 1 - exp(-dT / mu), the time-independent figure (SPEC, Computation 4).
+      poissonProbability: -Math.expm1(-input.windowYears / input.meanRecurrenceYears),
+      hazardRatePerYear,
+    };
+  }
+
+  /** Maximum-likelihood fit of one model to closed intervals and an optional open interval. */
+  fitRenewal(input: FitRenewalInput) {
+    try {
+      const fit = fitRenewalModel(input.model, { closedIntervals: input.intervalsYears, openInterval: input.openIntervalYears ?? null });
+      return { model: fit.model, meanRecurrenceYears: fit.mu, aperiodicity: fit.alpha, logLikelihood: fit.logLikelihood, aic: fit.aic };
+    } catch (error) {
+      throw asDomainError(error, { closedIntervals: 'intervalsYears', openInterval: 'openIntervalYears' });
+    }
+  }
+
+  /**
+   * Choose and check the analysis' events (BAD_USER_INPUT before anything is queued), store the
+   * analysis with its inputs and queue it.
+   */
+  async start(user: AuthUser, input: StartRecurrenceAnalysisInput): Promise<RecurrenceAnalysisView> {
+    if (input.segmentId && input.siteId) throw badInput('siteId', 'give a segment or a site, not both');
+    if (!input.segmentId && !input.siteId) {
+      throw badInput('segmentId', 'give a segment (with a hypothesis, or the project’s preferred one) or a single site');
+    }
+    const forecastStartYear = input.forecastStartYear ?? new Date().getUTCFullYear();
+    const windowsYears = [...(input.windowsYears ?? DEFAULT_WINDOWS_YEARS)];
+    const drawsRequested = input.draws ?? DEFAULT_DRAWS;
+    const seed = input.seed ?? Math.floor(Math.random() * 2 ** 31);
+
+    const prepared = input.siteId
+      ? await this.prepareSite(user, input.siteId, input, forecastStartYear)
+      : await this.prepareSegment(user, input.segmentId as string, input, forecastStartYear);
+    if (input.releaseId) {
+      // A release's frozen data is not yet readable here, so an analysis cannot honestly claim to use it.
+      const release = await this.analyses.findRelease(input.releaseId);
+      if (!release || release.projectId !== prepared.projectId) throw notFound('release');
+      throw badInput('releaseId', 'pinning an analysis to a release is not available yet; leave releaseId out');
+    }
+    const draws = prepared.snapshot.kind === 'site' ? Math.min(drawsRequested, prepared.snapshot.availableDraws) : drawsRequested;
+    const settings = {
+      source: prepared.snapshot.kind,
+      drawsRequested,
+      models: RENEWAL_MODELS,
+      curvePoints: 200,
+      ageModelRunIds: prepared.snapshot.kind === 'site' ? [prepared.snapshot.ageModelRunId] : prepared.snapshot.ageModelRunIds,
+    };
+
+    const analysis = await this.database.transaction(async (tx) => {
+      const row = await this.analyses.insert(
+        {
+          projectId: prepared.projectId,
+          segmentId: prepared.snapshot.kind === 'segment' ? prepared.snapshot.segmentId : null,
+          siteId: prepared.snapshot.kind === 'site' ? prepared.snapshot.siteId : null,
+          hypothesisId: prepared.snapshot.kind === 'segment' ? prepared.snapshot.hypothesisId : null,
+          hypothesisVersion: prepared.snapshot.kind === 'segment' ? prepared.snapshot.hypothesisVersion : null,
+          requestedById: user.id,
+          seed,
+          forecastStartYear,
+          windowsYears,
+          draws,
+          settings,
+          inputSnapshot: prepared.snapshot,
+          message: prepared.message,
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
+        actor: user,
+        projectId: row.projectId,
+        action: 'run',
+        objectType: 'recurrenceAnalysis',
+        objectId: row.id,
+        after: { segmentId: row.segmentId, siteId: row.siteId, hypothesisId: row.hypothesisId, hypothesisVersion: row.hypothesisVersion, seed, forecastStartYear, windowsYears, draws, settings },
+      });
+      return row;
+    });
+    await this.jobs.send(QUEUES.recurrence, { runId: analysis.id });
+    return this.view(analysis);
+  }
+
+  async get(user: AuthUser, id: string, permission = Permission.ProjectRead): Promise<RecurrenceAnalysisRow> {
+    const analysis = isUUID(id) ? await this.analyses.findById(id) : undefined;
+    if (!analysis) throw notFound('recurrence analysis');
+    await this.access.requireAccess({ user, permission, projectId: analysis.projectId, objectName: 'recurrence analysis' });
+    return analysis;
+  }
+
+  async getView(user: AuthUser, id: string): Promise<RecurrenceAnalysisView> {
+    return this.view(await this.get(user, id));
+  }
+
+  async cancel(user: AuthUser, id: string): Promise<RecurrenceAnalysisView> {
+    const analysis = await this.get(user, id, Permission.RecurrenceRun);
+    const cancelled = await this.database.transaction(async (tx) => {
+      const row = await this.analyses.cancel(id, tx);
+      if (!row) return undefined;
+      await this.audit.record(tx, { actor: user, projectId: row.projectId, action: 'cancel', objectType: 'recurrenceAnalysis', objectId: id });
+      return row;
+    });
+    if (!cancelled) throw badInput('id', `the analysis has already ended (${analysis.status})`);
+    return this.view(cancelled);
+  }
+
+  /** A project's analyses, newest first; the caller already read the project. */
+  async listForProject(projectId: string): Promise<RecurrenceAnalysisView[]> {
+    return (await this.analyses.listForProject(projectId)).map((row) => this.view(row));
+  }
+
+  view(row: RecurrenceAnalysisRow): RecurrenceAnalysisView {
+    const results = row.results as StoredRecurrenceResults | null;
+    return { ...row, ...NO_RESULTS, ...(results ?? {}), caution: RECURRENCE_CAUTION };
+  }
+
+  /** The export of a finished analysis (CONFLICT while it has no results). */
+  async exportOf(user: AuthUser, id: string): Promise<{ json: RecurrenceExport; csv: string }> {
+    const analysis = await this.get(user, id);
+    const results = analysis.results as StoredRecurrenceResults | null;
+    if (analysis.status !== 'SUCCEEDED' || !results) throw conflict(`the analysis has no results to export (${analysis.status})`);
+    const settings = analysis.settings as { ageModelRunIds?: string[] };
+    const header: RecurrenceExportHeader = {
+      id: analysis.id,
+      projectId: analysis.projectId,
+      segmentId: analysis.segmentId,
+      siteId: analysis.siteId,
+      hypothesisId: analysis.hypothesisId,
+      hypothesisVersion: analysis.hypothesisVersion,
+      ageModelRunIds: settings.ageModelRunIds ?? [],
+      seed: analysis.seed,
+      forecastStartYear: analysis.forecastStartYear,
+      windowsYears: analysis.windowsYears,
+      draws: analysis.draws,
+      createdAt: analysis.createdAt.toISOString(),
+      finishedAt: analysis.finishedAt?.toISOString() ?? null,
+    };
+    return { json: recurrenceExport(header, results), csv: recurrenceExportCsv(header, results) };
+  }
+
+  segmentOf(analysis: RecurrenceAnalysisRow): Promise<SegmentRow | undefined> {
+    return analysis.segmentId ? this.segments.findById(analysis.segmentId) : Promise.resolve(undefined);
+  }
+
+  siteOf(analysis: RecurrenceAnalysisRow): Promise<SiteRow | undefined> {
+    return analysis.siteId ? this.sites.findById(analysis.siteId) : Promise.resolve(undefined);
+  }
+
+  hypothesisOf(analysis: RecurrenceAnalysisRow): Promise<HypothesisRow | undefined> {
+    return analysis.hypothesisId ? this.analyses.findHypothesis(analysis.hypothesisId) : Promise.resolve(undefined);
+  }
+
+  releaseOf(analysis: RecurrenceAnalysisRow): Promise<ReleaseRow | undefined> {
+    return analysis.releaseId ? this.analyses.findRelease(analysis.releaseId) : Promise.resolve(undefined);
+  }
+
+  /** A site analysis runs on the joint event draws of the site's newest successful age model run. */
+  private async prepareSite(user: AuthUser, siteId: string, input: StartRecurrenceAnalysisInput, forecastStartYear: number) {
+    const site = await this.sites.get(user, siteId, Permission.RecurrenceRun);
+    if (input.hypothesisId) {
+      throw badInput('hypothesisId', 'a site analysis uses the site’s own age model; leave hypothesisId out or give a segment');
+    }
+    const [run] = await this.ageModelRuns.latestSucceededForSites([site.id]);
+    const eventDraws = (run?.results as StoredAgeModelResults | null | undefined)?.eventDraws;
+    if (!run || !eventDraws) throw badInput('siteId', 'the site has no successful age model run; run its age model first');
+    if (eventDraws.eventHorizonIds.length < MINIMUM_EVENTS) {
+      throw badInput(
+        'siteId',
+        `the site's age model has ${eventDraws.eventHorizonIds.length} events; at least ${MINIMUM_EVENTS} are needed (2 closed intervals)`,
+      );
+    }
+    refuseInput(() => checkForecastStart(youngestDrawnAge(eventDraws.draws), forecastStartYear));
+    const snapshot: RecurrenceInputSnapshot = {
+      kind: 'site',
+      siteId: site.id,
+      ageModelRunId: run.id,
+      eventHorizonIds: eventDraws.eventHorizonIds,
+      availableDraws: eventDraws.drawCount,
+    };
+    return { projectId: site.projectId, snapshot, message: null };
+  }
+
+  /**
+   * A segment analysis runs on the regional events of a hypothesis recorded at the segment's
+   * sites, from each member's newest successful age model posterior.
+   */
+  private async prepareSegment(user: AuthUser, segmentId: string, input: StartRecurrenceAnalysisInput, forecastStartYear: number) {
+    const segment = await this.segments.get(user, segmentId, Permission.RecurrenceRun);
+    const hypothesis = await this.chooseHypothesis(segment.projectId, input.hypothesisId ?? null);
+    const [projectEvents, segmentSites, ties, tectonicSetting] = await Promise.all([
+      this.analyses.eventsOfProject(segment.projectId),
+      this.sites.listForSegment(segment.id),
+      this.analyses.tiesOf(hypothesis.id),
+      this.analyses.tectonicSetting(segment.projectId),
+    ]);
+    const posteriors = await this.ageModels.latestPosteriors([...new Set(projectEvents.map((e) => e.siteId))]);
+    const events: SiteEvent[] = projectEvents
+      .filter((event) => posteriors.has(event.id))
+      .map((event) => ({
+        id: event.id,
+        name: event.name,
+        siteId: event.siteId,
+        siteName: event.siteName,
+        alongStrikeKm: event.alongStrikeKm,
+        orderIndexFromBase: event.unitBelowPosition,
+        posterior: posteriors.get(event.id)!.densityGrid,
+      }));
+    const chosen = refuseInput(() =>
+      segmentRegionalEvents({ events, ties, tectonicSetting, segmentSiteIds: new Set(segmentSites.map((site) => site.id)) }),
+    );
+    refuseInput(() => checkForecastStart(chosen.regionalEvents[0].density.startCalBp - 0.5, forecastStartYear));
+    const memberIds = chosen.regionalEvents.flatMap((event) => event.memberIds);
+    const ageModelRunIds = [...new Set(memberIds.map((id) => posteriors.get(id)!.runId))].sort();
+    const snapshot: RecurrenceInputSnapshot = {
+      kind: 'segment',
+      segmentId: segment.id,
+      hypothesisId: hypothesis.id,
+      hypothesisVersion: hypothesis.version,
+      ageModelRunIds,
+      regionalEvents: chosen.regionalEvents.map((event) => ({
+        id: event.id,
+        memberIds: [...event.memberIds],
+        siteIds: [...event.siteIds],
+        medianCalBp: event.medianCalBp,
+        density: storeDensity(event.density),
+      })),
+      skippedTieIds: [...chosen.skippedTieIds],
+      orderConflictCount: chosen.orderConflictCount,
+    };
+    const warnings = [
+      chosen.skippedTieIds.length > 0 ? `${chosen.skippedTieIds.length} ties were left out because an event has no age model yet` : null,
+      chosen.orderConflictCount > 0 ? `the hypothesis has ${chosen.orderConflictCount} order conflicts among these events` : null,
+    ].filter((w): w is string => w !== null);
+    return { projectId: segment.projectId, snapshot, message: warnings.length > 0 ? `Queued; note: ${warnings.join('; ')}.` : null };
+  }
+
+  private async chooseHypothesis(projectId: string, hypothesisId: string | null): Promise<HypothesisRow> {
+    if (hypothesisId) {
+      const hypothesis = await this.analyses.findHypothesis(hypothesisId);
+      if (!hypothesis || hypothesis.projectId !== projectId) throw notFound('hypothesis');
+      return hypothesis;
+    }
+    const preferred = await this.analyses.preferredHypothesis(projectId);
+    if (!preferred) throw badInput('hypothesisId', 'the project has no preferred hypothesis; choose one');
+    return preferred;
+  }
+}
+
+/** Runs a pure step, turning its input errors into BAD_USER_INPUT. */
+function refuseInput<T>(step: () => T): T {
+  try {
+    return step();
+  } catch (error) {
+    throw asDomainError(error, {});
+  }
+}
+
+function refuseRange<T>(field: string, step: () => T): T {
+  try {
+    return step();
+  } catch (error) {
+    if (error instanceof RangeError) throw badInput(field, error.message);
+    throw error;
+  }
+}
+
+function asDomainError(error: unknown, fields: Record<string, string>): unknown {
+  if (error instanceof RecurrenceInputError) return badInput(fields[error.field] ?? error.field, error.message);
+  if (error instanceof RangeError) return badInput('input', error.message);
+  return error;
+}
