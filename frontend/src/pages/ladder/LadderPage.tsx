@@ -1,0 +1,8 @@
+import { useParams } from 'react-router-dom';
+import { LadderView } from '@/modules/ladder/components/LadderView';
+
+/** /projects/:projectId/ladder */
+export function LadderPage() {
+  const { projectId = '' } = useParams();
+  return <LadderView projectId={projectId} />;
+}
