@@ -3,7 +3,11 @@ import { storeDensity, type StoredAgeModelResults } from '../../backend/src/age-
 import { normalDensity, summarise } from '../../backend/src/chronology/common/density';
 import { SeededRandom } from '../../backend/src/chronology/common/random';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
+import { AgeModelRunsRepository } from '../../backend/src/age-models/age-model-runs.repository';
+import { JobQueueService } from '../../backend/src/jobs/job-queue.service';
+import { JobReaper } from '../../backend/src/jobs/job-reaper';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
+import { RecurrenceRepository } from '../../backend/src/recurrence/recurrence.repository';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -319,5 +323,23 @@ describe('cancelRecurrenceAnalysis', () => {
     const { recurrenceAnalysis } = await clients.ANALYST.ok(ANALYSIS, { id: startRecurrenceAnalysis.id });
     expect(recurrenceAnalysis).toMatchObject({ status: 'CANCELLED', intervals: [], models: [], meanRecurrence: null });
     expect((await clients.ANALYST.errorOf(CANCEL, { id: startRecurrenceAnalysis.id })).code).toBe('BAD_USER_INPUT');
+  });
+});
+
+describe('the job reaper', () => {
+  it('queues again a recurrence analysis whose worker went silent, and gives it up after two attempts', async () => {
+    const reaper = new JobReaper(server.app.get(AgeModelRunsRepository), server.app.get(RecurrenceRepository), server.app.get(JobQueueService));
+    const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START, { i: { siteId: siteIds.A, draws: 200 } });
+    const id = startRecurrenceAnalysis.id;
+    const silence = (attempts: number) =>
+      sql(`update recurrence_analyses set status = 'RUNNING', attempts = $2, updated_at = now() - interval '1 minute' where id = $1`, [id, attempts]);
+    const status = async () => (await sql<{ status: string }>('select status from recurrence_analyses where id = $1', [id]))[0].status;
+
+    await silence(1);
+    await reaper.reapOnce();
+    expect(await status()).toBe('QUEUED');
+    await silence(2);
+    await reaper.reapOnce();
+    expect(await status()).toBe('FAILED');
   });
 });
