@@ -21,8 +21,11 @@ import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
 import { HypothesesModule } from './hypotheses/hypotheses.module';
+import { InvitationsModule } from './invitations/invitations.module';
 import { JobsModule } from './jobs/jobs.module';
+import { MembersModule } from './members/members.module';
 import { MembershipsModule } from './memberships/memberships.module';
+import { PasswordResetsModule } from './password-resets/password-resets.module';
 import { ProjectsModule } from './projects/projects.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
@@ -77,6 +80,9 @@ import { ReleasesModule } from './releases/releases.module';
     AttachmentsModule,
     ExchangeModule,
     ReleasesModule,
+    InvitationsModule,
+    PasswordResetsModule,
+    MembersModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -3,7 +3,7 @@ import { Executor } from '../database/database.service';
 import { AuthUser } from '../auth/auth-user';
 import { AuditRepository } from './audit.repository';
 
-export type AuditAction = 'create' | 'update' | 'delete' | 'import' | 'install' | 'invite' | 'accept' | 'release' | 'run' | 'cancel';
+export type AuditAction = 'create' | 'update' | 'delete' | 'import' | 'install' | 'invite' | 'accept' | 'release' | 'run' | 'cancel' | 'reset';
 
 export interface AuditEntry {
   actor: AuthUser | null;
