@@ -471,6 +471,19 @@ describe(runAgeModel.name, () => {
       // Its deposit lies above E1, so it is younger than the charcoal's own age.
       expect(sampleOf(asOffset, 'charcoal').medianCalBp).toBeLessThan(summarise(inbuilt).medianCalBp - 100);
     });
+
+    it('lets a root younger than its deposit sit below an event without pulling it young', () => {
+      // Source: the same exponential offset taken the other way (t = d - delta) [analytic]: a root
+      // grown 300 years after its unit-1 deposit (3100 cal BP) is explained by the offset.
+      const root = measured(2800);
+      const result = runAgeModel(
+        { ...base, samples: [...base.samples, sample('root', 'u1', root, { ageRelation: 'YOUNGER_THAN_DEPOSIT' })] },
+        settings,
+      );
+      expect(sampleOf(result, 'root').outlierProbability).toBeLessThan(0.1);
+      expect(Math.abs(eventOf(result, 'e1').summary.medianCalBp - eventOf(without, 'e1').summary.medianCalBp)).toBeLessThan(25);
+      expect(sampleOf(result, 'root').medianCalBp).toBeGreaterThan(summarise(root).medianCalBp + 100);
+    });
   });
 
   describe('job hooks and input errors', () => {

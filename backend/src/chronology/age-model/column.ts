@@ -144,7 +144,9 @@ export function validateColumn(input: AgeModelInput): ColumnProblem[] {
     if (!Number.isInteger(unit.position)) {
       problems.push({
         code: 'INVALID_POSITION',
-        message: `Unit ${labelOf(unit)} has position ${String(unit.position)}; positions are whole numbers counted from the base (1 is the oldest unit).`,
+        message:
+          `Unit ${labelOf(unit)} has position ${String(unit.position)}; positions are whole numbers counted ` +
+          'from the base (1 is the oldest unit).',
         subjectIds: [unit.id],
       });
       continue;
@@ -153,7 +155,9 @@ export function validateColumn(input: AgeModelInput): ColumnProblem[] {
     if (other) {
       problems.push({
         code: 'DUPLICATE_POSITION',
-        message: `Units ${labelOf(other)} and ${labelOf(unit)} both have position ${unit.position}; each unit needs its own place in the column.`,
+        message:
+          `Units ${labelOf(other)} and ${labelOf(unit)} both have position ${unit.position}; ` +
+          'each unit needs its own place in the column.',
         subjectIds: [other.id, unit.id],
       });
     } else {
@@ -166,7 +170,10 @@ export function validateColumn(input: AgeModelInput): ColumnProblem[] {
     const below = unitsById.get(horizon.unitBelowId);
     const above = unitsById.get(horizon.unitAboveId);
     if (!below || !above) {
-      const missing = [!below ? `unit below "${horizon.unitBelowId}"` : '', !above ? `unit above "${horizon.unitAboveId}"` : '']
+      const missing = [
+        !below ? `unit below "${horizon.unitBelowId}"` : '',
+        !above ? `unit above "${horizon.unitAboveId}"` : '',
+      ]
         .filter((text) => text !== '')
         .join(' and ');
       problems.push({
@@ -194,7 +201,8 @@ export function validateColumn(input: AgeModelInput): ColumnProblem[] {
         code: 'HORIZONS_AT_ONE_CONTACT',
         message:
           `Event horizons ${labelOf(other)} and ${labelOf(horizon)} both lie between units ${labelOf(below)} and ` +
-          `${labelOf(above)}; with no deposit between them the column cannot order them. Merge them or add the unit between.`,
+          `${labelOf(above)}; with no deposit between them the column cannot order them. ` +
+          'Merge them or add the unit between.',
         subjectIds: [other.id, horizon.id],
       });
     } else {
@@ -220,7 +228,9 @@ export function validateColumn(input: AgeModelInput): ColumnProblem[] {
     if (isModelled(sample) && !hasMass(sample.likelihood)) {
       problems.push({
         code: 'SAMPLE_EMPTY_LIKELIHOOD',
-        message: `Sample ${labelOf(sample)} has no usable calendar-age likelihood (no mass on a whole-year grid); recalibrate it or exclude it.`,
+        message:
+          `Sample ${labelOf(sample)} has no usable calendar-age likelihood (no mass on a whole-year grid); ` +
+          'recalibrate it or exclude it.',
         subjectIds: [sample.id],
       });
     }
