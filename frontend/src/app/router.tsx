@@ -1,0 +1,61 @@
+import type { FetchQueryOptions, QueryKey } from '@tanstack/react-query';
+import { createBrowserRouter, redirect, type RouteObject } from 'react-router-dom';
+import { queryClient } from '@/app/queryClient';
+import { routePatterns } from '@/app/paths';
+import { sessionStore } from '@/modules/auth/utils/sessionStore';
+import { calibrationQueries } from '@/modules/calibration/hooks/calibrationQueries';
+import { projectQueries } from '@/modules/projects/hooks/projectQueries';
+import { AppShell } from '@/modules/shell/components/AppShell';
+import { siteQueries } from '@/modules/sites/hooks/siteQueries';
+import { LoadingState } from '@/modules/ui/components/LoadingState';
+import { SignInPage } from '@/pages/auth/SignInPage';
+import { CalibrationPage } from '@/pages/calibration/CalibrationPage';
+import { NotFoundPage } from '@/pages/errors/NotFoundPage';
+import { RouteErrorPage } from '@/pages/errors/RouteErrorPage';
+import { ProjectListPage } from '@/pages/projects/ProjectListPage';
+import { ProjectOverviewPage } from '@/pages/projects/ProjectOverviewPage';
+import { SitePage } from '@/pages/sites/SitePage';
+
+/**
+ * Start a page's main query while the route changes, so its data is on the way before the page
+ * renders (the page reads it with useSuspenseQuery). Signed out, there is nothing to fetch.
+ */
+function prefetch<TData, TKey extends QueryKey>(options: FetchQueryOptions<TData, Error, TData, TKey>): null {
+  if (sessionStore.get()) void queryClient.prefetchQuery(options);
+  return null;
+}
+
+const errorElement = <RouteErrorPage />;
+
+/**
+ * Every route of the app. Patterns come from the path table (paths.ts); each route has an
+ * error element so a failing page leaves the shell standing.
+ */
+const routes: RouteObject[] = [
+  { path: routePatterns.signIn, element: <SignInPage />, errorElement },
+  {
+    element: <AppShell />,
+    errorElement,
+    hydrateFallbackElement: <LoadingState />,
+    children: [
+      { path: routePatterns.root, loader: () => redirect(routePatterns.projects) },
+      { path: routePatterns.projects, element: <ProjectListPage />, errorElement, loader: () => prefetch(projectQueries.list()) },
+      {
+        path: routePatterns.project,
+        element: <ProjectOverviewPage />,
+        errorElement,
+        loader: ({ params }) => prefetch(projectQueries.overview(params.projectId ?? '')),
+      },
+      {
+        path: routePatterns.site,
+        element: <SitePage />,
+        errorElement,
+        loader: ({ params }) => prefetch(siteQueries.column(params.projectId ?? '', params.siteId ?? '')),
+      },
+      { path: routePatterns.calibrate, element: <CalibrationPage />, errorElement, loader: () => prefetch(calibrationQueries.curves()) },
+      { path: '*', element: <NotFoundPage />, errorElement },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);

@@ -1,0 +1,216 @@
+import { Callout, Classes, Intent, Switch } from '@blueprintjs/core';
+import { IconNames } from '@blueprintjs/icons';
+import { useQueryClient } from '@tanstack/react-query';
+import { useState, type ChangeEvent } from 'react';
+import type { AgeRelation, CurveCode, DatingMethod, SampleMaterial } from '@/gql/graphql';
+import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { fieldErrorsOf, formErrorOf, isEditConflict } from '@/modules/api/utils/apiError';
+import { projectQueries } from '@/modules/projects/hooks/projectQueries';
+import { useSampleMutations } from '@/modules/samples/hooks/sampleMutations';
+import {
+  emptySampleForm,
+  methodFields,
+  readSampleForm,
+  sampleFormFields,
+  sampleFormFrom,
+  withMaterial,
+  type SampleFormField,
+  type SampleFormValues,
+} from '@/modules/samples/utils/sampleForm';
+import { luminescenceCalBp } from '@/modules/samples/utils/sampleSummary';
+import {
+  AGE_RELATION_LABELS,
+  AGE_RELATIONS,
+  CURVE_CODES,
+  CURVE_LABELS,
+  DATING_METHOD_LABELS,
+  DATING_METHODS,
+  SAMPLE_MATERIAL_LABELS,
+  SAMPLE_MATERIALS,
+} from '@/modules/samples/utils/sampleVocabulary';
+import type { SampleRow, SiteDetail } from '@/modules/sites/utils/siteTypes';
+import { FormDialog } from '@/modules/ui/components/FormDialog';
+import { NumberField, SelectField, TextAreaField, TextField } from '@/modules/ui/components/FormFields';
+import { readNumber, type FieldErrors } from '@/modules/ui/utils/formFields';
+
+export type SampleDialogProps = {
+  site: Pick<SiteDetail, 'id' | 'latitude' | 'units' | 'project'>;
+  /** The sample to edit, or null for a new one. */
+  sample: SampleRow | null;
+  onClose: () => void;
+};
+
+const METHOD_OPTIONS = DATING_METHODS.map((method) => ({ value: method, label: DATING_METHOD_LABELS[method] }));
+const MATERIAL_OPTIONS = SAMPLE_MATERIALS.map((material) => ({ value: material, label: SAMPLE_MATERIAL_LABELS[material] }));
+const RELATION_OPTIONS = AGE_RELATIONS.map((relation) => ({ value: relation, label: AGE_RELATION_LABELS[relation] }));
+const CURVE_OPTIONS = [{ value: '' as const, label: 'Choose a curve' }, ...CURVE_CODES.map((curve) => ({ value: curve, label: CURVE_LABELS[curve] }))];
+
+/** Latitude above which Marine20 is not meant to be used (Heaton et al. 2020) [common practice for the line]. */
+const MARINE20_POLAR_LATITUDE = 60;
+
+/**
+ * Add or edit a dated sample. The method decides the fields: a radiocarbon age with its curve
+ * (and Delta-R on Marine20), a luminescence age before its measurement year, or the centre and
+ * half-width of a historical or tephra calendar range.
+ */
+export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
+  const { age, range } = useAgeScale();
+  const [values, setValues] = useState<SampleFormValues>(() =>
+    sample ? sampleFormFrom({ ...sample, unitId: sample.unit.id }) : emptySampleForm([...site.units].sort((a, b) => b.position - a.position)[0]?.id ?? ''),
+  );
+  const [errors, setErrors] = useState<FieldErrors<SampleFormField>>({});
+  const projectId = site.project.id;
+  const { create, update } = useSampleMutations(projectId);
+  const mutation = sample ? update : create;
+  const queryClient = useQueryClient();
+
+  const set = (field: Exclude<SampleFormField, 'excluded'>) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
+  const serverErrors = fieldErrorsOf(mutation.error);
+  const errorOf = (field: SampleFormField) => errors[field] ?? serverErrors[field];
+  const shown = new Set(methodFields(values.method, values.curve));
+  const unitOptions = [
+    { value: '', label: 'Choose a unit' },
+    ...[...site.units].sort((a, b) => b.position - a.position).map((unit) => ({ value: unit.id, label: `${unit.position} · ${unit.name}` })),
+  ];
+
+  const handleMethodChange = (method: DatingMethod) => setValues((previous) => ({ ...previous, method }));
+  const handleMaterialChange = (material: SampleMaterial) => setValues((previous) => withMaterial(previous, material));
+  const handleRelationChange = (ageRelation: AgeRelation) => setValues((previous) => ({ ...previous, ageRelation }));
+  const handleCurveChange = (curve: CurveCode | '') => setValues((previous) => ({ ...previous, curve }));
+  const handleExcludedChange = (event: ChangeEvent<HTMLInputElement>) => {
+    const excluded = event.target.checked;
+    setValues((previous) => ({ ...previous, excluded }));
+  };
+  const handleSubmit = () => {
+    const result = readSampleForm(values, site.units);
+    if (!result.ok) {
+      setErrors(result.errors);
+      return;
+    }
+    setErrors({});
+    if (sample) {
+      update.mutate({ id: sample.id, version: sample.version, input: result.input }, { onSuccess: onClose });
+    } else {
+      create.mutate({ input: { ...result.input, siteId: site.id } }, { onSuccess: onClose });
+    }
+  };
+  const handleReload = () => {
+    void queryClient.invalidateQueries({ queryKey: projectQueries.detail(projectId) });
+    onClose();
+  };
+
+  const luminescenceAge = readNumber(values.calendarAgeBp).value;
+  const measurementYear = readNumber(values.measurementYear, { integer: true }).value;
+  const tieCentre = readNumber(values.calendarAgeBp).value;
+  const tieHalfWidth = readNumber(values.calendarErrorYears).value;
+  const polarMarine = values.curve === 'MARINE20' && Math.abs(site.latitude) > MARINE20_POLAR_LATITUDE;
+
+  return (
+    <FormDialog
+      title={sample ? `Edit sample ${sample.labCode}` : 'New sample'}
+      icon={IconNames.LAB_TEST}
+      isOpen
+      onClose={onClose}
+      onSubmit={handleSubmit}
+      submitting={mutation.isPending}
+      submitLabel={sample ? 'Save' : 'Add sample'}
+      formError={formErrorOf(mutation.error, sampleFormFields(values.method, values.curve))}
+      conflict={Boolean(sample) && isEditConflict(mutation.error)}
+      onReload={handleReload}
+      width={680}
+    >
+      <div className="sc-field-row">
+        <TextField name="labCode" label="Lab code" value={values.labCode} onValueChange={set('labCode')} error={errorOf('labCode')} autoFocus />
+        <SelectField name="unitId" label="Unit" value={values.unitId} options={unitOptions} onValueChange={set('unitId')} error={errorOf('unitId')} />
+        <NumberField name="depthM" label="Depth" unit="m" value={values.depthM} onValueChange={set('depthM')} error={errorOf('depthM')} className="sc-field-narrow" />
+      </div>
+      <div className="sc-field-row">
+        <SelectField name="method" label="Method" value={values.method} options={METHOD_OPTIONS} onValueChange={handleMethodChange} error={errorOf('method')} />
+        <SelectField name="material" label="Material" value={values.material} options={MATERIAL_OPTIONS} onValueChange={handleMaterialChange} error={errorOf('material')} />
+      </div>
+      <SelectField
+        name="ageRelation"
+        label="Age relation to the deposit"
+        value={values.ageRelation}
+        options={RELATION_OPTIONS}
+        onValueChange={handleRelationChange}
+        error={errorOf('ageRelation')}
+      />
+
+      <fieldset className="sc-fieldset">
+        <legend>{DATING_METHOD_LABELS[values.method]} age</legend>
+        {values.method === 'RADIOCARBON' && (
+          <>
+            <div className="sc-field-row">
+              <NumberField name="c14Age" label="Conventional age" unit="14C yr BP" value={values.c14Age} onValueChange={set('c14Age')} error={errorOf('c14Age')} />
+              <NumberField name="c14Error" label="Error (1σ)" unit="14C yr" value={values.c14Error} onValueChange={set('c14Error')} error={errorOf('c14Error')} />
+              <NumberField name="delta13C" label="δ13C" unit="‰" labelInfo="(optional)" value={values.delta13C} onValueChange={set('delta13C')} error={errorOf('delta13C')} />
+            </div>
+            <div className="sc-field-row">
+              <SelectField name="curve" label="Calibration curve" value={values.curve} options={CURVE_OPTIONS} onValueChange={handleCurveChange} error={errorOf('curve')} />
+              {shown.has('deltaR') && (
+                <>
+                  <NumberField name="deltaR" label="Delta-R" unit="14C yr" value={values.deltaR} onValueChange={set('deltaR')} error={errorOf('deltaR')} />
+                  <NumberField name="deltaRError" label="Delta-R error" unit="14C yr" value={values.deltaRError} onValueChange={set('deltaRError')} error={errorOf('deltaRError')} />
+                </>
+              )}
+            </div>
+            {polarMarine && (
+              <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} compact>
+                This site lies above 60° latitude: Marine20 is not meant for polar waters.
+              </Callout>
+            )}
+          </>
+        )}
+        {values.method === 'LUMINESCENCE' && (
+          <>
+            <div className="sc-field-row">
+              <NumberField
+                name="calendarAgeBp"
+                label="Age"
+                unit="years"
+                helperText="before the measurement year"
+                value={values.calendarAgeBp}
+                onValueChange={set('calendarAgeBp')}
+                error={errorOf('calendarAgeBp')}
+              />
+              <NumberField name="calendarErrorYears" label="Error (1σ)" unit="years" value={values.calendarErrorYears} onValueChange={set('calendarErrorYears')} error={errorOf('calendarErrorYears')} />
+              <NumberField name="measurementYear" label="Measured in" unit="CE" value={values.measurementYear} onValueChange={set('measurementYear')} error={errorOf('measurementYear')} />
+            </div>
+            {luminescenceAge !== null && luminescenceAge !== undefined && measurementYear !== null && measurementYear !== undefined && (
+              <p className={`${Classes.TEXT_MUTED} sc-form-note`}>
+                That is <span className="num">{age(luminescenceCalBp(luminescenceAge, measurementYear))}</span>.
+              </p>
+            )}
+          </>
+        )}
+        {(values.method === 'HISTORICAL' || values.method === 'TEPHRA') && (
+          <>
+            <div className="sc-field-row">
+              <NumberField name="calendarAgeBp" label="Centre of the range" unit="cal BP" value={values.calendarAgeBp} onValueChange={set('calendarAgeBp')} error={errorOf('calendarAgeBp')} />
+              <NumberField name="calendarErrorYears" label="Half-width" unit="years" value={values.calendarErrorYears} onValueChange={set('calendarErrorYears')} error={errorOf('calendarErrorYears')} />
+            </div>
+            {tieCentre != null && tieHalfWidth != null && (
+              <p className={`${Classes.TEXT_MUTED} sc-form-note`}>
+                The range is <span className="num">{range(tieCentre + tieHalfWidth, tieCentre - tieHalfWidth)}</span>.
+              </p>
+            )}
+          </>
+        )}
+      </fieldset>
+
+      <div className="sc-field-row sc-field-row-center">
+        <Switch checked={values.excluded} onChange={handleExcludedChange} label="Exclude from age models" className="sc-switch" />
+        {values.excluded && (
+          <TextField name="exclusionReason" label="Reason" value={values.exclusionReason} onValueChange={set('exclusionReason')} error={errorOf('exclusionReason')} />
+        )}
+      </div>
+      <TextAreaField name="notes" label="Notes" value={values.notes} onValueChange={set('notes')} error={errorOf('notes')} />
+      {sample?.calibrationError && (
+        <Callout intent={Intent.DANGER} icon={IconNames.ERROR} compact title="Not calibrated">
+          {sample.calibrationError}
+        </Callout>
+      )}
+    </FormDialog>
+  );
+}

@@ -1,0 +1,5 @@
+import { CalibratorView } from '@/modules/calibration/components/CalibratorView';
+
+export function CalibrationPage() {
+  return <CalibratorView />;
+}
