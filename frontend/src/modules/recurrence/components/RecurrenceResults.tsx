@@ -1,0 +1,288 @@
+import { Button, Callout, HTMLTable, Intent, ProgressBar, Tag } from '@blueprintjs/core';
+import { IconNames } from '@blueprintjs/icons';
+import { useMemo, useRef, useState } from 'react';
+import type { RecurrenceAnalysisQuery } from '@/gql/graphql';
+import { AgeValue } from '@/modules/ages/components/AgeValues';
+import { useSession } from '@/modules/auth/hooks/useSession';
+import { FigureExportButtons } from '@/modules/ladder/components/FigureExportButtons';
+import { downloadWithToken } from '@/modules/ladder/utils/figureDownload';
+import { figureFileName } from '@/modules/ladder/utils/figureExport';
+import { MODEL_ORDER, RecurrenceCurveChart, type ModelCurve } from '@/modules/recurrence/components/RecurrenceCurveChart';
+import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, isJobActive, recurrenceExportUrl } from '@/modules/recurrence/utils/recurrenceCharts';
+
+export type RecurrenceAnalysisData = RecurrenceAnalysisQuery['recurrenceAnalysis'];
+
+export type RecurrenceResultsProps = {
+  analysis: RecurrenceAnalysisData;
+  canCancel: boolean;
+  cancelling: boolean;
+  onCancel: () => void;
+};
+
+type Range = { median: number; low95: number; high95: number } | null | undefined;
+
+function RangeCell({ range, digits = 0 }: { range: Range; digits?: number }) {
+  if (!range) return <td className="num">–</td>;
+  return (
+    <td className="num">
+      {range.median.toFixed(digits)} <span className="sc-chart-legend">({range.low95.toFixed(digits)}–{range.high95.toFixed(digits)})</span>
+    </td>
+  );
+}
+
+function byModelOrder<T extends { model: (typeof MODEL_ORDER)[number] }>(entries: readonly T[]): T[] {
+  return [...entries].sort((a, b) => MODEL_ORDER.indexOf(a.model) - MODEL_ORDER.indexOf(b.model));
+}
+
+/** The label of what an analysis ran on. */
+export function analysisLabel(analysis: { segment?: { name: string } | null; site?: { name: string } | null; hypothesis?: { name: string } | null }): string {
+  if (analysis.site) return `site ${analysis.site.name}`;
+  return `${analysis.segment?.name ?? 'segment'} · ${analysis.hypothesis?.name ?? 'no hypothesis'}`;
+}
+
+/**
+ * One recurrence analysis: the caution first, then progress or the figures, probabilities,
+ * model comparison and statistics, with exports of the numbers and the figures.
+ */
+export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }: RecurrenceResultsProps) {
+  const session = useSession();
+  const [exportError, setExportError] = useState<string | null>(null);
+  const histogramFigure = useRef<SVGSVGElement | null>(null);
+  const hazardFigure = useRef<SVGSVGElement | null>(null);
+  const survivalFigure = useRef<SVGSVGElement | null>(null);
+
+  const curves = useMemo(() => byModelOrder(analysis.curves), [analysis.curves]);
+  const densityCurves = useMemo<ModelCurve[]>(() => curves.map((curve) => ({ model: curve.model, points: curve.density })), [curves]);
+  const hazardCurves = useMemo<ModelCurve[]>(() => curves.map((curve) => ({ model: curve.model, points: curve.hazard })), [curves]);
+  const survivalCurves = useMemo<ModelCurve[]>(() => curves.map((curve) => ({ model: curve.model, points: curve.survival })), [curves]);
+  const bars = useMemo(() => histogramAsDensity(analysis.histogram), [analysis.histogram]);
+  const elapsed = elapsedSinceLastEvent(analysis.forecastStartYear, analysis.lastEventMedianCalBp, analysis.openInterval?.median);
+  const marker = elapsed === null ? null : { years: elapsed, label: `${Math.round(elapsed)} yr since last event (${analysis.forecastStartYear})` };
+  const models = byModelOrder(analysis.models);
+  const windows = [...analysis.windowsYears].sort((a, b) => a - b);
+  const label = analysisLabel(analysis);
+
+  const handleExport = (format: 'csv' | 'json') => () => {
+    setExportError(null);
+    downloadWithToken(recurrenceExportUrl(analysis.id, format), figureFileName(`recurrence ${label} ${analysis.forecastStartYear}`, format), session?.token).catch(
+      (error: unknown) => setExportError(error instanceof Error ? error.message : 'the export failed'),
+    );
+  };
+
+  return (
+    <div className="sc-recurrence-results">
+      <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title="Research result, not a hazard assessment" className="sc-caution">
+        {analysis.caution}
+      </Callout>
+      <div className="sc-run-status-line">
+        <Tag minimal>{analysis.status.toLowerCase()}</Tag>
+        <span>{label}</span>
+        <span>
+          seed <span className="num">{analysis.seed}</span> · <span className="num">{analysis.draws}</span> draws · from{' '}
+          <span className="num">{analysis.forecastStartYear}</span> CE
+        </span>
+        {isJobActive(analysis.status) && (
+          <>
+            <ProgressBar className="sc-run-progress" intent={Intent.PRIMARY} value={analysis.status === 'QUEUED' ? undefined : analysis.progress} />
+            {canCancel && <Button size="small" icon={IconNames.STOP} text="Cancel" onClick={onCancel} loading={cancelling} />}
+          </>
+        )}
+        {analysis.status === 'SUCCEEDED' && (
+          <>
+            <Button size="small" icon={IconNames.DOWNLOAD} text="CSV" onClick={handleExport('csv')} />
+            <Button size="small" icon={IconNames.DOWNLOAD} text="JSON" onClick={handleExport('json')} />
+          </>
+        )}
+      </div>
+      {exportError && (
+        <Callout intent={Intent.DANGER} icon={IconNames.ERROR} className="sc-form-callout">
+          {exportError}
+        </Callout>
+      )}
+      {analysis.status === 'FAILED' && (
+        <Callout intent={Intent.DANGER} icon={IconNames.ERROR} title="The analysis failed">
+          {analysis.message ?? 'No reason was given.'}
+        </Callout>
+      )}
+      {analysis.status === 'SUCCEEDED' && (
+        <>
+          <div className="sc-recurrence-figures">
+            <section>
+              <div className="sc-figure-head">
+                <strong>Inter-event times and fitted densities</strong>
+                <FigureExportButtons figure={histogramFigure} title={`Intervals ${label}`} />
+              </div>
+              <RecurrenceCurveChart curves={densityCurves} bars={bars} xLabel="inter-event time, years" yLabel="density per year" figure={histogramFigure} />
+            </section>
+            <section>
+              <div className="sc-figure-head">
+                <strong>Hazard rate</strong>
+                <FigureExportButtons figure={hazardFigure} title={`Hazard ${label}`} />
+              </div>
+              <RecurrenceCurveChart curves={hazardCurves} marker={marker} xLabel="years since an event" yLabel="hazard per year" figure={hazardFigure} />
+            </section>
+            <section>
+              <div className="sc-figure-head">
+                <strong>Survival</strong>
+                <FigureExportButtons figure={survivalFigure} title={`Survival ${label}`} />
+              </div>
+              <RecurrenceCurveChart curves={survivalCurves} marker={marker} xLabel="years since an event" yLabel="probability of no event" yMax={1} figure={survivalFigure} />
+            </section>
+          </div>
+
+          <h3>Conditional probability of the next event</h3>
+          <p className="sc-chart-legend">
+            In a window starting {analysis.forecastStartYear} CE, given no event since the last one; median with its 95 % Monte Carlo range.
+          </p>
+          <HTMLTable compact striped className="sc-table">
+            <thead>
+              <tr>
+                <th>Model</th>
+                {windows.map((window) => (
+                  <th key={window} className="num">
+                    {window} yr
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {models.map((model) => (
+                <tr key={model.model}>
+                  <td>{model.model.toLowerCase()}</td>
+                  {windows.map((window) => {
+                    const probability = model.probabilities.find((entry) => entry.windowYears === window);
+                    const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
+                    return (
+                      <td key={window} className="num">
+                        {probability ? formatProbability(probability.median) : '–'}{' '}
+                        {probability && (
+                          <span className="sc-chart-legend">
+                            ({formatProbability(probability.low95)}–{formatProbability(probability.high95)})
+                          </span>
+                        )}
+                        {poisson && model.model !== 'POISSON' && (
+                          <div className="sc-chart-legend">Poisson {formatProbability(poisson.median)}</div>
+                        )}
+                      </td>
+                    );
+                  })}
+                </tr>
+              ))}
+              <tr>
+                <td>Poisson, 1 − exp(−ΔT/μ)</td>
+                {windows.map((window) => {
+                  const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
+                  return (
+                    <td key={window} className="num">
+                      {poisson ? (
+                        <>
+                          {formatProbability(poisson.median)}{' '}
+                          <span className="sc-chart-legend">
+                            ({formatProbability(poisson.low95)}–{formatProbability(poisson.high95)})
+                          </span>
+                        </>
+                      ) : (
+                        '–'
+                      )}
+                    </td>
+                  );
+                })}
+              </tr>
+            </tbody>
+          </HTMLTable>
+
+          <h3>Model comparison</h3>
+          <HTMLTable compact striped className="sc-table">
+            <thead>
+              <tr>
+                <th>Model</th>
+                <th className="num">Mean recurrence, yr</th>
+                <th className="num">Aperiodicity</th>
+                <th className="num">log L</th>
+                <th className="num">AIC</th>
+                <th className="num">ΔAIC</th>
+                <th className="num">Akaike weight</th>
+              </tr>
+            </thead>
+            <tbody>
+              {[...models]
+                .sort((a, b) => a.deltaAic - b.deltaAic)
+                .map((model) => (
+                  <tr key={model.model}>
+                    <td>{model.model.toLowerCase()}</td>
+                    <td className="num">{model.meanRecurrenceYears.toFixed(0)}</td>
+                    <td className="num">{model.model === 'POISSON' ? '–' : model.aperiodicity.toFixed(2)}</td>
+                    <td className="num">{model.logLikelihood.toFixed(2)}</td>
+                    <td className="num">{model.aic.toFixed(2)}</td>
+                    <td className="num">{model.deltaAic.toFixed(2)}</td>
+                    <td className="num">{model.akaikeWeight.toFixed(3)}</td>
+                  </tr>
+                ))}
+            </tbody>
+          </HTMLTable>
+          {analysis.modelComparisonNote && <p className="sc-chart-legend">{analysis.modelComparisonNote}</p>}
+
+          <h3>Interval statistics</h3>
+          <HTMLTable compact className="sc-table">
+            <tbody>
+              <tr>
+                <th>Events</th>
+                <td className="num">{analysis.eventCount ?? '–'}</td>
+              </tr>
+              <tr>
+                <th>Last event (median)</th>
+                <td>
+                  <AgeValue calBp={analysis.lastEventMedianCalBp} />
+                </td>
+              </tr>
+              <tr>
+                <th>Open interval, yr</th>
+                <RangeCell range={analysis.openInterval} />
+              </tr>
+              <tr>
+                <th>Mean recurrence, yr</th>
+                <RangeCell range={analysis.meanRecurrence} />
+              </tr>
+              <tr>
+                <th>Median recurrence, yr</th>
+                <RangeCell range={analysis.medianRecurrence} />
+              </tr>
+              <tr>
+                <th>Standard deviation, yr</th>
+                <RangeCell range={analysis.sdRecurrence} />
+              </tr>
+              <tr>
+                <th>Coefficient of variation</th>
+                <RangeCell range={analysis.aperiodicity} digits={2} />
+              </tr>
+            </tbody>
+          </HTMLTable>
+          {analysis.intervals.length > 0 && (
+            <HTMLTable compact striped className="sc-table">
+              <thead>
+                <tr>
+                  <th>Between events (1 = youngest)</th>
+                  <th className="num">Median, yr</th>
+                  <th className="num">95 % range, yr</th>
+                </tr>
+              </thead>
+              <tbody>
+                {analysis.intervals.map((interval) => (
+                  <tr key={interval.index}>
+                    <td className="num">
+                      {interval.index + 2} → {interval.index + 1}
+                    </td>
+                    <td className="num">{interval.medianYears.toFixed(0)}</td>
+                    <td className="num">
+                      {interval.low95.toFixed(0)}–{interval.high95.toFixed(0)}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </HTMLTable>
+          )}
+        </>
+      )}
+    </div>
+  );
+}

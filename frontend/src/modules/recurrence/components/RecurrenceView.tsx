@@ -1,0 +1,108 @@
+import { Callout, HTMLSelect, Intent, NonIdealState, Switch } from '@blueprintjs/core';
+import { IconNames } from '@blueprintjs/icons';
+import { useQuery } from '@tanstack/react-query';
+import { useState, type ChangeEvent } from 'react';
+import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
+import { formErrorOf } from '@/modules/api/utils/apiError';
+import { roleAllows } from '@/modules/auth/utils/permissions';
+import { analysisLabel, RecurrenceResults } from '@/modules/recurrence/components/RecurrenceResults';
+import { RecurrenceSetupForm } from '@/modules/recurrence/components/RecurrenceSetupForm';
+import { CancelRecurrenceAnalysisDocument, StartRecurrenceAnalysisDocument } from '@/modules/recurrence/graphql/recurrence';
+import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
+import type { RecurrenceSettingsInput } from '@/modules/recurrence/utils/recurrenceForm';
+import { LoadingState } from '@/modules/ui/components/LoadingState';
+import '@/modules/ladder/components/charts.css';
+
+export type RecurrenceViewProps = { projectId: string };
+
+type AnalysisPanelProps = { projectId: string; analysisId: string; canRun: boolean };
+
+function AnalysisPanel({ projectId, analysisId, canRun }: AnalysisPanelProps) {
+  const analysisQuery = useQuery(recurrenceQueries.analysis(projectId, analysisId));
+  const cancel = useGraphqlMutation(CancelRecurrenceAnalysisDocument, { invalidates: [recurrenceQueries.all(projectId)] });
+  if (analysisQuery.isPending) return <LoadingState label="Loading the analysis" />;
+  if (analysisQuery.isError) {
+    return (
+      <Callout intent={Intent.DANGER} icon={IconNames.ERROR} title="The analysis could not be loaded">
+        {analysisQuery.error.message}
+      </Callout>
+    );
+  }
+  const handleCancel = () => cancel.mutate({ id: analysisId });
+  return <RecurrenceResults analysis={analysisQuery.data} canCancel={canRun} cancelling={cancel.isPending} onCancel={handleCancel} />;
+}
+
+/**
+ * Recurrence for a segment and hypothesis or a single site: start an analysis, follow it, and
+ * read its figures; or put two analyses side by side.
+ */
+export function RecurrenceView({ projectId }: RecurrenceViewProps) {
+  const setupQuery = useQuery(recurrenceQueries.setup(projectId));
+  const start = useGraphqlMutation(StartRecurrenceAnalysisDocument, { invalidates: [recurrenceQueries.all(projectId)] });
+  const [chosenId, setChosenId] = useState<string | null>(null);
+  const [compareId, setCompareId] = useState<string | null>(null);
+  const [comparing, setComparing] = useState(false);
+
+  if (setupQuery.isPending) return <LoadingState />;
+  if (setupQuery.isError) return <NonIdealState icon={IconNames.ERROR} title="The project could not be loaded" description={setupQuery.error.message} />;
+  const project = setupQuery.data;
+  const canRun = roleAllows(project.myRole, 'recurrence.run');
+  const analyses = [...project.recurrenceAnalyses].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
+  const analysisId = chosenId ?? analyses[0]?.id ?? null;
+  const secondId = comparing ? (compareId ?? analyses.find((entry) => entry.id !== analysisId)?.id ?? null) : null;
+
+  const handleStart = (input: RecurrenceSettingsInput) =>
+    start.mutate({ input }, { onSuccess: ({ startRecurrenceAnalysis }) => setChosenId(startRecurrenceAnalysis.id) });
+  const handleChoose = (event: ChangeEvent<HTMLSelectElement>) => setChosenId(event.target.value);
+  const handleCompare = (event: ChangeEvent<HTMLSelectElement>) => setCompareId(event.target.value);
+  const handleComparing = () => setComparing((previous) => !previous);
+  const optionLabel = (entry: (typeof analyses)[number]) =>
+    `${new Date(entry.createdAt).toLocaleString()} · ${analysisLabel(entry)} · from ${entry.forecastStartYear} · ${entry.status.toLowerCase()}`;
+
+  return (
+    <div className="sc-recurrence">
+      <header className="sc-page-header">
+        <h2>Recurrence · {project.name}</h2>
+      </header>
+      {canRun && (
+        <section className="sc-panel">
+          <h3>New analysis</h3>
+          <RecurrenceSetupForm project={project} starting={start.isPending} error={formErrorOf(start.error, [])} onStart={handleStart} />
+        </section>
+      )}
+      {analyses.length === 0 || analysisId === null ? (
+        <NonIdealState
+          icon={IconNames.TIMELINE_LINE_CHART}
+          title="No recurrence analysis yet"
+          description={canRun ? 'Start one above.' : 'A hazard analyst or admin can start an analysis.'}
+        />
+      ) : (
+        <>
+          <div className="sc-ladder-toolbar">
+            <HTMLSelect value={analysisId} onChange={handleChoose} aria-label="Analysis">
+              {analyses.map((entry) => (
+                <option key={entry.id} value={entry.id}>
+                  {optionLabel(entry)}
+                </option>
+              ))}
+            </HTMLSelect>
+            <Switch checked={comparing} onChange={handleComparing} label="Compare with" disabled={analyses.length < 2} inline />
+            {comparing && (
+              <HTMLSelect value={secondId ?? ''} onChange={handleCompare} aria-label="Second analysis">
+                {analyses.map((entry) => (
+                  <option key={entry.id} value={entry.id}>
+                    {optionLabel(entry)}
+                  </option>
+                ))}
+              </HTMLSelect>
+            )}
+          </div>
+          <div className={secondId ? 'sc-recurrence-compare' : undefined}>
+            <AnalysisPanel projectId={projectId} analysisId={analysisId} canRun={canRun} />
+            {secondId && <AnalysisPanel projectId={projectId} analysisId={secondId} canRun={canRun} />}
+          </div>
+        </>
+      )}
+    </div>
+  );
+}
