@@ -1,11 +1,15 @@
-import { Injectable, Logger } from '@nestjs/common';
+import { Inject, Injectable, Logger, Optional } from '@nestjs/common';
 import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
 import { MAX_ATTEMPTS } from '../age-models/age-model.job';
+import { APP_CONFIG, AppConfig } from '../config/config';
 import { RECURRENCE_MAX_ATTEMPTS } from '../recurrence/recurrence.job';
 import { RecurrenceRepository } from '../recurrence/recurrence.repository';
 import { JobQueueService, QueueName, QUEUES } from './job-queue.service';
 
-/** A running job writes progress at least every second; silence this long means its worker is gone. */
+/**
+ * A running job writes progress at least every second; silence this long means its worker is gone.
+ * The default of `JOB_HEARTBEAT_TIMEOUT_MS`.
+ */
 export const HEARTBEAT_TIMEOUT_MS = 20_000;
 
 /** What the reaper needs of a kind of job row (age model runs, recurrence analyses). */
@@ -27,12 +31,15 @@ interface ReapableJobs {
 export class JobReaper {
   private readonly logger = new Logger(JobReaper.name);
   private readonly kinds: readonly ReapableJobs[];
+  private readonly heartbeatTimeoutMs: number;
 
   constructor(
     runs: AgeModelRunsRepository,
     analyses: RecurrenceRepository,
     private readonly jobs: JobQueueService,
+    @Optional() @Inject(APP_CONFIG) config?: AppConfig,
   ) {
+    this.heartbeatTimeoutMs = config?.jobHeartbeatTimeoutMs ?? HEARTBEAT_TIMEOUT_MS;
     const kind = (label: string, queue: QueueName, maxAttempts: number, rows: Omit<ReapableJobs, 'label' | 'queue' | 'maxAttempts'>): ReapableJobs => ({
       label,
       queue,
@@ -48,7 +55,7 @@ export class JobReaper {
   }
 
   async reapOnce(now = new Date()): Promise<number> {
-    const heartbeatBefore = new Date(now.getTime() - HEARTBEAT_TIMEOUT_MS);
+    const heartbeatBefore = new Date(now.getTime() - this.heartbeatTimeoutMs);
     let reaped = 0;
     for (const kind of this.kinds) {
       const abandoned = await kind.listAbandoned(heartbeatBefore);
