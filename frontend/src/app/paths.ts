@@ -1,8 +1,7 @@
 /**
  * Every route pattern of the app and a builder for its links; router.tsx mounts the patterns
- * and everything else links through the builders. Planned next, each under its feature module:
- * `/projects/:projectId/ladder` (event ladder), `/projects/:projectId/recurrence`,
- * `/projects/:projectId/admin` and `/projects/:projectId/sites/:siteId/age-model`.
+ * and everything else links through the builders. Planned next, under its feature module:
+ * `/projects/:projectId/admin`.
  */
 export const routePatterns = {
   root: '/',
@@ -10,6 +9,9 @@ export const routePatterns = {
   projects: '/projects',
   project: '/projects/:projectId',
   site: '/projects/:projectId/sites/:siteId',
+  ageModel: '/projects/:projectId/sites/:siteId/age-model',
+  ladder: '/projects/:projectId/ladder',
+  recurrence: '/projects/:projectId/recurrence',
   calibrate: '/calibrate',
 } as const;
 
@@ -23,6 +25,9 @@ export const paths = {
   project: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
   site: (projectId: string, siteId: string, tab?: SiteTab) =>
     `/projects/${encodeURIComponent(projectId)}/sites/${encodeURIComponent(siteId)}${tab && tab !== 'column' ? `?tab=${tab}` : ''}`,
+  ageModel: (projectId: string, siteId: string) => `/projects/${encodeURIComponent(projectId)}/sites/${encodeURIComponent(siteId)}/age-model`,
+  ladder: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/ladder`,
+  recurrence: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/recurrence`,
   calibrate: () => routePatterns.calibrate,
 };
 

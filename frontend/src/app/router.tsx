@@ -3,17 +3,23 @@ import { createBrowserRouter, redirect, type RouteObject } from 'react-router-do
 import { queryClient } from '@/app/queryClient';
 import { routePatterns } from '@/app/paths';
 import { sessionStore } from '@/modules/auth/utils/sessionStore';
+import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
 import { calibrationQueries } from '@/modules/calibration/hooks/calibrationQueries';
+import { ladderQueries } from '@/modules/ladder/hooks/ladderQueries';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
+import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
 import { AppShell } from '@/modules/shell/components/AppShell';
 import { siteQueries } from '@/modules/sites/hooks/siteQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
+import { AgeModelPage } from '@/pages/age-model/AgeModelPage';
 import { SignInPage } from '@/pages/auth/SignInPage';
 import { CalibrationPage } from '@/pages/calibration/CalibrationPage';
 import { NotFoundPage } from '@/pages/errors/NotFoundPage';
 import { RouteErrorPage } from '@/pages/errors/RouteErrorPage';
+import { LadderPage } from '@/pages/ladder/LadderPage';
 import { ProjectListPage } from '@/pages/projects/ProjectListPage';
 import { ProjectOverviewPage } from '@/pages/projects/ProjectOverviewPage';
+import { RecurrencePage } from '@/pages/recurrence/RecurrencePage';
 import { SitePage } from '@/pages/sites/SitePage';
 
 /**
@@ -51,6 +57,24 @@ const routes: RouteObject[] = [
         element: <SitePage />,
         errorElement,
         loader: ({ params }) => prefetch(siteQueries.column(params.projectId ?? '', params.siteId ?? '')),
+      },
+      {
+        path: routePatterns.ageModel,
+        element: <AgeModelPage />,
+        errorElement,
+        loader: ({ params }) => prefetch(ageModelQueries.site(params.projectId ?? '', params.siteId ?? '')),
+      },
+      {
+        path: routePatterns.ladder,
+        element: <LadderPage />,
+        errorElement,
+        loader: ({ params }) => prefetch(ladderQueries.ladder(params.projectId ?? '')),
+      },
+      {
+        path: routePatterns.recurrence,
+        element: <RecurrencePage />,
+        errorElement,
+        loader: ({ params }) => prefetch(recurrenceQueries.setup(params.projectId ?? '')),
       },
       { path: routePatterns.calibrate, element: <CalibrationPage />, errorElement, loader: () => prefetch(calibrationQueries.curves()) },
       { path: '*', element: <NotFoundPage />, errorElement },

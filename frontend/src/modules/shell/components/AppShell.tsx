@@ -52,6 +52,8 @@ export function AppShell() {
             </NavbarHeading>
             <NavbarDivider />
             <ProjectSwitcher currentProjectId={projectId} />
+            {projectId && <NavbarLink to={paths.ladder(projectId)} icon={IconNames.TIMELINE_EVENTS} text="Ladder" />}
+            {projectId && <NavbarLink to={paths.recurrence(projectId)} icon={IconNames.TIMELINE_LINE_CHART} text="Recurrence" />}
             <NavbarLink to={paths.calibrate()} icon={IconNames.TIMELINE_AREA_CHART} text="Calibrate" />
           </NavbarGroup>
           <NavbarGroup align={Alignment.END}>

@@ -1,6 +1,8 @@
-import { Button, Classes, H2, Tag } from '@blueprintjs/core';
+import { Button, Classes, H2, Icon, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/app/paths';
 import { SITE_KIND_LABELS } from '@/modules/projects/utils/siteForm';
 import type { SiteDetail } from '@/modules/sites/utils/siteTypes';
 
@@ -32,6 +34,10 @@ export function SiteHeader({ site, canEdit, onEdit }: SiteHeaderProps) {
             {SITE_KIND_LABELS[site.kind]}
           </Tag>
           {canEdit && <Button icon={IconNames.EDIT} variant="minimal" text="Edit site" onClick={onEdit} />}
+          <Link to={paths.ageModel(site.project.id, site.id)} className={`${Classes.BUTTON} ${Classes.MINIMAL}`}>
+            <Icon icon={IconNames.TIMELINE_EVENTS} />
+            <span className={Classes.BUTTON_TEXT}>Age model</span>
+          </Link>
         </div>
         <div className="sc-facts">
           <Fact label="Segment">{site.segment?.name ?? '–'}</Fact>
