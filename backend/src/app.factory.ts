@@ -38,15 +38,14 @@ export async function createApp(config: AppConfig): Promise<NestExpressApplicati
     }),
   );
 
+  // The built UI is looked up per request, so a rebuild of frontend/dist needs no server restart.
   const frontendDist = config.frontendDist ?? join(repositoryRoot(), 'frontend', 'dist');
-  if (existsSync(join(frontendDist, 'index.html'))) {
-    app.useStaticAssets(frontendDist, { index: false, maxAge: '1h' });
-    const indexHtml = join(frontendDist, 'index.html');
-    app.use((req: { method: string; path: string }, res: { sendFile: (p: string) => void }, next: () => void) => {
-      if (req.method !== 'GET' || API_PREFIXES.some((p) => req.path.startsWith(p))) return next();
-      res.sendFile(indexHtml);
-    });
-  }
+  const indexHtml = join(frontendDist, 'index.html');
+  app.useStaticAssets(frontendDist, { index: false, maxAge: '1h' });
+  app.use((req: { method: string; path: string }, res: { sendFile: (p: string) => void }, next: () => void) => {
+    if (req.method !== 'GET' || API_PREFIXES.some((p) => req.path.startsWith(p)) || !existsSync(indexHtml)) return next();
+    res.sendFile(indexHtml);
+  });
 
   if (config.seedDemo) await seedDemoIfEmpty(app);
   return app;
