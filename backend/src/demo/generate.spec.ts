@@ -1,12 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { jStat } from '../chronology/common/jstat';
 import { builtInCurve } from '../reference-data/reference-data';
 import { DEMO_SEED, DemoCurves, DemoScenario, DemoSite, DemoUnit, depositAgeAt, generateDemoScenario } from './generate';
 import { VELMORA_GEOMETRY } from './truth';
 
-// jstat ships no type declarations; type the two functions used here at the boundary.
-const { jStat } = require('jstat') as {
-  jStat: { mean(values: number[]): number; stdev(values: number[], sample?: boolean): number };
-};
 
 let curves: DemoCurves;
 let scenario: DemoScenario;

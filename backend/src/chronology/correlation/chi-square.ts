@@ -3,8 +3,7 @@
  * of one event, applied to the Gaussian summaries (mean and SD) of the members' densities.
  */
 
-// jstat ships no type declarations; this is the one function used here, typed at the boundary.
-const { jStat } = require('jstat') as { jStat: { chisquare: { inv(p: number, df: number): number } } };
+import { jStat } from '../common/jstat';
 
 /** An age as a mean and a 1-sigma error, in the same unit for all members (here cal BP). */
 export interface GaussianAge {

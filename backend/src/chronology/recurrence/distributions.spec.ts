@@ -11,7 +11,7 @@ import {
   weibullDistribution,
   weibullShapeFromAperiodicity,
 } from './distributions';
-import { jStat } from './jstat';
+import { jStat } from '../common/jstat';
 
 /** Composite Simpson's rule with `steps` (even) panels. */
 function simpson(f: (x: number) => number, from: number, to: number, steps = 20_000): number {

@@ -9,7 +9,7 @@
  * is computed as -expm1(ln S(T + dT) - ln S(T)) and stays accurate when T is far in the tail and
  * both S values underflow.
  */
-import { jStat } from './jstat';
+import { jStat } from '../common/jstat';
 import {
   LOG_SQRT_2PI,
   logStandardNormalPdf,

@@ -3,7 +3,7 @@
  * renewal-model survival functions stay finite and accurate far into the tail, where
  * 1 - Phi(z) underflows or loses every digit to cancellation.
  */
-import { jStat } from './jstat';
+import { jStat } from '../common/jstat';
 
 /** ln sqrt(2 pi). */
 export const LOG_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);

@@ -1,5 +1,5 @@
 /**
- * The few jstat functions the recurrence module uses, typed at the boundary: jstat ships no type
+ * The jstat functions Stratochron uses, typed at the boundary: jstat ships no type
  * declarations and there is no @types package. Its CommonJS export carries itself as `.jStat`,
  * which works both under tsc's CommonJS output and vitest's SWC transform.
  */
@@ -11,7 +11,6 @@ interface JStatSubset {
    * Weibull conversions use. jstat's gammafn is worse there (2.5e-9 at x = 1.5).
    */
   gammaln(x: number): number;
-  normal: { cdf(x: number, mean: number, sd: number): number };
   lognormal: {
     pdf(x: number, logMean: number, logSd: number): number;
     cdf(x: number, logMean: number, logSd: number): number;
@@ -20,6 +19,13 @@ interface JStatSubset {
     pdf(x: number, scale: number, shape: number): number;
     cdf(x: number, scale: number, shape: number): number;
   };
+  /** Inverse normal CDF (split R-hat rank normalisation). */
+  normal: { cdf(x: number, mean: number, sd: number): number; inv(p: number, mean: number, sd: number): number };
+  /** Chi-square inverse CDF (Ward & Wilson critical values). */
+  chisquare: { inv(p: number, df: number): number };
+  /** Sample mean and standard deviation (reference values in tests). */
+  mean(values: number[]): number;
+  stdev(values: number[], sample?: boolean): number;
   exponential: {
     pdf(x: number, rate: number): number;
     cdf(x: number, rate: number): number;
