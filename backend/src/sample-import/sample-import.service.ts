@@ -69,14 +69,18 @@ export class SampleImportService {
     if (!input.commit || check.problems.length > 0 || check.accepted.length === 0) return result;
 
     // A lab code taken between the check and this write hits the unique index and aborts it whole.
+    const values = check.accepted.map((row) => sampleValues(site, row));
     await withConstraintErrors(() =>
       this.database.transaction(async (tx) => {
-        const written = await this.samples.insertMany(check.accepted.map((row) => sampleValues(site, row)), tx);
+        const written = await this.samples.insertManyReturningIds(values, tx);
+        const valuesByLabCode = new Map(values.map((value) => [value.labCode, value]));
         await this.audit.recordMany(
           tx,
-          written.map((sample) => ({
-            actor: user, projectId: site.projectId, action: 'import', objectType: 'sample', objectId: sample.id, after: sample,
-          })),
+          written.map(({ id, labCode }) => {
+            // The audit image leaves out the cached calibration, as AuditService does for single writes.
+            const { calibration: _calibration, ...entered } = valuesByLabCode.get(labCode) as SampleInsert;
+            return { actor: user, projectId: site.projectId, action: 'import', objectType: 'sample', objectId: id, after: { id, ...entered } };
+          }),
         );
       }),
     );
