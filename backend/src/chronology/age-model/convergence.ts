@@ -8,8 +8,7 @@
  * sequence truncation.
  */
 
-// jstat ships no type declarations; this is the one function used here, typed at the boundary.
-const { jStat } = require('jstat') as { jStat: { normal: { inv(p: number, mean: number, sd: number): number } } };
+import { jStat } from '../common/jstat';
 
 export interface ChainDiagnostics {
   /** max(rank-normalised split R-hat, folded rank-normalised split R-hat). */
