@@ -1,4 +1,4 @@
-import { Callout, HTMLTable, Intent, NonIdealState, Tag } from '@blueprintjs/core';
+import { Callout, H2, HTMLTable, Intent, NonIdealState, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState } from 'react';
@@ -90,10 +90,11 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
   return (
     <div className="sc-age-model">
       <header className="sc-page-header">
-        <h2>
-          Age model · {loadedSite.name} <Tag minimal>{loadedSite.kind.toLowerCase()}</Tag>
-        </h2>
-        <Link to={paths.site(projectId, siteId)}>Back to the column</Link>
+        <div className="sc-title-row">
+          <H2 className="sc-page-title">Age model · {loadedSite.name}</H2>
+          <Tag minimal>{loadedSite.kind.toLowerCase()}</Tag>
+          <Link to={paths.site(projectId, siteId)}>Back to the column</Link>
+        </div>
       </header>
 
       {mayRun && (

@@ -1,4 +1,4 @@
-import { Button, Callout, HTMLSelect, Intent, NonIdealState, SegmentedControl, Switch, Tab, Tabs, Tag } from '@blueprintjs/core';
+import { Button, Callout, H2, HTMLSelect, Intent, NonIdealState, SegmentedControl, Switch, Tab, Tabs, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState, type ChangeEvent } from 'react';
@@ -134,7 +134,7 @@ export function LadderView({ projectId }: LadderViewProps) {
   return (
     <div className="sc-ladder">
       <header className="sc-page-header">
-        <h2>Event ladder · {project.name}</h2>
+        <H2 className="sc-page-title">Event ladder · {project.name}</H2>
       </header>
       <div className="sc-ladder-toolbar">
         <SegmentedControl size="small" options={VIEW_OPTIONS} value={mode} onValueChange={handleModeChange} aria-label="View" />

@@ -1,4 +1,4 @@
-import { Callout, HTMLSelect, Intent, NonIdealState, Switch } from '@blueprintjs/core';
+import { Callout, H2, HTMLSelect, Intent, NonIdealState, Switch } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery } from '@tanstack/react-query';
 import { useState, type ChangeEvent } from 'react';
@@ -62,7 +62,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
   return (
     <div className="sc-recurrence">
       <header className="sc-page-header">
-        <h2>Recurrence · {project.name}</h2>
+        <H2 className="sc-page-title">Recurrence · {project.name}</H2>
       </header>
       {canRun && (
         <section className="sc-panel">
