@@ -1,26 +1,30 @@
 /**
  * Every route pattern of the app and a builder for its links; router.tsx mounts the patterns
- * and everything else links through the builders. Planned next, under its feature module:
- * `/projects/:projectId/admin`.
+ * and everything else links through the builders.
  */
 export const routePatterns = {
   root: '/',
   signIn: '/signin',
+  acceptInvitation: '/accept-invitation',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
   projects: '/projects',
   project: '/projects/:projectId',
   site: '/projects/:projectId/sites/:siteId',
   ageModel: '/projects/:projectId/sites/:siteId/age-model',
   ladder: '/projects/:projectId/ladder',
   recurrence: '/projects/:projectId/recurrence',
+  projectAdmin: '/projects/:projectId/admin',
   calibrate: '/calibrate',
 } as const;
 
 /** Tabs of the site page, kept in the `tab` search parameter so each can be linked to. */
-export type SiteTab = 'column' | 'samples' | 'calibration';
+export type SiteTab = 'column' | 'samples' | 'calibration' | 'files';
 
 export const paths = {
   signIn: ({ next }: { next?: string } = {}) =>
     next && next !== routePatterns.signIn ? `${routePatterns.signIn}?next=${encodeURIComponent(next)}` : routePatterns.signIn,
+  forgotPassword: () => routePatterns.forgotPassword,
   projects: () => routePatterns.projects,
   project: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
   site: (projectId: string, siteId: string, tab?: SiteTab) =>
@@ -28,6 +32,7 @@ export const paths = {
   ageModel: (projectId: string, siteId: string) => `/projects/${encodeURIComponent(projectId)}/sites/${encodeURIComponent(siteId)}/age-model`,
   ladder: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/ladder`,
   recurrence: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/recurrence`,
+  projectAdmin: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/admin`,
   calibrate: () => routePatterns.calibrate,
 };
 

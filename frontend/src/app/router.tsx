@@ -21,6 +21,11 @@ import { ProjectListPage } from '@/pages/projects/ProjectListPage';
 import { ProjectOverviewPage } from '@/pages/projects/ProjectOverviewPage';
 import { RecurrencePage } from '@/pages/recurrence/RecurrencePage';
 import { SitePage } from '@/pages/sites/SitePage';
+import { ProjectAdminPage } from '@/pages/admin/ProjectAdminPage';
+import { AcceptInvitationPage } from '@/pages/team/AcceptInvitationPage';
+import { ForgotPasswordPage } from '@/pages/team/ForgotPasswordPage';
+import { ResetPasswordPage } from '@/pages/team/ResetPasswordPage';
+import { teamQueries } from '@/modules/team/hooks/teamQueries';
 
 /**
  * Start a page's main query while the route changes, so its data is on the way before the page
@@ -39,6 +44,9 @@ const errorElement = <RouteErrorPage />;
  */
 const routes: RouteObject[] = [
   { path: routePatterns.signIn, element: <SignInPage />, errorElement },
+  { path: routePatterns.acceptInvitation, element: <AcceptInvitationPage />, errorElement },
+  { path: routePatterns.forgotPassword, element: <ForgotPasswordPage />, errorElement },
+  { path: routePatterns.resetPassword, element: <ResetPasswordPage />, errorElement },
   {
     element: <AppShell />,
     errorElement,
@@ -75,6 +83,12 @@ const routes: RouteObject[] = [
         element: <RecurrencePage />,
         errorElement,
         loader: ({ params }) => prefetch(recurrenceQueries.setup(params.projectId ?? '')),
+      },
+      {
+        path: routePatterns.projectAdmin,
+        element: <ProjectAdminPage />,
+        errorElement,
+        loader: ({ params }) => prefetch(teamQueries.team(params.projectId ?? '')),
       },
       { path: routePatterns.calibrate, element: <CalibrationPage />, errorElement, loader: () => prefetch(calibrationQueries.curves()) },
       { path: '*', element: <NotFoundPage />, errorElement },

@@ -19,6 +19,9 @@ type Documents = {
     "\n  query AgeModelSite($id: ID!) {\n    site(id: $id) {\n      id\n      name\n      kind\n      project {\n        id\n        name\n        myRole\n      }\n      units {\n        id\n        position\n        name\n      }\n      eventHorizons {\n        id\n        name\n        quality\n        unitBelow {\n          id\n          position\n        }\n        unitAbove {\n          id\n          position\n        }\n      }\n      samples {\n        id\n        labCode\n        method\n        material\n        ageRelation\n        excluded\n        unit {\n          id\n          position\n        }\n        depthM\n        calibrationError\n        calibration {\n          medianCalBp\n          density {\n            calBp\n            probability\n          }\n        }\n      }\n      latestAgeModelRun {\n        id\n        status\n        stale\n      }\n    }\n  }\n": typeof types.AgeModelSiteDocument,
     "\n  mutation StartAgeModelRun($input: StartAgeModelRunInput!) {\n    startAgeModelRun(input: $input) {\n      id\n      status\n    }\n  }\n": typeof types.StartAgeModelRunDocument,
     "\n  mutation CancelAgeModelRun($id: ID!) {\n    cancelAgeModelRun(id: $id) {\n      id\n      status\n    }\n  }\n": typeof types.CancelAgeModelRunDocument,
+    "\n  query SiteAttachments($id: ID!) {\n    site(id: $id) {\n      id\n      project {\n        id\n        myRole\n      }\n      attachments {\n        id\n        fileName\n        contentType\n        sizeBytes\n        createdAt\n        url\n        thumbnailUrl\n      }\n      samples {\n        id\n        labCode\n        attachments {\n          id\n          fileName\n          contentType\n          sizeBytes\n          createdAt\n          url\n          thumbnailUrl\n        }\n      }\n    }\n  }\n": typeof types.SiteAttachmentsDocument,
+    "\n  mutation DeleteAttachment($id: ID!) {\n    deleteAttachment(id: $id)\n  }\n": typeof types.DeleteAttachmentDocument,
+    "\n  query AuditTrail($input: AuditTrailInput!) {\n    auditTrail(input: $input) {\n      edges {\n        cursor\n        node {\n          id\n          at\n          actor {\n            id\n            email\n            displayName\n          }\n          action\n          objectType\n          objectId\n          before\n          after\n        }\n      }\n      pageInfo {\n        endCursor\n        hasNextPage\n      }\n    }\n  }\n": typeof types.AuditTrailDocument,
     "\n  mutation SignIn($email: String!, $password: String!) {\n    signIn(email: $email, password: $password) {\n      token\n      user {\n        id\n        email\n        displayName\n      }\n    }\n  }\n": typeof types.SignInDocument,
     "\n  query Me {\n    me {\n      id\n      email\n      displayName\n    }\n  }\n": typeof types.MeDocument,
     "\n  query Calibrate($input: CalibrateInput!) {\n    calibrate(input: $input) {\n      curve\n      medianCalBp\n      meanCalBp\n      sdYears\n      hpd68 {\n        olderCalBp\n        youngerCalBp\n        probability\n      }\n      hpd95 {\n        olderCalBp\n        youngerCalBp\n        probability\n      }\n      density {\n        calBp\n        probability\n      }\n      warnings\n    }\n  }\n": typeof types.CalibrateDocument,
@@ -44,6 +47,10 @@ type Documents = {
     "\n  query RecurrenceAnalysis($id: ID!) {\n    recurrenceAnalysis(id: $id) {\n      id\n      status\n      progress\n      message\n      seed\n      forecastStartYear\n      windowsYears\n      draws\n      createdAt\n      finishedAt\n      hypothesisVersion\n      segment {\n        id\n        name\n      }\n      site {\n        id\n        name\n      }\n      hypothesis {\n        id\n        name\n      }\n      eventCount\n      lastEventMedianCalBp\n      openInterval {\n        median\n        low95\n        high95\n      }\n      intervals {\n        index\n        medianYears\n        low95\n        high95\n      }\n      meanRecurrence {\n        median\n        low95\n        high95\n      }\n      medianRecurrence {\n        median\n        low95\n        high95\n      }\n      sdRecurrence {\n        median\n        low95\n        high95\n      }\n      aperiodicity {\n        median\n        low95\n        high95\n      }\n      poisson {\n        windowYears\n        median\n        low95\n        high95\n      }\n      models {\n        model\n        aic\n        deltaAic\n        akaikeWeight\n        meanRecurrenceYears\n        aperiodicity\n        logLikelihood\n        probabilities {\n          windowYears\n          median\n          low95\n          high95\n        }\n      }\n      modelComparisonNote\n      curves {\n        model\n        density {\n          years\n          value\n        }\n        hazard {\n          years\n          value\n        }\n        survival {\n          years\n          value\n        }\n      }\n      histogram {\n        fromYears\n        toYears\n        count\n      }\n      caution\n    }\n  }\n": typeof types.RecurrenceAnalysisDocument,
     "\n  mutation StartRecurrenceAnalysis($input: StartRecurrenceAnalysisInput!) {\n    startRecurrenceAnalysis(input: $input) {\n      id\n      status\n    }\n  }\n": typeof types.StartRecurrenceAnalysisDocument,
     "\n  mutation CancelRecurrenceAnalysis($id: ID!) {\n    cancelRecurrenceAnalysis(id: $id) {\n      id\n      status\n    }\n  }\n": typeof types.CancelRecurrenceAnalysisDocument,
+    "\n  query ProjectReleases($id: ID!) {\n    project(id: $id) {\n      id\n      myRole\n      releases {\n        id\n        number\n        note\n        createdAt\n        createdBy {\n          id\n          displayName\n          email\n        }\n      }\n    }\n  }\n": typeof types.ProjectReleasesDocument,
+    "\n  query Release($id: ID!) {\n    release(id: $id) {\n      id\n      number\n      note\n      createdAt\n      createdBy {\n        id\n        displayName\n      }\n      segments {\n        id\n        name\n        startKm\n        endKm\n      }\n      sites {\n        id\n        name\n        kind\n        latitude\n        longitude\n        alongStrikeKm\n        segment {\n          id\n          name\n        }\n      }\n    }\n  }\n": typeof types.ReleaseDocument,
+    "\n  query ReleaseDiff($fromId: ID!, $toId: ID!) {\n    releaseDiff(fromId: $fromId, toId: $toId) {\n      from {\n        id\n        number\n      }\n      to {\n        id\n        number\n      }\n      changes {\n        objectType\n        objectId\n        label\n        change\n      }\n    }\n  }\n": typeof types.ReleaseDiffDocument,
+    "\n  mutation CreateRelease($input: CreateReleaseInput!) {\n    createRelease(input: $input) {\n      id\n      number\n    }\n  }\n": typeof types.CreateReleaseDocument,
     "\n  mutation CreateSample($input: CreateSampleInput!) {\n    createSample(input: $input) {\n      id\n    }\n  }\n": typeof types.CreateSampleDocument,
     "\n  mutation UpdateSample($id: ID!, $version: Int!, $input: UpdateSampleInput!) {\n    updateSample(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": typeof types.UpdateSampleDocument,
     "\n  mutation DeleteSample($id: ID!) {\n    deleteSample(id: $id)\n  }\n": typeof types.DeleteSampleDocument,
@@ -54,12 +61,22 @@ type Documents = {
     "\n  mutation CreateEventHorizon($input: CreateEventHorizonInput!) {\n    createEventHorizon(input: $input) {\n      id\n    }\n  }\n": typeof types.CreateEventHorizonDocument,
     "\n  mutation UpdateEventHorizon($id: ID!, $version: Int!, $input: UpdateEventHorizonInput!) {\n    updateEventHorizon(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": typeof types.UpdateEventHorizonDocument,
     "\n  mutation DeleteEventHorizon($id: ID!) {\n    deleteEventHorizon(id: $id)\n  }\n": typeof types.DeleteEventHorizonDocument,
+    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n": typeof types.AcceptInvitationDocument,
+    "\n  mutation RequestPasswordReset($email: String!) {\n    requestPasswordReset(email: $email)\n  }\n": typeof types.RequestPasswordResetDocument,
+    "\n  mutation ResetPassword($input: ResetPasswordInput!) {\n    resetPassword(input: $input)\n  }\n": typeof types.ResetPasswordDocument,
+    "\n  query ProjectTeam($id: ID!) {\n    project(id: $id) {\n      id\n      name\n      myRole\n      members {\n        id\n        role\n        user {\n          id\n          email\n          displayName\n        }\n      }\n      invitations {\n        id\n        email\n        role\n        expiresAt\n        acceptedAt\n      }\n    }\n  }\n": typeof types.ProjectTeamDocument,
+    "\n  mutation InviteMember($input: InviteMemberInput!) {\n    inviteMember(input: $input) {\n      id\n      email\n      role\n      expiresAt\n    }\n  }\n": typeof types.InviteMemberDocument,
+    "\n  mutation SetMemberRole($input: SetMemberRoleInput!) {\n    setMemberRole(input: $input) {\n      id\n      role\n    }\n  }\n": typeof types.SetMemberRoleDocument,
+    "\n  mutation RemoveMember($projectId: ID!, $userId: ID!) {\n    removeMember(projectId: $projectId, userId: $userId)\n  }\n": typeof types.RemoveMemberDocument,
 };
 const documents: Documents = {
     "\n  query AgeModelRun($id: ID!) {\n    ageModelRun(id: $id) {\n      id\n      status\n      progress\n      message\n      seed\n      settings\n      stale\n      createdAt\n      finishedAt\n      diagnostics {\n        converged\n        maxRhat\n        minEss\n        message\n      }\n      events {\n        medianCalBp\n        meanCalBp\n        rhat\n        ess\n        eventHorizon {\n          id\n          name\n        }\n        hpd68 {\n          olderCalBp\n          youngerCalBp\n          probability\n        }\n        hpd95 {\n          olderCalBp\n          youngerCalBp\n          probability\n        }\n        density {\n          calBp\n          probability\n        }\n      }\n      samples {\n        outlierProbability\n        medianCalBp\n        sample {\n          id\n          labCode\n        }\n        hpd95 {\n          olderCalBp\n          youngerCalBp\n          probability\n        }\n      }\n    }\n  }\n": types.AgeModelRunDocument,
     "\n  query AgeModelSite($id: ID!) {\n    site(id: $id) {\n      id\n      name\n      kind\n      project {\n        id\n        name\n        myRole\n      }\n      units {\n        id\n        position\n        name\n      }\n      eventHorizons {\n        id\n        name\n        quality\n        unitBelow {\n          id\n          position\n        }\n        unitAbove {\n          id\n          position\n        }\n      }\n      samples {\n        id\n        labCode\n        method\n        material\n        ageRelation\n        excluded\n        unit {\n          id\n          position\n        }\n        depthM\n        calibrationError\n        calibration {\n          medianCalBp\n          density {\n            calBp\n            probability\n          }\n        }\n      }\n      latestAgeModelRun {\n        id\n        status\n        stale\n      }\n    }\n  }\n": types.AgeModelSiteDocument,
     "\n  mutation StartAgeModelRun($input: StartAgeModelRunInput!) {\n    startAgeModelRun(input: $input) {\n      id\n      status\n    }\n  }\n": types.StartAgeModelRunDocument,
     "\n  mutation CancelAgeModelRun($id: ID!) {\n    cancelAgeModelRun(id: $id) {\n      id\n      status\n    }\n  }\n": types.CancelAgeModelRunDocument,
+    "\n  query SiteAttachments($id: ID!) {\n    site(id: $id) {\n      id\n      project {\n        id\n        myRole\n      }\n      attachments {\n        id\n        fileName\n        contentType\n        sizeBytes\n        createdAt\n        url\n        thumbnailUrl\n      }\n      samples {\n        id\n        labCode\n        attachments {\n          id\n          fileName\n          contentType\n          sizeBytes\n          createdAt\n          url\n          thumbnailUrl\n        }\n      }\n    }\n  }\n": types.SiteAttachmentsDocument,
+    "\n  mutation DeleteAttachment($id: ID!) {\n    deleteAttachment(id: $id)\n  }\n": types.DeleteAttachmentDocument,
+    "\n  query AuditTrail($input: AuditTrailInput!) {\n    auditTrail(input: $input) {\n      edges {\n        cursor\n        node {\n          id\n          at\n          actor {\n            id\n            email\n            displayName\n          }\n          action\n          objectType\n          objectId\n          before\n          after\n        }\n      }\n      pageInfo {\n        endCursor\n        hasNextPage\n      }\n    }\n  }\n": types.AuditTrailDocument,
     "\n  mutation SignIn($email: String!, $password: String!) {\n    signIn(email: $email, password: $password) {\n      token\n      user {\n        id\n        email\n        displayName\n      }\n    }\n  }\n": types.SignInDocument,
     "\n  query Me {\n    me {\n      id\n      email\n      displayName\n    }\n  }\n": types.MeDocument,
     "\n  query Calibrate($input: CalibrateInput!) {\n    calibrate(input: $input) {\n      curve\n      medianCalBp\n      meanCalBp\n      sdYears\n      hpd68 {\n        olderCalBp\n        youngerCalBp\n        probability\n      }\n      hpd95 {\n        olderCalBp\n        youngerCalBp\n        probability\n      }\n      density {\n        calBp\n        probability\n      }\n      warnings\n    }\n  }\n": types.CalibrateDocument,
@@ -85,6 +102,10 @@ const documents: Documents = {
     "\n  query RecurrenceAnalysis($id: ID!) {\n    recurrenceAnalysis(id: $id) {\n      id\n      status\n      progress\n      message\n      seed\n      forecastStartYear\n      windowsYears\n      draws\n      createdAt\n      finishedAt\n      hypothesisVersion\n      segment {\n        id\n        name\n      }\n      site {\n        id\n        name\n      }\n      hypothesis {\n        id\n        name\n      }\n      eventCount\n      lastEventMedianCalBp\n      openInterval {\n        median\n        low95\n        high95\n      }\n      intervals {\n        index\n        medianYears\n        low95\n        high95\n      }\n      meanRecurrence {\n        median\n        low95\n        high95\n      }\n      medianRecurrence {\n        median\n        low95\n        high95\n      }\n      sdRecurrence {\n        median\n        low95\n        high95\n      }\n      aperiodicity {\n        median\n        low95\n        high95\n      }\n      poisson {\n        windowYears\n        median\n        low95\n        high95\n      }\n      models {\n        model\n        aic\n        deltaAic\n        akaikeWeight\n        meanRecurrenceYears\n        aperiodicity\n        logLikelihood\n        probabilities {\n          windowYears\n          median\n          low95\n          high95\n        }\n      }\n      modelComparisonNote\n      curves {\n        model\n        density {\n          years\n          value\n        }\n        hazard {\n          years\n          value\n        }\n        survival {\n          years\n          value\n        }\n      }\n      histogram {\n        fromYears\n        toYears\n        count\n      }\n      caution\n    }\n  }\n": types.RecurrenceAnalysisDocument,
     "\n  mutation StartRecurrenceAnalysis($input: StartRecurrenceAnalysisInput!) {\n    startRecurrenceAnalysis(input: $input) {\n      id\n      status\n    }\n  }\n": types.StartRecurrenceAnalysisDocument,
     "\n  mutation CancelRecurrenceAnalysis($id: ID!) {\n    cancelRecurrenceAnalysis(id: $id) {\n      id\n      status\n    }\n  }\n": types.CancelRecurrenceAnalysisDocument,
+    "\n  query ProjectReleases($id: ID!) {\n    project(id: $id) {\n      id\n      myRole\n      releases {\n        id\n        number\n        note\n        createdAt\n        createdBy {\n          id\n          displayName\n          email\n        }\n      }\n    }\n  }\n": types.ProjectReleasesDocument,
+    "\n  query Release($id: ID!) {\n    release(id: $id) {\n      id\n      number\n      note\n      createdAt\n      createdBy {\n        id\n        displayName\n      }\n      segments {\n        id\n        name\n        startKm\n        endKm\n      }\n      sites {\n        id\n        name\n        kind\n        latitude\n        longitude\n        alongStrikeKm\n        segment {\n          id\n          name\n        }\n      }\n    }\n  }\n": types.ReleaseDocument,
+    "\n  query ReleaseDiff($fromId: ID!, $toId: ID!) {\n    releaseDiff(fromId: $fromId, toId: $toId) {\n      from {\n        id\n        number\n      }\n      to {\n        id\n        number\n      }\n      changes {\n        objectType\n        objectId\n        label\n        change\n      }\n    }\n  }\n": types.ReleaseDiffDocument,
+    "\n  mutation CreateRelease($input: CreateReleaseInput!) {\n    createRelease(input: $input) {\n      id\n      number\n    }\n  }\n": types.CreateReleaseDocument,
     "\n  mutation CreateSample($input: CreateSampleInput!) {\n    createSample(input: $input) {\n      id\n    }\n  }\n": types.CreateSampleDocument,
     "\n  mutation UpdateSample($id: ID!, $version: Int!, $input: UpdateSampleInput!) {\n    updateSample(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": types.UpdateSampleDocument,
     "\n  mutation DeleteSample($id: ID!) {\n    deleteSample(id: $id)\n  }\n": types.DeleteSampleDocument,
@@ -95,6 +116,13 @@ const documents: Documents = {
     "\n  mutation CreateEventHorizon($input: CreateEventHorizonInput!) {\n    createEventHorizon(input: $input) {\n      id\n    }\n  }\n": types.CreateEventHorizonDocument,
     "\n  mutation UpdateEventHorizon($id: ID!, $version: Int!, $input: UpdateEventHorizonInput!) {\n    updateEventHorizon(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": types.UpdateEventHorizonDocument,
     "\n  mutation DeleteEventHorizon($id: ID!) {\n    deleteEventHorizon(id: $id)\n  }\n": types.DeleteEventHorizonDocument,
+    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n": types.AcceptInvitationDocument,
+    "\n  mutation RequestPasswordReset($email: String!) {\n    requestPasswordReset(email: $email)\n  }\n": types.RequestPasswordResetDocument,
+    "\n  mutation ResetPassword($input: ResetPasswordInput!) {\n    resetPassword(input: $input)\n  }\n": types.ResetPasswordDocument,
+    "\n  query ProjectTeam($id: ID!) {\n    project(id: $id) {\n      id\n      name\n      myRole\n      members {\n        id\n        role\n        user {\n          id\n          email\n          displayName\n        }\n      }\n      invitations {\n        id\n        email\n        role\n        expiresAt\n        acceptedAt\n      }\n    }\n  }\n": types.ProjectTeamDocument,
+    "\n  mutation InviteMember($input: InviteMemberInput!) {\n    inviteMember(input: $input) {\n      id\n      email\n      role\n      expiresAt\n    }\n  }\n": types.InviteMemberDocument,
+    "\n  mutation SetMemberRole($input: SetMemberRoleInput!) {\n    setMemberRole(input: $input) {\n      id\n      role\n    }\n  }\n": types.SetMemberRoleDocument,
+    "\n  mutation RemoveMember($projectId: ID!, $userId: ID!) {\n    removeMember(projectId: $projectId, userId: $userId)\n  }\n": types.RemoveMemberDocument,
 };
 
 /**
@@ -113,6 +141,18 @@ export function graphql(source: "\n  mutation StartAgeModelRun($input: StartAgeM
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */
 export function graphql(source: "\n  mutation CancelAgeModelRun($id: ID!) {\n    cancelAgeModelRun(id: $id) {\n      id\n      status\n    }\n  }\n"): typeof import('./graphql').CancelAgeModelRunDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  query SiteAttachments($id: ID!) {\n    site(id: $id) {\n      id\n      project {\n        id\n        myRole\n      }\n      attachments {\n        id\n        fileName\n        contentType\n        sizeBytes\n        createdAt\n        url\n        thumbnailUrl\n      }\n      samples {\n        id\n        labCode\n        attachments {\n          id\n          fileName\n          contentType\n          sizeBytes\n          createdAt\n          url\n          thumbnailUrl\n        }\n      }\n    }\n  }\n"): typeof import('./graphql').SiteAttachmentsDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation DeleteAttachment($id: ID!) {\n    deleteAttachment(id: $id)\n  }\n"): typeof import('./graphql').DeleteAttachmentDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  query AuditTrail($input: AuditTrailInput!) {\n    auditTrail(input: $input) {\n      edges {\n        cursor\n        node {\n          id\n          at\n          actor {\n            id\n            email\n            displayName\n          }\n          action\n          objectType\n          objectId\n          before\n          after\n        }\n      }\n      pageInfo {\n        endCursor\n        hasNextPage\n      }\n    }\n  }\n"): typeof import('./graphql').AuditTrailDocument;
 /**
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */
@@ -216,6 +256,22 @@ export function graphql(source: "\n  mutation CancelRecurrenceAnalysis($id: ID!)
 /**
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */
+export function graphql(source: "\n  query ProjectReleases($id: ID!) {\n    project(id: $id) {\n      id\n      myRole\n      releases {\n        id\n        number\n        note\n        createdAt\n        createdBy {\n          id\n          displayName\n          email\n        }\n      }\n    }\n  }\n"): typeof import('./graphql').ProjectReleasesDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  query Release($id: ID!) {\n    release(id: $id) {\n      id\n      number\n      note\n      createdAt\n      createdBy {\n        id\n        displayName\n      }\n      segments {\n        id\n        name\n        startKm\n        endKm\n      }\n      sites {\n        id\n        name\n        kind\n        latitude\n        longitude\n        alongStrikeKm\n        segment {\n          id\n          name\n        }\n      }\n    }\n  }\n"): typeof import('./graphql').ReleaseDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  query ReleaseDiff($fromId: ID!, $toId: ID!) {\n    releaseDiff(fromId: $fromId, toId: $toId) {\n      from {\n        id\n        number\n      }\n      to {\n        id\n        number\n      }\n      changes {\n        objectType\n        objectId\n        label\n        change\n      }\n    }\n  }\n"): typeof import('./graphql').ReleaseDiffDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation CreateRelease($input: CreateReleaseInput!) {\n    createRelease(input: $input) {\n      id\n      number\n    }\n  }\n"): typeof import('./graphql').CreateReleaseDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
 export function graphql(source: "\n  mutation CreateSample($input: CreateSampleInput!) {\n    createSample(input: $input) {\n      id\n    }\n  }\n"): typeof import('./graphql').CreateSampleDocument;
 /**
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
@@ -253,6 +309,34 @@ export function graphql(source: "\n  mutation UpdateEventHorizon($id: ID!, $vers
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */
 export function graphql(source: "\n  mutation DeleteEventHorizon($id: ID!) {\n    deleteEventHorizon(id: $id)\n  }\n"): typeof import('./graphql').DeleteEventHorizonDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n"): typeof import('./graphql').AcceptInvitationDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation RequestPasswordReset($email: String!) {\n    requestPasswordReset(email: $email)\n  }\n"): typeof import('./graphql').RequestPasswordResetDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation ResetPassword($input: ResetPasswordInput!) {\n    resetPassword(input: $input)\n  }\n"): typeof import('./graphql').ResetPasswordDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  query ProjectTeam($id: ID!) {\n    project(id: $id) {\n      id\n      name\n      myRole\n      members {\n        id\n        role\n        user {\n          id\n          email\n          displayName\n        }\n      }\n      invitations {\n        id\n        email\n        role\n        expiresAt\n        acceptedAt\n      }\n    }\n  }\n"): typeof import('./graphql').ProjectTeamDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation InviteMember($input: InviteMemberInput!) {\n    inviteMember(input: $input) {\n      id\n      email\n      role\n      expiresAt\n    }\n  }\n"): typeof import('./graphql').InviteMemberDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation SetMemberRole($input: SetMemberRoleInput!) {\n    setMemberRole(input: $input) {\n      id\n      role\n    }\n  }\n"): typeof import('./graphql').SetMemberRoleDocument;
+/**
+ * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
+ */
+export function graphql(source: "\n  mutation RemoveMember($projectId: ID!, $userId: ID!) {\n    removeMember(projectId: $projectId, userId: $userId)\n  }\n"): typeof import('./graphql').RemoveMemberDocument;
 
 
 export function graphql(source: string) {

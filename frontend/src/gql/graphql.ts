@@ -368,7 +368,8 @@ export type HpdRange = {
 /** A named, versioned set of ties. */
 export type Hypothesis = {
   __typename?: 'Hypothesis';
-  author: User;
+  /** Who created it; null when that account was removed or the hypothesis was seeded. */
+  author?: Maybe<User>;
   copiedFrom?: Maybe<Hypothesis>;
   createdAt: Scalars['DateTime']['output'];
   description?: Maybe<Scalars['String']['output']>;
@@ -1306,6 +1307,27 @@ export type CancelAgeModelRunMutationVariables = Exact<{
 
 export type CancelAgeModelRunMutation = { __typename?: 'Mutation', cancelAgeModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus } };
 
+export type SiteAttachmentsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteAttachmentsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, project: { __typename?: 'Project', id: string, myRole: Role }, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }> }> } };
+
+export type DeleteAttachmentMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteAttachmentMutation = { __typename?: 'Mutation', deleteAttachment: boolean };
+
+export type AuditTrailQueryVariables = Exact<{
+  input: AuditTrailInput;
+}>;
+
+
+export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
+
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
   password: Scalars['String']['input'];
@@ -1366,7 +1388,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author: { __typename?: 'User', id: string, displayName: string }, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string } }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string } }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -1482,6 +1504,35 @@ export type CancelRecurrenceAnalysisMutationVariables = Exact<{
 
 export type CancelRecurrenceAnalysisMutation = { __typename?: 'Mutation', cancelRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
 
+export type ProjectReleasesQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type ProjectReleasesQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, myRole: Role, releases: Array<{ __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string, email: string } }> } };
+
+export type ReleaseQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type ReleaseQuery = { __typename?: 'Query', release: { __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string }, segments: Array<{ __typename?: 'Segment', id: string, name: string, startKm: number, endKm: number }>, sites: Array<{ __typename?: 'Site', id: string, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }> } };
+
+export type ReleaseDiffQueryVariables = Exact<{
+  fromId: Scalars['ID']['input'];
+  toId: Scalars['ID']['input'];
+}>;
+
+
+export type ReleaseDiffQuery = { __typename?: 'Query', releaseDiff: { __typename?: 'ReleaseDiff', from: { __typename?: 'Release', id: string, number: number }, to: { __typename?: 'Release', id: string, number: number }, changes: Array<{ __typename?: 'ReleaseChange', objectType: string, objectId: string, label: string, change: string }> } };
+
+export type CreateReleaseMutationVariables = Exact<{
+  input: CreateReleaseInput;
+}>;
+
+
+export type CreateReleaseMutation = { __typename?: 'Mutation', createRelease: { __typename?: 'Release', id: string, number: number } };
+
 export type CreateSampleMutationVariables = Exact<{
   input: CreateSampleInput;
 }>;
@@ -1557,6 +1608,56 @@ export type DeleteEventHorizonMutationVariables = Exact<{
 
 
 export type DeleteEventHorizonMutation = { __typename?: 'Mutation', deleteEventHorizon: boolean };
+
+export type AcceptInvitationMutationVariables = Exact<{
+  input: AcceptInvitationInput;
+}>;
+
+
+export type AcceptInvitationMutation = { __typename?: 'Mutation', acceptInvitation: { __typename?: 'AuthPayload', token: string, user: { __typename?: 'User', id: string, email: string, displayName: string, memberships: Array<{ __typename?: 'Membership', id: string, project: { __typename?: 'Project', id: string } }> } } };
+
+export type RequestPasswordResetMutationVariables = Exact<{
+  email: Scalars['String']['input'];
+}>;
+
+
+export type RequestPasswordResetMutation = { __typename?: 'Mutation', requestPasswordReset: boolean };
+
+export type ResetPasswordMutationVariables = Exact<{
+  input: ResetPasswordInput;
+}>;
+
+
+export type ResetPasswordMutation = { __typename?: 'Mutation', resetPassword: boolean };
+
+export type ProjectTeamQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type ProjectTeamQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, members: Array<{ __typename?: 'Membership', id: string, role: Role, user: { __typename?: 'User', id: string, email: string, displayName: string } }>, invitations: Array<{ __typename?: 'Invitation', id: string, email: string, role: Role, expiresAt: string, acceptedAt?: string | null }> } };
+
+export type InviteMemberMutationVariables = Exact<{
+  input: InviteMemberInput;
+}>;
+
+
+export type InviteMemberMutation = { __typename?: 'Mutation', inviteMember: { __typename?: 'Invitation', id: string, email: string, role: Role, expiresAt: string } };
+
+export type SetMemberRoleMutationVariables = Exact<{
+  input: SetMemberRoleInput;
+}>;
+
+
+export type SetMemberRoleMutation = { __typename?: 'Mutation', setMemberRole: { __typename?: 'Membership', id: string, role: Role } };
+
+export type RemoveMemberMutationVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+  userId: Scalars['ID']['input'];
+}>;
+
+
+export type RemoveMemberMutation = { __typename?: 'Mutation', removeMember: boolean };
 
 export class TypedDocumentString<TResult, TVariables>
   extends String
@@ -1709,6 +1810,71 @@ export const CancelAgeModelRunDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelAgeModelRunMutation, CancelAgeModelRunMutationVariables>;
+export const SiteAttachmentsDocument = new TypedDocumentString(`
+    query SiteAttachments($id: ID!) {
+  site(id: $id) {
+    id
+    project {
+      id
+      myRole
+    }
+    attachments {
+      id
+      fileName
+      contentType
+      sizeBytes
+      createdAt
+      url
+      thumbnailUrl
+    }
+    samples {
+      id
+      labCode
+      attachments {
+        id
+        fileName
+        contentType
+        sizeBytes
+        createdAt
+        url
+        thumbnailUrl
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteAttachmentsQuery, SiteAttachmentsQueryVariables>;
+export const DeleteAttachmentDocument = new TypedDocumentString(`
+    mutation DeleteAttachment($id: ID!) {
+  deleteAttachment(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteAttachmentMutation, DeleteAttachmentMutationVariables>;
+export const AuditTrailDocument = new TypedDocumentString(`
+    query AuditTrail($input: AuditTrailInput!) {
+  auditTrail(input: $input) {
+    edges {
+      cursor
+      node {
+        id
+        at
+        actor {
+          id
+          email
+          displayName
+        }
+        action
+        objectType
+        objectId
+        before
+        after
+      }
+    }
+    pageInfo {
+      endCursor
+      hasNextPage
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<AuditTrailQuery, AuditTrailQueryVariables>;
 export const SignInDocument = new TypedDocumentString(`
     mutation SignIn($email: String!, $password: String!) {
   signIn(email: $email, password: $password) {
@@ -2253,6 +2419,85 @@ export const CancelRecurrenceAnalysisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelRecurrenceAnalysisMutation, CancelRecurrenceAnalysisMutationVariables>;
+export const ProjectReleasesDocument = new TypedDocumentString(`
+    query ProjectReleases($id: ID!) {
+  project(id: $id) {
+    id
+    myRole
+    releases {
+      id
+      number
+      note
+      createdAt
+      createdBy {
+        id
+        displayName
+        email
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ProjectReleasesQuery, ProjectReleasesQueryVariables>;
+export const ReleaseDocument = new TypedDocumentString(`
+    query Release($id: ID!) {
+  release(id: $id) {
+    id
+    number
+    note
+    createdAt
+    createdBy {
+      id
+      displayName
+    }
+    segments {
+      id
+      name
+      startKm
+      endKm
+    }
+    sites {
+      id
+      name
+      kind
+      latitude
+      longitude
+      alongStrikeKm
+      segment {
+        id
+        name
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ReleaseQuery, ReleaseQueryVariables>;
+export const ReleaseDiffDocument = new TypedDocumentString(`
+    query ReleaseDiff($fromId: ID!, $toId: ID!) {
+  releaseDiff(fromId: $fromId, toId: $toId) {
+    from {
+      id
+      number
+    }
+    to {
+      id
+      number
+    }
+    changes {
+      objectType
+      objectId
+      label
+      change
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ReleaseDiffQuery, ReleaseDiffQueryVariables>;
+export const CreateReleaseDocument = new TypedDocumentString(`
+    mutation CreateRelease($input: CreateReleaseInput!) {
+  createRelease(input: $input) {
+    id
+    number
+  }
+}
+    `) as unknown as TypedDocumentString<CreateReleaseMutation, CreateReleaseMutationVariables>;
 export const CreateSampleDocument = new TypedDocumentString(`
     mutation CreateSample($input: CreateSampleInput!) {
   createSample(input: $input) {
@@ -2404,3 +2649,79 @@ export const DeleteEventHorizonDocument = new TypedDocumentString(`
   deleteEventHorizon(id: $id)
 }
     `) as unknown as TypedDocumentString<DeleteEventHorizonMutation, DeleteEventHorizonMutationVariables>;
+export const AcceptInvitationDocument = new TypedDocumentString(`
+    mutation AcceptInvitation($input: AcceptInvitationInput!) {
+  acceptInvitation(input: $input) {
+    token
+    user {
+      id
+      email
+      displayName
+      memberships {
+        id
+        project {
+          id
+        }
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<AcceptInvitationMutation, AcceptInvitationMutationVariables>;
+export const RequestPasswordResetDocument = new TypedDocumentString(`
+    mutation RequestPasswordReset($email: String!) {
+  requestPasswordReset(email: $email)
+}
+    `) as unknown as TypedDocumentString<RequestPasswordResetMutation, RequestPasswordResetMutationVariables>;
+export const ResetPasswordDocument = new TypedDocumentString(`
+    mutation ResetPassword($input: ResetPasswordInput!) {
+  resetPassword(input: $input)
+}
+    `) as unknown as TypedDocumentString<ResetPasswordMutation, ResetPasswordMutationVariables>;
+export const ProjectTeamDocument = new TypedDocumentString(`
+    query ProjectTeam($id: ID!) {
+  project(id: $id) {
+    id
+    name
+    myRole
+    members {
+      id
+      role
+      user {
+        id
+        email
+        displayName
+      }
+    }
+    invitations {
+      id
+      email
+      role
+      expiresAt
+      acceptedAt
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ProjectTeamQuery, ProjectTeamQueryVariables>;
+export const InviteMemberDocument = new TypedDocumentString(`
+    mutation InviteMember($input: InviteMemberInput!) {
+  inviteMember(input: $input) {
+    id
+    email
+    role
+    expiresAt
+  }
+}
+    `) as unknown as TypedDocumentString<InviteMemberMutation, InviteMemberMutationVariables>;
+export const SetMemberRoleDocument = new TypedDocumentString(`
+    mutation SetMemberRole($input: SetMemberRoleInput!) {
+  setMemberRole(input: $input) {
+    id
+    role
+  }
+}
+    `) as unknown as TypedDocumentString<SetMemberRoleMutation, SetMemberRoleMutationVariables>;
+export const RemoveMemberDocument = new TypedDocumentString(`
+    mutation RemoveMember($projectId: ID!, $userId: ID!) {
+  removeMember(projectId: $projectId, userId: $userId)
+}
+    `) as unknown as TypedDocumentString<RemoveMemberMutation, RemoveMemberMutationVariables>;

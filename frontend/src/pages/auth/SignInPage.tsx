@@ -1,6 +1,6 @@
 import { Card, Classes, Elevation, H1 } from '@blueprintjs/core';
-import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
-import { afterSignInPath } from '@/app/paths';
+import { Link, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { afterSignInPath, paths } from '@/app/paths';
 import { SignInForm } from '@/modules/auth/components/SignInForm';
 import { useSession } from '@/modules/auth/hooks/useSession';
 
@@ -19,6 +19,9 @@ export function SignInPage() {
         <H1 className="sc-signin-title">Stratochron</H1>
         <p className={`${Classes.TEXT_MUTED} sc-signin-tagline`}>Chronologies of past earthquakes, from lab results to recurrence.</p>
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
+        <p className={Classes.TEXT_SMALL}>
+          <Link to={paths.forgotPassword()}>Forgot password?</Link>
+        </p>
         {SHOW_DEMO_HINT && (
           <p className={`${Classes.TEXT_SMALL} ${Classes.TEXT_MUTED} sc-demo-hint`}>
             Demo accounts: <span className="num">researcher@demo.test</span>, <span className="num">admin@demo.test</span>,{' '}

@@ -2,20 +2,20 @@ import { Button, Classes, H2, Intent, Section, SectionCard, Tag } from '@bluepri
 import { IconNames } from '@blueprintjs/icons';
 import { useState } from 'react';
 import { ROLE_LABELS, roleAllows } from '@/modules/auth/utils/permissions';
+import { SiteMap } from '@/modules/map/components/SiteMap';
 import { useSegmentMutations, useSiteMutations } from '@/modules/projects/hooks/projectMutations';
 import type { ProjectOverview as ProjectOverviewData, SegmentRow, SiteRow } from '@/modules/projects/utils/projectTypes';
 import { DeleteAlert } from '@/modules/ui/components/DeleteAlert';
 import { SegmentDialog } from './SegmentDialog';
 import { SegmentsTable } from './SegmentsTable';
 import { SiteDialog } from './SiteDialog';
-import { SiteMapPlaceholder } from './SiteMapPlaceholder';
 import { SitesTable } from './SitesTable';
 
 export type ProjectOverviewProps = {
   project: ProjectOverviewData;
 };
 
-/** A project at a glance: its segments, a map slot and the sites table, with their forms. */
+/** A project at a glance: its segments, the map of its sites and the sites table, with their forms. */
 export function ProjectOverview({ project }: ProjectOverviewProps) {
   const canEdit = roleAllows(project.myRole, 'stratigraphy.write');
   const [editingSegment, setEditingSegment] = useState<SegmentRow | 'new' | null>(null);
@@ -62,7 +62,7 @@ export function ProjectOverview({ project }: ProjectOverviewProps) {
       </header>
 
       <div className="sc-overview-grid">
-        <SiteMapPlaceholder siteCount={project.sites.length} />
+        <SiteMap projectId={project.id} sites={project.sites} segments={project.segments} />
         <Section
           title="Segments"
           compact

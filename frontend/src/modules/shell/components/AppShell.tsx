@@ -54,6 +54,7 @@ export function AppShell() {
             <ProjectSwitcher currentProjectId={projectId} />
             {projectId && <NavbarLink to={paths.ladder(projectId)} icon={IconNames.TIMELINE_EVENTS} text="Ladder" />}
             {projectId && <NavbarLink to={paths.recurrence(projectId)} icon={IconNames.TIMELINE_LINE_CHART} text="Recurrence" />}
+            {projectId && <NavbarLink to={paths.projectAdmin(projectId)} icon={IconNames.PEOPLE} text="Team and records" />}
             <NavbarLink to={paths.calibrate()} icon={IconNames.TIMELINE_AREA_CHART} text="Calibrate" />
           </NavbarGroup>
           <NavbarGroup align={Alignment.END}>

@@ -3,6 +3,7 @@ import { IconNames } from '@blueprintjs/icons';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { SiteTab } from '@/app/paths';
+import { SiteAttachmentsView } from '@/modules/attachments/components/SiteAttachmentsView';
 import { roleAllows } from '@/modules/auth/utils/permissions';
 import { SiteCalibrationView } from '@/modules/calibration/components/SiteCalibrationView';
 import { SiteDialog } from '@/modules/projects/components/SiteDialog';
@@ -44,6 +45,7 @@ export function SiteWorkspace({ site, tab, onTabChange }: SiteWorkspaceProps) {
           title="Calibration"
           panel={<SiteCalibrationView projectId={site.project.id} siteId={site.id} />}
         />
+        <Tab id="files" icon={IconNames.PAPERCLIP} title="Files" panel={<SiteAttachmentsView projectId={site.project.id} siteId={site.id} />} />
       </Tabs>
       {editingSite && project && (
         <SiteDialog projectId={site.project.id} segments={project.segments} site={site} onClose={() => setEditingSite(false)} />

@@ -1,0 +1,29 @@
+import { graphql } from '@/gql';
+
+export const AuditTrailDocument = graphql(`
+  query AuditTrail($input: AuditTrailInput!) {
+    auditTrail(input: $input) {
+      edges {
+        cursor
+        node {
+          id
+          at
+          actor {
+            id
+            email
+            displayName
+          }
+          action
+          objectType
+          objectId
+          before
+          after
+        }
+      }
+      pageInfo {
+        endCursor
+        hasNextPage
+      }
+    }
+  }
+`);

@@ -1,0 +1,124 @@
+import { describe, expect, it } from 'vitest';
+import { fitMapProjection, MIN_SPAN_DEGREES, positionAtKm, segmentTrackLine, siteBounds, siteTrack, type MapSite } from './mapGeometry';
+
+// An invented margin: four sites along a coast running roughly north-south.
+const SITES: MapSite[] = [
+  { id: 'a', longitude: -124.1, latitude: 46.0, alongStrikeKm: 0 },
+  { id: 'b', longitude: -124.0, latitude: 44.0, alongStrikeKm: 220 },
+  { id: 'c', longitude: -124.3, latitude: 42.0, alongStrikeKm: 440 },
+  { id: 'd', longitude: -125.2, latitude: 42.1, alongStrikeKm: 440 },
+];
+
+describe(siteBounds.name, () => {
+  it('pads the box by the given fraction of its span on each side', () => {
+    const bounds = siteBounds(SITES, 0.1);
+    // latitude span 4 degrees -> 4.8 with 10 % each side, centred on 44.
+    expect(bounds.south).toBeCloseTo(41.6, 10);
+    expect(bounds.north).toBeCloseTo(46.4, 10);
+    // longitude span 1.2 -> 1.44, but widened to the minimum span about the centre -124.6.
+    expect(bounds.east - bounds.west).toBeCloseTo(MIN_SPAN_DEGREES, 10);
+    expect((bounds.east + bounds.west) / 2).toBeCloseTo(-124.6, 10);
+  });
+
+  it('gives one site the minimum span around it', () => {
+    const bounds = siteBounds([{ longitude: 10, latitude: 20 }]);
+    expect(bounds).toEqual({ west: 10 - MIN_SPAN_DEGREES / 2, east: 10 + MIN_SPAN_DEGREES / 2, south: 20 - MIN_SPAN_DEGREES / 2, north: 20 + MIN_SPAN_DEGREES / 2 });
+  });
+
+  it('shows the world when there are no sites', () => {
+    expect(siteBounds([]).west).toBe(-180);
+  });
+});
+
+describe(fitMapProjection.name, () => {
+  it('puts every site inside the frame less its margin', () => {
+    const projection = fitMapProjection(SITES, 800, 400, 30);
+    for (const site of SITES) {
+      const [x, y] = projection([site.longitude, site.latitude]) ?? [NaN, NaN];
+      expect(x).toBeGreaterThanOrEqual(30);
+      expect(x).toBeLessThanOrEqual(770);
+      expect(y).toBeGreaterThanOrEqual(30);
+      expect(y).toBeLessThanOrEqual(370);
+    }
+  });
+
+  it('draws north up and east right (Mercator: y falls as latitude rises)', () => {
+    const projection = fitMapProjection(SITES, 800, 400);
+    const north = projection([-124, 46]) ?? [0, 0];
+    const south = projection([-124, 42]) ?? [0, 0];
+    const east = projection([-123, 44]) ?? [0, 0];
+    const west = projection([-125, 44]) ?? [0, 0];
+    expect(north[1]).toBeLessThan(south[1]);
+    expect(east[0]).toBeGreaterThan(west[0]);
+  });
+
+  it('centres a single site in the frame', () => {
+    const projection = fitMapProjection([{ id: 'x', longitude: 30, latitude: -10, alongStrikeKm: 0 }], 600, 300, 20);
+    const [x, y] = projection([30, -10]) ?? [NaN, NaN];
+    expect(x).toBeCloseTo(300, 6);
+    // The box is centred in degrees; Mercator stretches its poleward half a little more
+    // (y grows as ln tan(pi/4 + lat/2)), so the site sits a fraction of a pixel off centre.
+    expect(Math.abs(y - 150)).toBeLessThan(0.5);
+  });
+
+  it('fills the limiting dimension: the padded latitude range spans the inner height (a tall margin in a wide frame)', () => {
+    const projection = fitMapProjection(SITES, 800, 400, 20);
+    const bounds = siteBounds(SITES);
+    const top = projection([-124.6, bounds.north]) ?? [0, 0];
+    const bottom = projection([-124.6, bounds.south]) ?? [0, 0];
+    expect(bottom[1] - top[1]).toBeCloseTo(360, 4);
+  });
+});
+
+describe(siteTrack.name, () => {
+  it('orders by along-strike km and averages sites at the same km', () => {
+    const track = siteTrack(SITES);
+    expect(track.map((point) => point.km)).toEqual([0, 220, 440]);
+    expect(track[2]?.position[0]).toBeCloseTo(-124.75, 10);
+    expect(track[2]?.position[1]).toBeCloseTo(42.05, 10);
+  });
+});
+
+describe(positionAtKm.name, () => {
+  const track = siteTrack(SITES);
+
+  it('interpolates linearly between track points', () => {
+    const [lon, lat] = positionAtKm(track, 110) ?? [NaN, NaN];
+    expect(lon).toBeCloseTo(-124.05, 10);
+    expect(lat).toBeCloseTo(45.0, 10);
+  });
+
+  it('extrapolates beyond the ends from the two nearest points', () => {
+    const [, latNorth] = positionAtKm(track, -110) ?? [NaN, NaN];
+    expect(latNorth).toBeCloseTo(47.0, 10);
+    const [, latSouth] = positionAtKm(track, 660) ?? [NaN, NaN];
+    expect(latSouth).toBeCloseTo(42.05 - (44 - 42.05), 10);
+  });
+
+  it('hits track points exactly', () => {
+    expect(positionAtKm(track, 220)).toEqual([-124.0, 44.0]);
+  });
+
+  it('has nothing without a track, and one point for a one-point track', () => {
+    expect(positionAtKm([], 5)).toBeNull();
+    expect(positionAtKm([{ km: 3, position: [1, 2] }], 500)).toEqual([1, 2]);
+  });
+});
+
+describe(segmentTrackLine.name, () => {
+  const track = siteTrack(SITES);
+
+  it('runs from the start km through the inner track points to the end km', () => {
+    const line = segmentTrackLine(track, 110, 330);
+    expect(line).toHaveLength(3);
+    expect(line[1]).toEqual([-124.0, 44.0]);
+    expect(line[0]?.[1]).toBeCloseTo(45.0, 10);
+    expect(line[2]?.[1]).toBeCloseTo(43.025, 10);
+  });
+
+  it('reads a reversed extent the same way and gives nothing for an empty one', () => {
+    expect(segmentTrackLine(track, 330, 110)).toEqual(segmentTrackLine(track, 110, 330));
+    expect(segmentTrackLine(track, 100, 100)).toEqual([]);
+    expect(segmentTrackLine([], 0, 100)).toEqual([]);
+  });
+});

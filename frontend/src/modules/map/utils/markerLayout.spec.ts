@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { layoutMarkers } from './markerLayout';
+
+function distance(a: { drawX: number; drawY: number }, b: { drawX: number; drawY: number }): number {
+  return Math.hypot(a.drawX - b.drawX, a.drawY - b.drawY);
+}
+
+describe(layoutMarkers.name, () => {
+  it('leaves markers that are far enough apart where they are', () => {
+    const placed = layoutMarkers(
+      [
+        { id: 'a', x: 0, y: 0 },
+        { id: 'b', x: 30, y: 0 },
+      ],
+      12,
+    );
+    expect(placed.map((marker) => [marker.drawX, marker.drawY, marker.displaced])).toEqual([
+      [0, 0, false],
+      [30, 0, false],
+    ]);
+  });
+
+  it('fans coincident markers out on a ring, neighbours one spacing apart, centred on their place', () => {
+    const placed = layoutMarkers(
+      [
+        { id: 'c', x: 100, y: 50 },
+        { id: 'a', x: 100, y: 50 },
+        { id: 'b', x: 100, y: 50 },
+      ],
+      12,
+    );
+    for (let i = 0; i < placed.length; i += 1) {
+      for (let j = i + 1; j < placed.length; j += 1) {
+        const a = placed[i];
+        const b = placed[j];
+        // three on a ring: every pair are neighbours, so each pair is exactly one spacing apart.
+        if (a && b) expect(distance(a, b)).toBeCloseTo(12, 9);
+      }
+    }
+    const cx = placed.reduce((sum, marker) => sum + marker.drawX, 0) / 3;
+    const cy = placed.reduce((sum, marker) => sum + marker.drawY, 0) / 3;
+    expect(cx).toBeCloseTo(100, 9);
+    expect(cy).toBeCloseTo(50, 9);
+    // Id order round the ring from the top: 'a' is placed straight above the centre.
+    const a = placed.find((marker) => marker.id === 'a');
+    expect(a?.drawX).toBeCloseTo(100, 9);
+    expect(a?.drawY).toBeLessThan(50);
+    expect(placed.every((marker) => marker.displaced)).toBe(true);
+    // The true positions are kept for the tooltip and the leader line.
+    expect(placed.map((marker) => [marker.x, marker.y])).toEqual([
+      [100, 50],
+      [100, 50],
+      [100, 50],
+    ]);
+  });
+
+  it('joins chains of near markers into one cluster (single linkage)', () => {
+    const placed = layoutMarkers(
+      [
+        { id: 'a', x: 0, y: 0 },
+        { id: 'b', x: 8, y: 0 },
+        { id: 'c', x: 16, y: 0 },
+        { id: 'd', x: 200, y: 0 },
+      ],
+      10,
+    );
+    expect(placed.map((marker) => marker.displaced)).toEqual([true, true, true, false]);
+  });
+
+  it('places nothing for no markers', () => {
+    expect(layoutMarkers([], 10)).toEqual([]);
+  });
+});

@@ -1,0 +1,53 @@
+/** A marker to place: its id and its projected position, pixels. */
+export type MarkerInput = { id: string; x: number; y: number };
+
+/** A placed marker: where it is drawn, where its site truly is, and whether it was moved aside. */
+export type PlacedMarker = MarkerInput & { drawX: number; drawY: number; displaced: boolean };
+
+/**
+ * Place markers so that none hides another: markers closer than `spacing` pixels (linked in
+ * chains, single linkage) form a cluster, and a cluster's markers are set on a ring around the
+ * cluster's centroid, in id order, with neighbours `spacing` apart along the ring. Lone
+ * markers stay where they are. Quadratic in the number of markers, which is fine for the tens
+ * of sites a project has.
+ */
+export function layoutMarkers(markers: readonly MarkerInput[], spacing: number): PlacedMarker[] {
+  const parent = markers.map((_, index) => index);
+  const find = (index: number): number => {
+    let root = index;
+    while (parent[root] !== root) root = parent[root] ?? root;
+    parent[index] = root;
+    return root;
+  };
+  for (let i = 0; i < markers.length; i += 1) {
+    for (let j = i + 1; j < markers.length; j += 1) {
+      const a = markers[i];
+      const b = markers[j];
+      if (a && b && Math.hypot(a.x - b.x, a.y - b.y) < spacing) parent[find(j)] = find(i);
+    }
+  }
+  const clusters = new Map<number, number[]>();
+  markers.forEach((_, index) => {
+    const root = find(index);
+    clusters.set(root, [...(clusters.get(root) ?? []), index]);
+  });
+
+  const placed: PlacedMarker[] = markers.map((marker) => ({ ...marker, drawX: marker.x, drawY: marker.y, displaced: false }));
+  for (const members of clusters.values()) {
+    if (members.length < 2) continue;
+    const cx = members.reduce((sum, index) => sum + (markers[index]?.x ?? 0), 0) / members.length;
+    const cy = members.reduce((sum, index) => sum + (markers[index]?.y ?? 0), 0) / members.length;
+    // Chord length between ring neighbours is 2 r sin(pi / n); set it to the spacing.
+    const radius = spacing / (2 * Math.sin(Math.PI / members.length));
+    const ordered = [...members].sort((a, b) => (markers[a]?.id ?? '').localeCompare(markers[b]?.id ?? ''));
+    ordered.forEach((index, position) => {
+      const angle = -Math.PI / 2 + (2 * Math.PI * position) / ordered.length;
+      const marker = placed[index];
+      if (!marker) return;
+      marker.drawX = cx + radius * Math.cos(angle);
+      marker.drawY = cy + radius * Math.sin(angle);
+      marker.displaced = true;
+    });
+  }
+  return placed;
+}
