@@ -13,7 +13,7 @@ import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { complexityLimitPlugin, depthLimitRule } from './common/graphql-limits';
 import { repositoryRoot } from './common/repo-paths';
-import { DateTimeScalar, JsonScalar } from './common/scalars/scalars';
+import { DateTimeScalar, JsonScalar, NumberListScalar } from './common/scalars/scalars';
 import { APP_CONFIG, AppConfig } from './config/config';
 import { ConfigModule } from './config/config.module';
 import { DatabaseModule } from './database/database.module';
@@ -51,7 +51,7 @@ import { ReleasesModule } from './releases/releases.module';
       useFactory: (config: AppConfig) => ({
         typePaths: [join(repositoryRoot(), 'schema.graphql')],
         path: '/graphql',
-        resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar },
+        resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar, NumberList: NumberListScalar },
         playground: false,
         validationRules: [depthLimitRule()],
         plugins: [complexityLimitPlugin()],

@@ -19,7 +19,7 @@ const HYPOTHESIS = `query($id: ID!) { hypothesis(id: $id) { id name preferred ve
     chiSquare { t df critical5 passes } ruptureLengthKm magnitude { mw sigma relation } }
   orderConflicts { tieA { id } tieB { id } message } } }`;
 const LADDER = `query($p: ID!) { eventLadder(projectId: $p) { project { id } columns { site { id name alongStrikeKm }
-  latestAgeModelRun { id status } events { eventHorizon { id name } medianCalBp hpd95 { olderCalBp youngerCalBp } density { calBp probability } } } } }`;
+  latestAgeModelRun { id status } events { eventHorizon { id name } medianCalBp hpd95 { olderCalBp youngerCalBp } densityGrid { startCalBp stepYears values } density { calBp probability } } } } }`;
 
 let server: TestServer;
 let fixture: ProjectFixture;
@@ -258,8 +258,11 @@ describe('eventLadder', () => {
         // The posterior is N(age, sd): its median is the age [analytic], within a year's rounding.
         expect(Math.abs(event.medianCalBp - site.ages[k])).toBeLessThanOrEqual(1);
         expect(event.hpd95).toHaveLength(1);
-        expect(event.density.length).toBeGreaterThan(100);
-        expect(event.density.length).toBeLessThanOrEqual(400);
+        // The drawing grid holds the whole mass (area = sum of value x step) in at most 120 values.
+        const grid = event.densityGrid;
+        expect(grid.values.length).toBeLessThanOrEqual(120);
+        expect(grid.values.reduce((sum: number, v: number) => sum + v * grid.stepYears, 0)).toBeCloseTo(1, 2);
+        expect(event.density).toHaveLength(grid.values.length);
       }
     }
   });
@@ -281,7 +284,7 @@ describe('eventLadder', () => {
     const { eventLadder } = await clients.VIEWER.ok(LADDER, { p: fixture.projectId });
     const column = eventLadder.columns[eventLadder.columns.length - 1];
     expect(column).toMatchObject({ site: { id: createSite.id }, latestAgeModelRun: null });
-    expect(column.events).toEqual([{ eventHorizon: { id: createEventHorizon.id, name: 'L-E1' }, medianCalBp: null, hpd95: [], density: [] }]);
+    expect(column.events).toEqual([{ eventHorizon: { id: createEventHorizon.id, name: 'L-E1' }, medianCalBp: null, hpd95: [], densityGrid: null, density: [] }]);
 
     const hypothesis = await createHypothesis(clients.CORRELATOR, 'With the lake');
     await clients.CORRELATOR.ok(ADD_TIE, { i: { hypothesisId: hypothesis.id, eventAId: events.C2, eventBId: createEventHorizon.id, confidence: 3 } });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { storeDensity } from '../age-models/age-model-results';
 import { checkHypothesis } from '../chronology/correlation';
 import { normalDensity, summarise, type CalendarDensity } from '../chronology/common/density';
-import { checkProjectHypothesis, displayPosteriors, forGrouping, thinDensity, type ProjectEvent } from './correlation-adapter';
+import { checkProjectHypothesis, displayPosteriors, forGrouping, gridPoints, LADDER_GRID_POINTS, thinDensity, thinToGrid, type ProjectEvent } from './correlation-adapter';
 
 // An invented margin: Alder Marsh at 0 km, Brisk Core at 100 km, Corrie Trench at 250 km.
 const SITES: Record<string, { siteName: string; alongStrikeKm: number }> = {
@@ -117,7 +117,29 @@ describe(displayPosteriors.name, () => {
     expect(posterior?.runId).toBe('run-1');
     expect(posterior?.density.startCalBp).toBe(stored.startCalBp);
     expect(Array.from(posterior?.density.probabilities ?? [])).toEqual(stored.probabilities);
-    expect(posterior?.points.length).toBeLessThanOrEqual(400);
+    expect(posterior?.grid.values.length).toBeLessThanOrEqual(LADDER_GRID_POINTS);
     expect(displayPosteriors('run-2', null).size).toBe(0);
+  });
+});
+
+describe(thinToGrid.name, () => {
+  // A normal density has unit mass [analytic]; pooling into bins must keep it (area = sum of value x step).
+  it('keeps the mass, caps the number of values and places values at bin middles', () => {
+    const density = normalDensity(1500, 80);
+    const grid = thinToGrid(density, 120);
+    expect(grid.values.length).toBeLessThanOrEqual(120);
+    expect(grid.values.reduce((sum, v) => sum + v * grid.stepYears, 0)).toBeCloseTo(1, 3);
+    expect(grid.startCalBp).toBe(density.startCalBp + (grid.stepYears - 1) / 2);
+    const peak = grid.values.indexOf(Math.max(...grid.values));
+    expect(Math.abs(grid.startCalBp + peak * grid.stepYears - 1500)).toBeLessThanOrEqual(grid.stepYears);
+  });
+
+  it('leaves a short density on its 1-year grid and expands to matching points', () => {
+    const density = normalDensity(300, 5);
+    const grid = thinToGrid(density, LADDER_GRID_POINTS);
+    expect(grid.stepYears).toBe(1);
+    const points = gridPoints(grid);
+    expect(points[0]).toEqual({ calBp: density.startCalBp, probability: grid.values[0] });
+    expect(points).toHaveLength(density.probabilities.length);
   });
 });

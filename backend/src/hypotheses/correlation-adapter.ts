@@ -130,13 +130,46 @@ export function thinDensity(density: CalendarDensity, maxPoints = MAX_DENSITY_PO
   return points;
 }
 
+/** A density on a regular calendar grid: `values[i]` is the mean probability per year around `startCalBp + i * stepYears`. */
+export interface DensityGrid {
+  readonly startCalBp: number;
+  readonly stepYears: number;
+  readonly values: readonly number[];
+}
+
+/** Values per event the ladder sends: about one per screen pixel of a typical event's width. */
+export const LADDER_GRID_POINTS = 120;
+
+/**
+ * A density pooled into bins of ceil(length / maxPoints) years, as a regular grid for drawing.
+ * Each value is the bin's mean probability per year (years past the end count as 0, so the area,
+ * value x step summed, equals the density's mass) at the bin's middle year. Values are rounded to
+ * 4 significant digits: plenty for a drawing, and a quarter of the bytes.
+ */
+export function thinToGrid(density: CalendarDensity, maxPoints = LADDER_GRID_POINTS): DensityGrid {
+  const p = density.probabilities;
+  const step = Math.max(1, Math.ceil(p.length / Math.floor(maxPoints)));
+  const values: number[] = [];
+  for (let from = 0; from < p.length; from += step) {
+    let sum = 0;
+    for (let i = from; i < Math.min(p.length, from + step); i++) sum += p[i];
+    values.push(Number((sum / step).toPrecision(4)));
+  }
+  return { startCalBp: density.startCalBp + (step - 1) / 2, stepYears: step, values };
+}
+
+/** The grid as (calBp, probability) points, for clients that want points. */
+export function gridPoints(grid: DensityGrid): DensityPoint[] {
+  return grid.values.map((probability, i) => ({ calBp: Math.round(grid.startCalBp + i * grid.stepYears), probability }));
+}
+
 /** An event's posterior from one run, ready for the checks (grid) and for drawing (points). */
 export interface DisplayPosterior {
   readonly runId: string;
   readonly summary: DensitySummary;
   readonly density: CalendarDensity;
-  /** `density` thinned by `thinDensity`. */
-  readonly points: readonly DensityPoint[];
+  /** `density` thinned for drawing by `thinToGrid`. */
+  readonly grid: DensityGrid;
 }
 
 /** Every event posterior of a run's stored results, by event horizon id. */
@@ -144,7 +177,7 @@ export function displayPosteriors(runId: string, results: Pick<StoredAgeModelRes
   const posteriors = new Map<string, DisplayPosterior>();
   for (const event of results?.events ?? []) {
     const density = loadDensity(event.density);
-    posteriors.set(event.eventHorizonId, { runId, summary: event.summary, density, points: thinDensity(density) });
+    posteriors.set(event.eventHorizonId, { runId, summary: event.summary, density, grid: thinToGrid(density) });
   }
   return posteriors;
 }

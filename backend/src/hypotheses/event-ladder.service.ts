@@ -8,15 +8,15 @@ import { notFound } from '../common/errors/domain-error';
 import type { EventHorizonRow } from '../event-horizons/event-horizons.repository';
 import { ProjectRow, ProjectsRepository } from '../projects/projects.repository';
 import type { SiteRow } from '../sites/sites.repository';
-import type { DensityPoint } from './correlation-adapter';
+import type { DensityGrid } from './correlation-adapter';
 import { CorrelationDataService, posteriorOf } from './correlation-data.service';
 
 export interface LadderEventView {
   eventHorizon: EventHorizonRow;
   medianCalBp: number | null;
   hpd95: readonly HpdRange[];
-  /** Thinned to at most `MAX_DENSITY_POINTS` points. */
-  density: readonly DensityPoint[];
+  /** The posterior thinned for drawing (null without a posterior); `density` points are derived from it. */
+  densityGrid: DensityGrid | null;
 }
 
 export interface LadderColumnView {
@@ -54,7 +54,7 @@ export class EventLadderService {
         eventHorizon: event.eventHorizon,
         medianCalBp: posterior?.summary.medianCalBp ?? null,
         hpd95: posterior?.summary.hpd95 ?? [],
-        density: posterior?.points ?? [],
+        densityGrid: posterior?.grid ?? null,
       });
     }
     return {

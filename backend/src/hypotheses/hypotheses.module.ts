@@ -5,7 +5,7 @@ import { UsersModule } from '../users/users.module';
 import { CorrelationDataService } from './correlation-data.service';
 import { EventLadderService } from './event-ladder.service';
 import { HypothesesRepository } from './hypotheses.repository';
-import { EventLadderResolver, HypothesesResolver, ProjectHypothesesResolver } from './hypotheses.resolver';
+import { EventLadderResolver, HypothesesResolver, LadderEventResolver, ProjectHypothesesResolver } from './hypotheses.resolver';
 import { HypothesesService } from './hypotheses.service';
 
 /** Correlation hypotheses, their ties and checks, and the event ladder. */
@@ -19,6 +19,7 @@ import { HypothesesService } from './hypotheses.service';
     HypothesesResolver,
     ProjectHypothesesResolver,
     EventLadderResolver,
+    LadderEventResolver,
   ],
   exports: [HypothesesService, CorrelationDataService],
 })

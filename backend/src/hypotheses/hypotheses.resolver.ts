@@ -6,7 +6,8 @@ import type { UserRow } from '../users/users.repository';
 import { UsersService } from '../users/users.service';
 import { AddTieInput } from './dto/add-tie.input';
 import { CreateHypothesisInput, UpdateHypothesisInput } from './dto/create-hypothesis.input';
-import { EventLadderService, EventLadderView } from './event-ladder.service';
+import { gridPoints, type DensityGrid, type DensityPoint } from './correlation-adapter';
+import { EventLadderService, EventLadderView, type LadderEventView } from './event-ladder.service';
 import type { HypothesisRow, TieView } from './hypotheses.repository';
 import { HypothesesService, OrderConflictView, RegionalEventView } from './hypotheses.service';
 
@@ -101,5 +102,19 @@ export class EventLadderResolver {
   @Query('eventLadder')
   get(@CurrentUser() user: AuthUser, @Args('projectId') projectId: string): Promise<EventLadderView> {
     return this.ladder.get(user, projectId);
+  }
+}
+
+/** `LadderEvent.densityGrid` as sent, and `density` expanded from it only when a client asks. */
+@Resolver('LadderEvent')
+export class LadderEventResolver {
+  @ResolveField('densityGrid')
+  densityGrid(@Parent() event: LadderEventView): DensityGrid | null {
+    return event.densityGrid;
+  }
+
+  @ResolveField('density')
+  density(@Parent() event: LadderEventView): DensityPoint[] {
+    return event.densityGrid ? gridPoints(event.densityGrid) : [];
   }
 }

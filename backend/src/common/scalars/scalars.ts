@@ -36,3 +36,16 @@ export const JsonScalar = new GraphQLScalarType({
     }
   },
 });
+
+/** A list of finite numbers passed through as one JSON array (no per-item scalar work). */
+export const NumberListScalar = new GraphQLScalarType({
+  name: 'NumberList',
+  serialize: (value) => value,
+  parseValue: (value) => {
+    if (!Array.isArray(value) || !value.every((v) => typeof v === 'number' && Number.isFinite(v))) {
+      throw new TypeError('NumberList must be an array of finite numbers');
+    }
+    return value;
+  },
+  parseLiteral: (ast) => (ast.kind === Kind.LIST ? ast.values.map((v) => (v.kind === Kind.INT || v.kind === Kind.FLOAT ? Number(v.value) : NaN)) : null),
+});
