@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { CalibrationModule } from '../calibration/calibration.module';
 import { EventHorizonsModule } from '../event-horizons/event-horizons.module';
 import { SamplesModule } from '../samples/samples.module';
 import { SitesModule } from '../sites/sites.module';
@@ -9,7 +10,7 @@ import { AgeModelsResolver, EventHorizonPosteriorResolver, SiteAgeModelsResolver
 import { AgeModelsService } from './age-models.service';
 
 @Module({
-  imports: [SitesModule, UnitsModule, EventHorizonsModule, SamplesModule],
+  imports: [SitesModule, UnitsModule, EventHorizonsModule, SamplesModule, CalibrationModule],
   providers: [AgeModelRunsRepository, AgeModelsService, AgeModelJob, AgeModelsResolver, SiteAgeModelsResolver, EventHorizonPosteriorResolver],
   exports: [AgeModelsService, AgeModelJob, AgeModelRunsRepository],
 })

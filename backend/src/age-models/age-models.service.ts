@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { AccessService } from '../access/access.service';
 import { Permission } from '../access/permissions';
 import { AuditService } from '../audit/audit.service';
+import { CalibrationService } from '../calibration/calibration.service';
 import { AuthUser } from '../auth/auth-user';
 import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
 import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
@@ -30,6 +31,7 @@ export class AgeModelsService {
     private readonly units: UnitsRepository,
     private readonly eventHorizons: EventHorizonsRepository,
     private readonly samples: SamplesRepository,
+    private readonly calibration: CalibrationService,
     private readonly jobs: JobQueueService,
     private readonly access: AccessService,
     private readonly audit: AuditService,
@@ -101,7 +103,7 @@ export class AgeModelsService {
   async isStale(run: AgeModelRunRow): Promise<boolean> {
     const site = await this.sites.findById(run.siteId);
     if (!site) return true;
-    const { fingerprint } = await this.columnOf(site);
+    const { fingerprint } = await this.columnRows(site);
     return fingerprint !== run.inputFingerprint;
   }
 
@@ -118,29 +120,37 @@ export class AgeModelsService {
     return posteriors;
   }
 
-  /** The model input of a site's current column, with its fingerprint. */
-  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
-    const [units, horizons, samples] = await Promise.all([
+  /** The rows a site's model depends on: its units, event horizons and samples. */
+  private async columnRows(site: SiteRow) {
+    const [units, eventHorizons, samples] = await Promise.all([
       this.units.listForSite(site.id),
       this.eventHorizons.listForSite(site.id),
       this.samples.listForSite(site.id),
     ]);
+    return { units, eventHorizons, samples, fingerprint: columnFingerprint({ units, eventHorizons, samples }) };
+  }
+
+  /** The model input of a site's current column (sample densities recomputed), with its fingerprint. */
+  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
+    const { units, eventHorizons, samples, fingerprint } = await this.columnRows(site);
     const model: AgeModelInput = {
       units: units.map((u) => ({ id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM })),
-      eventHorizons: horizons.map((h) => ({ id: h.id, name: h.name, unitBelowId: h.unitBelowId, unitAboveId: h.unitAboveId })),
-      samples: samples
-        .filter((s) => s.calibration)
-        .map((s) => ({
-          id: s.id,
-          name: s.labCode,
-          unitId: s.unitId,
-          depthM: s.depthM,
-          ageRelation: s.ageRelation,
-          excluded: s.excluded,
-          likelihood: loadDensity(s.calibration!.density),
-        })),
+      eventHorizons: eventHorizons.map((h) => ({ id: h.id, name: h.name, unitBelowId: h.unitBelowId, unitAboveId: h.unitAboveId })),
+      samples: await Promise.all(
+        samples
+          .filter((s) => s.calibration)
+          .map(async (s) => ({
+            id: s.id,
+            name: s.labCode,
+            unitId: s.unitId,
+            depthM: s.depthM,
+            ageRelation: s.ageRelation,
+            excluded: s.excluded,
+            likelihood: await this.calibration.densityOfSample(s),
+          })),
+      ),
       orderSamplesByDepth: site.kind === 'CORE',
     };
-    return { model, fingerprint: columnFingerprint({ units, eventHorizons: horizons, samples }) };
+    return { model, fingerprint };
   }
 }

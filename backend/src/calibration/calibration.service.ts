@@ -4,6 +4,7 @@ import { Permission } from '../access/permissions';
 import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { CalibrationResult, calibrateRadiocarbon } from '../chronology/calibration/calibrate';
+import { CalendarDensity } from '../chronology/common/density';
 import { calibrateLuminescence } from '../chronology/calibration/calendar-ages';
 import { CurveFormatError } from '../chronology/calibration/curve';
 import { validateCurveText } from '../chronology/calibration/custom-curve';
@@ -55,6 +56,20 @@ export class CalibrationService {
   async calibrateSample(dating: SampleDating): Promise<StoredCalibration> {
     const lookup = await this.registry.lookup();
     return toStored(asUserInput(() => calibrationForSample(dating, lookup)), dating.method === 'RADIOCARBON' ? dating.curve ?? null : null);
+  }
+
+  /**
+   * The calendar density of a stored sample, recomputed from its dating (densities are not
+   * stored). Throws BAD_USER_INPUT when the dating can no longer be calibrated (e.g. a curve removed).
+   */
+  async densityOfSample(dating: SampleDating): Promise<CalendarDensity> {
+    const lookup = await this.registry.lookup();
+    return asUserInput(() => calibrationForSample(dating, lookup)).density;
+  }
+
+  /** A stored sample's calibration as the API shows it: the stored summaries plus the recomputed density. */
+  async viewOfSample(stored: StoredCalibration, dating: SampleDating): Promise<CalibrationView> {
+    return { ...stored, density: densityPoints(await this.densityOfSample(dating)) };
   }
 
   /** The same, for bulk imports: returns the problem instead of throwing. */
@@ -148,18 +163,13 @@ export function toStored(result: CalibrationResult, curve: string | null): Store
     hpd68: result.hpd68,
     hpd95: result.hpd95,
     warnings: result.warnings,
-    density: { startCalBp: result.density.startCalBp, probabilities: Array.from(result.density.probabilities) },
   };
 }
 
-export function storedToView(stored: StoredCalibration): CalibrationView {
-  const { startCalBp, probabilities } = stored.density;
-  return {
-    ...stored,
-    density: probabilities.map((probability, i) => ({ calBp: startCalBp + i, probability })),
-  };
+function densityPoints({ startCalBp, probabilities }: CalendarDensity): CalibrationView['density'] {
+  return Array.from(probabilities, (probability, i) => ({ calBp: startCalBp + i, probability }));
 }
 
 function toView(result: CalibrationResult, curve: string | null): CalibrationView {
-  return storedToView(toStored(result, curve));
+  return { ...toStored(result, curve), density: densityPoints(result.density) };
 }

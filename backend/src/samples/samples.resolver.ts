@@ -1,6 +1,6 @@
 import { Args, Int, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
 import { AuthUser } from '../auth/auth-user';
-import { CalibrationView, storedToView } from '../calibration/calibration.service';
+import { CalibrationService, CalibrationView } from '../calibration/calibration.service';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
@@ -16,6 +16,7 @@ export class SamplesResolver {
     private readonly samples: SamplesService,
     private readonly units: UnitsService,
     private readonly sites: SitesService,
+    private readonly calibrations: CalibrationService,
   ) {}
 
   @Query('sample')
@@ -44,8 +45,8 @@ export class SamplesResolver {
   }
 
   @ResolveField('calibration')
-  calibration(@Parent() sample: SampleRow): CalibrationView | null {
-    return sample.calibration ? storedToView(sample.calibration) : null;
+  async calibration(@Parent() sample: SampleRow): Promise<CalibrationView | null> {
+    return sample.calibration ? this.calibrations.viewOfSample(sample.calibration, sample) : null;
   }
 
   @ResolveField('unit')

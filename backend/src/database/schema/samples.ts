@@ -6,7 +6,11 @@ import { projects } from './projects';
 import { sites } from './sites';
 import { units } from './units';
 
-/** Stored calibration: summaries plus the trimmed density (cached on write). */
+/**
+ * Stored calibration summaries, computed on write (so a value that cannot be calibrated is
+ * refused then) and read by tables and exports. The density itself is not stored: it is
+ * recomputed when needed (about 0.1 ms a sample), which keeps each row a few hundred bytes.
+ */
 export interface StoredCalibration {
   curve: string | null;
   medianCalBp: number;
@@ -15,7 +19,6 @@ export interface StoredCalibration {
   hpd68: { olderCalBp: number; youngerCalBp: number; probability: number }[];
   hpd95: { olderCalBp: number; youngerCalBp: number; probability: number }[];
   warnings: string[];
-  density: { startCalBp: number; probabilities: number[] };
 }
 
 export const samples = pgTable(
