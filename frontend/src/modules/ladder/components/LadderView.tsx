@@ -217,7 +217,7 @@ export function LadderView({ projectId }: LadderViewProps) {
           <aside>
             {hypothesis ? (
               <Tabs id="ladder-side" renderActiveTabPanelOnly>
-                <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel hypothesis={hypothesis} />} />
+                <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel hypothesis={hypothesis} eventLabels={eventNames} />} />
                 <Tab
                   id="ties"
                   title={`Ties (${hypothesis.ties.length})`}

@@ -4,13 +4,17 @@ import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import type { LadderHypothesis } from '@/modules/ladder/components/EventLadderChart';
 import { LOW_CONCORDANCE } from '@/modules/ladder/utils/ladderData';
 
-export type RegionalEventsPanelProps = { hypothesis: LadderHypothesis };
+export type RegionalEventsPanelProps = {
+  hypothesis: LadderHypothesis;
+  /** "E3 at Core A" by event id, so members read with their sites. */
+  eventLabels: ReadonlyMap<string, string>;
+};
 
 /**
  * The regional events of a hypothesis, youngest first: combined age, concordance, the
  * Ward & Wilson chi-square test, rupture length and magnitude; order conflicts on top.
  */
-export function RegionalEventsPanel({ hypothesis }: RegionalEventsPanelProps) {
+export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
   const regionalEvents = [...hypothesis.regionalEvents].sort(
     (a, b) => (a.combinedMedianCalBp ?? Infinity) - (b.combinedMedianCalBp ?? Infinity),
   );
@@ -31,7 +35,7 @@ export function RegionalEventsPanel({ hypothesis }: RegionalEventsPanelProps) {
         return (
           <div key={regional.id} className="sc-regional-card">
             <strong>Regional event {index + 1}</strong> <Tag minimal>{regional.members.length} sites</Tag>
-            <div>{regional.members.map((member) => member.name).join(' · ')}</div>
+            <div>{regional.members.map((member) => eventLabels.get(member.id) ?? member.name).join(' · ')}</div>
             <dl>
               <dt>Median</dt>
               <dd>
