@@ -29,6 +29,8 @@ export interface AppConfig {
   readonly frontendDist?: string;
   /** Concurrent jobs one worker process runs. */
   readonly workerConcurrency: number;
+  /** Where the demo seed lists the demo accounts for `npm start` to print (development only). */
+  readonly demoAccountsFile?: string;
   /** Silence after which a RUNNING job counts as abandoned by its worker (tests shorten it). */
   readonly jobHeartbeatTimeoutMs: number;
 }
@@ -95,6 +97,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     },
     frontendDist: env.FRONTEND_DIST || undefined,
     workerConcurrency: integer('WORKER_CONCURRENCY', 1, 1, 64),
+    demoAccountsFile: env.DEMO_ACCOUNTS_FILE || undefined,
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
   };
   if (problems.length > 0) throw new ConfigError(problems);
