@@ -9,6 +9,10 @@ export default defineConfig({
   plugins: [react()],
   resolve: {
     alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+    // The workspace root holds React 18 (hoisted for Blueprint's peer ranges) while this package
+    // has React 19; every import of React must get this package's copy, or elements from two
+    // Reacts meet at run time.
+    dedupe: ['react', 'react-dom'],
   },
   server: {
     proxy: {
