@@ -49,3 +49,15 @@ export function conflictingTieIds(conflicts: readonly { tieA: { id: string }; ti
  * [common practice]: members whose densities share less than half their mass are a weak match.
  */
 export const LOW_CONCORDANCE = 0.5;
+
+/** A thinned posterior as the API's DensityGrid sends it (values are mean probability per year). */
+export type DensityGridLike = { startCalBp: number; stepYears: number; values: readonly number[] };
+
+/**
+ * A density grid as points for drawing: value i sits at startCalBp + i x stepYears. The values
+ * are per year already, so shapes drawn from a grid and from a 1-year density share one scale.
+ */
+export function gridToDensity(grid: DensityGridLike | null | undefined): DensityPoint[] {
+  if (!grid) return [];
+  return grid.values.map((probability, index) => ({ calBp: grid.startCalBp + index * grid.stepYears, probability }));
+}
