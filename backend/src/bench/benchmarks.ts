@@ -1,4 +1,5 @@
 import { benchAgeModel } from '../chronology/age-model/age-model.bench';
+import { benchApi, LadderLoadBench } from './api.bench';
 import { benchCalibration } from '../chronology/calibration/calibration.bench';
 import { benchmarkCorrelationChecks } from '../chronology/correlation/correlation.bench';
 import { benchRecurrence } from '../chronology/recurrence/recurrence.bench';
@@ -63,6 +64,41 @@ export const BENCHMARKS: Benchmark[] = [
       return [
         { figure: `recurrence, ${r.draws} draws x 12 events, 4 fits, 3 windows (s)`, value: round(r.seconds), target: '< 10 s', met: r.seconds < 10 },
         { figure: '  same, CPU seconds', value: round(r.cpuSeconds), target: '< 10 s', met: r.cpuSeconds < 10 },
+      ];
+    },
+  },
+  {
+    name: 'API under load',
+    run: async () => {
+      const { ladder, ladderGrid, import: sheet } = await benchApi();
+      const mib = (value: number | null) => (value === null ? 'n/a' : round(value, 0));
+      const ladderRows = (r: LadderLoadBench, shape: string): BenchRow[] => [
+        {
+          figure: `event ladder (${shape}), ${r.sites} sites, ${r.events} events, ${r.samples} samples, ${r.connections} clients: p95 (ms)`,
+          value: round(r.p95Ms, 1),
+          target: '< 150 ms',
+          met: r.p95Ms < 150 && r.failures === 0,
+          note: r.failures > 0 ? `${r.failures} failed or timed-out requests` : undefined,
+        },
+        { figure: '  same, p50 (ms)', value: round(r.p50Ms, 1), target: '(no target)', met: true },
+        { figure: `  same, throughput over ${round(r.seconds, 0)} s (requests/s)`, value: round(r.requestsPerSecond, 1), target: '(no target)', met: true },
+        { figure: '  same, failed or timed-out requests', value: r.failures, target: '0', met: r.failures === 0 },
+        { figure: '  same, first (cold) query (ms)', value: round(r.coldMs, 0), target: '(no target)', met: true },
+        { figure: '  same, response size (kB)', value: round(r.responseBytes / 1024, 0), target: '(no target)', met: true },
+        { figure: '  API peak RSS so far (MiB)', value: mib(r.peakRssMiB), target: '(no target)', met: true },
+      ];
+      return [
+        ...ladderRows(ladderGrid, 'densityGrid'),
+        ...ladderRows(ladder, 'page query, density points'),
+        {
+          figure: `lab-sheet import, ${sheet.rows.toLocaleString('en')} rows, validate and commit through the API (s)`,
+          value: round(sheet.commitSeconds),
+          target: '< 5 s',
+          met: sheet.committed && sheet.errors === 0 && sheet.commitSeconds < 5,
+          note: sheet.committed ? undefined : `not committed: ${sheet.errors} row errors`,
+        },
+        { figure: '  same, validate only (s)', value: round(sheet.validateSeconds), target: '(no target)', met: true },
+        { figure: '  API peak RSS after the import (MiB)', value: mib(sheet.peakRssMiB), target: '(no target)', met: true },
       ];
     },
   },

@@ -1,0 +1,355 @@
+/**
+ * Load benchmarks through the real API: the built server runs as a child process against a
+ * throw-away database beside the configured one, seeded with a 40-site project; autocannon
+ * drives the event-ladder query and a 10,000-row lab sheet is imported. Called by `npm run bench`.
+ */
+import bcrypt from 'bcryptjs';
+import { ChildProcess, spawn } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { join } from 'node:path';
+import { Client, Pool } from 'pg';
+import { storeDensity, StoredAgeModelResults } from '../age-models/age-model-results';
+import { normalDensity, summarise } from '../chronology/common/density';
+import { SeededRandom } from '../chronology/common/random';
+import { loadConfig } from '../config/config';
+
+export interface LadderLoadBench {
+  sites: number;
+  events: number;
+  samples: number;
+  connections: number;
+  seconds: number;
+  requests: number;
+  /** Requests that failed, answered non-2xx, or carried GraphQL errors in the checked sample. */
+  failures: number;
+  coldMs: number;
+  p50Ms: number;
+  p95Ms: number;
+  p99Ms: number;
+  requestsPerSecond: number;
+  responseBytes: number;
+  /** Peak resident memory of the API process (VmHWM) after the load, MiB; null off Linux. */
+  peakRssMiB: number | null;
+}
+
+export interface ImportBench {
+  rows: number;
+  validateSeconds: number;
+  commitSeconds: number;
+  committed: boolean;
+  errors: number;
+  peakRssMiB: number | null;
+}
+
+export interface ApiBench {
+  /** The query the ladder page sends (densities as points). */
+  ladder: LadderLoadBench;
+  /** The same with the thinned `densityGrid` the schema recommends instead of points. */
+  ladderGrid: LadderLoadBench;
+  import: ImportBench;
+}
+
+/** What this file uses of autocannon (which ships no types). */
+interface AutocannonResult {
+  requests: { total: number; average: number };
+  errors: number;
+  timeouts: number;
+  non2xx: number;
+  duration: number;
+}
+interface AutocannonInstance extends PromiseLike<AutocannonResult> {
+  on(event: 'response', listener: (client: unknown, statusCode: number, bytes: number, responseTimeMs: number) => void): void;
+}
+type Autocannon = (options: {
+  url: string;
+  connections: number;
+  duration: number;
+  method: 'POST';
+  headers: Record<string, string>;
+  body: string;
+}) => AutocannonInstance;
+
+const SITES = 40;
+const EVENTS_PER_SITE = 15;
+const SAMPLES_PER_SITE = 50;
+const UNITS_PER_SITE = EVENTS_PER_SITE + 1;
+const DRAWS = 4000;
+const CONNECTIONS = 20;
+const LOAD_SECONDS = 10;
+const IMPORT_ROWS = 10_000;
+const PASSWORD = 'bench-password-1';
+
+/** The query the ladder page sends (frontend/src/modules/ladder/graphql/ladder.ts). */
+const LADDER_QUERY = `query EventLadder($projectId: ID!) {
+  eventLadder(projectId: $projectId) {
+    columns {
+      site { id name kind alongStrikeKm segment { id name } }
+      latestAgeModelRun { id stale }
+      events {
+        medianCalBp
+        eventHorizon { id name quality }
+        hpd95 { olderCalBp youngerCalBp probability }
+        density { calBp probability }
+      }
+    }
+  }
+  project(id: $projectId) { id name myRole tectonicSetting hypotheses { id name preferred version } }
+}`;
+
+/** The page's query with `densityGrid` in place of `density` points. */
+const LADDER_GRID_QUERY = LADDER_QUERY.replace('density { calBp probability }', 'densityGrid { startCalBp stepYears values }');
+
+const IMPORT_MUTATION = `mutation($i: ImportSamplesInput!) { importSamples(input: $i) { rowCount committed errors { row field message } } }`;
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.on('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const address = server.address();
+      server.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
+    });
+  });
+}
+
+function withDatabase(base: string, database: string): string {
+  const url = new URL(base);
+  url.pathname = `/${database}`;
+  return url.toString();
+}
+
+function percentile(sorted: number[], p: number): number {
+  if (sorted.length === 0) return Number.NaN;
+  return sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))];
+}
+
+/** Peak resident set of a process from /proc (Linux), MiB. */
+function peakRssMiB(pid: number | undefined): number | null {
+  const status = `/proc/${pid}/status`;
+  if (pid === undefined || !existsSync(status)) return null;
+  const match = /VmHWM:\s+(\d+) kB/.exec(readFileSync(status, 'utf8'));
+  return match ? Number(match[1]) / 1024 : null;
+}
+
+/**
+ * The invented bench project: 40 cores along a 600 km margin, 16 units and 15 event horizons
+ * each, 50 radiocarbon samples each, and a SUCCEEDED age model run per site whose results are
+ * stored as the worker stores them (normal posteriors, 4,000 joint draws).
+ */
+async function seedProject(pool: Pool): Promise<{ projectId: string; email: string }> {
+  const random = new SeededRandom(40_600);
+  const email = 'bench-viewer@stratochron.test';
+  const hash = await bcrypt.hash(PASSWORD, 4);
+  const project = await pool.query<{ id: string }>(`insert into projects (name, tectonic_setting) values ('Bench margin', 'SUBDUCTION_INTERFACE') returning id`);
+  const projectId = project.rows[0].id;
+  const user = await pool.query<{ id: string }>(`insert into users (email, display_name, password_hash) values ($1, 'Bench researcher', $2) returning id`, [email, hash]);
+  await pool.query(`insert into memberships (project_id, user_id, role) values ($1, $2, 'RESEARCHER')`, [projectId, user.rows[0].id]);
+  let labCode = 0;
+  for (let s = 0; s < SITES; s++) {
+    const site = await pool.query<{ id: string }>(
+      `insert into sites (project_id, name, kind, latitude, longitude, along_strike_km) values ($1, $2, 'CORE', $3, $4, $5) returning id`,
+      [projectId, `Bench core ${s + 1}`, -38 - s * 0.12, 176 + s * 0.05, s * 15],
+    );
+    const siteId = site.rows[0].id;
+    const units = await pool.query<{ id: string }>(
+      `insert into units (site_id, position, name, top_depth_m, base_depth_m, facies)
+       select $1, p, 'U' || p, ${UNITS_PER_SITE} - p, ${UNITS_PER_SITE + 1} - p, 'TURBIDITE' from generate_series(1, ${UNITS_PER_SITE}) p
+       returning id`,
+      [siteId],
+    );
+    const unitIds = units.rows.map((row) => row.id);
+    const horizons = await pool.query<{ id: string }>(
+      `insert into event_horizons (site_id, name, unit_below_id, unit_above_id, quality)
+       select $1, 'E' || (e + 1), ($2::uuid[])[e + 1], ($2::uuid[])[e + 2], 1 + e % 4 from generate_series(0, ${EVENTS_PER_SITE - 1}) e
+       returning id`,
+      [siteId, unitIds],
+    );
+    const sampleRows = Array.from({ length: SAMPLES_PER_SITE }, (_, i) => {
+      const unit = i % UNITS_PER_SITE;
+      labCode += 1;
+      return { unitId: unitIds[unit], labCode: `BN-${labCode}`, depth: UNITS_PER_SITE + 0.9 - unit - 0.01 * (i % 50), c14: 6400 - 380 * unit + random.integer(60) };
+    });
+    await pool.query(
+      `insert into samples (project_id, site_id, unit_id, lab_code, method, material, depth_m, age_relation, c14_age, c14_error, curve)
+       select $1, $2, r.unit_id, r.lab_code, 'RADIOCARBON', 'DETRITAL_CHARCOAL', r.depth_m, 'OLDER_THAN_DEPOSIT', r.c14_age, 30, 'INTCAL20'
+         from jsonb_to_recordset($3::jsonb) as r(unit_id uuid, lab_code text, depth_m float8, c14_age float8)`,
+      [projectId, siteId, JSON.stringify(sampleRows.map((r) => ({ unit_id: r.unitId, lab_code: r.labCode, depth_m: r.depth, c14_age: r.c14 })))],
+    );
+    const events = horizons.rows.map((horizon, e) => {
+      const density = normalDensity(6000 - 380 * e, 30 + ((s * 7 + e * 13) % 50));
+      return { eventHorizonId: horizon.id, summary: summarise(density), rhat: 1.01, ess: 1200, density: storeDensity(density) };
+    });
+    // Oldest first, as the worker stores them; each draw row keeps the events in order.
+    const draws: number[] = [];
+    for (let d = 0; d < DRAWS; d++) {
+      for (let e = 0; e < EVENTS_PER_SITE; e++) draws.push(Math.round((6000 - 380 * e + 40 * random.normal()) * 10) / 10);
+    }
+    const results: StoredAgeModelResults = {
+      events,
+      samples: [],
+      eventDraws: { eventHorizonIds: events.map((event) => event.eventHorizonId), drawCount: DRAWS, draws },
+    };
+    await pool.query(
+      `insert into age_model_runs (site_id, status, progress, seed, settings, input_snapshot, input_fingerprint, results, started_at, finished_at)
+       values ($1, 'SUCCEEDED', 1, 1, '{}', '{}', 'bench', $2::jsonb, now(), now())`,
+      [siteId, JSON.stringify(results)],
+    );
+  }
+  return { projectId, email };
+}
+
+async function graphql<T>(url: string, token: string | undefined, query: string, variables: Record<string, unknown>): Promise<{ data?: T; errors?: unknown[]; bytes: number }> {
+  const response = await fetch(`${url}/graphql`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: JSON.stringify({ query, variables }),
+  });
+  const text = await response.text();
+  return { ...(JSON.parse(text) as { data?: T; errors?: unknown[] }), bytes: text.length };
+}
+
+async function startApi(databaseUrl: string, jwtSecret: string): Promise<{ child: ChildProcess; url: string; log: () => string }> {
+  const port = await freePort();
+  const output: string[] = [];
+  const child = spawn(process.execPath, [join(__dirname, '..', 'main.js')], {
+    env: { NODE_ENV: 'test', DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', JWT_SECRET: jwtSecret, SEED_DEMO: 'false', FRONTEND_DIST: '/nonexistent' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  child.stdout?.on('data', (chunk: Buffer) => output.push(chunk.toString()));
+  child.stderr?.on('data', (chunk: Buffer) => output.push(chunk.toString()));
+  const url = `http://127.0.0.1:${port}`;
+  const log = () => output.join('').slice(-2000);
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    if (child.exitCode !== null) throw new Error(`the API exited during start:\n${log()}`);
+    try {
+      if ((await fetch(`${url}/health`)).status === 200) return { child, url, log };
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) {
+      child.kill('SIGKILL');
+      throw new Error(`the API did not start within 60 s:\n${log()}`);
+    }
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+}
+
+async function benchLadder(url: string, token: string, projectId: string, pid: number | undefined, query: string): Promise<LadderLoadBench> {
+  const started = performance.now();
+  const first = await graphql<{ eventLadder: { columns: { events: unknown[] }[] } }>(url, token, query, { projectId });
+  const coldMs = performance.now() - started;
+  if (first.errors?.length || !first.data) throw new Error(`the ladder query failed: ${JSON.stringify(first.errors).slice(0, 500)}`);
+  const columns = first.data.eventLadder.columns;
+  const events = columns.reduce((sum, column) => sum + column.events.length, 0);
+  if (columns.length !== SITES || events !== SITES * EVENTS_PER_SITE) throw new Error(`the ladder has ${columns.length} columns and ${events} events`);
+
+  // Loaded lazily: autocannon is a root development dependency, needed by the bench alone.
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const autocannon = require('autocannon') as Autocannon;
+  const times: number[] = [];
+  const instance = autocannon({
+    url: `${url}/graphql`,
+    connections: CONNECTIONS,
+    duration: LOAD_SECONDS,
+    method: 'POST',
+    headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+    body: JSON.stringify({ query, variables: { projectId } }),
+  });
+  // autocannon's own summary stops at p90/p97.5; the target is a p95, so keep every time.
+  instance.on('response', (_client, _status, _bytes, responseTimeMs) => times.push(responseTimeMs));
+  const result = await instance;
+  times.sort((a, b) => a - b);
+  const check = await graphql(url, token, query, { projectId });
+  return {
+    sites: SITES,
+    events,
+    samples: SITES * SAMPLES_PER_SITE,
+    connections: CONNECTIONS,
+    seconds: result.duration,
+    requests: result.requests.total,
+    failures: result.errors + result.timeouts + result.non2xx + (check.errors?.length ? 1 : 0),
+    coldMs,
+    p50Ms: percentile(times, 0.5),
+    p95Ms: percentile(times, 0.95),
+    p99Ms: percentile(times, 0.99),
+    requestsPerSecond: result.requests.total / result.duration,
+    responseBytes: first.bytes,
+    peakRssMiB: peakRssMiB(pid),
+  };
+}
+
+/** Wait until the API has finished the requests still in flight when the load stopped. */
+async function waitUntilQuiet(pool: Pool): Promise<void> {
+  const deadline = Date.now() + 60_000;
+  let quietSince = Date.now();
+  while (Date.now() < deadline) {
+    const { rows } = await pool.query<{ n: string }>(
+      `select count(*) as n from pg_stat_activity where datname = current_database() and state = 'active' and pid <> pg_backend_pid()`,
+    );
+    if (Number(rows[0].n) > 0) quietSince = Date.now();
+    else if (Date.now() - quietSince > 1000) return;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+}
+
+async function benchImport(url: string, token: string, pool: Pool, projectId: string, pid: number | undefined): Promise<ImportBench> {
+  const site = await pool.query<{ id: string }>(
+    `insert into sites (project_id, name, kind, latitude, longitude, along_strike_km) values ($1, 'Bench import trench', 'TRENCH', -41, 174, 700) returning id`,
+    [projectId],
+  );
+  const siteId = site.rows[0].id;
+  await pool.query(
+    `insert into units (site_id, position, name, top_depth_m, base_depth_m, facies) values
+       ($1, 1, 'Lower peat', 2, 3, 'PEAT'), ($1, 2, 'Sand sheet', 1, 2, 'SAND_SHEET'), ($1, 3, 'Upper peat', 0, 1, 'PEAT')`,
+    [siteId],
+  );
+  const lines = ['labCode,unit,depthM,method,material,ageRelation,c14Age,c14Error,curve'];
+  for (let i = 1; i <= IMPORT_ROWS; i++) {
+    const unit = 1 + (i % 3);
+    lines.push(`IMP-${i},${unit},${(3.95 - unit - 0.00009 * i).toFixed(5)},RADIOCARBON,DETRITAL_CHARCOAL,OLDER_THAN_DEPOSIT,${3400 - 1000 * unit + (i % 80)},${20 + (i % 40)},INTCAL20`);
+  }
+  const csv = lines.join('\n');
+  type Imported = { importSamples: { rowCount: number; committed: boolean; errors: unknown[] } };
+  let started = performance.now();
+  const validated = await graphql<Imported>(url, token, IMPORT_MUTATION, { i: { siteId, csv, commit: false } });
+  const validateSeconds = (performance.now() - started) / 1000;
+  started = performance.now();
+  const committed = await graphql<Imported>(url, token, IMPORT_MUTATION, { i: { siteId, csv, commit: true } });
+  const commitSeconds = (performance.now() - started) / 1000;
+  const outcome = committed.data?.importSamples;
+  if (!outcome || validated.errors?.length) throw new Error(`the import failed: ${JSON.stringify(committed.errors ?? validated.errors).slice(0, 500)}`);
+  return { rows: outcome.rowCount, validateSeconds, commitSeconds, committed: outcome.committed, errors: outcome.errors.length, peakRssMiB: peakRssMiB(pid) };
+}
+
+/** Seed, start the API, load the ladder, import a sheet; the bench database is dropped afterwards. */
+export async function benchApi(): Promise<ApiBench> {
+  const config = loadConfig();
+  const benchDatabase = `stratochron_bench_${randomBytes(4).toString('hex')}`;
+  const admin = new Client({ connectionString: config.databaseUrl });
+  await admin.connect();
+  await admin.query(`create database "${benchDatabase}"`);
+  const databaseUrl = withDatabase(config.databaseUrl, benchDatabase);
+  let api: Awaited<ReturnType<typeof startApi>> | undefined;
+  const pool = new Pool({ connectionString: databaseUrl, max: 4 });
+  try {
+    api = await startApi(databaseUrl, randomBytes(24).toString('hex')); // runs the migrations
+    const { projectId, email } = await seedProject(pool);
+    const signIn = await graphql<{ signIn: { token: string } }>(api.url, undefined, 'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }', { e: email, p: PASSWORD });
+    const token = signIn.data?.signIn.token;
+    if (!token) throw new Error(`sign-in failed: ${JSON.stringify(signIn.errors)}`);
+    const ladderGrid = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_GRID_QUERY);
+    await waitUntilQuiet(pool);
+    const ladder = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_QUERY);
+    await waitUntilQuiet(pool);
+    const imported = await benchImport(api.url, token, pool, projectId, api.child.pid);
+    return { ladder, ladderGrid, import: imported };
+  } finally {
+    api?.child.kill('SIGKILL');
+    await pool.end();
+    await admin.query(`drop database if exists "${benchDatabase}" with (force)`).catch(() => undefined);
+    await admin.end();
+  }
+}
