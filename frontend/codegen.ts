@@ -18,7 +18,7 @@ const config: CodegenConfig = {
         enumsAsTypes: true,
         useTypeImports: true,
         strictScalars: true,
-        scalars: { DateTime: 'string', JSON: 'unknown' },
+        scalars: { DateTime: 'string', JSON: 'unknown', NumberList: 'number[]' },
       },
     },
   },

@@ -18,6 +18,8 @@ export type Scalars = {
   DateTime: { input: string; output: string; }
   /** Arbitrary JSON (settings snapshots, audit before/after images). */
   JSON: { input: unknown; output: unknown; }
+  /** A list of numbers sent as one JSON array: cheap to send for long density grids. */
+  NumberList: { input: number[]; output: number[]; }
 };
 
 export type AcceptInvitationInput = {
@@ -286,6 +288,14 @@ export type DatingMethod =
   | 'RADIOCARBON'
   | 'TEPHRA';
 
+/** A density on a regular calendar grid: value i is the mean probability per year around startCalBp + i * stepYears. */
+export type DensityGrid = {
+  __typename?: 'DensityGrid';
+  startCalBp: Scalars['Float']['output'];
+  stepYears: Scalars['Int']['output'];
+  values: Scalars['NumberList']['output'];
+};
+
 /** One year of a calendar-age density. */
 export type DensityPoint = {
   __typename?: 'DensityPoint';
@@ -467,7 +477,10 @@ export type LadderColumn = {
 
 export type LadderEvent = {
   __typename?: 'LadderEvent';
+  /** The same thinned posterior as points (larger to send; prefer densityGrid). */
   density: Array<DensityPoint>;
+  /** The posterior thinned for drawing (about 120 values); null when the site has no successful run. */
+  densityGrid?: Maybe<DensityGrid>;
   eventHorizon: EventHorizon;
   hpd95: Array<HpdRange>;
   medianCalBp?: Maybe<Scalars['Float']['output']>;
@@ -1367,7 +1380,7 @@ export type SiteCalibrationsQueryVariables = Exact<{
 }>;
 
 
-export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
 
 export type ImportSamplesMutationVariables = Exact<{
   input: ImportSamplesInput;
@@ -1381,7 +1394,7 @@ export type EventLadderQueryVariables = Exact<{
 }>;
 
 
-export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
+export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid?: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } | null }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
 
 export type HypothesisQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -1968,6 +1981,8 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
       calibration {
         curve
         medianCalBp
+        meanCalBp
+        sdYears
         hpd68 {
           olderCalBp
           youngerCalBp
@@ -2043,9 +2058,10 @@ export const EventLadderDocument = new TypedDocumentString(`
           youngerCalBp
           probability
         }
-        density {
-          calBp
-          probability
+        densityGrid {
+          startCalBp
+          stepYears
+          values
         }
       }
     }

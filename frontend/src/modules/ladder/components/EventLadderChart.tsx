@@ -1,6 +1,6 @@
 import { area, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform } from 'd3';
 import { useEffect, useId, useMemo, useRef, useState, type RefObject } from 'react';
-import type { EventLadderQuery, HypothesisQuery } from '@/gql/graphql';
+import type { HypothesisQuery } from '@/gql/graphql';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
@@ -23,7 +23,8 @@ const MAX_ZOOM = 40;
 const calBpOf = (point: DensityPoint) => point.calBp;
 const probabilityOf = (point: DensityPoint) => point.probability;
 
-export type LadderColumn = EventLadderQuery['eventLadder']['columns'][number];
+export type { LadderColumn } from '@/modules/ladder/hooks/ladderQueries';
+import type { LadderColumn } from '@/modules/ladder/hooks/ladderQueries';
 export type LadderHypothesis = HypothesisQuery['hypothesis'];
 
 export type EventLadderChartProps = {

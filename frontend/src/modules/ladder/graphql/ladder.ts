@@ -31,9 +31,10 @@ export const EventLadderDocument = graphql(`
             youngerCalBp
             probability
           }
-          density {
-            calBp
-            probability
+          densityGrid {
+            startCalBp
+            stepYears
+            values
           }
         }
       }
