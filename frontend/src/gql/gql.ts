@@ -61,7 +61,7 @@ type Documents = {
     "\n  mutation CreateEventHorizon($input: CreateEventHorizonInput!) {\n    createEventHorizon(input: $input) {\n      id\n    }\n  }\n": typeof types.CreateEventHorizonDocument,
     "\n  mutation UpdateEventHorizon($id: ID!, $version: Int!, $input: UpdateEventHorizonInput!) {\n    updateEventHorizon(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": typeof types.UpdateEventHorizonDocument,
     "\n  mutation DeleteEventHorizon($id: ID!) {\n    deleteEventHorizon(id: $id)\n  }\n": typeof types.DeleteEventHorizonDocument,
-    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n": typeof types.AcceptInvitationDocument,
+    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n      }\n    }\n  }\n": typeof types.AcceptInvitationDocument,
     "\n  mutation RequestPasswordReset($email: String!) {\n    requestPasswordReset(email: $email)\n  }\n": typeof types.RequestPasswordResetDocument,
     "\n  mutation ResetPassword($input: ResetPasswordInput!) {\n    resetPassword(input: $input)\n  }\n": typeof types.ResetPasswordDocument,
     "\n  query ProjectTeam($id: ID!) {\n    project(id: $id) {\n      id\n      name\n      myRole\n      members {\n        id\n        role\n        user {\n          id\n          email\n          displayName\n        }\n      }\n      invitations {\n        id\n        email\n        role\n        expiresAt\n        acceptedAt\n      }\n    }\n  }\n": typeof types.ProjectTeamDocument,
@@ -116,7 +116,7 @@ const documents: Documents = {
     "\n  mutation CreateEventHorizon($input: CreateEventHorizonInput!) {\n    createEventHorizon(input: $input) {\n      id\n    }\n  }\n": types.CreateEventHorizonDocument,
     "\n  mutation UpdateEventHorizon($id: ID!, $version: Int!, $input: UpdateEventHorizonInput!) {\n    updateEventHorizon(id: $id, version: $version, input: $input) {\n      id\n      version\n    }\n  }\n": types.UpdateEventHorizonDocument,
     "\n  mutation DeleteEventHorizon($id: ID!) {\n    deleteEventHorizon(id: $id)\n  }\n": types.DeleteEventHorizonDocument,
-    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n": types.AcceptInvitationDocument,
+    "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n      }\n    }\n  }\n": types.AcceptInvitationDocument,
     "\n  mutation RequestPasswordReset($email: String!) {\n    requestPasswordReset(email: $email)\n  }\n": types.RequestPasswordResetDocument,
     "\n  mutation ResetPassword($input: ResetPasswordInput!) {\n    resetPassword(input: $input)\n  }\n": types.ResetPasswordDocument,
     "\n  query ProjectTeam($id: ID!) {\n    project(id: $id) {\n      id\n      name\n      myRole\n      members {\n        id\n        role\n        user {\n          id\n          email\n          displayName\n        }\n      }\n      invitations {\n        id\n        email\n        role\n        expiresAt\n        acceptedAt\n      }\n    }\n  }\n": types.ProjectTeamDocument,
@@ -312,7 +312,7 @@ export function graphql(source: "\n  mutation DeleteEventHorizon($id: ID!) {\n  
 /**
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */
-export function graphql(source: "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n        memberships {\n          id\n          project {\n            id\n          }\n        }\n      }\n    }\n  }\n"): typeof import('./graphql').AcceptInvitationDocument;
+export function graphql(source: "\n  mutation AcceptInvitation($input: AcceptInvitationInput!) {\n    acceptInvitation(input: $input) {\n      token\n      user {\n        id\n        email\n        displayName\n      }\n    }\n  }\n"): typeof import('./graphql').AcceptInvitationDocument;
 /**
  * The graphql function is used to parse GraphQL queries into a document that can be used by GraphQL clients.
  */

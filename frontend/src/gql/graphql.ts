@@ -1627,7 +1627,7 @@ export type AcceptInvitationMutationVariables = Exact<{
 }>;
 
 
-export type AcceptInvitationMutation = { __typename?: 'Mutation', acceptInvitation: { __typename?: 'AuthPayload', token: string, user: { __typename?: 'User', id: string, email: string, displayName: string, memberships: Array<{ __typename?: 'Membership', id: string, project: { __typename?: 'Project', id: string } }> } } };
+export type AcceptInvitationMutation = { __typename?: 'Mutation', acceptInvitation: { __typename?: 'AuthPayload', token: string, user: { __typename?: 'User', id: string, email: string, displayName: string } } };
 
 export type RequestPasswordResetMutationVariables = Exact<{
   email: Scalars['String']['input'];
@@ -2673,12 +2673,6 @@ export const AcceptInvitationDocument = new TypedDocumentString(`
       id
       email
       displayName
-      memberships {
-        id
-        project {
-          id
-        }
-      }
     }
   }
 }

@@ -15,6 +15,8 @@ export type AuditRecordDialogProps = {
 /** One audit record: its fields before and after side by side, changed ones marked, and the raw JSON. */
 export function AuditRecordDialog({ record, onClose }: AuditRecordDialogProps) {
   const changes = useMemo(() => (record ? auditFieldChanges(record.before, record.after) : []), [record]);
+  // A create or a delete changes every field: marking them all would say nothing.
+  const isUpdate = record !== null && record.before != null && record.after != null;
   return (
     <Dialog
       isOpen={record !== null}
@@ -39,9 +41,9 @@ export function AuditRecordDialog({ record, onClose }: AuditRecordDialogProps) {
             </thead>
             <tbody>
               {changes.map((change) => (
-                <tr key={change.field} className={change.changed ? 'sc-audit-changed' : undefined}>
+                <tr key={change.field} className={isUpdate && change.changed ? 'sc-audit-changed' : undefined}>
                   <td className="num">
-                    {change.field} {change.changed && <Tag minimal>changed</Tag>}
+                    {change.field} {isUpdate && change.changed && <Tag minimal>changed</Tag>}
                   </td>
                   <td className="num sc-audit-value">{jsonCellText(change.before)}</td>
                   <td className="num sc-audit-value">{jsonCellText(change.after)}</td>

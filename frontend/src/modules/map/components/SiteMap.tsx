@@ -7,7 +7,7 @@ import { useNavigate } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import type { SiteKind } from '@/gql/graphql';
 import { mapQueries } from '@/modules/map/hooks/mapQueries';
-import { fitMapProjection, segmentTrackLine, siteTrack, type LonLat } from '@/modules/map/utils/mapGeometry';
+import { fitMapProjection, segmentTrackLine, siteTrack, smoothTrack, type LonLat } from '@/modules/map/utils/mapGeometry';
 import { layoutMarkers } from '@/modules/map/utils/markerLayout';
 import { isMarineSite, SEGMENT_TONES, SITE_KIND_ORDER, SITE_SYMBOLS, siteFill, siteSymbolPath } from '@/modules/map/utils/siteSymbols';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
@@ -63,7 +63,7 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
   const basePath = useMemo(() => geoPath(projection), [projection]);
   const landPath = useMemo(() => (land.data ? (basePath(land.data) ?? '') : ''), [basePath, land.data]);
   const graticulePath = useMemo(() => basePath(geoGraticule10()) ?? '', [basePath]);
-  const track = useMemo(() => siteTrack(sites), [sites]);
+  const track = useMemo(() => smoothTrack(siteTrack(sites)), [sites]);
 
   const toScreen = useMemo(
     () =>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitMapProjection, MIN_SPAN_DEGREES, positionAtKm, segmentTrackLine, siteBounds, siteTrack, type MapSite } from './mapGeometry';
+import { fitMapProjection, MIN_SPAN_DEGREES, positionAtKm, segmentTrackLine, siteBounds, siteTrack, smoothTrack, type MapSite } from './mapGeometry';
 
 // An invented margin: four sites along a coast running roughly north-south.
 const SITES: MapSite[] = [
@@ -120,5 +120,34 @@ describe(segmentTrackLine.name, () => {
     expect(segmentTrackLine(track, 330, 110)).toEqual(segmentTrackLine(track, 110, 330));
     expect(segmentTrackLine(track, 100, 100)).toEqual([]);
     expect(segmentTrackLine([], 0, 100)).toEqual([]);
+  });
+});
+
+describe(smoothTrack.name, () => {
+  it('keeps a straight track exactly, ends included (local linear fit is exact for linear data)', () => {
+    const straight = [0, 50, 120, 300, 410].map((km) => ({ km, position: [-120 + km / 100, 40 - km / 200] as const }));
+    const smoothed = smoothTrack(straight, 80);
+    smoothed.forEach((point, index) => {
+      expect(point.position[0]).toBeCloseTo(straight[index]?.position[0] ?? NaN, 9);
+      expect(point.position[1]).toBeCloseTo(straight[index]?.position[1] ?? NaN, 9);
+    });
+  });
+
+  it('pulls a zigzag across the coast towards its centre line', () => {
+    // Sites alternate 0.5 degrees either side of longitude -124 every 50 km.
+    const zigzag = [0, 50, 100, 150, 200, 250, 300].map((km, index) => ({ km, position: [-124 + (index % 2 === 0 ? 0.5 : -0.5), 44 - km / 100] as const }));
+    const smoothed = smoothTrack(zigzag, 60);
+    const interior = smoothed.slice(1, -1);
+    for (const point of interior) expect(Math.abs(point.position[0] + 124)).toBeLessThan(0.25);
+    // Latitude is linear in km and so kept.
+    interior.forEach((point) => expect(point.position[1]).toBeCloseTo(44 - point.km / 100, 9));
+  });
+
+  it('leaves tracks of fewer than three points as they are', () => {
+    const two = [
+      { km: 0, position: [1, 2] as const },
+      { km: 10, position: [3, 4] as const },
+    ];
+    expect(smoothTrack(two)).toEqual(two);
   });
 });

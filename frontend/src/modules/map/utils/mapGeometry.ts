@@ -124,3 +124,43 @@ export function segmentTrackLine(track: readonly TrackPoint[], startKm: number, 
   if (!start || !end || high === low) return [];
   return [start, ...track.filter((point) => point.km > low && point.km < high).map((point) => point.position), end];
 }
+
+/**
+ * The track smoothed by local linear regression (Cleveland 1979, LOESS with a Gaussian kernel
+ * of `bandwidthKm`): at each track km, longitude and latitude are read from a weighted straight-
+ * line fit against km. Onshore and offshore sites alternate along a margin, so the raw track
+ * zigzags across the coast; the smoothed one follows the margin. A straight track is kept
+ * exactly, ends included, which a plain moving average would pull inwards. The default
+ * bandwidth is a sixth of the track's length.
+ */
+export function smoothTrack(track: readonly TrackPoint[], bandwidthKm?: number): TrackPoint[] {
+  if (track.length < 3) return [...track];
+  const span = (track[track.length - 1]?.km ?? 0) - (track[0]?.km ?? 0);
+  const h = bandwidthKm ?? Math.max(span / 6, 1);
+  return track.map(({ km }) => {
+    let sw = 0;
+    let swx = 0;
+    let swxx = 0;
+    let swLon = 0;
+    let swLat = 0;
+    let swxLon = 0;
+    let swxLat = 0;
+    for (const point of track) {
+      const x = point.km - km;
+      const w = Math.exp(-0.5 * (x / h) ** 2);
+      sw += w;
+      swx += w * x;
+      swxx += w * x * x;
+      swLon += w * point.position[0];
+      swLat += w * point.position[1];
+      swxLon += w * x * point.position[0];
+      swxLat += w * x * point.position[1];
+    }
+    // The intercept of the weighted fit y = a + b x at x = 0 (normal equations solved for a).
+    const determinant = sw * swxx - swx * swx;
+    if (Math.abs(determinant) < 1e-12) return { km, position: [swLon / sw, swLat / sw] as const };
+    const lon = (swxx * swLon - swx * swxLon) / determinant;
+    const lat = (swxx * swLat - swx * swxLat) / determinant;
+    return { km, position: [lon, lat] as const };
+  });
+}

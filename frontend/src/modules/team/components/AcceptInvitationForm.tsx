@@ -3,7 +3,7 @@ import { IconNames } from '@blueprintjs/icons';
 import { useState, type FormEvent } from 'react';
 import { fieldErrorsOf, formErrorOf } from '@/modules/api/utils/apiError';
 import { useAcceptInvitation } from '@/modules/team/hooks/useAccountTokens';
-import { landingProjectId, MIN_PASSWORD_LENGTH, readNewPassword, type NewPasswordField } from '@/modules/team/utils/teamForms';
+import { MIN_PASSWORD_LENGTH, readNewPassword, type NewPasswordField } from '@/modules/team/utils/teamForms';
 import { TextField } from '@/modules/ui/components/FormFields';
 import type { FieldErrors } from '@/modules/ui/utils/formFields';
 
@@ -28,7 +28,7 @@ export function AcceptInvitationForm({ token, onAccepted }: AcceptInvitationForm
     if (!result.ok) return;
     accept.mutate(
       { token, password: result.input.password, displayName },
-      { onSuccess: ({ user }) => onAccepted(landingProjectId(user.memberships)) },
+      { onSuccess: onAccepted },
     );
   };
 

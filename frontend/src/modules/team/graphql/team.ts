@@ -8,12 +8,6 @@ export const AcceptInvitationDocument = graphql(`
         id
         email
         displayName
-        memberships {
-          id
-          project {
-            id
-          }
-        }
       }
     }
   }

@@ -1,26 +1,29 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { sessionStore } from '@/modules/auth/utils/sessionStore';
+import { ProjectsDocument } from '@/modules/projects/graphql/projects';
+import { landingProjectId } from '@/modules/team/utils/teamForms';
 import { AcceptInvitationDocument, RequestPasswordResetDocument, ResetPasswordDocument } from '@/modules/team/graphql/team';
 
 export type AcceptInvitationVariables = { token: string; password: string; displayName: string };
 
 /**
  * Redeem an invitation link and keep the token it answers with (the person is signed in);
- * resolves with the project ids of the new session's memberships.
+ * resolves with the project to land in, or null when the new session has several.
  */
 export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ token, password, displayName }: AcceptInvitationVariables) =>
-      (
-        await graphqlRequest(AcceptInvitationDocument, {
-          input: { token, password, displayName: displayName.trim() === '' ? null : displayName.trim() },
-        })
-      ).acceptInvitation,
-    onSuccess: ({ token, user }) => {
+    mutationFn: async ({ token, password, displayName }: AcceptInvitationVariables): Promise<string | null> => {
+      const { acceptInvitation } = await graphqlRequest(AcceptInvitationDocument, {
+        input: { token, password, displayName: displayName.trim() === '' ? null : displayName.trim() },
+      });
       queryClient.clear();
-      sessionStore.set({ token, user: { id: user.id, email: user.email, displayName: user.displayName } });
+      const { user } = acceptInvitation;
+      sessionStore.set({ token: acceptInvitation.token, user: { id: user.id, email: user.email, displayName: user.displayName } });
+      // Asked as the new session: the payload's own user.memberships cannot be resolved there.
+      const { projects } = await graphqlRequest(ProjectsDocument, {});
+      return landingProjectId(projects.map((project) => ({ project })));
     },
   });
 }
