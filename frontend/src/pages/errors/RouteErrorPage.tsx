@@ -4,6 +4,8 @@ import { Navigate, isRouteErrorResponse, useLocation, useNavigate, useRouteError
 import { paths } from '@/app/paths';
 import { isApiError } from '@/modules/api/utils/apiError';
 
+const capitalise = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
 /** What went wrong while loading or drawing a route, in words a user can act on. */
 export function RouteErrorPage() {
   const error = useRouteError();
@@ -20,7 +22,7 @@ export function RouteErrorPage() {
         className="sc-error-page"
         icon={IconNames.SEARCH}
         title="Not found"
-        description={isApiError(error) ? `${error.message}. It may have been deleted.` : 'There is no page at this address.'}
+        description={isApiError(error) ? `${capitalise(error.message)}. It may have been deleted.` : 'There is no page at this address.'}
         action={toProjects}
       />
     );

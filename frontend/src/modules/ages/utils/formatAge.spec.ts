@@ -1,8 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import { ticks } from 'd3';
 import {
+  ageAxisTicks,
   calBpToAstronomicalYear,
   formatAge,
   formatAgeRange,
+  formatAgeRanges,
   formatAgeTick,
   formatCalendarYear,
 } from './formatAge';
@@ -69,5 +72,42 @@ describe(formatAgeTick.name, () => {
   it('leaves the unit to the axis title in cal BP but keeps the era in CE/BCE', () => {
     expect(formatAgeTick(2000, 'CAL_BP')).toBe('2000');
     expect(formatAgeTick(2000, 'CE_BCE')).toBe('51 BCE');
+  });
+});
+
+describe(formatAgeRanges.name, () => {
+  const ranges = [
+    { olderCalBp: 368, youngerCalBp: 330 },
+    { olderCalBp: 507, youngerCalBp: 430 },
+  ];
+
+  it('lists ranges oldest first with the unit once', () => {
+    expect(formatAgeRanges(ranges, 'CAL_BP')).toBe('507–430, 368–330 cal BP');
+    expect(formatAgeRanges(ranges, 'CE_BCE')).toBe('1443–1520, 1582–1620 CE');
+  });
+
+  it('writes BCE once when every range is BCE, and each era when they are mixed', () => {
+    expect(formatAgeRanges([{ olderCalBp: 3000, youngerCalBp: 2900 }, { olderCalBp: 2600, youngerCalBp: 2500 }], 'CE_BCE')).toBe(
+      '1051–951, 651–551 BCE',
+    );
+    expect(formatAgeRanges([{ olderCalBp: 2070, youngerCalBp: 1910 }, { olderCalBp: 1800, youngerCalBp: 1700 }], 'CE_BCE')).toBe(
+      '121 BCE–40 CE, 150–250 CE',
+    );
+  });
+
+  it('writes nothing for no ranges', () => {
+    expect(formatAgeRanges([], 'CAL_BP')).toBe('');
+  });
+});
+
+describe(ageAxisTicks.name, () => {
+  it('puts cal BP ticks at round cal BP values', () => {
+    expect(ageAxisTicks([3500, 1000], 'CAL_BP', 5, ticks)).toEqual([1000, 1500, 2000, 2500, 3000, 3500]);
+  });
+
+  it('puts CE/BCE ticks at round historical years, with the era boundary at 1 CE', () => {
+    // 3500 cal BP is 1551 BCE and 1000 cal BP is 950 CE [analytic].
+    const positions = ageAxisTicks([3500, 1000], 'CE_BCE', 5, ticks);
+    expect(positions.map((calBp) => formatAgeTick(calBp, 'CE_BCE'))).toEqual(['1500 BCE', '1000 BCE', '500 BCE', '1 CE', '500 CE']);
   });
 });

@@ -68,3 +68,48 @@ export function formatAgeTick(calBp: number, scale: AgeScale): string {
 export function formatRadiocarbonAge(c14Age: number, c14Error: number): string {
   return `${Math.round(c14Age)} ± ${Math.round(c14Error)}`;
 }
+
+/** The unit or era every formatted range ends in, when they all end in the same one. */
+function sharedSuffix(parts: readonly string[], scale: AgeScale): string | null {
+  if (scale === 'CAL_BP') return ' cal BP';
+  if (parts.every((part) => /^\d+–\d+ CE$/.test(part))) return ' CE';
+  if (parts.every((part) => /^\d+–\d+ BCE$/.test(part))) return ' BCE';
+  return null;
+}
+
+/**
+ * Several ranges on one line, oldest first, the unit or era written once when all share it:
+ * "507–430, 368–330 cal BP", "1443–1520, 1582–1620 CE"; ranges of mixed eras keep their own.
+ */
+export function formatAgeRanges(ranges: readonly { olderCalBp: number; youngerCalBp: number }[], scale: AgeScale): string {
+  if (ranges.length === 0) return '';
+  const ordered = [...ranges].sort((a, b) => Math.max(b.olderCalBp, b.youngerCalBp) - Math.max(a.olderCalBp, a.youngerCalBp));
+  const parts = ordered.map((range) => formatAgeRange(range.olderCalBp, range.youngerCalBp, scale));
+  const suffix = sharedSuffix(parts, scale);
+  if (suffix === null) return parts.join(', ');
+  return `${parts.map((part) => part.slice(0, -suffix.length)).join(', ')}${suffix}`;
+}
+
+/**
+ * Tick positions (in cal BP) for a calendar axis spanning [olderCalBp, youngerCalBp], at round
+ * numbers of the chosen scale: round cal BP, or round CE/BCE years. Round historical years
+ * sit one year off the astronomical count before the era (1500 BCE is astronomical -1499), and
+ * the era boundary, which has no year 0, is marked at 1 CE. `niceTicks` is d3's ticks (or any
+ * function giving round values in a range), passed in so this stays free of chart libraries.
+ */
+export function ageAxisTicks(
+  [olderCalBp, youngerCalBp]: [number, number],
+  scale: AgeScale,
+  count: number,
+  niceTicks: (start: number, stop: number, count: number) => number[],
+): number[] {
+  if (scale === 'CAL_BP') return niceTicks(youngerCalBp, olderCalBp, count);
+  const historical = (calBp: number) => {
+    const astronomical = BP_ZERO_YEAR_CE - calBp;
+    return astronomical <= 0 ? astronomical - 1 : astronomical;
+  };
+  return niceTicks(historical(olderCalBp), historical(youngerCalBp), count).map((year) => {
+    const astronomical = year < 0 ? year + 1 : year === 0 ? 1 : year;
+    return BP_ZERO_YEAR_CE - astronomical;
+  });
+}

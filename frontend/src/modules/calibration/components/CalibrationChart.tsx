@@ -46,10 +46,13 @@ const STRIP_GAP = 10;
 const PLOT_LEFT = Y_AXIS_X + STRIP_WIDTH + STRIP_GAP;
 const RIGHT_MARGIN = 18;
 const TOP = 14;
-const ROW_DENSITY_HEIGHT = 30;
 const ROW_BARS_HEIGHT = 16;
-const ROW_HEIGHT = ROW_DENSITY_HEIGHT + ROW_BARS_HEIGHT + 6;
 const X_AXIS_HEIGHT = 44;
+
+/** A lone density gets room to show its shape; many share the height as ridgelines. */
+function rowDensityHeight(count: number): number {
+  return count <= 1 ? 64 : count <= 3 ? 44 : 30;
+}
 
 const calBpOf = (point: { calBp: number }) => point.calBp;
 const probabilityOf = (point: DensityPoint) => point.probability;
@@ -69,13 +72,15 @@ const seriesKey = (series: CalibrationSeries) => series.id;
  */
 export function CalibrationChart({ series, bands, window }: CalibrationChartProps) {
   const { ref, width } = useParentSize();
-  const { tick, scale } = useAgeScale();
+  const { tick, axisTicks, scale } = useAgeScale();
   const clipId = `calibration-clip${useId().replace(/:/g, '')}`;
   const plotRight = Math.max(PLOT_LEFT + 120, width - RIGHT_MARGIN);
   const mainHeight = Math.round(Math.min(340, Math.max(220, width * 0.36)));
   const mainBottom = TOP + mainHeight;
   const rowsTop = mainBottom + 16;
-  const rowsBottom = rowsTop + series.length * ROW_HEIGHT;
+  const densityHeight = rowDensityHeight(series.length);
+  const rowHeight = densityHeight + ROW_BARS_HEIGHT + 6;
+  const rowsBottom = rowsTop + series.length * rowHeight;
   const height = rowsBottom + X_AXIS_HEIGHT;
 
   const xScale = useMemo(
@@ -104,12 +109,12 @@ export function CalibrationChart({ series, bands, window }: CalibrationChartProp
   const rows = useMemo(
     () =>
       series.map((item, index) => {
-        const baseline = rowsTop + index * ROW_HEIGHT + ROW_DENSITY_HEIGHT;
+        const baseline = rowsTop + index * rowHeight + densityHeight;
         const peak = densityPeak(item.density) || 1;
         const calendarArea = area<DensityPoint>()
           .x((point) => xScale(calBpOf(point)))
           .y0(baseline)
-          .y1((point) => baseline - (probabilityOf(point) / peak) * (ROW_DENSITY_HEIGHT - 2));
+          .y1((point) => baseline - (probabilityOf(point) / peak) * (densityHeight - 2));
         let measuredPath: string | null = null;
         if (item.measured) {
           const samples = normalDensityPoints(item.measured);
@@ -123,10 +128,10 @@ export function CalibrationChart({ series, bands, window }: CalibrationChartProp
         }
         return { item, baseline, calendarPath: calendarArea(closeDensity(item.density)) ?? '', measuredPath };
       }),
-    [series, rowsTop, xScale, yScale],
+    [series, rowsTop, rowHeight, densityHeight, xScale, yScale],
   );
 
-  const xTicks = xScale.ticks(Math.max(3, Math.floor((plotRight - PLOT_LEFT) / 90)));
+  const xTicks = axisTicks([window.olderCalBp, window.youngerCalBp], Math.max(3, Math.floor((plotRight - PLOT_LEFT) / 90)));
   const yTicks = yScale.ticks(6);
   const [yTop, yBottom] = [yScale.range()[1]!, yScale.range()[0]!];
 
@@ -223,7 +228,7 @@ export function CalibrationChart({ series, bands, window }: CalibrationChartProp
                   <line
                     x1={xScale(item.medianCalBp)}
                     x2={xScale(item.medianCalBp)}
-                    y1={baseline - ROW_DENSITY_HEIGHT + 2}
+                    y1={baseline - densityHeight + 2}
                     y2={baseline}
                     stroke={item.colour}
                     strokeDasharray="2 2"
@@ -248,9 +253,6 @@ export function CalibrationChart({ series, bands, window }: CalibrationChartProp
                   ))}
                   <text x={PLOT_LEFT - STRIP_GAP - 2} y={baseline - 8} textAnchor="end" fill={item.colour} fontWeight={600} className="num">
                     {item.label}
-                  </text>
-                  <text x={PLOT_LEFT - STRIP_GAP - 2} y={bar95} dy="0.32em" textAnchor="end" fill={CHART_INK.muted} fontSize={9}>
-                    68 · 95 %
                   </text>
                 </g>
               );

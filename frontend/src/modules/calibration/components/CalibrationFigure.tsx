@@ -1,4 +1,4 @@
-import { Callout, Intent } from '@blueprintjs/core';
+import { Callout, Classes, Intent } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQueries, useQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
@@ -13,10 +13,12 @@ export type CalibrationFigureProps = {
   series: readonly CalibrationSeries[];
   /** The curves the series were calibrated on; each is drawn as a band. */
   curves: readonly CurveCode[];
+  /** A sentence added to the caption (e.g. how marine ages are drawn). */
+  note?: string;
 };
 
 /** Fetches the curve bands for the calendar range the densities need, then draws the chart. */
-export function CalibrationFigure({ series, curves }: CalibrationFigureProps) {
+export function CalibrationFigure({ series, curves, note }: CalibrationFigureProps) {
   const window = useMemo(() => calendarWindow(series.map((item) => item.density)), [series]);
   const curveInfo = useQuery(calibrationQueries.curves());
   const uniqueCurves = useMemo(() => [...new Set(curves)], [curves]);
@@ -43,5 +45,14 @@ export function CalibrationFigure({ series, curves }: CalibrationFigureProps) {
     name: curveInfo.data?.find((info) => info.code === curve)?.name ?? curve,
     points: bandQueries[index]?.data ?? [],
   }));
-  return <CalibrationChart series={series} bands={bands} window={window} />;
+  return (
+    <>
+      <CalibrationChart series={series} bands={bands} window={window} />
+      <p className={`${Classes.TEXT_MUTED} sc-chart-caption`}>
+        Left of the curve: each measured age as a normal density, its ± 1σ shaded across the curve. Below: each calendar-age
+        density with its median (dashed), 68.3 % (thick bars) and 95.4 % (thin bars) highest-density ranges.
+        {note && ` ${note}`}
+      </p>
+    </>
+  );
 }

@@ -92,7 +92,15 @@ export function CalibratorView() {
           {input && calibration.data && (
             <>
               <Card elevation={Elevation.ZERO} className="sc-chart-card">
-                <CalibrationFigure series={series} curves={[input.curve]} />
+                <CalibrationFigure
+                  series={series}
+                  curves={[input.curve]}
+                  note={
+                    input.deltaR != null
+                      ? `The marine age is drawn less its Delta-R (${Math.round(input.deltaR)} ± ${Math.round(input.deltaRError ?? 0)}), so it reads against the curve as published.`
+                      : undefined
+                  }
+                />
               </Card>
               <CalibrationRanges
                 summaries={[

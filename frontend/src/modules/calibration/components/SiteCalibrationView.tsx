@@ -113,9 +113,13 @@ export function SiteCalibrationView({ projectId, siteId }: SiteCalibrationViewPr
           <NonIdealState icon={IconNames.SELECT} title="Pick samples to overlay" />
         ) : (
           <>
-            <Section compact title="On the curve" subtitle={hasMarine ? 'marine ages drawn less their Delta-R' : undefined}>
+            <Section compact title="On the curve">
               <SectionCard>
-                <CalibrationFigure series={series} curves={selected.map((sample) => sample.curve)} />
+                <CalibrationFigure
+                  series={series}
+                  curves={selected.map((sample) => sample.curve)}
+                  note={hasMarine ? 'Marine ages are drawn less their Delta-R, so they read against the curve as published.' : undefined}
+                />
               </SectionCard>
             </Section>
             <CalibrationRanges
@@ -123,6 +127,8 @@ export function SiteCalibrationView({ projectId, siteId }: SiteCalibrationViewPr
                 label: sample.labCode,
                 colour: colours.get(sample.id)!,
                 medianCalBp: sample.calibration.medianCalBp,
+                meanCalBp: sample.calibration.meanCalBp,
+                sdYears: sample.calibration.sdYears,
                 hpd68: sample.calibration.hpd68,
                 hpd95: sample.calibration.hpd95,
                 warnings: sample.calibration.warnings,

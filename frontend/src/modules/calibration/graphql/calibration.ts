@@ -71,6 +71,8 @@ export const SiteCalibrationsDocument = graphql(`
         calibration {
           curve
           medianCalBp
+          meanCalBp
+          sdYears
           hpd68 {
             olderCalBp
             youngerCalBp

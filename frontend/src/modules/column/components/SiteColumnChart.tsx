@@ -77,7 +77,7 @@ export function SiteColumnChart({ units, eventHorizons, samples, onUnitClick, on
   const { ref, width } = useParentSize();
   const idPrefix = useId().replace(/:/g, '');
   const domain = useMemo(() => columnDepthDomain(units, samples), [units, samples]);
-  const height = columnHeightFor(domain) + MARGIN.top + MARGIN.bottom;
+  const height = columnHeightFor(domain, units.length) + MARGIN.top + MARGIN.bottom;
   const bottom = height - MARGIN.bottom;
   const [shallowest, deepest] = domain;
   const depthScale = useMemo(

@@ -49,10 +49,15 @@ describe(columnDepthDomain.name, () => {
 });
 
 describe(columnHeightFor.name, () => {
-  it('draws 150 px per metre within 360 to 960 px', () => {
+  it('draws 150 px per metre within 420 to 960 px', () => {
     expect(columnHeightFor([0, 4])).toBe(600);
-    expect(columnHeightFor([0, 1])).toBe(360);
+    expect(columnHeightFor([0, 1])).toBe(420);
     expect(columnHeightFor([0, 12])).toBe(960);
+  });
+
+  it('gives a short core with many thin units 30 px per unit', () => {
+    expect(columnHeightFor([0, 1.4], 20)).toBe(600);
+    expect(columnHeightFor([0, 4], 5)).toBe(600);
   });
 });
 

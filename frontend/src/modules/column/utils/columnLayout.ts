@@ -34,7 +34,9 @@ export type ColumnBounds = {
 
 /** Pixels given to one metre of section before the height is clamped. */
 const PIXELS_PER_METRE = 150;
-const MIN_COLUMN_HEIGHT = 360;
+const MIN_COLUMN_HEIGHT = 420;
+/** Room each unit gets on average, so thin beds of a short core still show their names. */
+const PIXELS_PER_UNIT = 30;
 const MAX_COLUMN_HEIGHT = 960;
 /** About this many depth ticks; the scale domain is rounded out to the same steps. */
 export const DEPTH_TICK_COUNT = 5;
@@ -57,9 +59,12 @@ export function columnDepthDomain(units: readonly ColumnUnit[], samples: readonl
   return [shallowest, deepest > shallowest ? deepest : shallowest + 1];
 }
 
-/** Drawing height for a column so that depth is to scale, kept within a readable range. */
-export function columnHeightFor([shallowest, deepest]: [number, number]): number {
-  const natural = (deepest - shallowest) * PIXELS_PER_METRE;
+/**
+ * Drawing height for a column (depth stays to scale at any height): 150 px per metre, or 30 px
+ * per unit when that is more, kept within 420 to 960 px.
+ */
+export function columnHeightFor([shallowest, deepest]: [number, number], unitCount = 0): number {
+  const natural = Math.max((deepest - shallowest) * PIXELS_PER_METRE, unitCount * PIXELS_PER_UNIT);
   return Math.min(MAX_COLUMN_HEIGHT, Math.max(MIN_COLUMN_HEIGHT, Math.round(natural)));
 }
 
@@ -169,7 +174,7 @@ export function columnLanes(width: number): ColumnLanes {
   const spare = width - AXIS_WIDTH - HORIZON_LABEL_WIDTH - SAMPLE_LABEL_WIDTH - 24;
   const columnWidth = Math.min(MAX_COLUMN_WIDTH, Math.max(MIN_COLUMN_WIDTH, spare));
   const axisX = AXIS_WIDTH;
-  const horizonLabelX = axisX + HORIZON_LABEL_WIDTH - 6;
+  const horizonLabelX = axisX + HORIZON_LABEL_WIDTH - 16;
   const columnX = axisX + HORIZON_LABEL_WIDTH;
   const sampleMarkerX = columnX + columnWidth + 12;
   return { axisX, horizonLabelX, columnX, columnWidth, sampleMarkerX, sampleLabelX: sampleMarkerX + 10 };

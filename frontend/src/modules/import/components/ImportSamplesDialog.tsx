@@ -179,7 +179,14 @@ function ImportCheckResult({ result }: ImportCheckResultProps) {
     <div className="sc-import-result">
       <Callout intent={ok ? Intent.SUCCESS : Intent.DANGER} icon={ok ? IconNames.TICK : IconNames.ERROR} compact className="sc-form-callout">
         <span className="num">{result.rowCount}</span> rows read;{' '}
-        {ok ? 'no problems. Nothing is written until you import.' : <><span className="num">{result.errors.length}</span> problems to fix before anything can be imported.</>}
+        {ok ? (
+          'no problems. Nothing is written until you import.'
+        ) : (
+          <>
+            <span className="num">{result.errors.length}</span> {result.errors.length === 1 ? 'problem' : 'problems'} to fix before anything can be
+            imported.
+          </>
+        )}
       </Callout>
       {!ok && (
         <HTMLTable compact striped className="sc-table sc-table-fill">

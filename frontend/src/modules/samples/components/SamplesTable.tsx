@@ -53,19 +53,19 @@ const warningsOf = (sample: SampleRow) => [...(sample.calibrationError ? [sample
  * the chosen age scale). Columns sort from their header menu and can be resized.
  */
 export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: SamplesTableProps) {
-  const { age, range, scale } = useAgeScale();
+  const { age, ranges, scale } = useAgeScale();
   const [sort, setSort] = useState<SortState<SampleSortKey>>({ key: 'depth', direction: 'ascending' });
   const unitsById = useMemo(() => new Map(units.map((unit) => [unit.id, unit])), [units]);
 
   const columns = useMemo<SampleColumn[]>(
     () => [
       { key: 'labCode', name: 'Lab code', width: 110, className: 'num', sortValue: labCodeOf, text: labCodeOf },
-      { key: 'method', name: 'Method', width: 100, sortValue: (s) => s.method, text: (s) => DATING_METHOD_LABELS[s.method] },
-      { key: 'material', name: 'Material', width: 130, sortValue: (s) => s.material, text: (s) => SAMPLE_MATERIAL_LABELS[s.material] },
+      { key: 'method', name: 'Method', width: 92, sortValue: (s) => s.method, text: (s) => DATING_METHOD_LABELS[s.method] },
+      { key: 'material', name: 'Material', width: 124, sortValue: (s) => s.material, text: (s) => SAMPLE_MATERIAL_LABELS[s.material] },
       {
         key: 'unit',
         name: 'Unit',
-        width: 120,
+        width: 140,
         sortValue: (s) => unitsById.get(s.unit.id)?.position,
         text: (s) => unitsById.get(s.unit.id)?.name ?? '?',
       },
@@ -85,7 +85,7 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
         sortValue: (s) => s.c14Age,
         text: (s) => (s.c14Age != null && s.c14Error != null ? formatRadiocarbonAge(s.c14Age, s.c14Error) : '–'),
       },
-      { key: 'curve', name: 'Curve', width: 80, sortValue: (s) => s.curve, text: (s) => (s.curve ? CURVE_LABELS[s.curve] : '–') },
+      { key: 'curve', name: 'Curve', width: 72, sortValue: (s) => s.curve, text: (s) => (s.curve ? CURVE_LABELS[s.curve] : '–') },
       {
         key: 'deltaR',
         name: 'Delta-R',
@@ -97,7 +97,7 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
       {
         key: 'median',
         name: 'Median',
-        width: 112,
+        width: 100,
         className: 'num sc-numeric',
         sortValue: medianOf,
         text: (s) => (s.calibration ? age(s.calibration.medianCalBp) : '–'),
@@ -105,16 +105,10 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
       {
         key: 'hpd95',
         name: '95.4 % ranges',
-        width: 200,
+        width: 250,
         className: 'num',
         sortValue: oldest95Of,
-        text: (s) =>
-          s.calibration
-            ? [...s.calibration.hpd95]
-                .sort((a, b) => b.olderCalBp - a.olderCalBp)
-                .map((hpd) => range(hpd.olderCalBp, hpd.youngerCalBp))
-                .join(', ')
-            : '–',
+        text: (s) => (s.calibration ? ranges(s.calibration.hpd95) : '–'),
       },
       {
         key: 'warnings',
@@ -126,12 +120,12 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
       {
         key: 'excluded',
         name: 'Excluded',
-        width: 140,
+        width: 120,
         sortValue: (s) => (s.excluded ? 1 : null),
         text: (s) => (s.excluded ? (s.exclusionReason ?? 'yes') : ''),
       },
     ],
-    [unitsById, age, range],
+    [unitsById, age, ranges],
   );
 
   const sorted = useMemo(() => {

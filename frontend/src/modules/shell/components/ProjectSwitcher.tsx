@@ -1,4 +1,4 @@
-import { Button, Menu, MenuDivider, MenuItem, Popover, Tag } from '@blueprintjs/core';
+import { Button, Menu, MenuDivider, MenuItem, PopoverNext, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
@@ -32,8 +32,8 @@ export function ProjectSwitcher({ currentProjectId }: ProjectSwitcherProps) {
     </Menu>
   );
   return (
-    <Popover content={menu} placement="bottom-start" minimal>
+    <PopoverNext content={menu} placement="bottom-start" arrow={false}>
       <Button variant="minimal" icon={IconNames.PROJECTS} endIcon={IconNames.CARET_DOWN} text={current?.name ?? 'Projects'} className="sc-project-switcher" />
-    </Popover>
+    </PopoverNext>
   );
 }

@@ -1,4 +1,4 @@
-import { Button, Classes, Menu, MenuDivider, MenuItem, Popover } from '@blueprintjs/core';
+import { Button, Classes, Menu, MenuDivider, MenuItem, PopoverNext } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useNavigate } from 'react-router-dom';
 import { paths } from '@/app/paths';
@@ -26,8 +26,8 @@ export function UserMenu({ user }: UserMenuProps) {
     </Menu>
   );
   return (
-    <Popover content={menu} placement="bottom-end" minimal>
+    <PopoverNext content={menu} placement="bottom-end" arrow={false}>
       <Button variant="minimal" icon={IconNames.USER} endIcon={IconNames.CARET_DOWN} text={user.displayName} />
-    </Popover>
+    </PopoverNext>
   );
 }
