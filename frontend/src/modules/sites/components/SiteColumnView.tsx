@@ -120,6 +120,9 @@ export function SiteColumnView({ site, canEdit }: SiteColumnViewProps) {
           rightElement={canEdit ? <Button icon={IconNames.ADD} text="Add unit" variant="minimal" intent={Intent.PRIMARY} onClick={() => setEditingUnit('new')} /> : undefined}
         >
           <SectionCard padded={false}>
+            {site.units.length === 0 ? (
+              <p className={`${Classes.TEXT_MUTED} sc-empty-note`}>No units yet.</p>
+            ) : (
             <HTMLTable compact striped className="sc-table sc-table-fill">
               <thead>
                 <tr>
@@ -154,6 +157,7 @@ export function SiteColumnView({ site, canEdit }: SiteColumnViewProps) {
                 ))}
               </tbody>
             </HTMLTable>
+            )}
           </SectionCard>
         </Section>
 
