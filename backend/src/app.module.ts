@@ -23,6 +23,8 @@ import { HealthModule } from './health/health.module';
 import { HypothesesModule } from './hypotheses/hypotheses.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { JobsModule } from './jobs/jobs.module';
+import { LoadersModule } from './loaders/loaders.module';
+import { RequestLoadersFactory } from './loaders/request-loaders';
 import { MembersModule } from './members/members.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { PasswordResetsModule } from './password-resets/password-resets.module';
@@ -47,8 +49,9 @@ import { ReleasesModule } from './releases/releases.module';
     AuthModule,
     GraphQLModule.forRootAsync<ApolloDriverConfig>({
       driver: ApolloDriver,
-      inject: [APP_CONFIG],
-      useFactory: (config: AppConfig) => ({
+      imports: [LoadersModule],
+      inject: [APP_CONFIG, RequestLoadersFactory],
+      useFactory: (config: AppConfig, loaders: RequestLoadersFactory) => ({
         typePaths: [join(repositoryRoot(), 'schema.graphql')],
         path: '/graphql',
         resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar, NumberList: NumberListScalar },
@@ -57,7 +60,7 @@ import { ReleasesModule } from './releases/releases.module';
         plugins: [complexityLimitPlugin()],
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
-        context: ({ req }: { req: unknown }) => ({ req }),
+        context: ({ req }: { req: unknown }) => ({ req, loaders: loaders.create() }),
         formatError: (formatted) => formatGraphqlError(formatted, config.nodeEnv === 'production'),
       }),
     }),

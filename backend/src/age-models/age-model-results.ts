@@ -2,7 +2,6 @@
  * How an age model run's inputs and results are stored (JSON columns) and read back: densities as
  * plain number arrays, joint event draws row-major. Pure functions, shared by the API and workers.
  */
-import { createHash } from 'node:crypto';
 import { AgeModelResult } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
 import { CalendarDensity, DensitySummary, trim } from '../chronology/common/density';
@@ -83,16 +82,4 @@ export function storeResults(result: AgeModelResult): StoredAgeModelResults {
       draws: Array.from(result.eventDraws.draws, (v) => Math.round(v * 10) / 10),
     },
   };
-}
-
-/**
- * A fingerprint of everything a run depends on (every unit, horizon and sample with its version):
- * when the site's fingerprint differs from a run's, the run is out of date.
- */
-export function columnFingerprint(parts: { units: { id: string; version: number }[]; eventHorizons: { id: string; version: number }[]; samples: { id: string; version: number }[] }): string {
-  const hash = createHash('sha256');
-  for (const [kind, rows] of Object.entries(parts)) {
-    for (const row of [...rows].sort((a, b) => a.id.localeCompare(b.id))) hash.update(`${kind}:${row.id}:${row.version};`);
-  }
-  return hash.digest('hex');
 }

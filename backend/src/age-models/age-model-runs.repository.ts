@@ -1,9 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { and, desc, eq, inArray, lt, sql } from 'drizzle-orm';
+import { QueryResult } from 'pg';
 import { DatabaseService, Executor } from '../database/database.service';
 import { ageModelRuns } from '../database/schema';
 
 export type AgeModelRunRow = typeof ageModelRuns.$inferSelect;
+
+/** md5 of the empty string: the fingerprint of a column with nothing in it. */
+export const EMPTY_COLUMN_FINGERPRINT = 'd41d8cd98f00b204e9800998ecf8427e';
 
 @Injectable()
 export class AgeModelRunsRepository {
@@ -41,6 +45,25 @@ export class AgeModelRunsRepository {
       .from(ageModelRuns)
       .where(and(inArray(ageModelRuns.siteId, siteIds), eq(ageModelRuns.status, 'SUCCEEDED')))
       .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
+  }
+
+  /**
+   * A fingerprint per site of everything a run depends on: every unit, event horizon and sample
+   * with its version. A run whose stored fingerprint differs from its site's is out of date.
+   * One query for any number of sites; a site with an empty column has the fingerprint of ''.
+   */
+  async columnFingerprints(siteIds: readonly string[], executor: Executor = this.database.db): Promise<Map<string, string>> {
+    // One PostgreSQL array literal (drizzle would spread a JS array into a row of parameters).
+    const ids = `{${siteIds.join(',')}}`;
+    const result = (await executor.execute(sql`
+      select site_id::text as site_id, md5(string_agg(part, ';' order by part)) as fingerprint from (
+        select site_id, 'unit:' || id || ':' || version as part from units where site_id = any(${ids}::uuid[])
+        union all select site_id, 'event:' || id || ':' || version from event_horizons where site_id = any(${ids}::uuid[])
+        union all select site_id, 'sample:' || id || ':' || version from samples where site_id = any(${ids}::uuid[])
+      ) parts group by site_id`)) as unknown as QueryResult<{ site_id: string; fingerprint: string }>;
+    const fingerprints = new Map(siteIds.map((id) => [id, EMPTY_COLUMN_FINGERPRINT]));
+    for (const row of result.rows) fingerprints.set(row.site_id, row.fingerprint);
+    return fingerprints;
   }
 
   /** Claim a queued run for a worker: QUEUED -> RUNNING, counting the attempt. */

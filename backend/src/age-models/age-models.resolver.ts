@@ -1,4 +1,5 @@
-import { Args, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
+import { Args, Context, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
+import type { RequestLoaders } from '../loaders/request-loaders';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { EventHorizonRow } from '../event-horizons/event-horizons.repository';
@@ -45,8 +46,8 @@ export class AgeModelsResolver {
   }
 
   @ResolveField('stale')
-  stale(@Parent() run: AgeModelRunRow): Promise<boolean> {
-    return this.ageModels.isStale(run);
+  async stale(@Parent() run: AgeModelRunRow, @Context('loaders') loaders: RequestLoaders): Promise<boolean> {
+    return (await loaders.columnFingerprint.load(run.siteId)) !== run.inputFingerprint;
   }
 
   @ResolveField('events')

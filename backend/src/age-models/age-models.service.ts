@@ -16,7 +16,7 @@ import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
-import { columnFingerprint, loadDensity, StoredAgeModelResults, StoredEventPosterior, storeInput } from './age-model-results';
+import { loadDensity, StoredAgeModelResults, StoredEventPosterior, storeInput } from './age-model-results';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
 /** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
@@ -99,14 +99,6 @@ export class AgeModelsService {
     return this.runs.latestForSite(siteId);
   }
 
-  /** True when the site's column or samples changed since the run was queued. */
-  async isStale(run: AgeModelRunRow): Promise<boolean> {
-    const site = await this.sites.findById(run.siteId);
-    if (!site) return true;
-    const { fingerprint } = await this.columnRows(site);
-    return fingerprint !== run.inputFingerprint;
-  }
-
   /** Each event's posterior from its site's newest successful run (for the ladder and correlation). */
   async latestPosteriors(siteIds: string[]): Promise<Map<string, StoredEventPosterior & { runId: string; densityGrid: CalendarDensity }>> {
     const runs = await this.runs.latestSucceededForSites(siteIds);
@@ -120,19 +112,15 @@ export class AgeModelsService {
     return posteriors;
   }
 
-  /** The rows a site's model depends on: its units, event horizons and samples. */
-  private async columnRows(site: SiteRow) {
-    const [units, eventHorizons, samples] = await Promise.all([
+  /** The model input of a site's current column (sample densities recomputed), with its fingerprint. */
+  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
+    const [units, eventHorizons, samples, fingerprints] = await Promise.all([
       this.units.listForSite(site.id),
       this.eventHorizons.listForSite(site.id),
       this.samples.listForSite(site.id),
+      this.runs.columnFingerprints([site.id]),
     ]);
-    return { units, eventHorizons, samples, fingerprint: columnFingerprint({ units, eventHorizons, samples }) };
-  }
-
-  /** The model input of a site's current column (sample densities recomputed), with its fingerprint. */
-  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
-    const { units, eventHorizons, samples, fingerprint } = await this.columnRows(site);
+    const fingerprint = fingerprints.get(site.id)!;
     const model: AgeModelInput = {
       units: units.map((u) => ({ id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM })),
       eventHorizons: eventHorizons.map((h) => ({ id: h.id, name: h.name, unitBelowId: h.unitBelowId, unitAboveId: h.unitAboveId })),

@@ -5,6 +5,6 @@ import { SegmentsService } from './segments.service';
 
 @Module({
   providers: [SegmentsRepository, SegmentsService, SegmentsResolver],
-  exports: [SegmentsService],
+  exports: [SegmentsService, SegmentsRepository],
 })
 export class SegmentsModule {}

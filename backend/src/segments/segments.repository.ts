@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { segments } from '../database/schema';
 
@@ -12,6 +12,11 @@ export class SegmentsRepository {
   async findById(id: string, executor: Executor = this.database.db): Promise<SegmentRow | undefined> {
     const [row] = await executor.select().from(segments).where(eq(segments.id, id)).limit(1);
     return row;
+  }
+
+  findByIds(ids: readonly string[], executor: Executor = this.database.db): Promise<SegmentRow[]> {
+    if (ids.length === 0) return Promise.resolve([]);
+    return executor.select().from(segments).where(inArray(segments.id, [...ids]));
   }
 
   listForProject(projectId: string, executor: Executor = this.database.db): Promise<SegmentRow[]> {

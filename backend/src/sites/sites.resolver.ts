@@ -1,18 +1,15 @@
-import { Args, Int, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
+import { Args, Context, Int, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
+import type { RequestLoaders } from '../loaders/request-loaders';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { SegmentRow } from '../segments/segments.repository';
-import { SegmentsService } from '../segments/segments.service';
 import { CreateSiteInput, UpdateSiteInput } from './dto/create-site.input';
 import { SiteRow } from './sites.repository';
 import { SitesService } from './sites.service';
 
 @Resolver('Site')
 export class SitesResolver {
-  constructor(
-    private readonly sites: SitesService,
-    private readonly segments: SegmentsService,
-  ) {}
+  constructor(private readonly sites: SitesService) {}
 
   @Query('site')
   get(@CurrentUser() user: AuthUser, @Args('id') id: string): Promise<SiteRow> {
@@ -40,8 +37,8 @@ export class SitesResolver {
   }
 
   @ResolveField('segment')
-  async segment(@Parent() site: SiteRow): Promise<SegmentRow | null> {
-    return site.segmentId ? ((await this.segments.findById(site.segmentId)) ?? null) : null;
+  async segment(@Parent() site: SiteRow, @Context('loaders') loaders: RequestLoaders): Promise<SegmentRow | null> {
+    return site.segmentId ? loaders.segmentById.load(site.segmentId) : null;
   }
 }
 

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { eq, sql } from 'drizzle-orm';
+import { count, eq, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { users } from '../database/schema';
 
@@ -12,6 +12,11 @@ export class UsersRepository {
   async findByEmail(email: string, executor: Executor = this.database.db): Promise<UserRow | undefined> {
     const [row] = await executor.select().from(users).where(eq(sql`lower(${users.email})`, email.toLowerCase())).limit(1);
     return row;
+  }
+
+  async count(executor: Executor = this.database.db): Promise<number> {
+    const [row] = await executor.select({ n: count() }).from(users);
+    return row.n;
   }
 
   async findById(id: string, executor: Executor = this.database.db): Promise<UserRow | undefined> {
