@@ -8,7 +8,7 @@ import { paths } from '@/app/paths';
 import type { SiteKind } from '@/gql/graphql';
 import { mapQueries } from '@/modules/map/hooks/mapQueries';
 import { fitMapProjection, segmentTrackLine, siteTrack, smoothTrack, type LonLat } from '@/modules/map/utils/mapGeometry';
-import { layoutMarkers } from '@/modules/map/utils/markerLayout';
+import { layoutMarkers, placeBandLabel } from '@/modules/map/utils/markerLayout';
 import { isMarineSite, SEGMENT_TONES, SITE_KIND_ORDER, SITE_SYMBOLS, siteFill, siteSymbolPath } from '@/modules/map/utils/siteSymbols';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 import './map.css';
@@ -37,6 +37,8 @@ export type SiteMapProps = {
 const FRAME_MARGIN = 28;
 /** Marker centres closer than this (pixels) are fanned out. */
 const MARKER_SPACING = 14;
+/** How far a segment's label sits from its band's axis, pixels. */
+const LABEL_OFFSET = 34;
 
 const pathOfLine = line<readonly [number, number]>();
 
@@ -95,11 +97,14 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
         .sort((a, b) => a.startKm - b.startKm)
         .map((segment, index) => {
           const points = segmentTrackLine(track, segment.startKm, segment.endKm).map(toScreen);
-          const middle = points[Math.floor(points.length / 2)];
-          return { segment, tone: SEGMENT_TONES[index % SEGMENT_TONES.length] ?? SEGMENT_TONES[0], path: points.length > 1 ? (pathOfLine(points) ?? '') : '', middle };
+          const first = points[0];
+          const last = points[points.length - 1];
+          const middle = first && last ? ([(first[0] + last[0]) / 2, (first[1] + last[1]) / 2] as const) : null;
+          const label = middle && first && last ? placeBandLabel(middle, first, last, markers, LABEL_OFFSET) : null;
+          return { segment, tone: SEGMENT_TONES[index % SEGMENT_TONES.length] ?? SEGMENT_TONES[0], path: points.length > 1 ? (pathOfLine(points) ?? '') : '', label };
         })
         .filter((band) => band.path !== ''),
-    [segments, track, toScreen],
+    [segments, track, toScreen, markers],
   );
 
   // d3-zoom only listens to the pointer and reports a transform; React draws with it.
@@ -142,14 +147,14 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
           <path d={graticulePath} className="sc-map-graticule" />
           <path d={landPath} className="sc-map-land" />
         </g>
-        {segmentBands.map(({ segment, tone, path, middle }) => (
+        {segmentBands.map(({ segment, tone, path, label }) => (
           <g key={segment.id} className="sc-map-segment">
             <path d={path} stroke={tone} className="sc-map-segment-band" />
             <path d={path} className="sc-map-segment-axis" />
-            {middle && (
-              <text x={middle[0] + 12} y={middle[1]} className="sc-map-segment-label" dominantBaseline="middle">
+            {label && (
+              <text x={label.x} y={label.y} textAnchor={label.textAnchor} className="sc-map-segment-label">
                 {segment.name}
-                <tspan className="sc-map-segment-km" x={middle[0] + 12} dy="1.15em">
+                <tspan className="sc-map-segment-km" x={label.x} dy="1.15em">
                   {segment.startKm}–{segment.endKm} km
                 </tspan>
               </text>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { layoutMarkers } from './markerLayout';
+import { layoutMarkers, placeBandLabel } from './markerLayout';
 
 function distance(a: { drawX: number; drawY: number }, b: { drawX: number; drawY: number }): number {
   return Math.hypot(a.drawX - b.drawX, a.drawY - b.drawY);
@@ -69,5 +69,26 @@ describe(layoutMarkers.name, () => {
 
   it('places nothing for no markers', () => {
     expect(layoutMarkers([], 10)).toEqual([]);
+  });
+});
+
+describe(placeBandLabel.name, () => {
+  // A band running straight down the screen through x = 100.
+  const from = [100, 0] as const;
+  const to = [100, 200] as const;
+
+  it('puts the label on the side without markers', () => {
+    const label = placeBandLabel([100, 100], from, to, [{ drawX: 80, drawY: 100 }], 30);
+    expect(label).toEqual({ x: 130, y: 100, textAnchor: 'start' });
+  });
+
+  it('goes left, with the text ending at the label, when the right side is crowded', () => {
+    const label = placeBandLabel([100, 100], from, to, [{ drawX: 128, drawY: 102 }], 30);
+    expect(label.x).toBeCloseTo(70, 9);
+    expect(label.textAnchor).toBe('end');
+  });
+
+  it('takes the right side when nothing is near', () => {
+    expect(placeBandLabel([100, 100], from, to, [], 20).textAnchor).toBe('start');
   });
 });

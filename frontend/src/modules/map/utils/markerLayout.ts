@@ -51,3 +51,33 @@ export function layoutMarkers(markers: readonly MarkerInput[], spacing: number):
   }
   return placed;
 }
+
+/**
+ * Where to put a band's label: `offset` pixels to one side or the other of `anchor`, across the
+ * band's direction (from `from` to `to`), on the side whose nearest marker is farther away.
+ * Returns the label position and which way the text should run from it.
+ */
+export function placeBandLabel(
+  anchor: readonly [number, number],
+  from: readonly [number, number],
+  to: readonly [number, number],
+  markers: readonly { drawX: number; drawY: number }[],
+  offset: number,
+): { x: number; y: number; textAnchor: 'start' | 'end' } {
+  const dx = to[0] - from[0];
+  const dy = to[1] - from[1];
+  const length = Math.hypot(dx, dy) || 1;
+  // A unit normal to the band; which side it points to does not matter, both sides are tried.
+  const nx = -dy / length;
+  const ny = dx / length;
+  const candidates = [1, -1].map((side) => {
+    const x = anchor[0] + side * offset * nx;
+    const y = anchor[1] + side * offset * ny;
+    const clearance = markers.reduce((nearest, marker) => Math.min(nearest, Math.hypot(marker.drawX - x, marker.drawY - y)), Infinity);
+    return { x, y, clearance, textAnchor: x >= anchor[0] ? ('start' as const) : ('end' as const) };
+  });
+  // On a tie (nothing near either side) the label goes right, where text reads away from the band.
+  const [right, left] = [...candidates].sort((a, b) => b.x - a.x);
+  const best = !left || (right && right.clearance >= left.clearance) ? right : left;
+  return best ? { x: best.x, y: best.y, textAnchor: best.textAnchor } : { x: anchor[0], y: anchor[1], textAnchor: 'start' };
+}
