@@ -48,6 +48,14 @@ describe('sign-in', () => {
     expect(me.me.memberships).toEqual([expect.objectContaining({ role: 'CORRELATOR', project: expect.objectContaining({ id: fixture.projectId }) })]);
   });
 
+  it('answers sign-in with the user and their memberships', async () => {
+    const { signIn } = await new GraphqlClient(server.url).ok(
+      'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token user { id email memberships { role project { id } } } } }',
+      { e: fixture.emails.ANALYST, p: PASSWORD },
+    );
+    expect(signIn.user.memberships).toEqual([{ role: 'ANALYST', project: { id: fixture.projectId } }]);
+  });
+
   it('refuses a wrong password with UNAUTHENTICATED', async () => {
     const error = await new GraphqlClient(server.url).errorOf(
       'mutation { signIn(email: "viewer@nowhere.test", password: "wrong-password") { token } }',

@@ -18,7 +18,8 @@ export class UsersResolver {
   }
 
   @ResolveField('memberships')
-  membershipsOf(@Parent() parent: UserRow, @CurrentUser() user: AuthUser): Promise<MembershipView[]> {
-    return this.memberships.visibleMembershipsOf(parent.id, user);
+  membershipsOf(@Parent() parent: UserRow, @CurrentUser() user: AuthUser | undefined): Promise<MembershipView[]> {
+    // signIn and acceptInvitation are public: their answer's user is the one who just proved who they are.
+    return this.memberships.visibleMembershipsOf(parent.id, user ?? { id: parent.id, email: parent.email });
   }
 }
