@@ -6,7 +6,7 @@ import type { UserRow } from '../users/users.repository';
 import { UsersService } from '../users/users.service';
 import { AddTieInput } from './dto/add-tie.input';
 import { CreateHypothesisInput, UpdateHypothesisInput } from './dto/create-hypothesis.input';
-import { gridPoints, type DensityGrid, type DensityPoint } from './correlation-adapter';
+import { gridPoints, type DensityPoint } from './correlation-adapter';
 import { EventLadderService, EventLadderView, type LadderEventView } from './event-ladder.service';
 import type { HypothesisRow, TieView } from './hypotheses.repository';
 import { HypothesesService, OrderConflictView, RegionalEventView } from './hypotheses.service';
@@ -105,14 +105,12 @@ export class EventLadderResolver {
   }
 }
 
-/** `LadderEvent.densityGrid` as sent, and `density` expanded from it only when a client asks. */
+/**
+ * `LadderEvent.density` expanded from the grid only when a client asks (`densityGrid` is a plain
+ * property: a Nest field resolver per event would cost more than the field itself).
+ */
 @Resolver('LadderEvent')
 export class LadderEventResolver {
-  @ResolveField('densityGrid')
-  densityGrid(@Parent() event: LadderEventView): DensityGrid | null {
-    return event.densityGrid;
-  }
-
   @ResolveField('density')
   density(@Parent() event: LadderEventView): DensityPoint[] {
     return event.densityGrid ? gridPoints(event.densityGrid) : [];
