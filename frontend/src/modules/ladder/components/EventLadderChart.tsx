@@ -6,6 +6,7 @@ import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibrat
 import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
 import { conflictingTieIds, eventAnchors } from '@/modules/ladder/utils/ladderData';
 import {
+  columnLabel,
   createColumnScale,
   createDensityWidthScale,
   createTimeScale,
@@ -17,7 +18,7 @@ import {
 } from '@/modules/ladder/utils/ladderLayout';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
-const MARGIN = { top: 52, right: 16, bottom: 16, left: 64 };
+const MARGIN = { top: 84, right: 16, bottom: 16, left: 64 };
 const MAX_ZOOM = 40;
 
 const calBpOf = (point: DensityPoint) => point.calBp;
@@ -123,14 +124,17 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
               <rect x={0} y={MARGIN.top} width={width} height={bottom - MARGIN.top} />
             </clipPath>
           </defs>
-          {columns.map((column) => {
+          {columns.map((column, index) => {
             const x = columnScale(column.site.id) ?? 0;
+            const label = columnLabel(column.site.name, index, columnScale.step());
+            const labelTop = label.row * 32;
             return (
               <g key={column.site.id}>
-                <text x={x} y={18} fontSize={12} fontWeight={600} fill={CHART_COLOURS.text}>
-                  {column.site.name}
+                <text x={x} y={18 + labelTop} fontSize={12} fontWeight={600} fill={CHART_COLOURS.text}>
+                  <title>{column.site.name}</title>
+                  {label.text}
                 </text>
-                <text x={x} y={34} fontSize={11} fill={CHART_COLOURS.mutedText}>
+                <text x={x} y={34 + labelTop} fontSize={11} fill={CHART_COLOURS.mutedText}>
                   {column.site.kind.toLowerCase()} · <tspan className="num">{column.site.alongStrikeKm.toFixed(0)} km</tspan>
                 </text>
                 <line x1={x} x2={x} y1={MARGIN.top} y2={bottom} stroke={CHART_COLOURS.axis} strokeWidth={0.75} />

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { scaleBand, scaleLinear, zoomIdentity } from 'd3';
 import {
   canTieEvents,
+  columnLabel,
   createColumnScale,
   createTimeScale,
   hpdExtent,
@@ -184,5 +185,19 @@ describe(zoomedTimeWindow.name, () => {
 
   it('halves the visible span at zoom factor 2 about the top', () => {
     expect(zoomedTimeWindow(base, { k: 2, y: 0 })).toEqual([0, 500]);
+  });
+});
+
+describe(columnLabel.name, () => {
+  it('alternates rows and keeps a name that fits two column steps', () => {
+    expect(columnLabel('Skarrow Marsh', 0, 60)).toEqual({ text: 'Skarrow Marsh', row: 0 });
+    expect(columnLabel('Skarrow Marsh', 1, 60).row).toBe(1);
+  });
+
+  it('cuts a name longer than two column steps with an ellipsis', () => {
+    const { text } = columnLabel('Hallow Channel core VR17-04PC', 0, 40);
+    // 2 x 40 px at 6.6 px a character is 12 characters; one is kept free as a gap, one is the ellipsis.
+    expect(text).toBe('Hallow Cha…');
+    expect(text.length).toBe(11);
   });
 });

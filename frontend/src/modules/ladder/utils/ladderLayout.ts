@@ -219,3 +219,16 @@ export function zoomedTimeWindow(
   const invert = (pixel: number) => base.invert((pixel - transform.y) / transform.k);
   return [invert(top), invert(bottom)];
 }
+
+/** Average advance of a 12 px UI-face character, for fitting labels without measuring text. */
+const LABEL_CHAR_PX = 6.6;
+
+/**
+ * Column headers alternate between two rows so that neighbouring names do not overlap; each
+ * name may use the width of two column steps and is cut with an ellipsis beyond that.
+ */
+export function columnLabel(name: string, index: number, step: number): { text: string; row: 0 | 1 } {
+  const maxChars = Math.max(4, Math.floor((2 * step) / LABEL_CHAR_PX) - 1);
+  const text = name.length > maxChars ? `${name.slice(0, maxChars - 1).trimEnd()}…` : name;
+  return { text, row: (index % 2) as 0 | 1 };
+}
