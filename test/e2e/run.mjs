@@ -1,0 +1,550 @@
+// Browser journeys: the app started as `npm start` starts it (fakes, server, one worker) against
+// a throwaway `stratochron_e2e` database, driven by playwright-core through Debian's Chromium.
+//
+// Run them with `E2E=1 npm test`, or alone (DATABASE_URL names any database on the server to use;
+// the report goes to STRATOCHRON_TEST_RESULTS_FILE, default .data/e2e/results.json):
+//   DATABASE_URL=postgres://postgres@127.0.0.1:54349/postgres node test/e2e/run.mjs
+// Screenshots land in .data/e2e/screenshots/, process logs in .data/e2e/logs/. Exits non-zero
+// when a journey fails; a journey fails on any browser console error or page error.
+import { execFileSync, spawn } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { createWriteStream, existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { dirname, join } from 'node:path';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { fileURLToPath } from 'node:url';
+import pg from 'pg';
+import { chromium } from 'playwright-core';
+
+const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+const E2E_DIR = join(ROOT, '.data', 'e2e');
+const SHOTS_DIR = join(E2E_DIR, 'screenshots');
+const LOGS_DIR = join(E2E_DIR, 'logs');
+const RESULTS_FILE = process.env.STRATOCHRON_TEST_RESULTS_FILE || join(E2E_DIR, 'results.json');
+const CHROMIUM = '/usr/bin/chromium';
+const DATABASE = 'stratochron_e2e';
+const PASSWORD = 'stratochron-demo';
+const HEALTH_TIMEOUT_MS = 120_000;
+const DEMO_JOBS_TIMEOUT_MS = 240_000;
+const JOURNEY_TIMEOUT_MS = 120_000;
+const STEP_TIMEOUT_MS = 20_000;
+
+function log(message) {
+  console.log(`[e2e] ${message}`);
+}
+
+function ensureChromium() {
+  if (existsSync(CHROMIUM)) return;
+  if (process.getuid?.() !== 0) throw new Error(`${CHROMIUM} is missing and only root can apt-get install chromium`);
+  log('installing chromium');
+  execFileSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit' });
+}
+
+/**
+ * `npm run build -w <workspace>` when its sources changed (scripts/lib/build.mjs, as `npm start`
+ * does). Run in a child because that helper exits on failure; a failed build with a previous
+ * dist left in place still runs the journeys against that dist, with a warning, since a
+ * half-saved source of someone else's must not stop them (the build itself is checked elsewhere).
+ */
+function ensureBuilt(workspace) {
+  const script = `import('./scripts/lib/build.mjs').then((build) => build.ensureBuilt(${JSON.stringify(workspace)}))`;
+  try {
+    execFileSync(process.execPath, ['--input-type=module', '-e', script], { cwd: ROOT, stdio: 'inherit' });
+  } catch (error) {
+    const entry = workspace === 'backend' ? join(ROOT, 'backend', 'dist', 'main.js') : join(ROOT, 'frontend', 'dist', 'index.html');
+    if (!existsSync(entry)) throw new Error(`the ${workspace} build failed and there is no earlier build: ${error.message}`);
+    log(`WARNING: the ${workspace} build failed; using the earlier build in ${workspace}/dist`);
+  }
+}
+
+function freePort() {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address();
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+/** The URL of `database` on the server DATABASE_URL points at. */
+function databaseUrl(name) {
+  const url = new URL(process.env.DATABASE_URL);
+  url.pathname = `/${name}`;
+  return url.toString();
+}
+
+async function recreateDatabase() {
+  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await admin.connect();
+  try {
+    await admin.query(`drop database if exists ${DATABASE} with (force)`);
+    await admin.query(`create database ${DATABASE}`);
+  } finally {
+    await admin.end();
+  }
+}
+
+/** Started children, killed in reverse order at the end whatever happened. */
+const children = [];
+
+function launch(role, entry, env) {
+  const logFile = createWriteStream(join(LOGS_DIR, `${role}.log`));
+  const child = spawn(process.execPath, [entry], { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+  child.stdout.pipe(logFile);
+  child.stderr.pipe(logFile);
+  child.exited = new Promise((resolve) => child.once('exit', resolve));
+  children.push({ role, child });
+  return child;
+}
+
+async function stopAll() {
+  for (const { child } of [...children].reverse()) {
+    if (child.exitCode === null && child.signalCode === null) child.kill('SIGTERM');
+  }
+  await Promise.race([Promise.all(children.map(({ child }) => child.exited)), sleep(10_000)]);
+  for (const { child } of children) {
+    if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
+  }
+}
+
+async function waitFor(what, check, timeoutMs) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    for (const { role, child } of children) {
+      if (child.exitCode !== null) throw new Error(`${role} exited with code ${child.exitCode} while waiting for ${what} (see .data/e2e/logs/${role}.log)`);
+    }
+    if (await check().catch(() => false)) return;
+    await sleep(1000);
+  }
+  throw new Error(`timed out after ${timeoutMs / 1000} s waiting for ${what}`);
+}
+
+async function startApp() {
+  const [appPort, smtpPort, mailHttpPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort()];
+  const storage = {
+    S3_BUCKET: 'stratochron-attachments',
+    S3_ACCESS_KEY_ID: 'stratochron-local',
+    S3_SECRET_ACCESS_KEY: 'stratochron-local-secret',
+    S3_REGION: 'us-east-1',
+  };
+  const fakesDir = join(E2E_DIR, 'fakes');
+  rmSync(fakesDir, { recursive: true, force: true });
+  mkdirSync(fakesDir, { recursive: true });
+  launch('fakes', join(ROOT, 'backend', 'dist', 'fakes', 'main.js'), {
+    FAKE_SMTP_PORT: String(smtpPort),
+    FAKE_MAIL_HTTP_PORT: String(mailHttpPort),
+    FAKE_S3_PORT: String(s3Port),
+    FAKE_DATA_DIR: fakesDir,
+    ...storage,
+  });
+  const baseUrl = `http://127.0.0.1:${appPort}`;
+  const serverEnv = {
+    DATABASE_URL: databaseUrl(DATABASE),
+    PORT: String(appPort),
+    HOST: '127.0.0.1',
+    NODE_ENV: 'development',
+    SEED_DEMO: 'true',
+    JWT_SECRET: randomBytes(30).toString('base64url'),
+    PUBLIC_URL: baseUrl,
+    FRONTEND_DIST: join(ROOT, 'frontend', 'dist'),
+    DEMO_ACCOUNTS_FILE: join(E2E_DIR, 'demo-accounts.json'),
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(smtpPort),
+    S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+    ...storage,
+  };
+  launch('server', join(ROOT, 'backend', 'dist', 'main.js'), serverEnv);
+  await waitFor('/health', async () => (await fetch(`${baseUrl}/health`, { signal: AbortSignal.timeout(2000) })).status === 200, HEALTH_TIMEOUT_MS);
+  launch('worker', join(ROOT, 'backend', 'dist', 'worker.js'), serverEnv);
+  return baseUrl;
+}
+
+async function waitForDemoRuns() {
+  const client = new pg.Client({ connectionString: databaseUrl(DATABASE) });
+  await client.connect();
+  try {
+    await waitFor(
+      'the demo age model runs',
+      async () => {
+        const { rows } = await client.query(
+          `select (select count(*) from age_model_runs) as total,
+                  (select count(*) from age_model_runs where status in ('QUEUED','RUNNING')) as pending`,
+        );
+        return Number(rows[0].total) > 0 && Number(rows[0].pending) === 0;
+      },
+      DEMO_JOBS_TIMEOUT_MS,
+    );
+  } finally {
+    await client.end();
+  }
+}
+
+async function graphql(baseUrl, query, variables, token) {
+  const response = await fetch(`${baseUrl}/graphql`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: JSON.stringify({ query, variables }),
+    signal: AbortSignal.timeout(10_000),
+  });
+  return response.json();
+}
+
+function check(condition, message) {
+  if (!condition) throw new Error(message);
+}
+
+// ---------------------------------------------------------------- journeys
+
+async function signIn(page, baseUrl, email) {
+  await page.goto(`${baseUrl}/projects`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('link', { name: 'Velmora Margin' }).first().waitFor();
+}
+
+async function openProject(page) {
+  await page.getByRole('link', { name: 'Velmora Margin' }).first().click();
+  await page.getByRole('button', { name: 'Add site' }).or(page.getByText('Sites').first()).first().waitFor();
+}
+
+/** The first demo site's link in the project's sites table. */
+function firstSiteLink(page) {
+  return page.locator('table a[href*="/sites/"]').first();
+}
+
+const LAB_SHEET_HEADER = 'labCode,unit,depthM,method,material,c14Age,c14Error,curve';
+
+async function researcherBuildsSite(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'researcher@demo.test');
+  await openProject(page);
+  await shot('project');
+
+  await page.getByRole('button', { name: 'Add site' }).click();
+  const siteDialog = page.getByRole('dialog');
+  await siteDialog.locator('#name').fill('E2E Marsh');
+  await siteDialog.locator('#latitude').fill('-38.5');
+  await siteDialog.locator('#longitude').fill('176.2');
+  await siteDialog.locator('#alongStrikeKm').fill('312');
+  await siteDialog.locator('#elevationM').fill('2');
+  await shot('site-dialog');
+  await siteDialog.getByRole('button', { name: 'Add site' }).click();
+  await siteDialog.waitFor({ state: 'detached' });
+  await page.getByRole('link', { name: 'E2E Marsh', exact: true }).click();
+  await page.getByRole('button', { name: 'Add unit' }).waitFor();
+
+  for (const [name, top, base] of [
+    ['tidal mud', '1.2', '2.0'],
+    ['peat', '0.5', '1.2'],
+  ]) {
+    await page.getByRole('button', { name: 'Add unit' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.locator('#name').fill(name);
+    await dialog.locator('#topDepthM').fill(top);
+    await dialog.locator('#baseDepthM').fill(base);
+    await dialog.getByRole('button', { name: 'Add unit' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.getByRole('cell', { name, exact: true }).waitFor();
+  }
+  await page.getByRole('button', { name: 'Add event horizon' }).click();
+  const horizonDialog = page.getByRole('dialog');
+  await horizonDialog.locator('#name').fill('E1');
+  await shot('horizon-dialog');
+  await horizonDialog.getByRole('button', { name: 'Add event horizon' }).click();
+  await horizonDialog.waitFor({ state: 'detached' });
+  await page.getByRole('cell', { name: 'E1' }).first().waitFor();
+  await shot('column');
+
+  await page.getByRole('tab', { name: /Samples/ }).click();
+  await page.getByRole('button', { name: 'Import CSV' }).click();
+  const importDialog = page.getByRole('dialog');
+  const sheet = (secondError) =>
+    [LAB_SHEET_HEADER, 'E2E-101,tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20', `E2E-102,peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
+  await importDialog.locator('#import-csv').fill(sheet(0));
+  await importDialog.getByRole('button', { name: 'Check sheet' }).click();
+  const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
+  await problemRow.waitFor();
+  check((await problemRow.locator('td').first().innerText()).trim() === '2', 'the c14Error problem is not reported on row 2');
+  await shot('import-row-error');
+  await importDialog.locator('#import-csv').fill(sheet(25));
+  await importDialog.getByRole('button', { name: 'Check sheet' }).click();
+  const commit = importDialog.getByRole('button', { name: 'Import 2 samples' });
+  await commit.waitFor();
+  await shot('import-checked');
+  await commit.click();
+  await importDialog.getByText('Imported').first().waitFor();
+  await importDialog.getByRole('button', { name: 'Done' }).click();
+  await importDialog.waitFor({ state: 'detached' });
+
+  // The calibrated 95.4 % ranges sit in the samples grid beside each lab code.
+  for (const labCode of ['E2E-101', 'E2E-102']) {
+    await page.getByText(labCode, { exact: true }).first().waitFor();
+  }
+  const rangeCells = page.locator('.bp6-table-cell, .bp5-table-cell').filter({ hasText: /\d+\s*[–-]\s*\d+/ });
+  await rangeCells.first().waitFor();
+  check((await rangeCells.count()) >= 2, `expected calibrated ranges for both samples, found ${await rangeCells.count()} range cells`);
+  await shot('samples');
+}
+
+async function researcherRunsAgeModel(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'researcher@demo.test');
+  await openProject(page);
+  await firstSiteLink(page).click();
+  await page.getByRole('link', { name: /age model/i }).first().click();
+  await page.getByRole('button', { name: 'Start run' }).waitFor();
+  await page.locator('#iterations').fill('2000');
+  await page.locator('#seed').fill('7');
+  await shot('settings');
+  const before = await page.locator('tr').count();
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.getByText('succeeded', { exact: true }).first().waitFor({ timeout: 90_000 });
+  const eventTable = page.locator('table', { has: page.locator('th', { hasText: '95.4 % range' }) }).first();
+  await eventTable.waitFor();
+  const rows = eventTable.locator('tbody tr');
+  check((await rows.count()) > 0, 'the finished run lists no event');
+  const firstRange = await rows.first().locator('td').nth(3).innerText();
+  check(/\d/.test(firstRange), `the first event has no 95.4 % range: "${firstRange}"`);
+  log(`age model: ${await rows.count()} events (table rows before ${before}), first range ${firstRange.replace(/\s+/g, ' ')}`);
+  await shot('run-finished');
+}
+
+async function correlatorTiesEvents(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'correlator@demo.test');
+  await openProject(page);
+  await page.getByRole('link', { name: 'Ladder' }).click();
+  const ladder = page.getByRole('img', { name: 'Event ladder' });
+  await ladder.waitFor();
+  await shot('ladder');
+  const regionalTab = page.getByRole('tab', { name: /Regional events/ });
+  const countOf = async () => Number((await regionalTab.innerText()).match(/\((\d+)\)/)?.[1] ?? NaN);
+  const regionalBefore = await countOf();
+
+  // Events are the clickable groups of the chart, column by column; pair events of columns far apart.
+  const events = ladder.locator('g[style*="cursor"]');
+  const boxes = [];
+  for (let index = 0; index < (await events.count()); index += 1) boxes.push({ index, box: await events.nth(index).boundingBox() });
+  const located = boxes.filter(({ box }) => box && box.width > 0);
+  check(located.length >= 2, `the ladder shows ${located.length} clickable events`);
+  const tie = page.getByRole('button', { name: 'Tie', exact: true });
+  const dialog = page.getByRole('dialog');
+  // Most demo events are tied already; the dialog says up front when a tie would put two
+  // events of one site into one regional event, so such a pair is cancelled and the next tried.
+  const leftmost = Math.min(...located.map(({ box }) => box.x));
+  const firsts = located.filter(({ box }) => box.x - leftmost < 5);
+  const others = located.filter(({ box }) => box.x - leftmost > 40);
+  const pairs = firsts.flatMap((a) => others.map((b) => [a, b])).sort(([a1, b1], [a2, b2]) => Math.abs(a1.box.y - b1.box.y) - Math.abs(a2.box.y - b2.box.y));
+  let tieable = false;
+  let tried = 0;
+  for (const [a, b] of pairs.slice(0, 25)) {
+    tried += 1;
+    await page.getByRole('button', { name: 'Clear selection' }).click({ timeout: 1000 }).catch(() => {});
+    await events.nth(a.index).click({ force: true });
+    await events.nth(b.index).click({ force: true });
+    if (!(await tie.isEnabled())) continue;
+    await tie.click();
+    await dialog.waitFor();
+    await sleep(300);
+    if ((await dialog.locator('.bp6-callout.bp6-intent-danger').count()) === 0) {
+      tieable = true;
+      break;
+    }
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+  }
+  check(tieable, `none of ${tried} pairs of events in different columns could be tied`);
+  // The dialog names the pair as "E4 at Some Site – T6 at Other Site".
+  const pairLine = (await dialog.getByText(/ at .+ – .+ at /).first().innerText()).trim();
+  const [labelA, labelB] = pairLine.split(' – ');
+  await shot('tie-dialog');
+  await dialog.getByRole('button', { name: 'Tie', exact: true }).click();
+  await dialog.waitFor({ state: 'detached' });
+  await regionalTab.click();
+  // The regional event now holds both events, with its concordance, chi-square, rupture and Mw checks.
+  const card = page.locator('.sc-regional-card').filter({ hasText: labelA }).filter({ hasText: labelB }).first();
+  await card.waitFor();
+  for (const label of ['Concordance', 'χ² test', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
+  const chiSquare = (await card.locator('dt:has-text("χ² test") + dd').innerText()).trim();
+  check(/T = /.test(chiSquare), `the regional event has no chi-square test: "${chiSquare}"`);
+  await card.scrollIntoViewIfNeeded();
+  log(`ladder: tied ${pairLine}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
+  await shot('regional-event');
+}
+
+async function analystRunsRecurrence(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'analyst@demo.test');
+  await openProject(page);
+  await page.getByRole('link', { name: 'Recurrence' }).click();
+  await page.getByRole('button', { name: 'Start analysis' }).waitFor();
+  const segment = page.locator('#segmentId');
+  const centralValue = await segment.locator('option', { hasText: /Central/ }).first().getAttribute('value');
+  await segment.selectOption(centralValue);
+  await page.locator('#draws').fill('500');
+  await page.locator('#seed').fill('11');
+  await shot('setup');
+  await page.getByRole('button', { name: 'Start analysis' }).click();
+  const heading = page.getByRole('heading', { name: 'Conditional probability of the next event' });
+  await heading.waitFor({ timeout: 90_000 });
+  const table = page.locator('table', { has: page.locator('th', { hasText: 'Model' }) }).first();
+  const firstRow = table.locator('tbody tr').first();
+  await firstRow.waitFor();
+  const cells = (await firstRow.locator('td').allInnerTexts()).map((text) => text.trim());
+  check(cells.length >= 2 && cells.slice(1).some((text) => /\d/.test(text)), `the probability table's first row has no figures: ${cells.join(' | ')}`);
+  log(`recurrence: ${cells.join(' | ')}`);
+  await shot('results');
+
+  const [download] = await Promise.all([page.waitForEvent('download', { timeout: STEP_TIMEOUT_MS }), page.getByRole('button', { name: 'CSV', exact: true }).click()]);
+  const file = join(E2E_DIR, 'recurrence.csv');
+  await download.saveAs(file);
+  const firstLine = readFileSync(file, 'utf8').split(/\r?\n/)[0];
+  const caution = (await page.locator('.sc-caution').first().innerText()).trim();
+  check(/hazard|caution|research/i.test(firstLine), `the CSV does not open with the caution: "${firstLine}"`);
+  log(`recurrence CSV first line: ${firstLine.slice(0, 120)}; caution shown: ${caution.slice(0, 80)}`);
+}
+
+async function viewerCannotChange(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'viewer@demo.test');
+  await openProject(page);
+  await firstSiteLink(page).waitFor();
+  check((await page.getByRole('button', { name: 'Add site' }).count()) === 0, 'the viewer sees Add site');
+  check((await page.getByRole('button', { name: 'Add segment' }).count()) === 0, 'the viewer sees Add segment');
+  await shot('project');
+  await firstSiteLink(page).click();
+  await page.getByRole('tab', { name: /Column/ }).waitFor();
+  await page.getByText('Units').first().waitFor();
+  check((await page.getByRole('button', { name: 'Add unit' }).count()) === 0, 'the viewer sees Add unit');
+  check((await page.getByRole('button', { name: 'Add event horizon' }).count()) === 0, 'the viewer sees Add event horizon');
+  check((await page.getByRole('button', { name: 'Edit site' }).count()) === 0, 'the viewer sees Edit site');
+  await shot('site');
+  await page.getByRole('link', { name: /age model/i }).first().click();
+  await page.getByRole('heading', { name: /Age model/ }).waitFor();
+  check((await page.getByRole('button', { name: 'Start run' }).count()) === 0, 'the viewer sees Start run');
+  await shot('age-model');
+
+  const signedIn = await graphql(baseUrl, 'mutation ($email: String!, $password: String!) { signIn(email: $email, password: $password) { token } }', {
+    email: 'viewer@demo.test',
+    password: PASSWORD,
+  });
+  const token = signedIn.data?.signIn?.token;
+  check(token, `the viewer cannot sign in over GraphQL: ${JSON.stringify(signedIn.errors)}`);
+  const projects = await graphql(baseUrl, '{ projects { id name } }', {}, token);
+  const projectId = projects.data?.projects?.find((project) => project.name === 'Velmora Margin')?.id;
+  check(projectId, `the viewer's project list lacks Velmora Margin: ${JSON.stringify(projects.errors ?? projects.data)}`);
+  const created = await graphql(
+    baseUrl,
+    'mutation ($input: CreateSiteInput!) { createSite(input: $input) { id } }',
+    { input: { projectId, name: 'Viewer site', kind: 'TRENCH', latitude: -38, longitude: 176, alongStrikeKm: 10 } },
+    token,
+  );
+  const codes = (created.errors ?? []).map((error) => error.extensions?.code);
+  check(!created.data?.createSite && codes.includes('FORBIDDEN'), `createSite as the viewer was not refused FORBIDDEN: ${JSON.stringify(created)}`);
+}
+
+const JOURNEYS = [
+  ['researcher creates a site, enters its column and imports a lab sheet', researcherBuildsSite],
+  ['researcher runs an age model and sees event ranges', researcherRunsAgeModel],
+  ['correlator ties two events and sees the regional event with its checks', correlatorTiesEvents],
+  ['analyst runs a recurrence analysis, reads the probabilities and exports CSV', analystRunsRecurrence],
+  ['viewer sees the project and a site but can change nothing', viewerCannotChange],
+];
+
+async function runJourney(browser, baseUrl, index, title, journey) {
+  const slug = `${index + 1}-${title.split(' ')[0]}`;
+  const context = await browser.newContext({ viewport: { width: 1440, height: 960 }, acceptDownloads: true });
+  context.setDefaultTimeout(STEP_TIMEOUT_MS);
+  const page = await context.newPage();
+  const browserErrors = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error') browserErrors.push(`console error: ${message.text()}`);
+  });
+  page.on('pageerror', (error) => browserErrors.push(`page error: ${error.message}`));
+  let shots = 0;
+  const shot = async (name) => {
+    shots += 1;
+    await page.screenshot({ path: join(SHOTS_DIR, `${slug}-${String(shots).padStart(2, '0')}-${name}.png`), fullPage: true });
+  };
+  const started = Date.now();
+  const failureMessages = [];
+  try {
+    await Promise.race([
+      journey(page, { baseUrl, shot }),
+      sleep(JOURNEY_TIMEOUT_MS).then(() => {
+        throw new Error(`the journey took over ${JOURNEY_TIMEOUT_MS / 1000} s`);
+      }),
+    ]);
+  } catch (error) {
+    failureMessages.push(error.stack ?? String(error));
+    await shot('failure').catch(() => {});
+  }
+  if (browserErrors.length > 0) failureMessages.push(...browserErrors);
+  await context.close();
+  const status = failureMessages.length === 0 ? 'passed' : 'failed';
+  log(`${status}: ${title} (${((Date.now() - started) / 1000).toFixed(1)} s)${status === 'failed' ? `\n  ${failureMessages.join('\n  ')}` : ''}`);
+  return { title, status, failureMessages };
+}
+
+function writeReport(assertionResults, setupError) {
+  const results = setupError ? [{ title: 'start the app for the journeys', status: 'failed', failureMessages: [setupError.stack ?? String(setupError)] }, ...assertionResults] : assertionResults;
+  const passed = results.filter((result) => result.status === 'passed').length;
+  const failed = results.length - passed;
+  const report = {
+    numPassedTests: passed,
+    numFailedTests: failed,
+    numTotalTests: results.length,
+    success: failed === 0,
+    testResults: [{ name: fileURLToPath(import.meta.url), status: failed === 0 ? 'passed' : 'failed', assertionResults: results }],
+  };
+  mkdirSync(dirname(RESULTS_FILE), { recursive: true });
+  writeFileSync(RESULTS_FILE, `${JSON.stringify(report, null, 2)}\n`);
+  log(`${passed} passed, ${failed} failed; report in ${RESULTS_FILE}`);
+  return failed;
+}
+
+async function main() {
+  if (!process.env.DATABASE_URL) throw new Error('DATABASE_URL must name a PostgreSQL server (npm test exports it)');
+  rmSync(SHOTS_DIR, { recursive: true, force: true });
+  mkdirSync(SHOTS_DIR, { recursive: true });
+  mkdirSync(LOGS_DIR, { recursive: true });
+  const assertionResults = [];
+  let browser;
+  let setupError = null;
+  try {
+    ensureChromium();
+    ensureBuilt('backend');
+    ensureBuilt('frontend');
+    await recreateDatabase();
+    const baseUrl = await startApp();
+    log(`app at ${baseUrl}; waiting for the demo age model runs`);
+    await waitForDemoRuns();
+    browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      headless: true,
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+    });
+    for (const [index, [title, journey]] of JOURNEYS.entries()) {
+      assertionResults.push(await runJourney(browser, baseUrl, index, title, journey));
+    }
+  } catch (error) {
+    setupError = error;
+    log(`setup failed: ${error.message}`);
+  } finally {
+    await browser?.close().catch(() => {});
+    await stopAll();
+  }
+  return writeReport(assertionResults, setupError);
+}
+
+// Ctrl-C or a runner's SIGTERM still ends the app processes started here.
+for (const signal of ['SIGINT', 'SIGTERM']) {
+  process.once(signal, () => {
+    for (const { child } of children) child.kill('SIGKILL');
+    process.exit(1);
+  });
+}
+
+const failed = await main().catch((error) => {
+  console.error(error);
+  return 1;
+});
+process.exit(failed > 0 ? 1 : 0);
