@@ -258,9 +258,9 @@ describe('eventLadder', () => {
         // The posterior is N(age, sd): its median is the age [analytic], within a year's rounding.
         expect(Math.abs(event.medianCalBp - site.ages[k])).toBeLessThanOrEqual(1);
         expect(event.hpd95).toHaveLength(1);
-        // The drawing grid holds the whole mass (area = sum of value x step) in at most 120 values.
+        // The drawing grid holds the whole mass (area = sum of value x step) in at most 64 values.
         const grid = event.densityGrid;
-        expect(grid.values.length).toBeLessThanOrEqual(120);
+        expect(grid.values.length).toBeLessThanOrEqual(64);
         expect(grid.values.reduce((sum: number, v: number) => sum + v * grid.stepYears, 0)).toBeCloseTo(1, 2);
         expect(event.density).toHaveLength(grid.values.length);
       }

@@ -137,8 +137,8 @@ export interface DensityGrid {
   readonly values: readonly number[];
 }
 
-/** Values per event the ladder sends: about one per screen pixel of a typical event's width. */
-export const LADDER_GRID_POINTS = 120;
+/** Values per event the ladder sends: enough for a smooth shape a column wide; fewer keep the ladder answer small. */
+export const LADDER_GRID_POINTS = 64;
 
 /**
  * A density pooled into bins of ceil(length / maxPoints) years, as a regular grid for drawing.

@@ -479,7 +479,7 @@ export type LadderEvent = {
   __typename?: 'LadderEvent';
   /** The same thinned posterior as points (larger to send; prefer densityGrid). */
   density: Array<DensityPoint>;
-  /** The posterior thinned for drawing (about 120 values); null when the site has no successful run. */
+  /** The posterior thinned for drawing (at most 64 values); null when the site has no successful run. */
   densityGrid?: Maybe<DensityGrid>;
   eventHorizon: EventHorizon;
   hpd95: Array<HpdRange>;
