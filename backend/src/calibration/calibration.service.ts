@@ -166,8 +166,15 @@ export function toStored(result: CalibrationResult, curve: string | null): Store
   };
 }
 
+/** Probabilities at or below this share of the (unit) mass are left out of a density as the API lists it. */
+export const DENSITY_LISTING_THRESHOLD = 1e-6;
+
 function densityPoints({ startCalBp, probabilities }: CalendarDensity): CalibrationView['density'] {
-  return Array.from(probabilities, (probability, i) => ({ calBp: startCalBp + i, probability }));
+  const points: CalibrationView['density'] = [];
+  probabilities.forEach((probability, i) => {
+    if (probability > DENSITY_LISTING_THRESHOLD) points.push({ calBp: startCalBp + i, probability });
+  });
+  return points;
 }
 
 function toView(result: CalibrationResult, curve: string | null): CalibrationView {
