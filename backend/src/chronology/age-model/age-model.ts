@@ -168,6 +168,12 @@ export interface AgeModelResult {
 /** Sweeps between polls of `shouldCancel` and progress reports. */
 const POLL_SWEEPS = 200;
 
+/**
+ * Sweeps between exact path draws (`OrderChain.pathGibbs`). A path draw costs about its length
+ * times the window's width; one per few sweeps is enough for it to carry chains between modes.
+ */
+const PATH_GIBBS_PERIOD = 16;
+
 /** Kept values (nodes x draws x chains) above this would need too much memory. */
 const MAX_KEPT_VALUES = 50_000_000;
 
@@ -418,6 +424,7 @@ function runChains(
       }
       chain.sweep(sweep % 2 === 0);
       for (let b = 0; b < blockShiftsPerSweep; b++) chain.blockShift();
+      if (sweep % PATH_GIBBS_PERIOD === 0 && chain.hasPaths) chain.pathGibbs();
       const after = sweep - settings.burnIn + 1;
       if (after > 0 && after % settings.thin === 0 && keptCount < keptPerChain) {
         values.set(chain.state, keptCount * graph.nodeCount);
