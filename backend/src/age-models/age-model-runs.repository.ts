@@ -49,8 +49,9 @@ export class AgeModelRunsRepository {
 
   /**
    * A fingerprint per site of everything a run depends on: every unit, event horizon and sample
-   * with its version. A run whose stored fingerprint differs from its site's is out of date.
-   * One query for any number of sites; a site with an empty column has the fingerprint of ''.
+   * with its version, stored with each run as a record of exactly which rows it was computed
+   * from. (Freshness uses the cheaper sites.column_revision.) One query for any number of sites;
+   * a site with an empty column has the fingerprint of ''.
    */
   async columnFingerprints(siteIds: readonly string[], executor: Executor = this.database.db): Promise<Map<string, string>> {
     // One PostgreSQL array literal (drizzle would spread a JS array into a row of parameters).

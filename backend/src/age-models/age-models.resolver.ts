@@ -47,7 +47,7 @@ export class AgeModelsResolver {
 
   @ResolveField('stale')
   async stale(@Parent() run: AgeModelRunRow, @Context('loaders') loaders: RequestLoaders): Promise<boolean> {
-    return (await loaders.columnFingerprint.load(run.siteId)) !== run.inputFingerprint;
+    return (await loaders.columnRevision.load(run.siteId)) !== run.columnRevision;
   }
 
   @ResolveField('events')

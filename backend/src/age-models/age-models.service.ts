@@ -45,6 +45,8 @@ export class AgeModelsService {
 
   /** Queue a run without a user (the demo seed). */
   async queue(site: SiteRow, input: Omit<StartAgeModelRunInput, 'siteId'>, user: AuthUser | null): Promise<AgeModelRunRow> {
+    // The revision is read before the column: a change in between makes the run look stale, never fresh.
+    const columnRevision = (await this.sites.findById(site.id))?.columnRevision ?? site.columnRevision;
     const { model, fingerprint } = await this.columnOf(site);
     const problems = validateColumn(model);
     if (problems.length > 0) {
@@ -62,7 +64,7 @@ export class AgeModelsService {
     };
     const run = await this.database.transaction(async (tx) => {
       const row = await this.runs.insert(
-        { siteId: site.id, requestedById: user?.id ?? null, seed: settings.seed, settings, inputSnapshot: storeInput(model), inputFingerprint: fingerprint },
+        { siteId: site.id, requestedById: user?.id ?? null, seed: settings.seed, settings, inputSnapshot: storeInput(model), inputFingerprint: fingerprint, columnRevision },
         tx,
       );
       await this.audit.record(tx, {

@@ -188,6 +188,7 @@ export class HypothesesRepository {
         seed: ageModelRuns.seed,
         settings: ageModelRuns.settings,
         inputFingerprint: ageModelRuns.inputFingerprint,
+        columnRevision: ageModelRuns.columnRevision,
         diagnostics: ageModelRuns.diagnostics,
         results: sql<unknown>`${ageModelRuns.results} - 'eventDraws'`,
         attempts: ageModelRuns.attempts,

@@ -1,24 +1,24 @@
 import { Injectable } from '@nestjs/common';
 import DataLoader from 'dataloader';
-import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
+import { SitesRepository } from '../sites/sites.repository';
 import { SegmentRow, SegmentsRepository } from '../segments/segments.repository';
 
 /**
  * Per-request batch loaders for fields asked of many parents at once (a ladder of 40 sites asks
- * 40 segments and 40 run freshness checks): each becomes one query per request instead of one
+ * 40 segments and 40 site revisions for run freshness): each becomes one query per request instead of one
  * per parent. Created fresh for every request, so nothing is cached across requests or users.
  */
 export interface RequestLoaders {
   segmentById: DataLoader<string, SegmentRow | null>;
-  /** The current column fingerprint of a site (see AgeModelRunsRepository.columnFingerprints). */
-  columnFingerprint: DataLoader<string, string>;
+  /** The current column revision of a site (bumped by triggers on its units, horizons and samples). */
+  columnRevision: DataLoader<string, number | null>;
 }
 
 @Injectable()
 export class RequestLoadersFactory {
   constructor(
     private readonly segments: SegmentsRepository,
-    private readonly runs: AgeModelRunsRepository,
+    private readonly sites: SitesRepository,
   ) {}
 
   create(): RequestLoaders {
@@ -27,9 +27,9 @@ export class RequestLoadersFactory {
         const rows = new Map((await this.segments.findByIds(ids)).map((row) => [row.id, row]));
         return ids.map((id) => rows.get(id) ?? null);
       }),
-      columnFingerprint: new DataLoader(async (siteIds) => {
-        const fingerprints = await this.runs.columnFingerprints(siteIds);
-        return siteIds.map((id) => fingerprints.get(id)!);
+      columnRevision: new DataLoader(async (siteIds) => {
+        const revisions = new Map((await this.sites.findByIds(siteIds)).map((site) => [site.id, site.columnRevision]));
+        return siteIds.map((id) => revisions.get(id) ?? null);
       }),
     };
   }

@@ -7,6 +7,6 @@ import { SitesService } from './sites.service';
 @Module({
   imports: [SegmentsModule],
   providers: [SitesRepository, SitesService, SitesResolver, SegmentSitesResolver],
-  exports: [SitesService],
+  exports: [SitesService, SitesRepository],
 })
 export class SitesModule {}

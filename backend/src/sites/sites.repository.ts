@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { sites } from '../database/schema';
 
@@ -12,6 +12,11 @@ export class SitesRepository {
   async findById(id: string, executor: Executor = this.database.db): Promise<SiteRow | undefined> {
     const [row] = await executor.select().from(sites).where(eq(sites.id, id)).limit(1);
     return row;
+  }
+
+  findByIds(ids: readonly string[], executor: Executor = this.database.db): Promise<SiteRow[]> {
+    if (ids.length === 0) return Promise.resolve([]);
+    return executor.select().from(sites).where(inArray(sites.id, [...ids]));
   }
 
   listForProject(projectId: string, executor: Executor = this.database.db): Promise<SiteRow[]> {

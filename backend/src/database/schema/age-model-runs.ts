@@ -1,4 +1,4 @@
-import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { bigint, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { id, timestamps } from './columns';
 import { jobStatusEnum } from './enums';
 import { sites } from './sites';
@@ -19,6 +19,8 @@ export const ageModelRuns = pgTable(
     inputSnapshot: jsonb('input_snapshot').notNull(),
     /** Fingerprint of the column and samples the run was computed from; stale when the site's differs. */
     inputFingerprint: text('input_fingerprint').notNull(),
+    /** The site's column revision when the run was queued; the run is stale once the site's moves on. */
+    columnRevision: bigint('column_revision', { mode: 'number' }).notNull().default(0),
     diagnostics: jsonb('diagnostics'),
     results: jsonb('results'),
     attempts: integer('attempts').notNull().default(0),

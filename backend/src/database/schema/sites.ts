@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { check, doublePrecision, index, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import { bigint, check, doublePrecision, index, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import { id, timestamps, version } from './columns';
 import { siteKindEnum } from './enums';
 import { projects } from './projects';
@@ -20,6 +20,11 @@ export const sites = pgTable(
     elevationM: doublePrecision('elevation_m'),
     waterDepthM: doublePrecision('water_depth_m'),
     notes: text('notes'),
+    /**
+     * Bumped by database triggers whenever a unit, event horizon or sample of the site is written,
+     * so "has the column changed since this run?" is one comparison (drizzle/0002_column_revision_triggers.sql).
+     */
+    columnRevision: bigint('column_revision', { mode: 'number' }).notNull().default(0),
     version: version(),
     ...timestamps,
   },
