@@ -320,6 +320,9 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const regionalTab = page.getByRole('tab', { name: /Regional events/ });
   const countOf = async () => Number((await regionalTab.innerText()).match(/\((\d+)\)/)?.[1] ?? NaN);
   const regionalBefore = await countOf();
+  const tiesTab = page.getByRole('tab', { name: /Ties/ });
+  const tiesOf = async () => Number((await tiesTab.innerText()).match(/\((\d+)\)/)?.[1] ?? NaN);
+  const tiesBefore = await tiesOf();
 
   // Events are the clickable groups of the chart, column by column; pair events of columns far apart.
   const events = ladder.locator('g[style*="cursor"]');
@@ -329,14 +332,16 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   check(located.length >= 2, `the ladder shows ${located.length} clickable events`);
   const tie = page.getByRole('button', { name: 'Tie', exact: true });
   const dialog = page.getByRole('dialog');
-  // Most demo events are tied already; the dialog says up front when a tie would put two
-  // events of one site into one regional event, so such a pair is cancelled and the next tried.
+  // Most demo events are tied already; the server refuses a tie that would put two events of
+  // one site into one regional event (the dialog shows why), so such a pair is cancelled and the
+  // next one tried, nearest in age first. The tie must add one to the Ties tab.
   const leftmost = Math.min(...located.map(({ box }) => box.x));
   const firsts = located.filter(({ box }) => box.x - leftmost < 5);
   const others = located.filter(({ box }) => box.x - leftmost > 40);
   const pairs = firsts.flatMap((a) => others.map((b) => [a, b])).sort(([a1, b1], [a2, b2]) => Math.abs(a1.box.y - b1.box.y) - Math.abs(a2.box.y - b2.box.y));
   let tieable = false;
   let tried = 0;
+  let pairLine = '';
   for (const [a, b] of pairs.slice(0, 25)) {
     tried += 1;
     await page.getByRole('button', { name: 'Clear selection' }).click({ timeout: 1000 }).catch(() => {});
@@ -345,8 +350,12 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
     if (!(await tie.isEnabled())) continue;
     await tie.click();
     await dialog.waitFor();
-    await sleep(300);
-    if ((await dialog.locator('.bp6-callout.bp6-intent-danger').count()) === 0) {
+    pairLine = (await dialog.getByText(/ at .+ – .+ at /).first().innerText()).trim();
+    await shot('tie-dialog');
+    await dialog.getByRole('button', { name: 'Tie', exact: true }).click();
+    const refused = dialog.locator('.bp6-callout.bp6-intent-danger');
+    await Promise.race([dialog.waitFor({ state: 'detached' }), refused.waitFor()]);
+    if ((await dialog.count()) === 0) {
       tieable = true;
       break;
     }
@@ -354,12 +363,12 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
     await dialog.waitFor({ state: 'detached' });
   }
   check(tieable, `none of ${tried} pairs of events in different columns could be tied`);
-  // The dialog names the pair as "E4 at Some Site – T6 at Other Site".
-  const pairLine = (await dialog.getByText(/ at .+ – .+ at /).first().innerText()).trim();
   const [labelA, labelB] = pairLine.split(' – ');
-  await shot('tie-dialog');
-  await dialog.getByRole('button', { name: 'Tie', exact: true }).click();
-  await dialog.waitFor({ state: 'detached' });
+  await page.waitForFunction(
+    (before) => [...document.querySelectorAll('[role="tab"]')].some((tab) => tab.textContent?.includes(`Ties (${before + 1})`)),
+    tiesBefore,
+    { timeout: STEP_TIMEOUT_MS },
+  );
   await regionalTab.click();
   // The regional event now holds both events, with its concordance, chi-square, rupture and Mw checks.
   const card = page.locator('.sc-regional-card').filter({ hasText: labelA }).filter({ hasText: labelB }).first();
@@ -368,7 +377,7 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const chiSquare = (await card.locator('dt:has-text("χ² test") + dd').innerText()).trim();
   check(/T = /.test(chiSquare), `the regional event has no chi-square test: "${chiSquare}"`);
   await card.scrollIntoViewIfNeeded();
-  log(`ladder: tied ${pairLine}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
+  log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');
 }
 
