@@ -313,6 +313,26 @@ describe('a segment analysis', () => {
   });
 });
 
+describe('pinning to a release', () => {
+  it('cites a release while the data are as released, and refuses once they changed', async () => {
+    const { createRelease } = await clients.ADMIN.ok(`mutation($i: CreateReleaseInput!) { createRelease(input: $i) { id number } }`, {
+      i: { projectId: fixture.projectId, note: 'frozen for the recurrence pin test' },
+    });
+    const pinned = await clients.ANALYST.ok<{ startRecurrenceAnalysis: { id: string } }>(START, {
+      i: { siteId: siteIds.A, draws: 200, seed: 3, releaseId: createRelease.id },
+    });
+    const [row] = await sql<{ release_id: string }>('select release_id from recurrence_analyses where id = $1', [pinned.startRecurrenceAnalysis.id]);
+    expect(row.release_id).toBe(createRelease.id);
+    await clients.ADMIN.ok(`mutation($id: ID!, $v: Int!) { updateSite(id: $id, version: $v, input: { notes: "changed after the release" }) { id } }`, {
+      id: siteIds.A,
+      v: (await sql<{ version: number }>('select version from sites where id = $1', [siteIds.A]))[0].version,
+    });
+    const refused = await clients.ANALYST.errorOf(START, { i: { siteId: siteIds.A, draws: 200, seed: 3, releaseId: createRelease.id } });
+    expect(refused).toMatchObject({ code: 'BAD_USER_INPUT', field: 'releaseId' });
+    expect(refused.message).toMatch(new RegExp(`changed since release ${createRelease.number}`));
+  });
+});
+
 describe('cancelRecurrenceAnalysis', () => {
   it('cancels a queued analysis, which the worker then skips, and refuses cancelling it twice', async () => {
     const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START, { i: { siteId: siteIds.A, draws: 200 } });

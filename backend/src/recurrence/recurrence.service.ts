@@ -6,6 +6,7 @@ import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository'
 import { StoredAgeModelResults, storeDensity } from '../age-models/age-model-results';
 import { AgeModelsService } from '../age-models/age-models.service';
 import { AuditService } from '../audit/audit.service';
+import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
 import type { SiteEvent } from '../chronology/correlation';
 import { fitRenewalModel, RecurrenceInputError, RENEWAL_MODELS, renewalDistribution } from '../chronology/recurrence';
@@ -65,6 +66,7 @@ export class RecurrenceService {
     private readonly jobs: JobQueueService,
     private readonly access: AccessService,
     private readonly audit: AuditService,
+    private readonly releases: ReleasesService,
   ) {}
 
   /** Conditional probability of one renewal model in a window, beside the Poisson figure, and the hazard at the elapsed time. */
@@ -111,11 +113,20 @@ export class RecurrenceService {
     const prepared = input.siteId
       ? await this.prepareSite(user, input.siteId, input, forecastStartYear)
       : await this.prepareSegment(user, input.segmentId as string, input, forecastStartYear);
+    let releaseId: string | null = null;
     if (input.releaseId) {
-      // A release's frozen data is not yet readable here, so an analysis cannot honestly claim to use it.
+      // Age models are not part of a release's frozen data, so an analysis is pinned to a release
+      // only while the live data are exactly as released: then it was computed from that release.
       const release = await this.analyses.findRelease(input.releaseId);
       if (!release || release.projectId !== prepared.projectId) throw notFound('release');
-      throw badInput('releaseId', 'pinning an analysis to a release is not available yet; leave releaseId out');
+      const changes = await this.releases.changesSince(release.id);
+      if (changes.length > 0) {
+        throw badInput(
+          'releaseId',
+          `the project's data changed since release ${release.number} (${changes.length} added, changed or removed records); an analysis can be pinned to a release only while the data are as released`,
+        );
+      }
+      releaseId = release.id;
     }
     const draws = prepared.snapshot.kind === 'site' ? Math.min(drawsRequested, prepared.snapshot.availableDraws) : drawsRequested;
     const settings = {
@@ -134,6 +145,7 @@ export class RecurrenceService {
           siteId: prepared.snapshot.kind === 'site' ? prepared.snapshot.siteId : null,
           hypothesisId: prepared.snapshot.kind === 'segment' ? prepared.snapshot.hypothesisId : null,
           hypothesisVersion: prepared.snapshot.kind === 'segment' ? prepared.snapshot.hypothesisVersion : null,
+          releaseId,
           requestedById: user.id,
           seed,
           forecastStartYear,

@@ -7,5 +7,6 @@ import { ReleasesService } from './releases.service';
 @Module({
   imports: [ExchangeModule],
   providers: [ReleasesRepository, ReleasesService, ReleasesResolver, ProjectReleasesResolver],
+  exports: [ReleasesService],
 })
 export class ReleasesModule {}

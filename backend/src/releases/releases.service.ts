@@ -80,6 +80,16 @@ export class ReleasesService {
     return { from, to, changes: diffSnapshots(from.snapshot, to.snapshot) };
   }
 
+  /**
+   * What changed in the project's live data since the release was frozen (empty when the data
+   * are exactly as released). An analysis may cite a release only while this is empty.
+   */
+  async changesSince(releaseId: string): Promise<ReturnType<typeof diffSnapshots>> {
+    const release = await this.releases.findById(releaseId);
+    if (!release) throw notFound('release');
+    return diffSnapshots(release.snapshot, await this.exchange.snapshotOf(release.projectId, this.database.db));
+  }
+
   sitesOf(release: ReleaseRow): ReleaseSiteView[] {
     return release.snapshot.sites.map(({ ref, segmentRef, ...site }) => ({ ...site, id: ref, projectId: release.projectId, segmentId: segmentRef }));
   }
