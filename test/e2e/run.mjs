@@ -317,6 +317,19 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const ladder = page.getByRole('img', { name: 'Event ladder' });
   await ladder.waitFor();
   await shot('ladder');
+  // Tie in a new, empty hypothesis of the correlator's own: no earlier tie can then chain the
+  // pair into a same-site join, so the first pair in different columns is accepted.
+  await page.getByRole('button', { name: 'New hypothesis' }).click();
+  const hypothesisDialog = page.getByRole('dialog');
+  await hypothesisDialog.getByLabel('Name').fill(`E2E hypothesis ${Date.now()}`);
+  const copyTies = hypothesisDialog.getByRole('checkbox');
+  if ((await copyTies.count()) > 0) await copyTies.uncheck({ force: true });
+  await hypothesisDialog.getByRole('button', { name: 'Create' }).click();
+  await hypothesisDialog.waitFor({ state: 'detached' });
+  await page.waitForFunction(() => [...document.querySelectorAll('[role="tab"]')].some((tab) => tab.textContent?.includes('Ties (0)')), null, {
+    timeout: STEP_TIMEOUT_MS,
+  });
+  await shot('new-hypothesis');
   const regionalTab = page.getByRole('tab', { name: /Regional events/ });
   const countOf = async () => Number((await regionalTab.innerText()).match(/\((\d+)\)/)?.[1] ?? NaN);
   const regionalBefore = await countOf();
