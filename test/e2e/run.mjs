@@ -1,7 +1,7 @@
 // Browser journeys: the app started as `npm start` starts it (fakes, server, one worker) against
 // a throwaway `stratochron_e2e` database, driven by playwright-core through Debian's Chromium.
 //
-// Run them with `E2E=1 npm test`, or alone (DATABASE_URL names any database on the server to use;
+// They run with `npm test` (E2E=0 skips them), or alone (DATABASE_URL names any database on the server to use;
 // the report goes to STRATOCHRON_TEST_RESULTS_FILE, default .data/e2e/results.json):
 //   DATABASE_URL=postgres://postgres@127.0.0.1:54349/postgres node test/e2e/run.mjs
 // Screenshots land in .data/e2e/screenshots/, process logs in .data/e2e/logs/. Exits non-zero
@@ -25,7 +25,7 @@ const CHROMIUM = '/usr/bin/chromium';
 const DATABASE = 'stratochron_e2e';
 const PASSWORD = 'stratochron-demo';
 const HEALTH_TIMEOUT_MS = 120_000;
-const DEMO_JOBS_TIMEOUT_MS = 240_000;
+const DEMO_JOBS_TIMEOUT_MS = 480_000;
 const JOURNEY_TIMEOUT_MS = 120_000;
 const STEP_TIMEOUT_MS = 20_000;
 
