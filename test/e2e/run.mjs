@@ -299,10 +299,12 @@ async function researcherRunsAgeModel(page, { baseUrl, shot }) {
   await shot('settings');
   const before = await page.locator('tr').count();
   await page.getByRole('button', { name: 'Start run' }).click();
-  await page.getByText('succeeded', { exact: true }).first().waitFor({ timeout: 90_000 });
+  // The demo's own run (another seed) already shows as succeeded: wait for this run, by its seed.
+  await page.locator('.sc-run-status-line').filter({ hasText: /succeeded\s*seed\s*7\b/ }).waitFor({ timeout: 90_000 });
   const eventTable = page.locator('table', { has: page.locator('th', { hasText: '95.4 % range' }) }).first();
   await eventTable.waitFor();
   const rows = eventTable.locator('tbody tr');
+  await rows.first().waitFor();
   check((await rows.count()) > 0, 'the finished run lists no event');
   const firstRange = await rows.first().locator('td').nth(3).innerText();
   check(/\d/.test(firstRange), `the first event has no 95.4 % range: "${firstRange}"`);
