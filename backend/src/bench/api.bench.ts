@@ -44,7 +44,7 @@ export interface ImportBench {
 }
 
 export interface ApiBench {
-  /** The query the ladder page sends (densities as points). */
+  /** The ladder query with its densities as points (the page itself now asks for densityGrid). */
   ladder: LadderLoadBench;
   /** The same with the thinned `densityGrid` the schema recommends instead of points. */
   ladderGrid: LadderLoadBench;
@@ -81,7 +81,7 @@ const LOAD_SECONDS = 10;
 const IMPORT_ROWS = 10_000;
 const PASSWORD = 'bench-password-1';
 
-/** The query the ladder page sends (frontend/src/modules/ladder/graphql/ladder.ts). */
+/** The ladder query of frontend/src/modules/ladder/graphql/ladder.ts as it was, with densities as points. */
 const LADDER_QUERY = `query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
     columns {
@@ -98,7 +98,7 @@ const LADDER_QUERY = `query EventLadder($projectId: ID!) {
   project(id: $projectId) { id name myRole tectonicSetting hypotheses { id name preferred version } }
 }`;
 
-/** The page's query with `densityGrid` in place of `density` points. */
+/** The query the ladder page sends now: `densityGrid` in place of `density` points. */
 const LADDER_GRID_QUERY = LADDER_QUERY.replace('density { calBp probability }', 'densityGrid { startCalBp stepYears values }');
 
 const IMPORT_MUTATION = `mutation($i: ImportSamplesInput!) { importSamples(input: $i) { rowCount committed errors { row field message } } }`;

@@ -88,8 +88,8 @@ export const BENCHMARKS: Benchmark[] = [
         { figure: '  API peak RSS so far (MiB)', value: mib(r.peakRssMiB), target: '(no target)', met: true },
       ];
       return [
-        ...ladderRows(ladderGrid, 'densityGrid'),
-        ...ladderRows(ladder, 'page query, density points'),
+        ...ladderRows(ladderGrid, 'the page query, densityGrid'),
+        ...ladderRows(ladder, 'densities as points instead'),
         {
           figure: `lab-sheet import, ${sheet.rows.toLocaleString('en')} rows, validate and commit through the API (s)`,
           value: round(sheet.commitSeconds),
