@@ -4,6 +4,7 @@ import { CalibrationService } from '../calibration/calibration.service';
 import { DatabaseService, Executor } from '../database/database.service';
 import * as schema from '../database/schema';
 import { builtInCurve } from '../reference-data/reference-data';
+import { sampleMeasurements } from '../samples/sample-rules';
 import { DEMO_SEED, generateDemoScenario } from './generate';
 
 /** Password of every demo account (README). */
@@ -117,21 +118,7 @@ export class DemoSeeder {
           projectId: project.id,
           siteId: siteRow.id,
           unitId: unitIds.get(sample.unitKey)!,
-          labCode: sample.labCode,
-          method: sample.method,
-          material: sample.material,
-          depthM: sample.depthM ?? null,
-          ageRelation: sample.ageRelation,
-          c14Age: sample.c14Age ?? null,
-          c14Error: sample.c14Error ?? null,
-          delta13C: sample.delta13C ?? null,
-          curve: sample.curve ?? null,
-          deltaR: sample.deltaR ?? null,
-          deltaRError: sample.deltaRError ?? null,
-          calendarAgeBp: sample.calendarAgeBp ?? null,
-          calendarErrorYears: sample.calendarErrorYears ?? null,
-          measurementYear: sample.measurementYear ?? null,
-          notes: sample.notes ?? null,
+          ...sampleMeasurements(sample),
           calibration,
         });
         sampleCount++;

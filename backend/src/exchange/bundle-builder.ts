@@ -11,6 +11,7 @@ import {
   BundleUnit,
   ProjectBundle,
 } from './bundle-format';
+import { sampleMeasurements } from '../samples/sample-rules';
 
 /** A project's records as the database holds them (ids instead of refs); extra columns are ignored. */
 export interface ProjectRecords {
@@ -127,23 +128,9 @@ export function buildBundle(records: ProjectRecords, exportedAt: Date): ProjectB
       ref: s.id,
       siteRef: s.siteId,
       unitRef: s.unitId,
-      labCode: s.labCode,
-      method: s.method,
-      material: s.material,
-      depthM: s.depthM ?? null,
-      ageRelation: s.ageRelation,
-      c14Age: s.c14Age ?? null,
-      c14Error: s.c14Error ?? null,
-      delta13C: s.delta13C ?? null,
-      curve: s.curve ?? null,
-      deltaR: s.deltaR ?? null,
-      deltaRError: s.deltaRError ?? null,
-      calendarAgeBp: s.calendarAgeBp ?? null,
-      calendarErrorYears: s.calendarErrorYears ?? null,
-      measurementYear: s.measurementYear ?? null,
+      ...sampleMeasurements(s),
       excluded: s.excluded,
       exclusionReason: s.exclusionReason ?? null,
-      notes: s.notes ?? null,
     })),
     hypotheses: hypotheses.map((h) => ({
       ref: h.id,

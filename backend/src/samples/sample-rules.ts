@@ -31,3 +31,43 @@ export function depthOutsideUnit(depthM: number | null, unit: UnitExtent): strin
   }
   return null;
 }
+
+/** The measured fields of a sample, as plain data from any source (a form, a sheet, the demo, a bundle). */
+export interface SampleMeasurements<Method extends string = string, Material extends string = string, Relation extends string = string> {
+  readonly labCode: string;
+  readonly method: Method;
+  readonly material: Material;
+  readonly ageRelation: Relation;
+  readonly depthM?: number | null;
+  readonly c14Age?: number | null;
+  readonly c14Error?: number | null;
+  readonly delta13C?: number | null;
+  readonly curve?: string | null;
+  readonly deltaR?: number | null;
+  readonly deltaRError?: number | null;
+  readonly calendarAgeBp?: number | null;
+  readonly calendarErrorYears?: number | null;
+  readonly measurementYear?: number | null;
+  readonly notes?: string | null;
+}
+
+/** The measured fields with absent ones as null: one mapping for every writer and exporter of samples. */
+export function sampleMeasurements<M extends string, T extends string, R extends string>(sample: SampleMeasurements<M, T, R>) {
+  return {
+    labCode: sample.labCode,
+    method: sample.method,
+    material: sample.material,
+    depthM: sample.depthM ?? null,
+    ageRelation: sample.ageRelation,
+    c14Age: sample.c14Age ?? null,
+    c14Error: sample.c14Error ?? null,
+    delta13C: sample.delta13C ?? null,
+    curve: sample.curve ?? null,
+    deltaR: sample.deltaR ?? null,
+    deltaRError: sample.deltaRError ?? null,
+    calendarAgeBp: sample.calendarAgeBp ?? null,
+    calendarErrorYears: sample.calendarErrorYears ?? null,
+    measurementYear: sample.measurementYear ?? null,
+    notes: sample.notes ?? null,
+  };
+}
