@@ -25,6 +25,7 @@ import { InvitationsModule } from './invitations/invitations.module';
 import { JobsModule } from './jobs/jobs.module';
 import { LoadersModule } from './loaders/loaders.module';
 import { RequestLoadersFactory } from './loaders/request-loaders';
+import { EventLadderCache } from './hypotheses/event-ladder-cache';
 import { MembersModule } from './members/members.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { PasswordResetsModule } from './password-resets/password-resets.module';
@@ -49,15 +50,15 @@ import { ReleasesModule } from './releases/releases.module';
     AuthModule,
     GraphQLModule.forRootAsync<ApolloDriverConfig>({
       driver: ApolloDriver,
-      imports: [LoadersModule],
-      inject: [APP_CONFIG, RequestLoadersFactory],
-      useFactory: (config: AppConfig, loaders: RequestLoadersFactory) => ({
+      imports: [LoadersModule, HypothesesModule],
+      inject: [APP_CONFIG, RequestLoadersFactory, EventLadderCache],
+      useFactory: (config: AppConfig, loaders: RequestLoadersFactory, ladderCache: EventLadderCache) => ({
         typePaths: [join(repositoryRoot(), 'schema.graphql')],
         path: '/graphql',
         resolvers: { DateTime: DateTimeScalar, JSON: JsonScalar, NumberList: NumberListScalar },
         playground: false,
         validationRules: [depthLimitRule()],
-        plugins: [complexityLimitPlugin()],
+        plugins: [complexityLimitPlugin(), ladderCache.plugin()],
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
         context: ({ req }: { req: unknown }) => ({ req, loaders: loaders.create() }),

@@ -246,6 +246,34 @@ describe('setPreferredHypothesis', () => {
 });
 
 describe('eventLadder', () => {
+  const PAGE_QUERY = `query($p: ID!) { eventLadder(projectId: $p) { columns { site { id name } latestAgeModelRun { id stale } events { eventHorizon { id name } medianCalBp } } }
+    project(id: $p) { id name myRole hypotheses { id name preferred version } } }`;
+
+  it('answers repeated ladder reads from its cache only while nothing it shows has changed', async () => {
+    const first = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
+    const again = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
+    expect(again).toEqual(first);
+    // A renamed site shows at once.
+    const site = first.eventLadder.columns[0].site;
+    const [{ version }] = await sql<{ version: number }>('select version from sites where id = $1', [site.id]);
+    await clients.RESEARCHER.ok(`mutation($id: ID!, $v: Int!, $n: String!) { updateSite(id: $id, version: $v, input: { name: $n }) { id } }`, {
+      id: site.id, v: version, n: `${site.name} (renamed)`,
+    });
+    const renamed = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
+    expect(renamed.eventLadder.columns[0].site.name).toBe(`${site.name} (renamed)`);
+    // A new hypothesis shows at once.
+    await createHypothesis(clients.CORRELATOR, 'Cache check');
+    const withHypothesis = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
+    expect(withHypothesis.project.hypotheses.map((h: { name: string }) => h.name)).toContain('Cache check');
+    // Another member's role is their own: the cached answer of the viewer is not served to the admin.
+    const admin = (await clients.ADMIN.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
+    expect(admin.project.myRole).toBe('ADMIN');
+    expect(withHypothesis.project.myRole).toBe('VIEWER');
+    // An outsider never gets a cached answer.
+    expect((await clients.OUTSIDER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');
+    await sql(`update sites set name = $2, version = version + 1 where id = $1`, [site.id, site.name]);
+  });
+
   it('lists every site along strike with its latest run and each event posterior', async () => {
     const { eventLadder } = await clients.VIEWER.ok(LADDER, { p: fixture.projectId });
     expect(eventLadder.project.id).toBe(fixture.projectId);

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { EventLadderCache } from './event-ladder-cache';
 import { ProjectsModule } from '../projects/projects.module';
 import { SitesModule } from '../sites/sites.module';
 import { UsersModule } from '../users/users.module';
@@ -12,6 +13,7 @@ import { HypothesesService } from './hypotheses.service';
 @Module({
   imports: [ProjectsModule, SitesModule, UsersModule],
   providers: [
+    EventLadderCache,
     HypothesesRepository,
     CorrelationDataService,
     HypothesesService,
@@ -21,6 +23,6 @@ import { HypothesesService } from './hypotheses.service';
     EventLadderResolver,
     LadderEventResolver,
   ],
-  exports: [HypothesesService, CorrelationDataService],
+  exports: [HypothesesService, CorrelationDataService, EventLadderCache],
 })
 export class HypothesesModule {}
