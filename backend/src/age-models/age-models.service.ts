@@ -102,13 +102,13 @@ export class AgeModelsService {
   }
 
   /** Each event's posterior from its site's newest successful run (for the ladder and correlation). */
-  async latestPosteriors(siteIds: string[]): Promise<Map<string, StoredEventPosterior & { runId: string; densityGrid: CalendarDensity }>> {
+  async latestPosteriors(siteIds: string[]): Promise<Map<string, StoredEventPosterior & { runId: string; posterior: CalendarDensity }>> {
     const runs = await this.runs.latestSucceededForSites(siteIds);
-    const posteriors = new Map<string, StoredEventPosterior & { runId: string; densityGrid: CalendarDensity }>();
+    const posteriors = new Map<string, StoredEventPosterior & { runId: string; posterior: CalendarDensity }>();
     for (const run of runs) {
       const results = run.results as StoredAgeModelResults | null;
       for (const event of results?.events ?? []) {
-        posteriors.set(event.eventHorizonId, { ...event, runId: run.id, densityGrid: loadDensity(event.density) });
+        posteriors.set(event.eventHorizonId, { ...event, runId: run.id, posterior: loadDensity(event.density) });
       }
     }
     return posteriors;

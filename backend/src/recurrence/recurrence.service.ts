@@ -293,7 +293,7 @@ export class RecurrenceService {
         siteName: event.siteName,
         alongStrikeKm: event.alongStrikeKm,
         orderIndexFromBase: event.unitBelowPosition,
-        posterior: posteriors.get(event.id)!.densityGrid,
+        posterior: posteriors.get(event.id)!.posterior,
       }));
     const chosen = refuseInput(() =>
       segmentRegionalEvents({ events, ties, tectonicSetting, segmentSiteIds: new Set(segmentSites.map((site) => site.id)) }),

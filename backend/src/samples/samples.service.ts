@@ -16,7 +16,6 @@ import { CreateSampleInput, UpdateSampleInput } from './dto/create-sample.input'
 import { depthOutsideUnit } from './sample-rules';
 import { SampleInsert, SampleRow, SamplesRepository } from './samples.repository';
 
-export { DEPTH_TOLERANCE_M } from './sample-rules';
 
 @Injectable()
 export class SamplesService {
