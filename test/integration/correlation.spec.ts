@@ -249,26 +249,63 @@ describe('eventLadder', () => {
   const PAGE_QUERY = `query($p: ID!) { eventLadder(projectId: $p) { columns { site { id name } latestAgeModelRun { id stale } events { eventHorizon { id name } medianCalBp } } }
     project(id: $p) { id name myRole hypotheses { id name preferred version } } }`;
 
+  /** The page query over plain HTTP, with whether the cache answered it. */
+  async function ladderRead(client: GraphqlClient, encoding = 'gzip'): Promise<{ hit: boolean; contentEncoding: string | null; body: Record<string, any> }> {
+    const response = await fetch(`${server.url}/graphql`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'accept-encoding': encoding, authorization: `Bearer ${client.token}` },
+      body: JSON.stringify({ query: PAGE_QUERY, variables: { p: fixture.projectId } }),
+    });
+    const body = (await response.json()) as { data: Record<string, any>; errors?: unknown[] };
+    if (body.errors) throw new Error(JSON.stringify(body.errors));
+    return { hit: response.headers.get('x-cache') === 'hit', contentEncoding: response.headers.get('content-encoding'), body: body.data };
+  }
+
   it('answers repeated ladder reads from its cache only while nothing it shows has changed', async () => {
-    const first = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
-    const again = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
-    expect(again).toEqual(first);
+    const first = await ladderRead(clients.VIEWER);
+    const again = await ladderRead(clients.VIEWER);
+    expect(again.hit).toBe(true);
+    expect(again.contentEncoding).toBe('gzip');
+    expect(again.body).toEqual(first.body);
+    // Uncompressed for a client that does not accept gzip, with the same content.
+    const plain = await ladderRead(clients.VIEWER, 'identity');
+    expect(plain).toMatchObject({ hit: true, contentEncoding: null });
+    expect(plain.body).toEqual(first.body);
     // A renamed site shows at once.
-    const site = first.eventLadder.columns[0].site;
+    const site = first.body.eventLadder.columns[0].site;
     const [{ version }] = await sql<{ version: number }>('select version from sites where id = $1', [site.id]);
     await clients.RESEARCHER.ok(`mutation($id: ID!, $v: Int!, $n: String!) { updateSite(id: $id, version: $v, input: { name: $n }) { id } }`, {
       id: site.id, v: version, n: `${site.name} (renamed)`,
     });
-    const renamed = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
-    expect(renamed.eventLadder.columns[0].site.name).toBe(`${site.name} (renamed)`);
+    const renamed = await ladderRead(clients.VIEWER);
+    expect(renamed.hit).toBe(false);
+    expect(renamed.body.eventLadder.columns[0].site.name).toBe(`${site.name} (renamed)`);
     // A new hypothesis shows at once.
     await createHypothesis(clients.CORRELATOR, 'Cache check');
-    const withHypothesis = (await clients.VIEWER.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
-    expect(withHypothesis.project.hypotheses.map((h: { name: string }) => h.name)).toContain('Cache check');
-    // Another member's role is their own: the cached answer of the viewer is not served to the admin.
-    const admin = (await clients.ADMIN.ok(PAGE_QUERY, { p: fixture.projectId })) as Record<string, any>;
-    expect(admin.project.myRole).toBe('ADMIN');
-    expect(withHypothesis.project.myRole).toBe('VIEWER');
+    const withHypothesis = await ladderRead(clients.VIEWER);
+    expect(withHypothesis.hit).toBe(false);
+    expect(withHypothesis.body.project.hypotheses.map((h: { name: string }) => h.name)).toContain('Cache check');
+    expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
+    // Another member's answer is their own: the viewer's is not served to the admin.
+    const admin = await ladderRead(clients.ADMIN);
+    expect(admin.hit).toBe(false);
+    expect(admin.body.project.myRole).toBe('ADMIN');
+    expect(withHypothesis.body.project.myRole).toBe('VIEWER');
+    // A changed role is seen at once, and a removed member is refused even with a cached answer.
+    const viewerEmail = fixture.emails.VIEWER;
+    const member = `project_id = $1 and user_id = (select id from users where email = $2)`;
+    await sql(`update memberships set role = 'ANALYST' where ${member}`, [fixture.projectId, viewerEmail]);
+    const promoted = await ladderRead(clients.VIEWER);
+    expect(promoted).toMatchObject({ hit: false, body: { project: { myRole: 'ANALYST' } } });
+    await sql(`update memberships set role = 'VIEWER' where ${member}`, [fixture.projectId, viewerEmail]);
+    expect((await ladderRead(clients.VIEWER)).hit).toBe(false);
+    expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
+    const [removed] = await sql<{ role: string; user_id: string }>(`delete from memberships where ${member} returning role, user_id`, [fixture.projectId, viewerEmail]);
+    try {
+      expect((await clients.VIEWER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');
+    } finally {
+      await sql(`insert into memberships (project_id, user_id, role) values ($1, $2, $3)`, [fixture.projectId, removed.user_id, removed.role]);
+    }
     // An outsider never gets a cached answer.
     expect((await clients.OUTSIDER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');
     await sql(`update sites set name = $2, version = version + 1 where id = $1`, [site.id, site.name]);

@@ -33,6 +33,8 @@ export interface AppConfig {
   readonly demoAccountsFile?: string;
   /** Silence after which a RUNNING job counts as abandoned by its worker (tests shorten it). */
   readonly jobHeartbeatTimeoutMs: number;
+  /** Memory for serialised event-ladder answers per API process, MiB; 0 turns the cache off. */
+  readonly ladderCacheMiB: number;
 }
 
 export class ConfigError extends Error {
@@ -99,6 +101,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     workerConcurrency: integer('WORKER_CONCURRENCY', 1, 1, 64),
     demoAccountsFile: env.DEMO_ACCOUNTS_FILE || undefined,
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
+    ladderCacheMiB: integer('LADDER_CACHE_MIB', 64, 0, 16_384),
   };
   if (problems.length > 0) throw new ConfigError(problems);
   return config;

@@ -1,5 +1,6 @@
-import { Module } from '@nestjs/common';
+import { MiddlewareConsumer, Module, NestModule, RequestMethod } from '@nestjs/common';
 import { EventLadderCache } from './event-ladder-cache';
+import { EventLadderCacheMiddleware } from './event-ladder-cache.middleware';
 import { ProjectsModule } from '../projects/projects.module';
 import { SitesModule } from '../sites/sites.module';
 import { UsersModule } from '../users/users.module';
@@ -25,4 +26,8 @@ import { HypothesesService } from './hypotheses.service';
   ],
   exports: [HypothesesService, CorrelationDataService, EventLadderCache],
 })
-export class HypothesesModule {}
+export class HypothesesModule implements NestModule {
+  configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(EventLadderCacheMiddleware).forRoutes({ path: 'graphql', method: RequestMethod.POST });
+  }
+}
