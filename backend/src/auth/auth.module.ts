@@ -5,6 +5,7 @@ import { APP_CONFIG, AppConfig } from '../config/config';
 import { UsersModule } from '../users/users.module';
 import { AuthResolver } from './auth.resolver';
 import { AuthService } from './auth.service';
+import { jwtKey } from './jwt-key';
 import { JwtStrategy } from './jwt.strategy';
 
 @Global()
@@ -14,7 +15,7 @@ import { JwtStrategy } from './jwt.strategy';
     UsersModule,
     JwtModule.registerAsync({
       inject: [APP_CONFIG],
-      useFactory: (config: AppConfig) => ({ secret: config.jwtSecret, signOptions: { algorithm: 'HS256' } }),
+      useFactory: (config: AppConfig) => ({ secret: jwtKey(config.jwtSecret), signOptions: { algorithm: 'HS256' } }),
     }),
   ],
   providers: [AuthService, AuthResolver, JwtStrategy],

@@ -3,6 +3,7 @@ import { PassportStrategy } from '@nestjs/passport';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { AuthUser } from './auth-user';
+import { jwtKey } from './jwt-key';
 
 interface TokenClaims {
   sub: string;
@@ -15,7 +16,8 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(@Inject(APP_CONFIG) config: AppConfig) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.jwtSecret,
+      // jsonwebtoken takes a KeyObject; passport-jwt's types only name string and Buffer.
+      secretOrKey: jwtKey(config.jwtSecret) as unknown as Buffer,
       algorithms: ['HS256'],
       ignoreExpiration: false,
     });
