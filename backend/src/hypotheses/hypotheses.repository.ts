@@ -20,7 +20,8 @@ export interface ProjectEventRow {
   eventHorizon: EventHorizonRow;
   /** Position of the unit below (1 = base), the event's order in its column. */
   unitBelowPosition: number;
-  site: SiteRow;
+  /** Only what the checks and their messages use: a 600-event project would otherwise map 600 full site rows. */
+  site: Pick<SiteRow, 'id' | 'name' | 'alongStrikeKm'>;
 }
 
 const eventA = aliasedTable(eventHorizons, 'event_a');
@@ -150,7 +151,7 @@ export class HypothesesRepository {
   /** Every event horizon of a project with its site and the position of its unit below. */
   async listProjectEvents(projectId: string, executor: Executor = this.database.db): Promise<ProjectEventRow[]> {
     return executor
-      .select({ eventHorizon: eventHorizons, unitBelowPosition: units.position, site: sites })
+      .select({ eventHorizon: eventHorizons, unitBelowPosition: units.position, site: { id: sites.id, name: sites.name, alongStrikeKm: sites.alongStrikeKm } })
       .from(eventHorizons)
       .innerJoin(sites, eq(sites.id, eventHorizons.siteId))
       .innerJoin(units, eq(units.id, eventHorizons.unitBelowId))
