@@ -48,6 +48,8 @@ export interface ApiBench {
   ladder: LadderLoadBench;
   /** The same with the thinned `densityGrid` the schema recommends instead of points. */
   ladderGrid: LadderLoadBench;
+  /** The page query with the answer cache off (`LADDER_CACHE_MIB=0`): every request executed. */
+  ladderUncached: LadderLoadBench;
   import: ImportBench;
 }
 
@@ -210,11 +212,11 @@ async function graphql<T>(url: string, token: string | undefined, query: string,
   return { ...(JSON.parse(text) as { data?: T; errors?: unknown[] }), bytes: text.length };
 }
 
-async function startApi(databaseUrl: string, jwtSecret: string): Promise<{ child: ChildProcess; url: string; log: () => string }> {
+async function startApi(databaseUrl: string, jwtSecret: string, extraEnv: Record<string, string> = {}): Promise<{ child: ChildProcess; url: string; log: () => string }> {
   const port = await freePort();
   const output: string[] = [];
   const child = spawn(process.execPath, [join(__dirname, '..', 'main.js')], {
-    env: { NODE_ENV: 'test', DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', JWT_SECRET: jwtSecret, SEED_DEMO: 'false', FRONTEND_DIST: '/nonexistent' },
+    env: { NODE_ENV: 'test', DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', JWT_SECRET: jwtSecret, SEED_DEMO: 'false', FRONTEND_DIST: '/nonexistent', ...extraEnv },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout?.on('data', (chunk: Buffer) => output.push(chunk.toString()));
@@ -332,10 +334,11 @@ export async function benchApi(): Promise<ApiBench> {
   await admin.connect();
   await admin.query(`create database "${benchDatabase}"`);
   const databaseUrl = withDatabase(config.databaseUrl, benchDatabase);
+  const jwtSecret = randomBytes(24).toString('hex');
   let api: Awaited<ReturnType<typeof startApi>> | undefined;
   const pool = new Pool({ connectionString: databaseUrl, max: 4 });
   try {
-    api = await startApi(databaseUrl, randomBytes(24).toString('hex')); // runs the migrations
+    api = await startApi(databaseUrl, jwtSecret); // runs the migrations
     const { projectId, email } = await seedProject(pool);
     const signIn = await graphql<{ signIn: { token: string } }>(api.url, undefined, 'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }', { e: email, p: PASSWORD });
     const token = signIn.data?.signIn.token;
@@ -344,8 +347,13 @@ export async function benchApi(): Promise<ApiBench> {
     await waitUntilQuiet(pool);
     const ladder = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_QUERY);
     await waitUntilQuiet(pool);
+    api.child.kill('SIGKILL');
+    // A second API with the answer cache off, for what every request costs when executed.
+    api = await startApi(databaseUrl, jwtSecret, { LADDER_CACHE_MIB: '0' });
+    const ladderUncached = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_GRID_QUERY);
+    await waitUntilQuiet(pool);
     const imported = await benchImport(api.url, token, pool, projectId, api.child.pid);
-    return { ladder, ladderGrid, import: imported };
+    return { ladder, ladderGrid, ladderUncached, import: imported };
   } finally {
     api?.child.kill('SIGKILL');
     await pool.end();

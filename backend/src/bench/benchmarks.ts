@@ -70,14 +70,14 @@ export const BENCHMARKS: Benchmark[] = [
   {
     name: 'API under load',
     run: async () => {
-      const { ladder, ladderGrid, import: sheet } = await benchApi();
+      const { ladder, ladderGrid, ladderUncached, import: sheet } = await benchApi();
       const mib = (value: number | null) => (value === null ? 'n/a' : round(value, 0));
-      const ladderRows = (r: LadderLoadBench, shape: string): BenchRow[] => [
+      const ladderRows = (r: LadderLoadBench, shape: string, targeted: boolean): BenchRow[] => [
         {
           figure: `event ladder (${shape}), ${r.sites} sites, ${r.events} events, ${r.samples} samples, ${r.connections} clients: p95 (ms)`,
           value: round(r.p95Ms, 1),
-          target: '< 150 ms',
-          met: r.p95Ms < 150 && r.failures === 0,
+          target: targeted ? '< 150 ms' : '(no target)',
+          met: (!targeted || r.p95Ms < 150) && r.failures === 0,
           note: r.failures > 0 ? `${r.failures} failed or timed-out requests` : undefined,
         },
         { figure: '  same, p50 (ms)', value: round(r.p50Ms, 1), target: '(no target)', met: true },
@@ -88,8 +88,9 @@ export const BENCHMARKS: Benchmark[] = [
         { figure: '  API peak RSS so far (MiB)', value: mib(r.peakRssMiB), target: '(no target)', met: true },
       ];
       return [
-        ...ladderRows(ladderGrid, 'the page query, densityGrid'),
-        ...ladderRows(ladder, 'densities as points instead'),
+        ...ladderRows(ladderGrid, 'the page query, densityGrid', true),
+        ...ladderRows(ladderUncached, 'the page query, answer cache off so every request is executed', false),
+        ...ladderRows(ladder, 'densities as points, which no page asks for', false),
         {
           figure: `lab-sheet import, ${sheet.rows.toLocaleString('en')} rows, validate and commit through the API (s)`,
           value: round(sheet.commitSeconds),
