@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestServer, TestServer } from '../support/app';
-import { createProjectFixture, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
+import { randomUUID } from 'node:crypto';
+import { createProjectFixture, createUser, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
 
 const CALIBRATE = `query($i: CalibrateInput!) { calibrate(input: $i) { medianCalBp meanCalBp
@@ -23,12 +24,17 @@ let server: TestServer;
 let fixture: ProjectFixture;
 let viewer: GraphqlClient;
 let admin: GraphqlClient;
+/** An operator of the server (OPERATOR_EMAILS), member of no project. */
+let operator: GraphqlClient;
+const OPERATOR_EMAIL = `operator-${randomUUID().slice(0, 8)}@calibration.test`;
 
 beforeAll(async () => {
   // Installed curves are server-wide; start from none, as a fresh database does.
   await sql(`delete from calibration_curves where code = 'SHCAL20'`);
-  server = await startTestServer();
+  server = await startTestServer({ OPERATOR_EMAILS: `someone-else@calibration.test, ${OPERATOR_EMAIL.toUpperCase()}` });
   fixture = await createProjectFixture('Calibration');
+  await createUser(OPERATOR_EMAIL, 'Calibration operator');
+  operator = await new GraphqlClient(server.url).signIn(OPERATOR_EMAIL, PASSWORD);
   viewer = await new GraphqlClient(server.url).signIn(fixture.emails.VIEWER, PASSWORD);
   admin = await new GraphqlClient(server.url).signIn(fixture.emails.ADMIN, PASSWORD);
 });
@@ -89,17 +95,28 @@ describe('installCalibrationCurve', () => {
     expect(error.message).toMatch(/not installed/);
   });
 
-  it('is refused to a non-admin and refuses a malformed file', async () => {
+  it('is refused to every project role, a project ADMIN too, and refuses a malformed file', async () => {
     const input = { code: 'SHCAL20', name: 'Linear test curve', marine: false, text: linearCurveFile() };
-    expect((await viewer.errorOf(INSTALL, { i: input })).code).toBe('FORBIDDEN');
+    // A curve serves every project on the server: a project's ADMIN may not change it for others.
+    for (const client of [viewer, admin]) {
+      const error = await client.errorOf(INSTALL, { i: input });
+      expect(error.code).toBe('FORBIDDEN');
+      expect(error.message).toMatch(/operator/);
+    }
+    expect(await sql(`select 1 from calibration_curves where code = 'SHCAL20'`)).toHaveLength(0);
     const unordered = { ...input, text: 'cal_bp,c14_age,c14_sigma\n100,100,20\n100,90,20\n' };
-    expect(await admin.errorOf(INSTALL, { i: unordered })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'text' });
+    expect(await operator.errorOf(INSTALL, { i: unordered })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'text' });
     const badSigma = { ...input, text: 'cal_bp,c14_age,c14_sigma\n100,100,0\n90,90,20\n' };
-    expect(await admin.errorOf(INSTALL, { i: badSigma })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'text' });
+    expect(await operator.errorOf(INSTALL, { i: badSigma })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'text' });
+  });
+
+  it('says who is an operator', async () => {
+    expect((await operator.ok(`{ me { operator } }`)).me.operator).toBe(true);
+    expect((await admin.ok(`{ me { operator } }`)).me.operator).toBe(false);
   });
 
   it('installs a curve that is then used like a built-in (the linear check of CHECKS.md)', async () => {
-    const { installCalibrationCurve } = await admin.ok(INSTALL, {
+    const { installCalibrationCurve } = await operator.ok(INSTALL, {
       i: { code: 'SHCAL20', name: 'Linear test curve', marine: false, text: linearCurveFile() },
     });
     expect(installCalibrationCurve).toMatchObject({ code: 'SHCAL20', builtIn: false, youngestCalBp: 0, oldestCalBp: 3000 });

@@ -12,7 +12,7 @@ import { SeededRandom } from '../../backend/src/chronology/common/random';
 import { S3Fake, startS3Fake } from '../../backend/src/fakes/s3-fake';
 import { SmtpFake, startSmtpFake } from '../../backend/src/fakes/smtp-fake';
 import { startTestServer, TestServer } from '../support/app';
-import { createProjectFixture, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
+import { createProjectFixture, createUser, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
 
 /**
@@ -22,16 +22,18 @@ import { GraphqlClient } from '../support/graphql';
  * asks for, so a new mutation without a line here fails the first test.
  */
 
-type Actor = Role | 'OUTSIDER';
-const ACTORS: readonly Actor[] = [...ROLES, 'OUTSIDER'];
+/** OPERATOR: an operator of the server (OPERATOR_EMAILS) who is not a member of the project. */
+type Actor = Role | 'OUTSIDER' | 'OPERATOR';
+const ACTORS: readonly Actor[] = [...ROLES, 'OUTSIDER', 'OPERATOR'];
+const OPERATOR_EMAIL = `operator-${randomUUID().slice(0, 8)}@matrix.test`;
 
 /**
  * Who may call a mutation. `project`: a member of the objects' project whose role has the
  * permission (others in the project: FORBIDDEN; outsiders: NOT_FOUND, the project is hidden).
- * `anyProject`: a member with the permission in any project (everyone else: FORBIDDEN).
- * `signedIn`: anyone with a token. `public`: no token needed.
+ * `signedIn`: anyone with a token. `public`: no token needed. `operator`: an operator of the
+ * server only (everyone else: FORBIDDEN). An operator is otherwise an outsider of the project.
  */
-type Access = { project: Permission } | { anyProject: Permission } | 'signedIn' | 'public';
+type Access = { project: Permission } | 'signedIn' | 'public' | 'operator';
 type Variables = Record<string, unknown>;
 
 interface MatrixCase {
@@ -57,14 +59,15 @@ function documentFor(field: GraphQLField<unknown, unknown>): string {
 
 function mayCall(access: Access, actor: Actor): boolean {
   if (access === 'public' || access === 'signedIn') return true;
-  if (actor === 'OUTSIDER') return false;
-  const permission = 'project' in access ? access.project : access.anyProject;
-  return ROLE_PERMISSIONS[actor].has(permission);
+  if (access === 'operator') return actor === 'OPERATOR';
+  if (actor === 'OUTSIDER' || actor === 'OPERATOR') return false;
+  return ROLE_PERMISSIONS[actor].has(access.project);
 }
 
 /** The error code a refused actor gets. */
 function refusal(access: Access, actor: Actor): 'FORBIDDEN' | 'NOT_FOUND' {
-  return actor === 'OUTSIDER' && typeof access === 'object' && 'project' in access ? 'NOT_FOUND' : 'FORBIDDEN';
+  const outside = actor === 'OUTSIDER' || actor === 'OPERATOR';
+  return outside && typeof access === 'object' ? 'NOT_FOUND' : 'FORBIDDEN';
 }
 
 const REFUSED = ['FORBIDDEN', 'NOT_FOUND', 'UNAUTHENTICATED'];
@@ -254,10 +257,10 @@ const CASES: Record<string, MatrixCase> = {
   },
   deleteSample: { access: stratigraphy, variables: async () => ({ id: (await clients.RESEARCHER.ok(gql.sample, { i: sampleInput() })).createSample.id }) },
   importSamples: { access: stratigraphy, variables: async () => ({ input: { siteId: editSiteId, csv: 'lab_code\n', commit: false } }) },
-  // The text is not a curve file: an ADMIN passes the access check and is refused on the text
+  // The text is not a curve file: an operator passes the access check and is refused on the text
   // (BAD_USER_INPUT), so the matrix installs nothing into the database other files share.
   installCalibrationCurve: {
-    access: { anyProject: Permission.CurveInstall },
+    access: 'operator',
     allowedError: 'BAD_USER_INPUT',
     variables: async () => ({ input: { code: 'SHCAL20', name: 'Matrix check', marine: false, text: 'not a curve file' } }),
   },
@@ -341,11 +344,14 @@ beforeAll(async () => {
     S3_ACCESS_KEY_ID: 'fake-access-key',
     S3_SECRET_ACCESS_KEY: 'fake-secret-key',
     S3_FORCE_PATH_STYLE: 'true',
+    OPERATOR_EMAILS: OPERATOR_EMAIL,
   });
   fixture = await createProjectFixture('Permission matrix');
   anonymous = new GraphqlClient(server.url);
   for (const role of ROLES) clients[role] = await anonymous.signIn(fixture.emails[role], PASSWORD);
   clients.OUTSIDER = await anonymous.signIn(fixture.outsiderEmail, PASSWORD);
+  await createUser(OPERATOR_EMAIL, 'Matrix operator');
+  clients.OPERATOR = await anonymous.signIn(OPERATOR_EMAIL, PASSWORD);
 
   segmentId = await newSegment();
   runSiteId = await newSite({ segmentId, alongStrikeKm: 10 });

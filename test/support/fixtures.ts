@@ -46,6 +46,11 @@ export async function createProjectFixture(name = 'Fixture project'): Promise<Pr
   }
 }
 
+/** A signed-up user with the fixture password and no membership (an operator, say). */
+export async function createUser(email: string, displayName = 'Fixture user'): Promise<void> {
+  await sql(`insert into users (email, display_name, password_hash) values ($1, $2, $3)`, [email, displayName, HASH]);
+}
+
 /** Run one SQL query against the test database (for checking what was or was not written). */
 export async function sql<T extends Record<string, unknown>>(text: string, params: unknown[] = []): Promise<T[]> {
   const pool = new Pool({ connectionString: process.env.DATABASE_URL });

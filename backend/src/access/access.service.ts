@@ -53,7 +53,5 @@ function describe(permission: Permission): string {
       return 'create releases';
     case Permission.AuditRead:
       return 'read the audit trail';
-    case Permission.CurveInstall:
-      return 'install calibration curves';
   }
 }

@@ -22,8 +22,6 @@ export enum Permission {
   ReleaseCreate = 'release.create',
   /** Read the audit trail. */
   AuditRead = 'audit.read',
-  /** Install calibration curves. */
-  CurveInstall = 'curve.install',
 }
 
 const READ = [Permission.ProjectRead, Permission.AuditRead];

@@ -13,10 +13,10 @@ import { calibrationForSample, SampleDating } from '../chronology/calibration/sa
 import { badInput, forbidden } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { StoredCalibration } from '../database/schema';
-import { MembershipsRepository } from '../memberships/memberships.repository';
 import { CalibrationCurvesRepository } from './calibration-curves.repository';
 import { CalibrateInput, CalibrateLuminescenceInput, InstallCurveInput } from './dto/calibrate.input';
 import { CurveInfo, CurveRegistryService } from './curve-registry.service';
+import { UsersService } from '../users/users.service';
 
 /** A calibration as the API returns it: summaries plus the density as (calBp, probability) points. */
 export interface CalibrationView {
@@ -36,7 +36,7 @@ export class CalibrationService {
     private readonly database: DatabaseService,
     private readonly registry: CurveRegistryService,
     private readonly curves: CalibrationCurvesRepository,
-    private readonly memberships: MembershipsRepository,
+    private readonly users: UsersService,
     private readonly access: AccessService,
     private readonly audit: AuditService,
   ) {}
@@ -44,7 +44,7 @@ export class CalibrationService {
   async calibrate(input: CalibrateInput): Promise<CalibrationView> {
     const lookup = await this.registry.lookup();
     const curve = lookup(input.curve);
-    if (!curve) throw badInput('curve', `curve ${input.curve} is not installed; an administrator can install it from its published file`);
+    if (!curve) throw badInput('curve', `curve ${input.curve} is not installed; an operator of the server can install it from its published file`);
     return toView(asUserInput(() => calibrateRadiocarbon({ ...input, curve })), input.curve);
   }
 
@@ -104,11 +104,14 @@ export class CalibrationService {
     return points;
   }
 
-  /** Install or replace a curve from its published file. Open to an ADMIN of any project. */
+  /**
+   * Install or replace a curve from its published file. Installed curves serve every project on
+   * the server, so this is an operator's action (`OPERATOR_EMAILS`), not a project role's.
+   */
   async installCurve(user: AuthUser, input: InstallCurveInput): Promise<CurveInfo> {
-    const mine = await this.memberships.listForUser(user.id);
-    const adminOf = mine.find((m) => m.role === 'ADMIN');
-    if (!adminOf) throw forbidden('only a project administrator can install calibration curves');
+    if (!(await this.users.operator(user))) {
+      throw forbidden('an installed calibration curve is used by every project on this server: only an operator of the server (OPERATOR_EMAILS) may install one');
+    }
     if (input.code === 'INTCAL20' || input.code === 'MARINE20') {
       throw badInput('code', `${input.code} is built in and cannot be replaced`);
     }

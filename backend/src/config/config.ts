@@ -33,6 +33,11 @@ export interface AppConfig {
   readonly demoAccountsFile?: string;
   /** Silence after which a RUNNING job counts as abandoned by its worker (tests shorten it). */
   readonly jobHeartbeatTimeoutMs: number;
+  /**
+   * E-mail addresses of the server's operators, lower case. Installed calibration curves are
+   * shared by every project on the server, so only an operator may install one.
+   */
+  readonly operatorEmails: readonly string[];
   /** Memory for serialised event-ladder answers per API process, MiB; 0 turns the cache off. */
   readonly ladderCacheMiB: number;
 }
@@ -70,6 +75,10 @@ export function loadConfig(env: Env = process.env): AppConfig {
   if (jwtSecret.length < 32) problems.push('JWT_SECRET must be at least 32 characters');
   const port = integer('PORT', 3000, 1);
   const seedDemo = (env.SEED_DEMO ?? 'false') === 'true';
+  const operatorEmails = (env.OPERATOR_EMAILS ?? '').split(',').map((e) => e.trim().toLowerCase()).filter((e) => e !== '');
+  for (const email of operatorEmails) {
+    if (!/^[^\s@]+@[^\s@]+$/.test(email)) problems.push(`OPERATOR_EMAILS must be comma-separated e-mail addresses, got "${email}"`);
+  }
   if (seedDemo && nodeEnv === 'production') problems.push('SEED_DEMO must not be true in production');
   const config: AppConfig = {
     nodeEnv,
@@ -101,6 +110,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     workerConcurrency: integer('WORKER_CONCURRENCY', 1, 1, 64),
     demoAccountsFile: env.DEMO_ACCOUNTS_FILE || undefined,
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
+    operatorEmails,
     ladderCacheMiB: integer('LADDER_CACHE_MIB', 64, 0, 16_384),
   };
   if (problems.length > 0) throw new ConfigError(problems);

@@ -17,6 +17,11 @@ export class UsersResolver {
     return this.users.me(user);
   }
 
+  @ResolveField('operator')
+  operator(@Parent() parent: UserRow): boolean {
+    return this.users.isOperator(parent);
+  }
+
   @ResolveField('memberships')
   membershipsOf(@Parent() parent: UserRow, @CurrentUser() user: AuthUser | undefined): Promise<MembershipView[]> {
     // signIn and acceptInvitation are public: their answer's user is the one who just proved who they are.

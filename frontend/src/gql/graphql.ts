@@ -545,7 +545,7 @@ export type Mutation = {
   deleteUnit: Scalars['Boolean']['output'];
   /** Validate a lab sheet (CSV) for a site; with commit true, write every row in one transaction or none. */
   importSamples: ImportResult;
-  /** Install a calibration curve (e.g. SHCal20) from its published five-column file (ADMIN of any project). */
+  /** Install or replace a calibration curve (e.g. SHCal20) from its published five-column file. Installed curves serve every project on the server: operators only (OPERATOR_EMAILS). */
   installCalibrationCurve: CalibrationCurveInfo;
   inviteMember: Invitation;
   removeMember: Scalars['Boolean']['output'];
@@ -1282,6 +1282,8 @@ export type User = {
   email: Scalars['String']['output'];
   id: Scalars['ID']['output'];
   memberships: Array<Membership>;
+  /** An operator of this server (OPERATOR_EMAILS): may install the calibration curves every project shares. */
+  operator: Scalars['Boolean']['output'];
 };
 
 export type WindowProbability = {

@@ -42,10 +42,10 @@ describe(calibrationForSample.name, () => {
       expect(direct.warnings[0]).toMatch(/polar waters/);
     });
 
-    it('says a curve that is not installed can be installed by an administrator (field curve)', () => {
+    it('says a curve that is not installed can be installed by an operator (field curve)', () => {
       const error = errorOf({ method: 'RADIOCARBON', c14Age: 1500, c14Error: 30, curve: 'SHCAL20' });
       expect(error.field).toBe('curve');
-      expect(error.message).toBe('curve SHCAL20 is not installed; an administrator can install it from its published file.');
+      expect(error.message).toBe('curve SHCAL20 is not installed; an operator of the server can install it from its published file.');
     });
 
     it('names the missing field', () => {

@@ -69,7 +69,7 @@ export function calibrationForSample(
       if (!curve) {
         throw new CalibrationInputError(
           'curve',
-          `curve ${code} is not installed; an administrator can install it from its published file.`,
+          `curve ${code} is not installed; an operator of the server can install it from its published file.`,
         );
       }
       return calibrateRadiocarbon({
