@@ -306,6 +306,15 @@ describe('eventLadder', () => {
     } finally {
       await sql(`insert into memberships (project_id, user_id, role) values ($1, $2, $3)`, [fixture.projectId, removed.user_id, removed.role]);
     }
+    // A token issued before a password change is refused even where an answer is cached.
+    expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
+    const byEmail = `email = $1`;
+    await sql(`update users set token_epoch = token_epoch + 1 where ${byEmail}`, [viewerEmail]);
+    try {
+      expect((await clients.VIEWER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('UNAUTHENTICATED');
+    } finally {
+      await sql(`update users set token_epoch = token_epoch - 1 where ${byEmail}`, [viewerEmail]);
+    }
     // An outsider never gets a cached answer.
     expect((await clients.OUTSIDER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');
     await sql(`update sites set name = $2, version = version + 1 where id = $1`, [site.id, site.name]);

@@ -161,8 +161,14 @@ describe('password reset', () => {
     expect(expiresIn).toBeGreaterThan(3600_000 - 60_000);
     expect(expiresIn).toBeLessThanOrEqual(3600_000);
 
+    const before = await anonymous.signIn(email, PASSWORD);
+    expect((await before.ok(`{ me { email } }`)).me.email).toBe(email);
     expect((await anonymous.ok(RESET, { i: { token, password: 'viewer-new-password' } })).resetPassword).toBe(true);
-    await anonymous.signIn(email, 'viewer-new-password');
+    // Every token issued before the reset ends with it (a stolen session does not outlive it).
+    expect((await before.errorOf(`{ me { email } }`)).code).toBe('UNAUTHENTICATED');
+    const after = await anonymous.signIn(email, 'viewer-new-password');
+    expect((await after.ok(`{ me { email } }`)).me.email).toBe(email);
+    clients.VIEWER = after;
     expect((await anonymous.errorOf('mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }', { e: email, p: PASSWORD })).code).toBe('UNAUTHENTICATED');
 
     const reused = await anonymous.errorOf(RESET, { i: { token, password: 'yet-another-password' } });
@@ -178,6 +184,16 @@ describe('password reset', () => {
     await sql(`update password_resets set expires_at = now() - interval '1 second' where token_hash = $1`, [createHash('sha256').update(token).digest('hex')]);
     expect(await anonymous.errorOf(RESET, { i: { token, password: 'analyst-new-password' } })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'token' });
     await anonymous.signIn(email, PASSWORD);
+  });
+
+  it('limits requests per address without telling whether it has an account', async () => {
+    const ghost = newEmail('flood');
+    for (let i = 0; i < 5; i++) expect((await anonymous.ok(REQUEST_RESET, { e: ghost })).requestPasswordReset).toBe(true);
+    const refused = await anonymous.errorOf(REQUEST_RESET, { e: ghost.toUpperCase() });
+    expect(refused.code).toBe('TOO_MANY_REQUESTS');
+    expect(refused.message).toMatch(/try again in \d+ minutes/);
+    // Another address is not held up by it.
+    expect((await anonymous.ok(REQUEST_RESET, { e: newEmail('other') })).requestPasswordReset).toBe(true);
   });
 
   it('answers true for an unknown address and sends nothing', async () => {

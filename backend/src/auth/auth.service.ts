@@ -2,9 +2,10 @@ import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DomainError, unauthenticated } from '../common/errors/domain-error';
-import { SignInLimiter } from './sign-in-limiter';
+import { AttemptLimiter } from './attempt-limiter';
 import { UserRow, UsersRepository } from '../users/users.repository';
 import { DUMMY_HASH, verifyPassword } from './passwords';
+import { TokenClaims } from './token-claims';
 
 export interface AuthPayload {
   token: string;
@@ -13,7 +14,7 @@ export interface AuthPayload {
 
 @Injectable()
 export class AuthService {
-  private readonly limiter = new SignInLimiter();
+  private readonly limiter = new AttemptLimiter();
 
   constructor(
     private readonly users: UsersRepository,
@@ -29,7 +30,7 @@ export class AuthService {
     const user = await this.users.findByEmail(email.trim());
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !user.passwordHash || !ok) {
-      this.limiter.recordFailure(keys);
+      this.limiter.record(keys);
       throw unauthenticated('e-mail or password is wrong');
     }
     this.limiter.recordSuccess(keys);
@@ -39,7 +40,7 @@ export class AuthService {
   /** A signed token for a user (after sign-in, accepting an invitation). */
   issue(user: UserRow): AuthPayload {
     const token = this.jwt.sign(
-      { sub: user.id, email: user.email },
+      { sub: user.id, email: user.email, epoch: user.tokenEpoch } satisfies TokenClaims,
       { algorithm: 'HS256', expiresIn: this.config.jwtExpiresInSeconds },
     );
     return { token, user };

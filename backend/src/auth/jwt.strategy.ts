@@ -4,16 +4,19 @@ import { ExtractJwt, Strategy } from 'passport-jwt';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { AuthUser } from './auth-user';
 import { jwtKey } from './jwt-key';
+import { epochCurrent, TokenClaims } from './token-claims';
+import { UsersRepository } from '../users/users.repository';
 
-interface TokenClaims {
-  sub: string;
-  email: string;
-}
-
-/** Verifies bearer tokens: HS256 only, so a token signed with another algorithm is refused. */
+/**
+ * Verifies bearer tokens: HS256 only, so a token signed with another algorithm is refused; and the
+ * user must still exist with the token's epoch (a password reset ends older tokens).
+ */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
-  constructor(@Inject(APP_CONFIG) config: AppConfig) {
+  constructor(
+    @Inject(APP_CONFIG) config: AppConfig,
+    private readonly users: UsersRepository,
+  ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       // jsonwebtoken takes a KeyObject; passport-jwt's types only name string and Buffer.
@@ -23,7 +26,8 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     });
   }
 
-  validate(claims: TokenClaims): AuthUser {
+  async validate(claims: TokenClaims): Promise<AuthUser | null> {
+    if (!epochCurrent(claims, await this.users.tokenEpochOf(claims.sub))) return null;
     return { id: claims.sub, email: claims.email };
   }
 }

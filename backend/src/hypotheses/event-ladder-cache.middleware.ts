@@ -15,11 +15,11 @@ export class EventLadderCacheMiddleware implements NestMiddleware {
   use(req: Request, res: Response, next: NextFunction): void {
     const body = req.body as Partial<GraphqlHttpBody> | undefined;
     if (req.method !== 'POST' || !req.is('application/json') || typeof body?.query !== 'string') return next();
-    const userId = this.cache.bearerUser(req.headers.authorization);
-    if (!userId) return next();
-    const key = this.cache.key(userId, body as GraphqlHttpBody);
+    const claims = this.cache.bearerUser(req.headers.authorization);
+    if (!claims) return next();
+    const key = this.cache.key(claims.sub, body as GraphqlHttpBody);
     if (!this.cache.has(key)) return next();
-    this.cache.current(key, userId).then(
+    this.cache.current(key, claims).then(
       (entry) => {
         if (!entry) return next();
         const gzip = req.acceptsEncodings('gzip', 'identity') === 'gzip';

@@ -9,6 +9,7 @@ import { QueryResult } from 'pg';
 import { Role } from '../access/permissions';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
+import { epochCurrent, TokenClaims } from '../auth/token-claims';
 
 /** Root fields a cached ladder operation may ask for, each of one project. */
 const CACHEABLE_ROOT_FIELDS: Record<string, string> = { eventLadder: 'projectId', project: 'id' };
@@ -60,11 +61,11 @@ export class EventLadderCache {
     this.maxBytes = config.ladderCacheMiB * 1024 * 1024;
   }
 
-  /** The user id of a verified `Bearer` token (HS256 only), or undefined. */
-  bearerUser(header: string | undefined): string | undefined {
+  /** The claims of a verified `Bearer` token (HS256 only), or undefined; its epoch is checked with the state. */
+  bearerUser(header: string | undefined): TokenClaims | undefined {
     if (!header?.startsWith('Bearer ')) return undefined;
     try {
-      return this.jwt.verify<{ sub: string }>(header.slice(7), { algorithms: ['HS256'] }).sub;
+      return this.jwt.verify<TokenClaims>(header.slice(7), { algorithms: ['HS256'] });
     } catch {
       return undefined;
     }
@@ -79,22 +80,29 @@ export class EventLadderCache {
     return this.entries.has(key);
   }
 
-  /** The stored answer for this key if the caller's role and the project revision still match it. */
-  async current(key: string, userId: string): Promise<LadderCacheEntry | undefined> {
+  /**
+   * The stored answer for this key if the token's epoch is still the caller's, and the caller's
+   * role and the project revision still match the answer.
+   */
+  async current(key: string, claims: TokenClaims): Promise<LadderCacheEntry | undefined> {
     const entry = this.entries.get(key);
     if (!entry) return undefined;
-    const state = await this.state(userId, entry.projectId);
-    if (state.role !== entry.role || state.revision !== entry.revision) return undefined;
+    const state = await this.state(claims.sub, entry.projectId);
+    if (!epochCurrent(claims, state.epoch ?? undefined) || state.role !== entry.role || state.revision !== entry.revision) return undefined;
     // Refresh recency so the map drops the least recently used entry first.
     this.entries.delete(key);
     this.entries.set(key, entry);
     return entry;
   }
 
-  /** The caller's role (null when not a member) and the project data revision, in one query. */
-  async state(userId: string, projectId: string): Promise<{ role: Role | null; revision: string }> {
+  /**
+   * The caller's token epoch (null when the user is gone), role (null when not a member) and the
+   * project data revision, in one query.
+   */
+  async state(userId: string, projectId: string): Promise<{ epoch: number | null; role: Role | null; revision: string }> {
     const result = (await this.database.db.execute(sql`
       select
+        (select token_epoch from users where id = ${userId}) as epoch,
         (select role from memberships where project_id = ${projectId} and user_id = ${userId}) as role,
         concat_ws('|',
           (select concat_ws(':', count(*), sum(column_revision), sum(version), max(updated_at)) from sites where project_id = ${projectId}),
@@ -102,6 +110,7 @@ export class EventLadderCache {
           (select concat_ws(':', count(*), max(r.updated_at)) from age_model_runs r join sites s on s.id = r.site_id where s.project_id = ${projectId}),
           (select concat_ws(':', count(*), sum(version), max(updated_at)) from hypotheses where project_id = ${projectId}),
           (select concat_ws(':', version, updated_at) from projects where id = ${projectId})) as revision`)) as unknown as QueryResult<{
+      epoch: number | null;
       role: Role | null;
       revision: string;
     }>;
@@ -171,8 +180,8 @@ export class EventLadderCache {
     const body = req?.body as Partial<GraphqlHttpBody> | undefined;
     // Only a plain POST body can be looked up again by the middleware.
     if (!projectId || req?.method !== 'POST' || typeof body?.query !== 'string' || body.query !== context.source) return undefined;
-    const userId = this.bearerUser(req.headers?.authorization);
-    if (!userId) return undefined;
-    return { userId, key: this.key(userId, body as GraphqlHttpBody), projectId };
+    const claims = this.bearerUser(req.headers?.authorization);
+    if (!claims) return undefined;
+    return { userId: claims.sub, key: this.key(claims.sub, body as GraphqlHttpBody), projectId };
   }
 }

@@ -1,4 +1,5 @@
-import { Args, Mutation, Resolver } from '@nestjs/graphql';
+import { Args, Context, Mutation, Resolver } from '@nestjs/graphql';
+import type { Request } from 'express';
 import { Public } from '../common/decorators/public.decorator';
 import { ResetPasswordInput } from './dto/reset-password.input';
 import { PasswordResetsService } from './password-resets.service';
@@ -9,8 +10,8 @@ export class PasswordResetsResolver {
 
   @Public()
   @Mutation('requestPasswordReset')
-  request(@Args('email') email: string): Promise<boolean> {
-    return this.resets.requestReset(email);
+  request(@Args('email') email: string, @Context('req') req: Request): Promise<boolean> {
+    return this.resets.requestReset(email, req.ip ?? 'unknown');
   }
 
   @Public()

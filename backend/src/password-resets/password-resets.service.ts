@@ -1,8 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { AuditService } from '../audit/audit.service';
+import { AttemptLimiter } from '../auth/attempt-limiter';
 import { normaliseEmail, requirePasswordLength } from '../auth/account-rules';
 import { hashPassword } from '../auth/passwords';
-import { badInput } from '../common/errors/domain-error';
+import { badInput, DomainError } from '../common/errors/domain-error';
 import { hashToken, issueToken, PASSWORD_RESET_LIFETIME_MS, TokenRefusal, tokenRefusal } from '../common/one-time-token';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
@@ -18,8 +19,17 @@ const REFUSALS: Record<TokenRefusal | 'unknown', string> = {
   expired: 'this reset link has expired; ask for a new one',
 };
 
+/** Reset e-mails per address and requests per client address in an hour [common practice]. */
+const RESETS_PER_EMAIL = 5;
+const RESETS_PER_CLIENT = 30;
+const RESET_WINDOW_MS = 60 * 60_000;
+
 @Injectable()
 export class PasswordResetsService {
+  // Every request counts, whether or not the address has an account, so the limit reveals nothing.
+  private readonly perEmail = new AttemptLimiter(RESETS_PER_EMAIL, RESET_WINDOW_MS);
+  private readonly perClient = new AttemptLimiter(RESETS_PER_CLIENT, RESET_WINDOW_MS);
+
   constructor(
     private readonly database: DatabaseService,
     private readonly resets: PasswordResetsRepository,
@@ -32,9 +42,17 @@ export class PasswordResetsService {
   /**
    * E-mail a one-hour reset link when the address has an account. The answer is true either way
    * so it does not reveal who has an account; a broken mail server is reported in both cases.
+   * Requests are limited per address and per client, so nobody can flood an inbox.
    */
-  async requestReset(emailInput: string): Promise<true> {
-    const user = await this.users.findByEmail(normaliseEmail(emailInput));
+  async requestReset(emailInput: string, clientAddress: string): Promise<true> {
+    const email = normaliseEmail(emailInput);
+    const emailKey = [`email:${email}`];
+    const clientKey = [`ip:${clientAddress}`];
+    const wait = Math.max(this.perEmail.retryAfterSeconds(emailKey), this.perClient.retryAfterSeconds(clientKey));
+    if (wait > 0) throw new DomainError('TOO_MANY_REQUESTS', `too many password-reset requests; try again in ${Math.ceil(wait / 60)} minutes`);
+    this.perEmail.record(emailKey);
+    this.perClient.record(clientKey);
+    const user = await this.users.findByEmail(email);
     if (!user) {
       await this.mail.checkReachable();
       return true;

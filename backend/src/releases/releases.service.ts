@@ -101,6 +101,6 @@ export class ReleasesService {
   /** Who froze the release; a placeholder when that account was since deleted. */
   async createdBy(release: ReleaseRow): Promise<UserRow> {
     const user = release.createdById ? await this.releases.findUser(release.createdById) : undefined;
-    return user ?? { id: '00000000-0000-0000-0000-000000000000', email: '', displayName: 'deleted user', passwordHash: null, createdAt: release.createdAt, updatedAt: release.createdAt };
+    return user ?? { id: '00000000-0000-0000-0000-000000000000', email: '', displayName: 'deleted user', passwordHash: null, tokenEpoch: 0, createdAt: release.createdAt, updatedAt: release.createdAt };
   }
 }

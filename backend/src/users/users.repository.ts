@@ -29,7 +29,17 @@ export class UsersRepository {
     return row;
   }
 
+  /** Set a new password and move the token epoch, so every token issued before stops working. */
   async setPasswordHash(id: string, passwordHash: string, executor: Executor = this.database.db): Promise<void> {
-    await executor.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, id));
+    await executor
+      .update(users)
+      .set({ passwordHash, tokenEpoch: sql`${users.tokenEpoch} + 1`, updatedAt: new Date() })
+      .where(eq(users.id, id));
+  }
+
+  /** The token epoch of a user, or undefined when the user no longer exists. */
+  async tokenEpochOf(id: string, executor: Executor = this.database.db): Promise<number | undefined> {
+    const [row] = await executor.select({ tokenEpoch: users.tokenEpoch }).from(users).where(eq(users.id, id)).limit(1);
+    return row?.tokenEpoch;
   }
 }

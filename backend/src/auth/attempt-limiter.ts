@@ -1,10 +1,11 @@
 /**
- * Sign-in rate limiting: after `maxFailures` failed attempts for one e-mail or one client address
- * within `windowMs`, further attempts are refused until the window has passed. Kept in process
- * memory: each API replica limits on its own, which bounds guessing to maxFailures x replicas per
- * window [common practice: a few attempts per quarter hour].
+ * Rate limiting of attempts (failed sign-ins, password-reset requests): after `maxFailures`
+ * recorded attempts for one key (an e-mail, a client address) within `windowMs`, further attempts
+ * are refused until the window has passed. Kept in process memory: each API replica limits on its
+ * own, which bounds attempts to maxFailures x replicas per window [common practice: a few
+ * attempts per quarter hour].
  */
-export class SignInLimiter {
+export class AttemptLimiter {
   private readonly failures = new Map<string, number[]>();
 
   constructor(
@@ -22,7 +23,7 @@ export class SignInLimiter {
     return wait;
   }
 
-  recordFailure(keys: string[], now = Date.now()): void {
+  record(keys: string[], now = Date.now()): void {
     for (const key of keys) this.failures.set(key, [...this.recent(key, now), now]);
   }
 
