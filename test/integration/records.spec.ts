@@ -227,6 +227,32 @@ describe('releases', () => {
     const { project } = await clients.VIEWER.ok(`query($id: ID!) { project(id: $id) { releases { number note } } }`, { id: fixture.projectId });
     expect(project.releases).toEqual([{ number: 2, note: 'v2' }, { number: 1, note: 'v1, submitted with the paper' }]);
   });
+
+  it('shows columns, samples and segments below its sites as they stood, not as they are now', async () => {
+    const NESTED = `query($id: ID!) { release(id: $id) { sites { id segment { id name } units { id position name }
+      eventHorizons { id name unitBelowId unitAboveId } samples { id unitId labCode notes c14Age } } segments { id name } } }`;
+    const frozen = (await clients.VIEWER.ok(NESTED, { id: first.id })).release;
+    const site = frozen.sites.find((s: { id: string }) => s.id === siteId);
+    const sample = site.samples.find((s: { id: string }) => s.id === sampleId);
+    expect(sample).toBeDefined();
+    expect(site.units.map((u: { position: number }) => u.position)).toEqual([...site.units.map((u: { position: number }) => u.position)].sort((a, b) => a - b));
+    expect(site.units.map((u: { id: string }) => u.id)).toContain(sample.unitId);
+
+    const [{ version }] = await sql<{ version: number }>('select version from samples where id = $1', [sampleId]);
+    await clients.RESEARCHER.ok(`mutation($id: ID!, $v: Int!, $i: UpdateSampleInput!) { updateSample(id: $id, version: $v, input: $i) { id } }`, {
+      id: sampleId, v: version, i: { notes: 'changed after the release' },
+    });
+    const segmentIds = frozen.segments.map((s: { id: string }) => s.id);
+    await sql(`update segments set name = 'Renamed segment', version = version + 1 where id = any($1::uuid[])`, [segmentIds]);
+    try {
+      const later = (await clients.VIEWER.ok(NESTED, { id: first.id })).release;
+      expect(later).toEqual(frozen);
+      const live = (await clients.VIEWER.ok(`query($id: ID!) { sample(id: $id) { notes } }`, { id: sampleId })).sample;
+      expect(live.notes).toBe('changed after the release');
+    } finally {
+      await sql(`update segments set name = 'Quarry segment', version = version + 1 where id = any($1::uuid[])`, [segmentIds]);
+    }
+  });
 });
 
 describe('project bundle', () => {

@@ -4,7 +4,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ProjectRow } from '../projects/projects.repository';
 import { CreateReleaseInput } from './dto/create-release.input';
 import { ReleaseRow, UserRow } from './releases.repository';
-import { ReleaseDiffView, ReleaseSegmentView, ReleaseSiteView, ReleasesService } from './releases.service';
+import { ReleaseDiffView, ReleasedSegmentView, ReleasedSiteView, ReleasesService } from './releases.service';
 
 @Resolver('Release')
 export class ReleasesResolver {
@@ -26,12 +26,12 @@ export class ReleasesResolver {
   }
 
   @ResolveField('sites')
-  sites(@Parent() release: ReleaseRow): ReleaseSiteView[] {
+  sites(@Parent() release: ReleaseRow): ReleasedSiteView[] {
     return this.releases.sitesOf(release);
   }
 
   @ResolveField('segments')
-  segments(@Parent() release: ReleaseRow): ReleaseSegmentView[] {
+  segments(@Parent() release: ReleaseRow): ReleasedSegmentView[] {
     return this.releases.segmentsOf(release);
   }
 

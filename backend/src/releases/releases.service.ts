@@ -6,7 +6,7 @@ import { AuthUser } from '../auth/auth-user';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { withConstraintErrors } from '../common/errors/database-errors';
 import { DatabaseService } from '../database/database.service';
-import { BundleSegment, BundleSite } from '../exchange/bundle-format';
+import { BundleEventHorizon, BundleSample, BundleSegment, BundleSite, BundleUnit } from '../exchange/bundle-format';
 import { ExchangeService } from '../exchange/exchange.service';
 import { CreateReleaseInput } from './dto/create-release.input';
 import { diffSnapshots, RecordChange } from './release-diff';
@@ -14,9 +14,23 @@ import { ReleaseRow, ReleasesRepository, UserRow } from './releases.repository';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-/** A site as it stood in a release, shaped like a site row so the `Site` type can show it. */
-export type ReleaseSiteView = Omit<BundleSite, 'ref' | 'segmentRef'> & { id: string; projectId: string; segmentId: string | null };
-export type ReleaseSegmentView = Omit<BundleSegment, 'ref'> & { id: string; projectId: string };
+/** `ReleasedSegment`: a segment as it stood in a release. */
+export type ReleasedSegmentView = Omit<BundleSegment, 'ref'> & { id: string };
+export type ReleasedUnitView = Omit<BundleUnit, 'ref' | 'siteRef'> & { id: string };
+export type ReleasedEventHorizonView = Omit<BundleEventHorizon, 'ref' | 'siteRef' | 'unitBelowRef' | 'unitAboveRef'> & {
+  id: string;
+  unitBelowId: string;
+  unitAboveId: string;
+};
+export type ReleasedSampleView = Omit<BundleSample, 'ref' | 'siteRef' | 'unitRef'> & { id: string; unitId: string };
+/** `ReleasedSite`: a site as it stood in a release, with its column and samples, all from the snapshot. */
+export type ReleasedSiteView = Omit<BundleSite, 'ref' | 'segmentRef'> & {
+  id: string;
+  segment: ReleasedSegmentView | null;
+  units: ReleasedUnitView[];
+  eventHorizons: ReleasedEventHorizonView[];
+  samples: ReleasedSampleView[];
+};
 
 export interface ReleaseDiffView {
   from: ReleaseRow;
@@ -90,12 +104,43 @@ export class ReleasesService {
     return diffSnapshots(release.snapshot, await this.exchange.snapshotOf(release.projectId, this.database.db));
   }
 
-  sitesOf(release: ReleaseRow): ReleaseSiteView[] {
-    return release.snapshot.sites.map(({ ref, segmentRef, ...site }) => ({ ...site, id: ref, projectId: release.projectId, segmentId: segmentRef }));
+  /** The frozen sites with everything below them, read from the snapshot alone. */
+  sitesOf(release: ReleaseRow): ReleasedSiteView[] {
+    const { snapshot } = release;
+    const segments = new Map(this.segmentsOf(release).map((segment) => [segment.id, segment]));
+    const bySite = <T extends { siteRef: string }>(rows: T[]) => {
+      const grouped = new Map<string, T[]>();
+      for (const row of rows) {
+        const list = grouped.get(row.siteRef);
+        if (list) list.push(row);
+        else grouped.set(row.siteRef, [row]);
+      }
+      return grouped;
+    };
+    const units = bySite(snapshot.units);
+    const horizons = bySite(snapshot.eventHorizons);
+    const samples = bySite(snapshot.samples);
+    return snapshot.sites.map(({ ref, segmentRef, ...site }) => {
+      const siteUnits = (units.get(ref) ?? []).sort((a, b) => a.position - b.position);
+      const position = new Map(siteUnits.map((unit) => [unit.ref, unit.position]));
+      const positionOf = (unitRef: string) => position.get(unitRef) ?? Number.MAX_SAFE_INTEGER;
+      return {
+        ...site,
+        id: ref,
+        segment: segmentRef ? (segments.get(segmentRef) ?? null) : null,
+        units: siteUnits.map(({ ref: id, siteRef: _site, ...unit }) => ({ ...unit, id })),
+        eventHorizons: (horizons.get(ref) ?? [])
+          .sort((a, b) => positionOf(a.unitBelowRef) - positionOf(b.unitBelowRef) || a.name.localeCompare(b.name))
+          .map(({ ref: id, siteRef: _site, unitBelowRef, unitAboveRef, ...horizon }) => ({ ...horizon, id, unitBelowId: unitBelowRef, unitAboveId: unitAboveRef })),
+        samples: (samples.get(ref) ?? [])
+          .sort((a, b) => positionOf(a.unitRef) - positionOf(b.unitRef) || a.labCode.localeCompare(b.labCode))
+          .map(({ ref: id, siteRef: _site, unitRef, ...sample }) => ({ ...sample, id, unitId: unitRef })),
+      };
+    });
   }
 
-  segmentsOf(release: ReleaseRow): ReleaseSegmentView[] {
-    return release.snapshot.segments.map(({ ref, ...segment }) => ({ ...segment, id: ref, projectId: release.projectId }));
+  segmentsOf(release: ReleaseRow): ReleasedSegmentView[] {
+    return release.snapshot.segments.map(({ ref, ...segment }) => ({ ...segment, id: ref }));
   }
 
   /** Who froze the release; a placeholder when that account was since deleted. */

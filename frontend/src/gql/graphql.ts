@@ -980,8 +980,9 @@ export type Release = {
   note: Scalars['String']['output'];
   number: Scalars['Int']['output'];
   project: Project;
-  segments: Array<Segment>;
-  sites: Array<Site>;
+  segments: Array<ReleasedSegment>;
+  /** The sites as frozen, each with its column and samples as they then stood. */
+  sites: Array<ReleasedSite>;
 };
 
 export type ReleaseChange = {
@@ -997,6 +998,89 @@ export type ReleaseDiff = {
   changes: Array<ReleaseChange>;
   from: Release;
   to: Release;
+};
+
+/** An event horizon as frozen in a release. */
+export type ReleasedEventHorizon = {
+  __typename?: 'ReleasedEventHorizon';
+  evidence: Array<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  quality: Scalars['Int']['output'];
+  unitAboveId: Scalars['ID']['output'];
+  unitBelowId: Scalars['ID']['output'];
+};
+
+/** A sample's measured fields as frozen in a release (calibrations are recomputed from them). */
+export type ReleasedSample = {
+  __typename?: 'ReleasedSample';
+  ageRelation: AgeRelation;
+  c14Age?: Maybe<Scalars['Float']['output']>;
+  c14Error?: Maybe<Scalars['Float']['output']>;
+  calendarAgeBp?: Maybe<Scalars['Float']['output']>;
+  calendarErrorYears?: Maybe<Scalars['Float']['output']>;
+  curve?: Maybe<CurveCode>;
+  delta13C?: Maybe<Scalars['Float']['output']>;
+  deltaR?: Maybe<Scalars['Float']['output']>;
+  deltaRError?: Maybe<Scalars['Float']['output']>;
+  depthM?: Maybe<Scalars['Float']['output']>;
+  excluded: Scalars['Boolean']['output'];
+  exclusionReason?: Maybe<Scalars['String']['output']>;
+  id: Scalars['ID']['output'];
+  labCode: Scalars['String']['output'];
+  material: SampleMaterial;
+  measurementYear?: Maybe<Scalars['Int']['output']>;
+  method: DatingMethod;
+  notes?: Maybe<Scalars['String']['output']>;
+  unitId: Scalars['ID']['output'];
+};
+
+/**
+ * A segment as frozen in a release. Every field of the Released types comes from the release's
+ * snapshot, never from today's data; ids are those of the live records, which may since have
+ * changed or gone.
+ */
+export type ReleasedSegment = {
+  __typename?: 'ReleasedSegment';
+  endKm: Scalars['Float']['output'];
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  startKm: Scalars['Float']['output'];
+};
+
+/** A site as frozen in a release, with its column and samples. */
+export type ReleasedSite = {
+  __typename?: 'ReleasedSite';
+  alongStrikeKm: Scalars['Float']['output'];
+  elevationM?: Maybe<Scalars['Float']['output']>;
+  /** Event horizons, oldest first. */
+  eventHorizons: Array<ReleasedEventHorizon>;
+  id: Scalars['ID']['output'];
+  kind: SiteKind;
+  latitude: Scalars['Float']['output'];
+  longitude: Scalars['Float']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  /** Samples by unit (oldest first), then lab code. */
+  samples: Array<ReleasedSample>;
+  segment?: Maybe<ReleasedSegment>;
+  /** Units in stratigraphic order, oldest (position 1) first. */
+  units: Array<ReleasedUnit>;
+  waterDepthM?: Maybe<Scalars['Float']['output']>;
+};
+
+/** A unit as frozen in a release. */
+export type ReleasedUnit = {
+  __typename?: 'ReleasedUnit';
+  baseDepthM: Scalars['Float']['output'];
+  facies: Facies;
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  notes?: Maybe<Scalars['String']['output']>;
+  position: Scalars['Int']['output'];
+  topDepthM: Scalars['Float']['output'];
 };
 
 export type RenewalFit = {
@@ -1531,7 +1615,7 @@ export type ReleaseQueryVariables = Exact<{
 }>;
 
 
-export type ReleaseQuery = { __typename?: 'Query', release: { __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string }, segments: Array<{ __typename?: 'Segment', id: string, name: string, startKm: number, endKm: number }>, sites: Array<{ __typename?: 'Site', id: string, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }> } };
+export type ReleaseQuery = { __typename?: 'Query', release: { __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string }, segments: Array<{ __typename?: 'ReleasedSegment', id: string, name: string, startKm: number, endKm: number }>, sites: Array<{ __typename?: 'ReleasedSite', id: string, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, segment?: { __typename?: 'ReleasedSegment', id: string, name: string } | null, units: Array<{ __typename?: 'ReleasedUnit', id: string }>, eventHorizons: Array<{ __typename?: 'ReleasedEventHorizon', id: string }>, samples: Array<{ __typename?: 'ReleasedSample', id: string }> }> } };
 
 export type ReleaseDiffQueryVariables = Exact<{
   fromId: Scalars['ID']['input'];
@@ -2483,6 +2567,15 @@ export const ReleaseDocument = new TypedDocumentString(`
       segment {
         id
         name
+      }
+      units {
+        id
+      }
+      eventHorizons {
+        id
+      }
+      samples {
+        id
       }
     }
   }

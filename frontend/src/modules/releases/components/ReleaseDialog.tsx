@@ -11,7 +11,7 @@ export type ReleaseDialogProps = {
   onClose: () => void;
 };
 
-/** One frozen release, read only: its note, author, segments and sites as they were. */
+/** One frozen release, read only: its note, author, segments and sites (with their column and sample counts) as they were. */
 export function ReleaseDialog({ projectId, releaseId, onClose }: ReleaseDialogProps) {
   const release = useQuery({ ...releaseQueries.detail(projectId, releaseId ?? ''), enabled: releaseId !== null });
   const data = release.data;
@@ -58,6 +58,9 @@ export function ReleaseDialog({ projectId, releaseId, onClose }: ReleaseDialogPr
                   <th>Segment</th>
                   <th className="sc-numeric">Along strike km</th>
                   <th className="sc-numeric">Lat, lon</th>
+                  <th className="sc-numeric">Units</th>
+                  <th className="sc-numeric">Events</th>
+                  <th className="sc-numeric">Samples</th>
                 </tr>
               </thead>
               <tbody>
@@ -70,6 +73,9 @@ export function ReleaseDialog({ projectId, releaseId, onClose }: ReleaseDialogPr
                     <td className="num sc-numeric">
                       {site.latitude.toFixed(4)}, {site.longitude.toFixed(4)}
                     </td>
+                    <td className="num sc-numeric">{site.units.length}</td>
+                    <td className="num sc-numeric">{site.eventHorizons.length}</td>
+                    <td className="num sc-numeric">{site.samples.length}</td>
                   </tr>
                 ))}
               </tbody>

@@ -48,6 +48,15 @@ export const ReleaseDocument = graphql(`
           id
           name
         }
+        units {
+          id
+        }
+        eventHorizons {
+          id
+        }
+        samples {
+          id
+        }
       }
     }
   }
