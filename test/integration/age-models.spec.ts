@@ -115,6 +115,17 @@ describe('a run', () => {
     expect(outlier.outlierProbability).toBeGreaterThan(0.5);
     const inlier = run.samples.find((s: { sample: { labCode: string } }) => s.sample.labCode === 'AMT-2');
     expect(inlier.outlierProbability).toBeLessThan(0.2);
+
+    // The horizon shows the same posterior as its site's newest successful run, every year of it.
+    const { site } = await clients.VIEWER.ok(`query($id: ID!) { site(id: $id) { eventHorizons { id latestPosterior {
+      medianCalBp hpd95 { olderCalBp youngerCalBp probability } rhat ess density { calBp probability } } } } }`, { id: siteId });
+    const posterior = site.eventHorizons.find((h: { id: string }) => h.id === event.eventHorizon.id).latestPosterior;
+    expect(posterior).toMatchObject({ medianCalBp: event.medianCalBp, hpd95: event.hpd95 });
+    expect(posterior.rhat).toBeLessThan(1.05);
+    expect(posterior.density.length).toBeGreaterThan(10);
+    expect(posterior.density[1].calBp - posterior.density[0].calBp).toBe(1);
+    // A density on a 1-year grid has unit mass [analytic].
+    expect(posterior.density.reduce((sum: number, p: { probability: number }) => sum + p.probability, 0)).toBeCloseTo(1, 6);
   });
 
   it('gives the same result for the same seed', async () => {

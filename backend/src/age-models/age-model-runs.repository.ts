@@ -37,14 +37,15 @@ export class AgeModelRunsRepository {
     return row;
   }
 
-  /** The newest successful run of each site. */
-  async latestSucceededForSites(siteIds: string[], executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
-    if (siteIds.length === 0) return [];
-    return executor
-      .selectDistinctOn([ageModelRuns.siteId])
+  /** A site's newest successful run with its whole results, joint event draws included (site recurrence). */
+  async latestSucceededForSite(siteId: string, executor: Executor = this.database.db): Promise<AgeModelRunRow | undefined> {
+    const [row] = await executor
+      .select()
       .from(ageModelRuns)
-      .where(and(inArray(ageModelRuns.siteId, siteIds), eq(ageModelRuns.status, 'SUCCEEDED')))
-      .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
+      .where(and(eq(ageModelRuns.siteId, siteId), eq(ageModelRuns.status, 'SUCCEEDED')))
+      .orderBy(desc(ageModelRuns.createdAt))
+      .limit(1);
+    return row;
   }
 
   /**
@@ -128,5 +129,46 @@ export class AgeModelRunsRepository {
       .update(ageModelRuns)
       .set({ status: 'FAILED', message, finishedAt: new Date(), updatedAt: new Date() })
       .where(and(eq(ageModelRuns.id, id), inArray(ageModelRuns.status, ['RUNNING', 'QUEUED'])));
+  }
+
+  /** Id of each site's newest successful age model run, without loading its results. */
+  async latestSucceededRunIds(siteIds: string[], executor: Executor = this.database.db): Promise<{ id: string; siteId: string }[]> {
+    if (siteIds.length === 0) return [];
+    return executor
+      .selectDistinctOn([ageModelRuns.siteId], { id: ageModelRuns.id, siteId: ageModelRuns.siteId })
+      .from(ageModelRuns)
+      .where(and(inArray(ageModelRuns.siteId, siteIds), eq(ageModelRuns.status, 'SUCCEEDED')))
+      .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
+  }
+
+  /**
+   * Runs by id with their results but without the bulky parts no field of `AgeModelRun` shows:
+   * the input snapshot (null here) and the joint event draws (dropped from `results`).
+   */
+  async runsForDisplay(runIds: string[], executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
+    if (runIds.length === 0) return [];
+    const rows = await executor
+      .select({
+        id: ageModelRuns.id,
+        siteId: ageModelRuns.siteId,
+        requestedById: ageModelRuns.requestedById,
+        status: ageModelRuns.status,
+        progress: ageModelRuns.progress,
+        message: ageModelRuns.message,
+        seed: ageModelRuns.seed,
+        settings: ageModelRuns.settings,
+        inputFingerprint: ageModelRuns.inputFingerprint,
+        columnRevision: ageModelRuns.columnRevision,
+        diagnostics: ageModelRuns.diagnostics,
+        results: sql<unknown>`${ageModelRuns.results} - 'eventDraws'`,
+        attempts: ageModelRuns.attempts,
+        startedAt: ageModelRuns.startedAt,
+        finishedAt: ageModelRuns.finishedAt,
+        createdAt: ageModelRuns.createdAt,
+        updatedAt: ageModelRuns.updatedAt,
+      })
+      .from(ageModelRuns)
+      .where(inArray(ageModelRuns.id, runIds));
+    return rows.map((row) => ({ ...row, inputSnapshot: null }));
   }
 }

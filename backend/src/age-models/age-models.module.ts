@@ -8,10 +8,11 @@ import { AgeModelRunsRepository } from './age-model-runs.repository';
 import { AgeModelJob } from './age-model.job';
 import { AgeModelsResolver, EventHorizonPosteriorResolver, SiteAgeModelsResolver } from './age-models.resolver';
 import { AgeModelsService } from './age-models.service';
+import { LatestRunsService } from './latest-runs.service';
 
 @Module({
   imports: [SitesModule, UnitsModule, EventHorizonsModule, SamplesModule, CalibrationModule],
-  providers: [AgeModelRunsRepository, AgeModelsService, AgeModelJob, AgeModelsResolver, SiteAgeModelsResolver, EventHorizonPosteriorResolver],
-  exports: [AgeModelsService, AgeModelJob, AgeModelRunsRepository],
+  providers: [AgeModelRunsRepository, AgeModelsService, LatestRunsService, AgeModelJob, AgeModelsResolver, SiteAgeModelsResolver, EventHorizonPosteriorResolver],
+  exports: [AgeModelsService, AgeModelJob, AgeModelRunsRepository, LatestRunsService],
 })
 export class AgeModelsModule {}

@@ -12,8 +12,9 @@ import { StoredAgeModelResults } from './age-model-results';
 import { AgeModelsService } from './age-models.service';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
-function densityPoints(density: { startCalBp: number; probabilities: number[] }) {
-  return density.probabilities.map((probability, i) => ({ calBp: density.startCalBp + i, probability }));
+/** Every year of a stored or decoded density as points. */
+function densityPoints(density: { startCalBp: number; probabilities: ArrayLike<number> }) {
+  return Array.from(density.probabilities, (probability, i) => ({ calBp: density.startCalBp + i, probability }));
 }
 
 @Resolver('AgeModelRun')
@@ -87,11 +88,10 @@ export class SiteAgeModelsResolver {
 
 @Resolver('EventHorizon')
 export class EventHorizonPosteriorResolver {
-  constructor(private readonly ageModels: AgeModelsService) {}
-
+  /** Batched per request: the horizons of one answer share one read of their sites' runs. */
   @ResolveField('latestPosterior')
-  async latestPosterior(@Parent() horizon: EventHorizonRow) {
-    const posterior = (await this.ageModels.latestPosteriors([horizon.siteId])).get(horizon.id);
+  async latestPosterior(@Parent() horizon: EventHorizonRow, @Context('loaders') loaders: RequestLoaders) {
+    const posterior = (await loaders.latestRunBySite.load(horizon.siteId))?.posteriors.get(horizon.id);
     if (!posterior) return null;
     return { ...posterior.summary, eventHorizon: horizon, rhat: posterior.rhat, ess: posterior.ess, density: densityPoints(posterior.density) };
   }

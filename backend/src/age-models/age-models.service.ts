@@ -6,7 +6,6 @@ import { CalibrationService } from '../calibration/calibration.service';
 import { AuthUser } from '../auth/auth-user';
 import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
 import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
-import { CalendarDensity } from '../chronology/common/density';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
@@ -16,7 +15,7 @@ import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
-import { loadDensity, StoredAgeModelResults, StoredEventPosterior, storeInput } from './age-model-results';
+import { storeInput } from './age-model-results';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
 /** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
@@ -99,19 +98,6 @@ export class AgeModelsService {
 
   latestForSite(siteId: string): Promise<AgeModelRunRow | undefined> {
     return this.runs.latestForSite(siteId);
-  }
-
-  /** Each event's posterior from its site's newest successful run (for the ladder and correlation). */
-  async latestPosteriors(siteIds: string[]): Promise<Map<string, StoredEventPosterior & { runId: string; posterior: CalendarDensity }>> {
-    const runs = await this.runs.latestSucceededForSites(siteIds);
-    const posteriors = new Map<string, StoredEventPosterior & { runId: string; posterior: CalendarDensity }>();
-    for (const run of runs) {
-      const results = run.results as StoredAgeModelResults | null;
-      for (const event of results?.events ?? []) {
-        posteriors.set(event.eventHorizonId, { ...event, runId: run.id, posterior: loadDensity(event.density) });
-      }
-    }
-    return posteriors;
   }
 
   /** The model input of a site's current column (sample densities recomputed), with its fingerprint. */

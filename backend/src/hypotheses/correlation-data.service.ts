@@ -1,17 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import type { AgeModelRunRow } from '../age-models/age-model-runs.repository';
-import type { StoredAgeModelResults } from '../age-models/age-model-results';
+import { LatestRunsService, type DisplayPosterior, type DisplayRun } from '../age-models/latest-runs.service';
 import type { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
-import { displayPosteriors, type DisplayPosterior, type ProjectEvent } from './correlation-adapter';
+import type { ProjectEvent } from './correlation-adapter';
 import { HypothesesRepository, type ProjectEventRow } from './hypotheses.repository';
-import { RunCache } from './run-cache';
-
-/** A successful run as the ladder shows it, with its posteriors decoded once. */
-export interface DisplayRun {
-  readonly row: AgeModelRunRow;
-  readonly posteriors: ReadonlyMap<string, DisplayPosterior>;
-}
 
 /** Everything correlation and the ladder need of a project, loaded in a few queries. */
 export interface ProjectCorrelationData {
@@ -23,41 +15,18 @@ export interface ProjectCorrelationData {
   readonly runsBySite: ReadonlyMap<string, DisplayRun>;
 }
 
-/** Runs kept decoded per process; a 40-site project fills a tenth of it. */
-const RUN_CACHE_CAPACITY = 400;
-
 @Injectable()
 export class CorrelationDataService {
-  private readonly runs = new RunCache<DisplayRun>(RUN_CACHE_CAPACITY);
-
   constructor(
     private readonly repository: HypothesesRepository,
     private readonly sites: SitesService,
+    private readonly latestRuns: LatestRunsService,
   ) {}
 
-  /**
-   * Sites, event horizons and latest successful runs of a project. Runs are read by id only when
-   * this process has not decoded them before: a succeeded run's results never change.
-   */
+  /** Sites, event horizons and latest successful runs of a project. */
   async load(projectId: string): Promise<ProjectCorrelationData> {
     const [sites, events] = await Promise.all([this.sites.listForProject(projectId), this.repository.listProjectEvents(projectId)]);
-    const latest = await this.repository.latestSucceededRunIds(sites.map((site) => site.id));
-    const decoded = new Map<string, DisplayRun>();
-    for (const { id } of latest) {
-      const cached = this.runs.get(id);
-      if (cached) decoded.set(id, cached);
-    }
-    const missing = latest.filter(({ id }) => !decoded.has(id)).map(({ id }) => id);
-    for (const row of await this.repository.runsForDisplay(missing)) {
-      const run = { row, posteriors: displayPosteriors(row.id, row.results as StoredAgeModelResults | null) };
-      this.runs.set(row.id, run);
-      decoded.set(row.id, run);
-    }
-    const runsBySite = new Map<string, DisplayRun>();
-    for (const { id, siteId } of latest) {
-      const run = decoded.get(id);
-      if (run) runsBySite.set(siteId, run);
-    }
+    const runsBySite = await this.latestRuns.forSites(sites.map((site) => site.id));
     return { sites, events, runsBySite };
   }
 }

@@ -8,7 +8,7 @@ import { notFound } from '../common/errors/domain-error';
 import type { EventHorizonRow } from '../event-horizons/event-horizons.repository';
 import { ProjectRow, ProjectsRepository } from '../projects/projects.repository';
 import type { SiteRow } from '../sites/sites.repository';
-import type { DensityGrid } from './correlation-adapter';
+import type { DensityGrid } from '../chronology/common/density-views';
 import { CorrelationDataService, posteriorOf } from './correlation-data.service';
 
 export interface LadderEventView {

@@ -1,6 +1,7 @@
 import { MiddlewareConsumer, Module, NestModule, RequestMethod } from '@nestjs/common';
 import { EventLadderCache } from './event-ladder-cache';
 import { EventLadderCacheMiddleware } from './event-ladder-cache.middleware';
+import { AgeModelsModule } from '../age-models/age-models.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { SitesModule } from '../sites/sites.module';
 import { UsersModule } from '../users/users.module';
@@ -12,7 +13,7 @@ import { HypothesesService } from './hypotheses.service';
 
 /** Correlation hypotheses, their ties and checks, and the event ladder. */
 @Module({
-  imports: [ProjectsModule, SitesModule, UsersModule],
+  imports: [ProjectsModule, SitesModule, UsersModule, AgeModelsModule],
   providers: [
     EventLadderCache,
     HypothesesRepository,

@@ -158,48 +158,4 @@ export class HypothesesRepository {
       .where(eq(sites.projectId, projectId))
       .orderBy(asc(sites.alongStrikeKm), asc(sites.name), asc(sites.id), asc(units.position), asc(eventHorizons.name));
   }
-
-  /**
-   * Id of each site's newest successful age model run (the run `AgeModelsService.latestPosteriors`
-   * reads), without loading its results.
-   */
-  async latestSucceededRunIds(siteIds: string[], executor: Executor = this.database.db): Promise<{ id: string; siteId: string }[]> {
-    if (siteIds.length === 0) return [];
-    return executor
-      .selectDistinctOn([ageModelRuns.siteId], { id: ageModelRuns.id, siteId: ageModelRuns.siteId })
-      .from(ageModelRuns)
-      .where(and(inArray(ageModelRuns.siteId, siteIds), eq(ageModelRuns.status, 'SUCCEEDED')))
-      .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
-  }
-
-  /**
-   * Runs by id with their results but without the bulky parts no field of `AgeModelRun` shows:
-   * the input snapshot (null here) and the joint event draws (dropped from `results`).
-   */
-  async runsForDisplay(runIds: string[], executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
-    if (runIds.length === 0) return [];
-    const rows = await executor
-      .select({
-        id: ageModelRuns.id,
-        siteId: ageModelRuns.siteId,
-        requestedById: ageModelRuns.requestedById,
-        status: ageModelRuns.status,
-        progress: ageModelRuns.progress,
-        message: ageModelRuns.message,
-        seed: ageModelRuns.seed,
-        settings: ageModelRuns.settings,
-        inputFingerprint: ageModelRuns.inputFingerprint,
-        columnRevision: ageModelRuns.columnRevision,
-        diagnostics: ageModelRuns.diagnostics,
-        results: sql<unknown>`${ageModelRuns.results} - 'eventDraws'`,
-        attempts: ageModelRuns.attempts,
-        startedAt: ageModelRuns.startedAt,
-        finishedAt: ageModelRuns.finishedAt,
-        createdAt: ageModelRuns.createdAt,
-        updatedAt: ageModelRuns.updatedAt,
-      })
-      .from(ageModelRuns)
-      .where(inArray(ageModelRuns.id, runIds));
-    return rows.map((row) => ({ ...row, inputSnapshot: null }));
-  }
 }

@@ -6,7 +6,7 @@ import type { UserRow } from '../users/users.repository';
 import { UsersService } from '../users/users.service';
 import { AddTieInput } from './dto/add-tie.input';
 import { CreateHypothesisInput, UpdateHypothesisInput } from './dto/create-hypothesis.input';
-import { gridPoints, type DensityPoint } from './correlation-adapter';
+import { gridPoints, type DensityPoint } from '../chronology/common/density-views';
 import { EventLadderService, EventLadderView, type LadderEventView } from './event-ladder.service';
 import type { HypothesisRow, TieView } from './hypotheses.repository';
 import { HypothesesService, OrderConflictView, RegionalEventView } from './hypotheses.service';

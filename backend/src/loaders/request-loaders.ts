@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import DataLoader from 'dataloader';
+import { LatestRunsService, type DisplayRun } from '../age-models/latest-runs.service';
 import { SitesRepository } from '../sites/sites.repository';
 import { SegmentRow, SegmentsRepository } from '../segments/segments.repository';
 
@@ -12,6 +13,8 @@ export interface RequestLoaders {
   segmentById: DataLoader<string, SegmentRow | null>;
   /** The current column revision of a site (bumped by triggers on its units, horizons and samples). */
   columnRevision: DataLoader<string, number | null>;
+  /** A site's newest successful age model run with its decoded event posteriors. */
+  latestRunBySite: DataLoader<string, DisplayRun | null>;
 }
 
 @Injectable()
@@ -19,6 +22,7 @@ export class RequestLoadersFactory {
   constructor(
     private readonly segments: SegmentsRepository,
     private readonly sites: SitesRepository,
+    private readonly latestRuns: LatestRunsService,
   ) {}
 
   create(): RequestLoaders {
@@ -30,6 +34,10 @@ export class RequestLoadersFactory {
       columnRevision: new DataLoader(async (siteIds) => {
         const revisions = new Map((await this.sites.findByIds(siteIds)).map((site) => [site.id, site.columnRevision]));
         return siteIds.map((id) => revisions.get(id) ?? null);
+      }),
+      latestRunBySite: new DataLoader(async (siteIds) => {
+        const runs = await this.latestRuns.forSites(siteIds);
+        return siteIds.map((id) => runs.get(id) ?? null);
       }),
     };
   }

@@ -4,7 +4,7 @@ import { AccessService } from '../access/access.service';
 import { Permission } from '../access/permissions';
 import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
 import { StoredAgeModelResults, storeDensity } from '../age-models/age-model-results';
-import { AgeModelsService } from '../age-models/age-models.service';
+import { LatestRunsService } from '../age-models/latest-runs.service';
 import { AuditService } from '../audit/audit.service';
 import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
@@ -61,7 +61,7 @@ export class RecurrenceService {
     private readonly analyses: RecurrenceRepository,
     private readonly segments: SegmentsService,
     private readonly sites: SitesService,
-    private readonly ageModels: AgeModelsService,
+    private readonly latestRuns: LatestRunsService,
     private readonly ageModelRuns: AgeModelRunsRepository,
     private readonly jobs: JobQueueService,
     private readonly access: AccessService,
@@ -250,7 +250,7 @@ export class RecurrenceService {
     if (input.hypothesisId) {
       throw badInput('hypothesisId', 'a site analysis uses the site’s own age model; leave hypothesisId out or give a segment');
     }
-    const [run] = await this.ageModelRuns.latestSucceededForSites([site.id]);
+    const run = await this.ageModelRuns.latestSucceededForSite(site.id);
     const eventDraws = (run?.results as StoredAgeModelResults | null | undefined)?.eventDraws;
     if (!run || !eventDraws) throw badInput('siteId', 'the site has no successful age model run; run its age model first');
     if (eventDraws.eventHorizonIds.length < MINIMUM_EVENTS) {
@@ -283,7 +283,7 @@ export class RecurrenceService {
       this.analyses.tiesOf(hypothesis.id),
       this.analyses.tectonicSetting(segment.projectId),
     ]);
-    const posteriors = await this.ageModels.latestPosteriors([...new Set(projectEvents.map((e) => e.siteId))]);
+    const posteriors = await this.latestRuns.posteriorsForSites([...new Set(projectEvents.map((e) => e.siteId))]);
     const events: SiteEvent[] = projectEvents
       .filter((event) => posteriors.has(event.id))
       .map((event) => ({
@@ -293,7 +293,7 @@ export class RecurrenceService {
         siteName: event.siteName,
         alongStrikeKm: event.alongStrikeKm,
         orderIndexFromBase: event.unitBelowPosition,
-        posterior: posteriors.get(event.id)!.posterior,
+        posterior: posteriors.get(event.id)!.density,
       }));
     const chosen = refuseInput(() =>
       segmentRegionalEvents({ events, ties, tectonicSetting, segmentSiteIds: new Set(segmentSites.map((site) => site.id)) }),
