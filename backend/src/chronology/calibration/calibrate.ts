@@ -13,7 +13,7 @@
  * The 1/S(t) factor of the normal density is kept because S(t) changes along the curve. With a
  * uniform calendar prior the density is L(t) normalised over the grid.
  */
-import { CalendarDensity, HpdRange, summarise, totalMass, trim } from '../common/density';
+import { CalendarDensity, HpdRange, summariseNormalised, totalMass, trim } from '../common/density';
 import { CalibrationCurve } from './curve';
 import { CalibrationInputError, formatYears } from './errors';
 
@@ -389,7 +389,7 @@ export function calibrationResult(density: CalendarDensity, warnings: string[] =
   if (!(mass > 0) || !Number.isFinite(mass)) throw new RangeError('density has no mass to normalise');
   const p = trimmed.probabilities;
   for (let i = 0; i < p.length; i++) p[i] /= mass;
-  const summary = summarise(trimmed);
+  const summary = summariseNormalised(trimmed);
   return {
     density: trimmed,
     medianCalBp: summary.medianCalBp,

@@ -41,8 +41,10 @@ export const HPD95_LEVEL = 0.9544997361036416;
 
 /** Total mass of a density. */
 export function totalMass(density: CalendarDensity): number {
+  const p = density.probabilities;
   let sum = 0;
-  for (const p of density.probabilities) sum += p;
+  // An indexed loop: iterating a typed array with for...of cost a fifth of a calibration's time.
+  for (let i = 0; i < p.length; i++) sum += p[i];
   return sum;
 }
 
@@ -79,7 +81,11 @@ export function trim(density: CalendarDensity, relativeThreshold = 1e-6): Calend
 
 /** Median, mean, standard deviation and the 68.3 % / 95.4 % HPD ranges of a density. */
 export function summarise(density: CalendarDensity): DensitySummary {
-  const d = normalise(density);
+  return summariseNormalised(normalise(density));
+}
+
+/** `summarise` of a density already normalised to unit mass (no copy is made). */
+export function summariseNormalised(d: CalendarDensity): DensitySummary {
   const p = d.probabilities;
   let mean = 0;
   for (let i = 0; i < p.length; i++) mean += p[i] * (d.startCalBp + i);
