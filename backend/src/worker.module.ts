@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { AccessModule } from './access/access.module';
 import { AgeModelsModule } from './age-models/age-models.module';
+import { AttachmentsModule } from './attachments/attachments.module';
 import { AuditModule } from './audit/audit.module';
 import { ConfigModule } from './config/config.module';
 import { DatabaseModule } from './database/database.module';
@@ -10,7 +11,7 @@ import { RecurrenceModule } from './recurrence/recurrence.module';
 
 /** The worker process: the job handlers and what they need, no HTTP. */
 @Module({
-  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule, RecurrenceModule],
+  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule, RecurrenceModule, AttachmentsModule],
   providers: [JobReaper],
 })
 export class WorkerModule {}

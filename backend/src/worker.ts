@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { NestFactory } from '@nestjs/core';
 import { AgeModelJob } from './age-models/age-model.job';
+import { ThumbnailJob } from './attachments/thumbnail.job';
 import { loadConfig } from './config/config';
 import { runMigrations } from './database/migrate';
 import { JobQueueService, QUEUES } from './jobs/job-queue.service';
@@ -21,6 +22,8 @@ async function bootstrap(): Promise<void> {
   await jobs.work(QUEUES.ageModel, config.workerConcurrency, ({ runId }) => ageModel.execute(runId));
   const recurrence = app.get(RecurrenceJob);
   await jobs.work(QUEUES.recurrence, config.workerConcurrency, ({ runId }) => recurrence.execute(runId));
+  const thumbnails = app.get(ThumbnailJob);
+  await jobs.work(QUEUES.thumbnail, config.workerConcurrency, ({ attachmentId }) => thumbnails.execute(attachmentId));
   const reaper = app.get(JobReaper);
   setInterval(() => void reaper.reapOnce().catch(() => undefined), REAP_INTERVAL_MS).unref();
   console.log(`Stratochron worker ${process.pid} ready (concurrency ${config.workerConcurrency})`);

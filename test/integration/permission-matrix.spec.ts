@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { PNG as PngImage } from 'pngjs';
 import { buildSchema, getNamedType, isObjectType, type GraphQLField } from 'graphql';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Permission, ROLE_PERMISSIONS, ROLES, type Role } from '../../backend/src/access/permissions';
@@ -72,11 +73,12 @@ function refusal(access: Access, actor: Actor): 'FORBIDDEN' | 'NOT_FOUND' {
 
 const REFUSED = ['FORBIDDEN', 'NOT_FOUND', 'UNAUTHENTICATED'];
 
-// A real 1x1 PNG (PNG specification, RFC 2083 section 3), as records.spec.ts uploads.
-const PNG = Buffer.from(
-  '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a1f3d4e40000000049454e44ae426082',
-  'hex',
-);
+// A 1x1 PNG written by pngjs (PNG specification, RFC 2083 section 3).
+const PNG = (() => {
+  const image = new PngImage({ width: 1, height: 1 });
+  image.data.set([200, 40, 40, 255]);
+  return PngImage.sync.write(image);
+})();
 
 let smtp: SmtpFake;
 let s3: S3Fake;

@@ -1,7 +1,10 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { PNG as PngImage } from 'pngjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ObjectStorageService } from '../../backend/src/attachments/object-storage.service';
+import { ThumbnailJob } from '../../backend/src/attachments/thumbnail.job';
 import { bundleContent, validateBundle } from '../../backend/src/exchange/bundle';
 import { ProjectBundle } from '../../backend/src/exchange/bundle-format';
 import { S3Fake, startS3Fake } from '../../backend/src/fakes/s3-fake';
@@ -9,11 +12,13 @@ import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
 
-// A real 1x1 PNG (signature, IHDR, IDAT, IEND; PNG specification, RFC 2083 section 3).
-const PNG = Buffer.from(
-  '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a1f3d4e40000000049454e44ae426082',
-  'hex',
-);
+/** A PNG of one colour, written by pngjs (signature, IHDR, IDAT, IEND; RFC 2083 section 3). */
+function pngOf(width: number, height: number, rgba: [number, number, number, number]): Buffer {
+  const image = new PngImage({ width, height });
+  for (let i = 0; i < image.data.length; i += 4) image.data.set(rgba, i);
+  return PngImage.sync.write(image);
+}
+const PNG = pngOf(1, 1, [200, 40, 40, 255]);
 // The start of an ELF executable: magic 7f 'E' 'L' 'F' and NUL padding (System V ABI).
 const ELF = Buffer.from('7f454c4602010100000000000000000002003e000100000000000000', 'hex');
 
@@ -132,10 +137,39 @@ describe('attachments through the S3 fake', () => {
 
     const { site } = await clients.VIEWER.ok(`query($id: ID!) { site(id: $id) { attachments { id fileName contentType sizeBytes url thumbnailUrl } } }`, { id: siteId });
     expect(site.attachments).toEqual([
-      { id: attachmentId, fileName: 'trench log.png', contentType: 'image/png', sizeBytes: PNG.length, url: record.url, thumbnailUrl: record.url },
+      { id: attachmentId, fileName: 'trench log.png', contentType: 'image/png', sizeBytes: PNG.length, url: record.url, thumbnailUrl: null },
     ]);
     const audit = await sql(`select action from audit_records where object_type = 'attachment' and object_id = $1`, [attachmentId]);
     expect(audit).toEqual([{ action: 'create' }]);
+    // The upload queued its thumbnail; a worker makes it (run here in-process). A 1x1 image is not enlarged.
+    const [job] = await sql<{ data: { attachmentId: string } }>(`select data from pgboss.job where name = 'attachment-thumbnail' and data->>'attachmentId' = $1`, [attachmentId]);
+    expect(job).toBeDefined();
+    await server.app.get(ThumbnailJob).execute(attachmentId);
+    const thumbnail = await http(clients.VIEWER, 'GET', `${record.url}/thumbnail`);
+    expect(thumbnail.status).toBe(200);
+    expect(thumbnail.headers.get('content-type')).toBe('image/png');
+    expect([PngImage.sync.read(thumbnail.bytes).width, PngImage.sync.read(thumbnail.bytes).height]).toEqual([1, 1]);
+    expect((await http(clients.OUTSIDER, 'GET', `${record.url}/thumbnail`)).status).toBe(404);
+  });
+
+  it('shrinks a large photo to a thumbnail of 320 pixels at most, and deletes it with the photo', async () => {
+    const bytes = pngOf(1200, 900, [90, 120, 60, 255]);
+    const stored = await upload(clients.RESEARCHER, `siteId=${siteId}&fileName=core-photo.png`, bytes);
+    expect(stored.status).toBe(201);
+    const { id } = stored.json<{ id: string }>();
+    await server.app.get(ThumbnailJob).execute(id);
+    const { site } = await clients.VIEWER.ok(`query($id: ID!) { site(id: $id) { attachments { id thumbnailUrl } } }`, { id: siteId });
+    expect(site.attachments.find((a: { id: string }) => a.id === id).thumbnailUrl).toBe(`/api/attachments/${id}/thumbnail`);
+    const thumbnail = PngImage.sync.read((await http(clients.VIEWER, 'GET', `/api/attachments/${id}/thumbnail`)).bytes);
+    expect([thumbnail.width, thumbnail.height]).toEqual([320, 240]);
+    // A uniform photo stays that colour: area averaging of a constant is the constant [analytic].
+    expect(Array.from(thumbnail.data.subarray(0, 4))).toEqual([90, 120, 60, 255]);
+
+    const [{ thumbnail_key: key }] = await sql<{ thumbnail_key: string }>('select thumbnail_key from attachments where id = $1', [id]);
+    const storage = server.app.get(ObjectStorageService);
+    expect(await storage.get(key)).toBeDefined();
+    expect(await clients.RESEARCHER.ok(`mutation($id: ID!) { deleteAttachment(id: $id) }`, { id })).toEqual({ deleteAttachment: true });
+    expect(await storage.get(key)).toBeUndefined();
   });
 
   it('refuses a file named .png whose content is an executable or garbage, writing nothing', async () => {

@@ -51,6 +51,12 @@ export class AttachmentsController {
     return this.store(user, query, request);
   }
 
+  @Get(':id/thumbnail')
+  async thumbnail(@CurrentUser() user: AuthUser, @Param('id') id: string): Promise<StreamableFile> {
+    const { attachment, bytes } = await this.attachments.thumbnail(user, id);
+    return new StreamableFile(Buffer.from(bytes), { type: attachment.contentType, length: bytes.length, disposition: 'inline' });
+  }
+
   @Get(':id')
   async download(@CurrentUser() user: AuthUser, @Param('id') id: string): Promise<StreamableFile> {
     const { attachment, bytes } = await this.attachments.download(user, id);

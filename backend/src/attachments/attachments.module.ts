@@ -4,11 +4,14 @@ import { AttachmentsRepository } from './attachments.repository';
 import { AttachmentsResolver, SampleAttachmentsResolver, SiteAttachmentsResolver } from './attachments.resolver';
 import { AttachmentsService } from './attachments.service';
 import { ObjectStorageService } from './object-storage.service';
+import { ThumbnailJob } from './thumbnail.job';
 
 @Module({
   controllers: [AttachmentsController],
   providers: [
     ObjectStorageService, AttachmentsRepository, AttachmentsService, AttachmentsResolver, SiteAttachmentsResolver, SampleAttachmentsResolver,
+    ThumbnailJob,
   ],
+  exports: [ThumbnailJob],
 })
 export class AttachmentsModule {}

@@ -47,6 +47,12 @@ export class AttachmentsRepository {
     return row;
   }
 
+  /** Record a made thumbnail, unless the attachment was deleted meanwhile (then false). */
+  async setThumbnailKey(id: string, thumbnailKey: string, executor: Executor = this.database.db): Promise<boolean> {
+    const rows = await executor.update(attachments).set({ thumbnailKey }).where(eq(attachments.id, id)).returning({ id: attachments.id });
+    return rows.length > 0;
+  }
+
   async delete(id: string, executor: Executor): Promise<void> {
     await executor.delete(attachments).where(eq(attachments.id, id));
   }

@@ -6,9 +6,11 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
+import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
 import { ALLOWED_CONTENT_TYPES, isImage, sniffContentType } from './content-type';
 import { AttachmentOwner, AttachmentRow, AttachmentsRepository } from './attachments.repository';
 import { ObjectStorageService } from './object-storage.service';
+import { thumbnailKeyOf } from './thumbnail.job';
 
 /** The largest attachment accepted, bytes. */
 export const MAX_ATTACHMENT_BYTES = 20 * 1024 * 1024;
@@ -46,6 +48,7 @@ export class AttachmentsService {
     private readonly storage: ObjectStorageService,
     private readonly access: AccessService,
     private readonly audit: AuditService,
+    private readonly jobs: JobQueueService,
   ) {}
 
   listForSite(siteId: string): Promise<AttachmentRow[]> {
@@ -58,8 +61,8 @@ export class AttachmentsService {
 
   /**
    * Store an upload. The type is read from the bytes (PNG, JPEG, PDF, UTF-8 text), never from
-   * the name. No thumbnail is made (no image library is installed): images are their own
-   * thumbnails, scaled by the browser.
+   * the name. An image's thumbnail is made by a worker afterwards (`ThumbnailJob`); until then
+   * `thumbnailUrl` is null.
    */
   async upload(user: AuthUser, { owner, fileName, bytes }: AttachmentUpload): Promise<AttachmentRow> {
     const objectName = Object.keys(owner)[0].replace('Id', '');
@@ -75,19 +78,36 @@ export class AttachmentsService {
     }
     const storageKey = `projects/${projectId}/attachments/${randomUUID()}`;
     await this.storage.put(storageKey, bytes, contentType);
+    let attachment: AttachmentRow;
     try {
-      return await this.database.transaction(async (tx) => {
-        const attachment = await this.attachments.insert(
+      attachment = await this.database.transaction(async (tx) => {
+        const row = await this.attachments.insert(
           { projectId, ...owner, fileName: name, contentType, sizeBytes: bytes.length, storageKey, uploadedById: user.id },
           tx,
         );
-        await this.audit.record(tx, { actor: user, projectId, action: 'create', objectType: 'attachment', objectId: attachment.id, after: attachment });
-        return attachment;
+        await this.audit.record(tx, { actor: user, projectId, action: 'create', objectType: 'attachment', objectId: row.id, after: row });
+        return row;
       });
     } catch (error) {
       await this.storage.delete(storageKey).catch(() => undefined);
       throw error;
     }
+    if (isImage(contentType)) {
+      // The upload stands without a thumbnail: a queue that is away only costs the preview.
+      await this.jobs.send(QUEUES.thumbnail, { attachmentId: attachment.id }).catch((error: unknown) => {
+        this.logger.warn(`thumbnail of ${attachment.id} not queued: ${error instanceof Error ? error.message : String(error)}`);
+      });
+    }
+    return attachment;
+  }
+
+  /** The thumbnail bytes of an image attachment for a project member; NOT_FOUND while there is none. */
+  async thumbnail(user: AuthUser, id: string): Promise<AttachmentDownload> {
+    const attachment = await this.find(id);
+    await this.access.requireAccess({ user, permission: Permission.ProjectRead, projectId: attachment.projectId, objectName: 'attachment' });
+    const bytes = attachment.thumbnailKey ? await this.storage.get(attachment.thumbnailKey) : undefined;
+    if (!bytes) throw notFound('thumbnail');
+    return { attachment, bytes };
   }
 
   /** The bytes of an attachment for a project member; NOT_FOUND for anyone else. */
@@ -107,9 +127,11 @@ export class AttachmentsService {
       await this.audit.record(tx, { actor: user, projectId: attachment.projectId, action: 'delete', objectType: 'attachment', objectId: id, before: attachment });
     });
     // The record is gone either way; a leftover object is only wasted space, so log and go on.
-    await this.storage.delete(attachment.storageKey).catch((error: unknown) => {
-      this.logger.warn(`could not delete object ${attachment.storageKey}: ${error instanceof Error ? error.message : String(error)}`);
-    });
+    for (const key of [attachment.storageKey, thumbnailKeyOf(attachment.storageKey)]) {
+      await this.storage.delete(key).catch((error: unknown) => {
+        this.logger.warn(`could not delete object ${key}: ${error instanceof Error ? error.message : String(error)}`);
+      });
+    }
     return true;
   }
 
@@ -125,7 +147,7 @@ export function attachmentUrl(attachment: AttachmentRow): string {
   return `/api/attachments/${attachment.id}`;
 }
 
-/** Images serve as their own thumbnails (the browser scales them); other files have none. */
+/** Relative URL of an image's thumbnail once a worker has made it; null before, and for other files. */
 export function thumbnailUrl(attachment: AttachmentRow): string | null {
-  return isImage(attachment.contentType) ? attachmentUrl(attachment) : null;
+  return attachment.thumbnailKey ? `${attachmentUrl(attachment)}/thumbnail` : null;
 }

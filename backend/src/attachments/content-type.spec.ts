@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { isUtf8Text, sniffContentType } from './content-type';
 
-// A real 1x1 PNG: signature, IHDR (13 bytes), IDAT, IEND, as written by any PNG encoder
-// (layout per the PNG specification, RFC 2083 section 3) [published].
+// A 1x1 PNG laid out per the PNG specification (RFC 2083 section 3): signature, IHDR (13 bytes),
+// IDAT, IEND [published layout]. Only the layout matters for sniffing; its IDAT's zlib check
+// value is wrong, so decoders (see thumbnail.spec.ts) refuse it.
 const PNG_1X1 = Buffer.from(
   '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a1f3d4e40000000049454e44ae426082',
   'hex',

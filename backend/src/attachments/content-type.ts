@@ -43,7 +43,7 @@ export function sniffContentType(bytes: Uint8Array, fileName: string): Attachmen
   return null;
 }
 
-/** Images are shown inline; the browser scales them, so they serve as their own thumbnails. */
+/** Images are shown inline and get thumbnails (`ThumbnailJob`). */
 export function isImage(contentType: string): boolean {
   return contentType === 'image/png' || contentType === 'image/jpeg';
 }

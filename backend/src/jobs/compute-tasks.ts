@@ -2,6 +2,7 @@
  * The long computations a worker runs, as plain functions of plain data, so they can run in a
  * worker thread (structured-cloned in and out) or inline in tests.
  */
+import { makeThumbnail, Thumbnail, ThumbnailContentType } from '../attachments/thumbnail';
 import { AgeModelResult, AgeModelSettings, runAgeModel } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
 import {
@@ -23,13 +24,21 @@ export interface RecurrenceRequest {
   settings: RecurrenceComputeSettings;
 }
 
-export type ComputeRequest = AgeModelRequest | RecurrenceRequest;
+export interface ThumbnailRequest {
+  kind: 'thumbnail';
+  bytes: Uint8Array;
+  contentType: ThumbnailContentType;
+}
+
+export type ComputeRequest = AgeModelRequest | RecurrenceRequest | ThumbnailRequest;
 
 export type ComputeResult<K extends ComputeRequest['kind']> = K extends 'age-model'
   ? AgeModelResult
   : K extends 'recurrence'
     ? StoredRecurrenceResults
-    : never;
+    : K extends 'thumbnail'
+      ? Thumbnail
+      : never;
 
 export function runCompute(request: ComputeRequest, onProgress: (fraction: number) => void): ComputeResult<ComputeRequest['kind']> {
   switch (request.kind) {
@@ -37,5 +46,7 @@ export function runCompute(request: ComputeRequest, onProgress: (fraction: numbe
       return runAgeModel(request.input, request.settings, { onProgress });
     case 'recurrence':
       return computeRecurrence(request.source, request.settings, onProgress);
+    case 'thumbnail':
+      return makeThumbnail(request.bytes, request.contentType);
   }
 }

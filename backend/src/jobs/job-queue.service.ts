@@ -2,11 +2,18 @@ import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
 import PgBoss from 'pg-boss';
 import { APP_CONFIG, AppConfig } from '../config/config';
 
-export const QUEUES = { ageModel: 'age-model-run', recurrence: 'recurrence-analysis' } as const;
+export const QUEUES = { ageModel: 'age-model-run', recurrence: 'recurrence-analysis', thumbnail: 'attachment-thumbnail' } as const;
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
 
 export interface RunJob {
   runId: string;
+}
+
+/** What each queue's jobs carry. */
+export interface QueueJobs {
+  'age-model-run': RunJob;
+  'recurrence-analysis': RunJob;
+  'attachment-thumbnail': { attachmentId: string };
 }
 
 /**
@@ -35,16 +42,18 @@ export class JobQueueService implements OnModuleDestroy {
     return this.starting;
   }
 
-  async send(queue: QueueName, job: RunJob): Promise<void> {
+  async send<Q extends QueueName>(queue: Q, job: QueueJobs[Q]): Promise<void> {
     const boss = await this.start();
-    // No pg-boss retries: the reaper re-queues runs whose worker vanished, with the run's own attempt count.
-    await boss.send(queue, job, { retryLimit: 0, expireInSeconds: 3600 });
+    // Runs get no pg-boss retries: the reaper re-queues runs whose worker vanished, with the run's
+    // own attempt count. A thumbnail has no row of its own to watch, so pg-boss retries it.
+    const options = queue === QUEUES.thumbnail ? { retryLimit: 2, retryDelay: 5, expireInSeconds: 300 } : { retryLimit: 0, expireInSeconds: 3600 };
+    await boss.send(queue, job, options);
   }
 
-  async work(queue: QueueName, concurrency: number, handler: (job: RunJob) => Promise<void>): Promise<void> {
+  async work<Q extends QueueName>(queue: Q, concurrency: number, handler: (job: QueueJobs[Q]) => Promise<void>): Promise<void> {
     const boss = await this.start();
     for (let i = 0; i < concurrency; i++) {
-      await boss.work<RunJob>(queue, { batchSize: 1, pollingIntervalSeconds: 1 }, async (jobs) => {
+      await boss.work<QueueJobs[Q]>(queue, { batchSize: 1, pollingIntervalSeconds: 1 }, async (jobs) => {
         for (const job of jobs) await handler(job.data);
       });
     }

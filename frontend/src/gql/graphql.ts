@@ -82,6 +82,7 @@ export type Attachment = {
   fileName: Scalars['String']['output'];
   id: Scalars['ID']['output'];
   sizeBytes: Scalars['Int']['output'];
+  /** Relative URL of a preview (longest side at most 320 px) of an image once a worker has made it (bearer token required); null before, and for other files. */
   thumbnailUrl?: Maybe<Scalars['String']['output']>;
   /** Relative URL to download (bearer token required). */
   url: Scalars['String']['output'];

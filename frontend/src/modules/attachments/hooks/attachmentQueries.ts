@@ -2,7 +2,7 @@ import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { DeleteAttachmentDocument, SiteAttachmentsDocument } from '@/modules/attachments/graphql/attachments';
-import { attachmentUploadUrl, type AttachmentOwner } from '@/modules/attachments/utils/attachmentFiles';
+import { attachmentUploadUrl, awaitsThumbnail, type AttachmentOwner } from '@/modules/attachments/utils/attachmentFiles';
 import { authorizedFetch } from '@/modules/exchange/utils/authorizedHttp';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { siteQueries } from '@/modules/sites/hooks/siteQueries';
@@ -14,6 +14,12 @@ export const attachmentQueries = {
     queryOptions({
       queryKey: attachmentQueries.all(projectId, siteId),
       queryFn: async () => (await graphqlRequest(SiteAttachmentsDocument, { id: siteId })).site,
+      // A worker makes image thumbnails after the upload: look again until they are there.
+      refetchInterval: (query) => {
+        const site = query.state.data;
+        if (!site) return false;
+        return awaitsThumbnail([...site.attachments, ...site.samples.flatMap((sample) => sample.attachments)]) ? 2000 : false;
+      },
     }),
 };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { attachmentUploadUrl, attachmentView, contentTypeLabel, formatBytes, MAX_ATTACHMENT_BYTES, uploadProblem } from './attachmentFiles';
+import { attachmentUploadUrl, attachmentView, awaitsThumbnail, contentTypeLabel, formatBytes, MAX_ATTACHMENT_BYTES, THUMBNAIL_WAIT_MS, uploadProblem } from './attachmentFiles';
 
 describe(attachmentUploadUrl.name, () => {
   it('names the owner and the file in the query, encoded (WHATWG URLSearchParams form encoding)', () => {
@@ -46,5 +46,21 @@ describe(uploadProblem.name, () => {
     expect(uploadProblem({ size: 25 * 1024 * 1024 })).toBe('the file is 25 MB, larger than the 20 MB accepted');
     expect(uploadProblem({ size: MAX_ATTACHMENT_BYTES + 1 })).not.toBeNull();
     expect(uploadProblem({ size: MAX_ATTACHMENT_BYTES })).toBeNull();
+  });
+});
+
+describe('awaitsThumbnail', () => {
+  const now = Date.parse('2026-12-02T10:00:00Z');
+  const at = (secondsAgo: number) => new Date(now - secondsAgo * 1000).toISOString();
+
+  it('waits for a fresh image without a thumbnail, and for nothing else', () => {
+    expect(awaitsThumbnail([{ contentType: 'image/png', createdAt: at(5), thumbnailUrl: null }], now)).toBe(true);
+    expect(awaitsThumbnail([{ contentType: 'image/png', createdAt: at(5), thumbnailUrl: '/api/attachments/a/thumbnail' }], now)).toBe(false);
+    expect(awaitsThumbnail([{ contentType: 'application/pdf', createdAt: at(5), thumbnailUrl: null }], now)).toBe(false);
+    expect(awaitsThumbnail([], now)).toBe(false);
+  });
+
+  it('gives up on an image that got no thumbnail within the wait', () => {
+    expect(awaitsThumbnail([{ contentType: 'image/jpeg', createdAt: at(THUMBNAIL_WAIT_MS / 1000 + 1), thumbnailUrl: null }], now)).toBe(false);
   });
 });

@@ -65,3 +65,15 @@ export function uploadProblem(file: { size: number }): string | null {
   if (file.size > MAX_ATTACHMENT_BYTES) return `the file is ${formatBytes(file.size)}, larger than the ${formatBytes(MAX_ATTACHMENT_BYTES)} accepted`;
   return null;
 }
+
+/** How long after an upload the page keeps looking for an image's thumbnail, which a worker makes. */
+export const THUMBNAIL_WAIT_MS = 2 * 60_000;
+
+type ListedAttachment = { contentType: string; createdAt: string; thumbnailUrl?: string | null };
+
+/** True while an image uploaded less than THUMBNAIL_WAIT_MS ago still has no thumbnail. */
+export function awaitsThumbnail(attachments: readonly ListedAttachment[], now = Date.now()): boolean {
+  return attachments.some(
+    (a) => attachmentView(a.contentType) === 'image' && !a.thumbnailUrl && now - new Date(a.createdAt).getTime() < THUMBNAIL_WAIT_MS,
+  );
+}
