@@ -320,6 +320,25 @@ describe('eventLadder', () => {
     await sql(`update sites set name = $2, version = version + 1 where id = $1`, [site.id, site.name]);
   });
 
+  it('never keeps a project query whose fields the data revision does not cover', async () => {
+    const RELEASES = `query($p: ID!) { project(id: $p) { id releases { number } } }`;
+    const read = async () => {
+      const response = await fetch(`${server.url}/graphql`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', authorization: `Bearer ${clients.VIEWER.token}` },
+        body: JSON.stringify({ query: RELEASES, variables: { p: fixture.projectId } }),
+      });
+      const body = (await response.json()) as { data: { project: { releases: { number: number }[] } } };
+      return { hit: response.headers.get('x-cache') === 'hit', numbers: body.data.project.releases.map((r) => r.number) };
+    };
+    const before = await read();
+    expect((await read()).hit).toBe(false);
+    await clients.ADMIN.ok(`mutation($i: CreateReleaseInput!) { createRelease(input: $i) { id } }`, { i: { projectId: fixture.projectId, note: 'cache scope check' } });
+    const after = await read();
+    expect(after.hit).toBe(false);
+    expect(after.numbers).toHaveLength(before.numbers.length + 1);
+  });
+
   it('lists every site along strike with its latest run and each event posterior', async () => {
     const { eventLadder } = await clients.VIEWER.ok(LADDER, { p: fixture.projectId });
     expect(eventLadder.project.id).toBe(fixture.projectId);

@@ -2,13 +2,14 @@ import type { ApolloServerPlugin, GraphQLRequestContext } from '@apollo/server';
 import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { sql } from 'drizzle-orm';
-import { FieldNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'graphql';
+import { FieldNode, FragmentDefinitionNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'graphql';
 import type { Request } from 'express';
 import { gzipSync } from 'node:zlib';
 import { QueryResult } from 'pg';
 import { Role } from '../access/permissions';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
+import { coveredByLadderRevision } from './event-ladder-cache-scope';
 import { epochCurrent, TokenClaims } from '../auth/token-claims';
 
 /** Root fields a cached ladder operation may ask for, each of one project. */
@@ -35,7 +36,8 @@ export interface LadderCacheEntry {
  * full GraphQL execution and serialisation of ~8,000 fields (0.5 MB) each time.
  *
  * An answer is stored only after ordinary execution has produced it without errors, for an
- * operation that asks for nothing but `eventLadder` and `project` of one project. It is keyed by
+ * operation that asks for nothing but `eventLadder` and `project` of one project, and below them
+ * only for fields the revision covers (`coveredByLadderRevision`). It is keyed by
  * the caller (from a verified bearer token), the query text, the operation name and the
  * variables, and remembers the caller's role and the project's data revision read *before*
  * execution. It is served again (by `EventLadderCacheMiddleware`, already serialised and
@@ -180,6 +182,12 @@ export class EventLadderCache {
     const body = req?.body as Partial<GraphqlHttpBody> | undefined;
     // Only a plain POST body can be looked up again by the middleware.
     if (!projectId || req?.method !== 'POST' || typeof body?.query !== 'string' || body.query !== context.source) return undefined;
+    const fragments = Object.fromEntries(
+      (context.document?.definitions ?? [])
+        .filter((d): d is FragmentDefinitionNode => d.kind === Kind.FRAGMENT_DEFINITION)
+        .map((d) => [d.name.value, d]),
+    );
+    if (!coveredByLadderRevision(context.schema, operation, fragments)) return undefined;
     const claims = this.bearerUser(req.headers?.authorization);
     if (!claims) return undefined;
     return { userId: claims.sub, key: this.key(claims.sub, body as GraphqlHttpBody), projectId };
