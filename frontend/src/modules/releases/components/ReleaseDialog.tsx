@@ -16,7 +16,7 @@ export function ReleaseDialog({ projectId, releaseId, onClose }: ReleaseDialogPr
   const release = useQuery({ ...releaseQueries.detail(projectId, releaseId ?? ''), enabled: releaseId !== null });
   const data = release.data;
   return (
-    <Dialog isOpen={releaseId !== null} onClose={onClose} title={data ? `Release ${data.number}` : 'Release'} icon={IconNames.ARCHIVE} style={{ width: 760 }}>
+    <Dialog isOpen={releaseId !== null} onClose={onClose} title={data ? `Release ${data.number}` : 'Release'} icon={IconNames.ARCHIVE} style={{ width: 940, maxWidth: '95vw' }}>
       <DialogBody>
         {release.error ? (
           <Callout intent={Intent.DANGER}>{formErrorOf(release.error, [])}</Callout>
