@@ -6,7 +6,7 @@ import { valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 260;
-const MARGIN = { top: 28, right: 16, bottom: 36, left: 60 };
+const MARGIN = { top: 28, right: 16, bottom: 36, left: 74 };
 
 const yearsOf = (point: CurvePointLike) => point.years;
 const valueOf = (point: CurvePointLike) => point.value;
