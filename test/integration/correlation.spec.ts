@@ -1,8 +1,9 @@
+import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { storeDensity, type StoredAgeModelResults } from '../../backend/src/age-models/age-model-results';
 import { normalDensity, summarise } from '../../backend/src/chronology/common/density';
 import { startTestServer, TestServer } from '../support/app';
-import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
+import { createProjectFixture, createUser, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
 
 const CREATE_SITE = `mutation($i: CreateSiteInput!) { createSite(input: $i) { id } }`;
@@ -286,11 +287,20 @@ describe('eventLadder', () => {
     expect(withHypothesis.hit).toBe(false);
     expect(withHypothesis.body.project.hypotheses.map((h: { name: string }) => h.name)).toContain('Cache check');
     expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
-    // Another member's answer is their own: the viewer's is not served to the admin.
+    // An answer belongs to a role: the viewer's is not served to the admin, but another viewer shares it.
     const admin = await ladderRead(clients.ADMIN);
     expect(admin.hit).toBe(false);
     expect(admin.body.project.myRole).toBe('ADMIN');
     expect(withHypothesis.body.project.myRole).toBe('VIEWER');
+    const secondEmail = `second-viewer-${randomUUID().slice(0, 8)}@fixture.test`;
+    await createUser(secondEmail, 'Second viewer');
+    await sql(`insert into memberships (project_id, user_id, role) select $1, id, 'VIEWER' from users where email = $2`, [fixture.projectId, secondEmail]);
+    const secondViewer = await new GraphqlClient(server.url).signIn(secondEmail, PASSWORD);
+    const shared = await ladderRead(secondViewer);
+    expect(shared.hit).toBe(true);
+    expect(shared.body).toEqual((await ladderRead(clients.VIEWER)).body);
+    await sql(`delete from memberships where project_id = $1 and user_id = (select id from users where email = $2)`, [fixture.projectId, secondEmail]);
+    expect((await secondViewer.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');
     // A changed role is seen at once, and a removed member is refused even with a cached answer.
     const viewerEmail = fixture.emails.VIEWER;
     const member = `project_id = $1 and user_id = (select id from users where email = $2)`;
@@ -298,8 +308,8 @@ describe('eventLadder', () => {
     const promoted = await ladderRead(clients.VIEWER);
     expect(promoted).toMatchObject({ hit: false, body: { project: { myRole: 'ANALYST' } } });
     await sql(`update memberships set role = 'VIEWER' where ${member}`, [fixture.projectId, viewerEmail]);
-    expect((await ladderRead(clients.VIEWER)).hit).toBe(false);
-    expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
+    // Back to VIEWER: the viewers' answer still matches the revision, and says VIEWER.
+    expect(await ladderRead(clients.VIEWER)).toMatchObject({ hit: true, body: { project: { myRole: 'VIEWER' } } });
     const [removed] = await sql<{ role: string; user_id: string }>(`delete from memberships where ${member} returning role, user_id`, [fixture.projectId, viewerEmail]);
     try {
       expect((await clients.VIEWER.errorOf(PAGE_QUERY, { p: fixture.projectId })).code).toBe('NOT_FOUND');

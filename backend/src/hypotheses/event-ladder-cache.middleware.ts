@@ -17,9 +17,9 @@ export class EventLadderCacheMiddleware implements NestMiddleware {
     if (req.method !== 'POST' || !req.is('application/json') || typeof body?.query !== 'string') return next();
     const claims = this.cache.bearerUser(req.headers.authorization);
     if (!claims) return next();
-    const key = this.cache.key(claims.sub, body as GraphqlHttpBody);
-    if (!this.cache.has(key)) return next();
-    this.cache.current(key, claims).then(
+    const requestKey = this.cache.requestKey(body as GraphqlHttpBody);
+    if (!this.cache.projectOf(requestKey)) return next();
+    this.cache.current(requestKey, claims).then(
       (entry) => {
         if (!entry) return next();
         const gzip = req.acceptsEncodings('gzip', 'identity') === 'gzip';

@@ -37,21 +37,26 @@ export interface LadderCacheEntry {
  *
  * An answer is stored only after ordinary execution has produced it without errors, for an
  * operation that asks for nothing but `eventLadder` and `project` of one project, and below them
- * only for fields the revision covers (`coveredByLadderRevision`). It is keyed by
- * the caller (from a verified bearer token), the query text, the operation name and the
- * variables, and remembers the caller's role and the project's data revision read *before*
- * execution. It is served again (by `EventLadderCacheMiddleware`, already serialised and
- * compressed, without entering GraphQL) only while one query shows the caller still has that role
- * and the revision is unchanged: the counts, versions, column revisions and update times of
- * everything the answer shows (sites, segments, age model runs, hypotheses, the project). A write
- * during execution therefore leaves an entry that is never served. Everything else, including
+ * only for fields the revision covers (`coveredByLadderRevision`). None of those fields depends
+ * on who asks beyond their role (`myRole`), so an answer is keyed by the caller's role, the query
+ * text, the operation name and the variables, and is shared by every member with that role. It
+ * remembers the project's data revision read *before* execution, and is served again (by
+ * `EventLadderCacheMiddleware`, already serialised and compressed, without entering GraphQL) only
+ * after one query per request shows that the caller's token epoch is current, that the caller is
+ * a member with that role, and that the revision is unchanged: the counts, versions, column
+ * revisions and update times of everything the answer shows (sites, segments, age model runs,
+ * hypotheses, the project). A write during execution therefore leaves an entry that is never
+ * served. Everything else, including
  * every error, goes through ordinary execution, which stays the authority on access and
  * validation. Answers are kept per API process up to `LADDER_CACHE_MIB` (least recently used
  * dropped first); 0 turns the cache off.
  */
 @Injectable()
 export class EventLadderCache {
+  /** Answers by role and request. */
   private readonly entries = new Map<string, LadderCacheEntry>();
+  /** The project each cached request reads, by request key. */
+  private readonly projects = new Map<string, string>();
   private bytes = 0;
   private readonly maxBytes: number;
 
@@ -73,24 +78,28 @@ export class EventLadderCache {
     }
   }
 
-  /** The cache key of one caller's request. */
-  key(userId: string, body: GraphqlHttpBody): string {
-    return `${userId}\u0000${body.operationName ?? ''}\u0000${body.query}\u0000${JSON.stringify(body.variables ?? {})}`;
+  /** The key of a request, whoever sends it. */
+  requestKey(body: GraphqlHttpBody): string {
+    return `${body.operationName ?? ''}\u0000${body.query}\u0000${JSON.stringify(body.variables ?? {})}`;
   }
 
-  has(key: string): boolean {
-    return this.entries.has(key);
+  /** The project of a request whose answer may be stored, if one is. */
+  projectOf(requestKey: string): string | undefined {
+    return this.projects.get(requestKey);
   }
 
   /**
-   * The stored answer for this key if the token's epoch is still the caller's, and the caller's
-   * role and the project revision still match the answer.
+   * The stored answer for this request if the token's epoch is still the caller's and an answer
+   * for the caller's current role was computed from the project's current revision.
    */
-  async current(key: string, claims: TokenClaims): Promise<LadderCacheEntry | undefined> {
+  async current(requestKey: string, claims: TokenClaims): Promise<LadderCacheEntry | undefined> {
+    const projectId = this.projects.get(requestKey);
+    if (!projectId) return undefined;
+    const state = await this.state(claims.sub, projectId);
+    if (!epochCurrent(claims, state.epoch ?? undefined) || !state.role) return undefined;
+    const key = entryKey(state.role, requestKey);
     const entry = this.entries.get(key);
-    if (!entry) return undefined;
-    const state = await this.state(claims.sub, entry.projectId);
-    if (!epochCurrent(claims, state.epoch ?? undefined) || state.role !== entry.role || state.revision !== entry.revision) return undefined;
+    if (!entry || entry.revision !== state.revision) return undefined;
     // Refresh recency so the map drops the least recently used entry first.
     this.entries.delete(key);
     this.entries.set(key, entry);
@@ -123,14 +132,14 @@ export class EventLadderCache {
   plugin(): ApolloServerPlugin<{ req: Request }> {
     return {
       requestDidStart: async () => {
-        let pending: { key: string; projectId: string; role: Role; revision: string } | undefined;
+        let pending: { requestKey: string; projectId: string; role: Role; revision: string } | undefined;
         return {
           // Runs after validation, before execution: the revision is read before the data are.
           responseForOperation: async (context) => {
             const target = this.maxBytes > 0 ? this.cacheTarget(context) : undefined;
             if (target) {
               const { role, revision } = await this.state(target.userId, target.projectId);
-              if (role) pending = { key: target.key, projectId: target.projectId, role, revision };
+              if (role) pending = { requestKey: target.requestKey, projectId: target.projectId, role, revision };
             }
             return null;
           },
@@ -138,15 +147,17 @@ export class EventLadderCache {
             if (!pending || response.body.kind !== 'single' || response.body.singleResult.errors?.length) return;
             // The bytes Apollo sends: JSON of the result and a newline.
             const json = Buffer.from(`${JSON.stringify(response.body.singleResult)}\n`);
-            this.store(pending.key, { projectId: pending.projectId, role: pending.role, revision: pending.revision, json, gzip: gzipSync(json) });
+            this.store(pending.requestKey, { projectId: pending.projectId, role: pending.role, revision: pending.revision, json, gzip: gzipSync(json) });
           },
         };
       },
     };
   }
 
-  private store(key: string, entry: LadderCacheEntry): void {
+  private store(requestKey: string, entry: LadderCacheEntry): void {
     if (entry.json.length + entry.gzip.length > this.maxBytes) return;
+    const key = entryKey(entry.role, requestKey);
+    this.projects.set(requestKey, entry.projectId);
     const previous = this.entries.get(key);
     if (previous) {
       this.entries.delete(key);
@@ -159,10 +170,15 @@ export class EventLadderCache {
       this.entries.delete(oldest);
       this.bytes -= dropped.json.length + dropped.gzip.length;
     }
+    // Forget the projects of requests with no answer left.
+    if (this.projects.size > this.entries.size) {
+      const live = new Set([...this.entries.keys()].map((k) => k.slice(k.indexOf('\u0000') + 1)));
+      for (const request of this.projects.keys()) if (!live.has(request)) this.projects.delete(request);
+    }
   }
 
   /** The caller, key and project of an operation whose answer may be stored, or undefined. */
-  private cacheTarget(context: GraphQLRequestContext<{ req: Request }>): { userId: string; key: string; projectId: string } | undefined {
+  private cacheTarget(context: GraphQLRequestContext<{ req: Request }>): { userId: string; requestKey: string; projectId: string } | undefined {
     const operation = context.operation as OperationDefinitionNode | undefined;
     if (!operation || operation.operation !== 'query') return undefined;
     const variables = context.request.variables ?? {};
@@ -190,6 +206,11 @@ export class EventLadderCache {
     if (!coveredByLadderRevision(context.schema, operation, fragments)) return undefined;
     const claims = this.bearerUser(req.headers?.authorization);
     if (!claims) return undefined;
-    return { userId: claims.sub, key: this.key(claims.sub, body as GraphqlHttpBody), projectId };
+    return { userId: claims.sub, requestKey: this.requestKey(body as GraphqlHttpBody), projectId };
   }
+}
+
+/** The key of a stored answer: the role it was computed for and the request. */
+function entryKey(role: Role, requestKey: string): string {
+  return `${role}\u0000${requestKey}`;
 }
