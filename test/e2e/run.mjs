@@ -15,6 +15,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { fileURLToPath } from 'node:url';
 import pg from 'pg';
 import { chromium } from 'playwright-core';
+import { PNG } from 'pngjs';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const E2E_DIR = join(ROOT, '.data', 'e2e');
@@ -286,6 +287,16 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
   await rangeCells.first().waitFor();
   check((await rangeCells.count()) >= 2, `expected calibrated ranges for both samples, found ${await rangeCells.count()} range cells`);
   await shot('samples');
+
+  // A core photo: stored, then shown by the thumbnail a worker makes.
+  const photo = new PNG({ width: 900, height: 600 });
+  for (let i = 0; i < photo.data.length; i += 4) photo.data.set([120 + ((i / 4) % 900 > 450 ? 60 : 0), 100, 70, 255], i);
+  await page.getByRole('tab', { name: 'Files' }).click();
+  await page.locator('input[type=file]').first().setInputFiles({ name: 'core-photo.png', mimeType: 'image/png', buffer: PNG.sync.write(photo) });
+  await page.getByRole('button', { name: 'Upload' }).click();
+  await page.getByText('core-photo.png').first().waitFor();
+  await page.locator('img.sc-file-thumb').first().waitFor({ timeout: 30_000 });
+  await shot('files');
 }
 
 async function researcherRunsAgeModel(page, { baseUrl, shot }) {
@@ -408,6 +419,8 @@ async function analystRunsRecurrence(page, { baseUrl, shot }) {
   await page.locator('#seed').fill('11');
   await shot('setup');
   await page.getByRole('button', { name: 'Start analysis' }).click();
+  // The page may still show the demo analysis; wait until the new one (seed 11) is the one shown.
+  await page.getByText(/seed\s*11\s*·\s*500\s*draws/).first().waitFor();
   const heading = page.getByRole('heading', { name: 'Conditional probability of the next event' });
   await heading.waitFor({ timeout: 90_000 });
   const table = page.locator('table', { has: page.locator('th', { hasText: 'Model' }) }).first();
