@@ -46,10 +46,9 @@ export interface LadderCacheEntry {
  * a member with that role, and that the revision is unchanged: the counts, versions, column
  * revisions and update times of everything the answer shows (sites, segments, age model runs,
  * hypotheses, the project). A write during execution therefore leaves an entry that is never
- * served. Everything else, including
- * every error, goes through ordinary execution, which stays the authority on access and
- * validation. Answers are kept per API process up to `LADDER_CACHE_MIB` (least recently used
- * dropped first); 0 turns the cache off.
+ * served. Everything else, including every error, goes through ordinary execution, which stays
+ * the authority on access and validation. Answers are kept per API process up to
+ * `LADDER_CACHE_MIB` (least recently used dropped first); 0 turns the cache off.
  */
 @Injectable()
 export class EventLadderCache {
