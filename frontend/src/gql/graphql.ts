@@ -1407,6 +1407,8 @@ export type CancelAgeModelRunMutationVariables = Exact<{
 
 export type CancelAgeModelRunMutation = { __typename?: 'Mutation', cancelAgeModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus } };
 
+export type HpdRangeFieldsFragment = { __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number };
+
 export type SiteAttachmentsQueryVariables = Exact<{
   id: Scalars['ID']['input'];
 }>;
@@ -1777,7 +1779,13 @@ export class TypedDocumentString<TResult, TVariables>
     return this.value;
   }
 }
-
+export const HpdRangeFieldsFragmentDoc = new TypedDocumentString(`
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}
+    `, {"fragmentName":"HpdRangeFields"}) as unknown as TypedDocumentString<HpdRangeFieldsFragment, unknown>;
 export const AgeModelRunDocument = new TypedDocumentString(`
     query AgeModelRun($id: ID!) {
   ageModelRun(id: $id) {
@@ -1806,14 +1814,10 @@ export const AgeModelRunDocument = new TypedDocumentString(`
         name
       }
       hpd68 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
       hpd95 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
       density {
         calBp
@@ -1828,14 +1832,16 @@ export const AgeModelRunDocument = new TypedDocumentString(`
         labCode
       }
       hpd95 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
     }
   }
 }
-    `) as unknown as TypedDocumentString<AgeModelRunQuery, AgeModelRunQueryVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<AgeModelRunQuery, AgeModelRunQueryVariables>;
 export const AgeModelSiteDocument = new TypedDocumentString(`
     query AgeModelSite($id: ID!) {
   site(id: $id) {
@@ -2004,14 +2010,10 @@ export const CalibrateDocument = new TypedDocumentString(`
     meanCalBp
     sdYears
     hpd68 {
-      olderCalBp
-      youngerCalBp
-      probability
+      ...HpdRangeFields
     }
     hpd95 {
-      olderCalBp
-      youngerCalBp
-      probability
+      ...HpdRangeFields
     }
     density {
       calBp
@@ -2020,7 +2022,11 @@ export const CalibrateDocument = new TypedDocumentString(`
     warnings
   }
 }
-    `) as unknown as TypedDocumentString<CalibrateQuery, CalibrateQueryVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<CalibrateQuery, CalibrateQueryVariables>;
 export const CalibrationCurvesDocument = new TypedDocumentString(`
     query CalibrationCurves {
   calibrationCurves {
@@ -2071,14 +2077,10 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
         meanCalBp
         sdYears
         hpd68 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         hpd95 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         density {
           calBp
@@ -2089,7 +2091,11 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
     }
   }
 }
-    `) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
 export const ImportSamplesDocument = new TypedDocumentString(`
     mutation ImportSamples($input: ImportSamplesInput!) {
   importSamples(input: $input) {
@@ -2106,15 +2112,17 @@ export const ImportSamplesDocument = new TypedDocumentString(`
       unitName
       medianCalBp
       hpd95 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
       warnings
     }
   }
 }
-    `) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2706,21 +2714,21 @@ export const SiteDocument = new TypedDocumentString(`
         meanCalBp
         sdYears
         hpd68 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         hpd95 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         warnings
       }
     }
   }
 }
-    `) as unknown as TypedDocumentString<SiteQuery, SiteQueryVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<SiteQuery, SiteQueryVariables>;
 export const CreateUnitDocument = new TypedDocumentString(`
     mutation CreateUnit($input: CreateUnitInput!) {
   createUnit(input: $input) {

@@ -29,14 +29,10 @@ export const AgeModelRunDocument = graphql(`
           name
         }
         hpd68 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         hpd95 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         density {
           calBp
@@ -51,9 +47,7 @@ export const AgeModelRunDocument = graphql(`
           labCode
         }
         hpd95 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
       }
     }

@@ -8,14 +8,10 @@ export const CalibrateDocument = graphql(`
       meanCalBp
       sdYears
       hpd68 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
       hpd95 {
-        olderCalBp
-        youngerCalBp
-        probability
+        ...HpdRangeFields
       }
       density {
         calBp
@@ -74,14 +70,10 @@ export const SiteCalibrationsDocument = graphql(`
           meanCalBp
           sdYears
           hpd68 {
-            olderCalBp
-            youngerCalBp
-            probability
+            ...HpdRangeFields
           }
           hpd95 {
-            olderCalBp
-            youngerCalBp
-            probability
+            ...HpdRangeFields
           }
           density {
             calBp

@@ -16,9 +16,7 @@ export const ImportSamplesDocument = graphql(`
         unitName
         medianCalBp
         hpd95 {
-          olderCalBp
-          youngerCalBp
-          probability
+          ...HpdRangeFields
         }
         warnings
       }

@@ -76,14 +76,10 @@ export const SiteDocument = graphql(`
           meanCalBp
           sdYears
           hpd68 {
-            olderCalBp
-            youngerCalBp
-            probability
+            ...HpdRangeFields
           }
           hpd95 {
-            olderCalBp
-            youngerCalBp
-            probability
+            ...HpdRangeFields
           }
           warnings
         }
