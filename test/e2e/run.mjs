@@ -478,12 +478,36 @@ async function viewerCannotChange(page, { baseUrl, shot }) {
   check(!created.data?.createSite && codes.includes('FORBIDDEN'), `createSite as the viewer was not refused FORBIDDEN: ${JSON.stringify(created)}`);
 }
 
+async function adminFreezesRelease(page, { baseUrl, shot }) {
+  await signIn(page, baseUrl, 'admin@demo.test');
+  await openProject(page);
+  await page.getByRole('link', { name: 'Team and records' }).click();
+  await page.getByRole('tab', { name: 'Releases' }).click();
+  const note = `E2E release ${Date.now()}`;
+  await page.getByPlaceholder('Note, e.g. submitted with the paper').fill(note);
+  await page.getByRole('button', { name: 'Freeze' }).click();
+  // Listed at once (a cached project answer once hid it), and read only with the frozen columns.
+  const row = page.locator('tr', { hasText: note });
+  await row.waitFor();
+  await shot('listed');
+  await row.getByRole('button', { name: 'Open' }).click();
+  const dialog = page.getByRole('dialog');
+  await dialog.getByText('read only').waitFor();
+  const firstSite = dialog.locator('tbody tr').filter({ hasText: 'Skarrow Marsh' }).first();
+  await firstSite.waitFor();
+  const cells = (await firstSite.locator('td').allInnerTexts()).map((text) => text.trim());
+  check(cells.slice(-3).every((text) => /^\d+$/.test(text) && Number(text) > 0), `the release lacks Skarrow Marsh's unit, event and sample counts: ${cells.join(' | ')}`);
+  log(`release: "${note}" listed; Skarrow Marsh frozen with units, events, samples ${cells.slice(-3).join(', ')}`);
+  await shot('release');
+}
+
 const JOURNEYS = [
   ['researcher creates a site, enters its column and imports a lab sheet', researcherBuildsSite],
   ['researcher runs an age model and sees event ranges', researcherRunsAgeModel],
   ['correlator ties two events and sees the regional event with its checks', correlatorTiesEvents],
   ['analyst runs a recurrence analysis, reads the probabilities and exports CSV', analystRunsRecurrence],
   ['viewer sees the project and a site but can change nothing', viewerCannotChange],
+  ['admin freezes a release, sees it listed at once and opens it read only', adminFreezesRelease],
 ];
 
 async function runJourney(browser, baseUrl, index, title, journey) {
