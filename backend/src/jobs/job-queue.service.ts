@@ -17,6 +17,17 @@ export interface QueueJobs {
 }
 
 /**
+ * How pg-boss delivers each queue's jobs. Runs get no pg-boss retries: the reaper re-queues runs
+ * whose worker vanished, with the run's own attempt count. A thumbnail has no row of its own to
+ * watch, so pg-boss retries it.
+ */
+const SEND_OPTIONS: Record<QueueName, PgBoss.SendOptions> = {
+  [QUEUES.ageModel]: { retryLimit: 0, expireInSeconds: 3600 },
+  [QUEUES.recurrence]: { retryLimit: 0, expireInSeconds: 3600 },
+  [QUEUES.thumbnail]: { retryLimit: 2, retryDelay: 5, expireInSeconds: 300 },
+};
+
+/**
  * The PostgreSQL-backed job queue (pg-boss). API replicas only send; worker processes also work.
  * Delivery is pg-boss's; retries after a lost worker are ours (see JobReaper), because a run's
  * own row is the truth users see.
@@ -44,10 +55,7 @@ export class JobQueueService implements OnModuleDestroy {
 
   async send<Q extends QueueName>(queue: Q, job: QueueJobs[Q]): Promise<void> {
     const boss = await this.start();
-    // Runs get no pg-boss retries: the reaper re-queues runs whose worker vanished, with the run's
-    // own attempt count. A thumbnail has no row of its own to watch, so pg-boss retries it.
-    const options = queue === QUEUES.thumbnail ? { retryLimit: 2, retryDelay: 5, expireInSeconds: 300 } : { retryLimit: 0, expireInSeconds: 3600 };
-    await boss.send(queue, job, options);
+    await boss.send(queue, job, SEND_OPTIONS[queue]);
   }
 
   async work<Q extends QueueName>(queue: Q, concurrency: number, handler: (job: QueueJobs[Q]) => Promise<void>): Promise<void> {
