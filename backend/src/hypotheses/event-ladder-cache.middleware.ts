@@ -15,7 +15,7 @@ export class EventLadderCacheMiddleware implements NestMiddleware {
   use(req: Request, res: Response, next: NextFunction): void {
     const body = req.body as Partial<GraphqlHttpBody> | undefined;
     if (req.method !== 'POST' || !req.is('application/json') || typeof body?.query !== 'string') return next();
-    const claims = this.cache.bearerUser(req.headers.authorization);
+    const claims = this.cache.bearerClaims(req.headers.authorization);
     if (!claims) return next();
     const requestKey = this.cache.requestKey(body as GraphqlHttpBody);
     if (!this.cache.projectOf(requestKey)) return next();

@@ -6,7 +6,7 @@ import { FieldNode, FragmentDefinitionNode, Kind, OperationDefinitionNode, value
 import type { Request } from 'express';
 import { gzipSync } from 'node:zlib';
 import { QueryResult } from 'pg';
-import { Role } from '../access/permissions';
+import { Role, ROLES } from '../access/permissions';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
 import { coveredByLadderRevision } from './event-ladder-cache-scope';
@@ -24,7 +24,6 @@ export interface GraphqlHttpBody {
 
 /** A finished answer, kept exactly as it was sent, with the state it was computed from. */
 export interface LadderCacheEntry {
-  projectId: string;
   role: Role;
   revision: string;
   json: Buffer;
@@ -68,7 +67,7 @@ export class EventLadderCache {
   }
 
   /** The claims of a verified `Bearer` token (HS256 only), or undefined; its epoch is checked with the state. */
-  bearerUser(header: string | undefined): TokenClaims | undefined {
+  bearerClaims(header: string | undefined): TokenClaims | undefined {
     if (!header?.startsWith('Bearer ')) return undefined;
     try {
       return this.jwt.verify<TokenClaims>(header.slice(7), { algorithms: ['HS256'] });
@@ -146,17 +145,17 @@ export class EventLadderCache {
             if (!pending || response.body.kind !== 'single' || response.body.singleResult.errors?.length) return;
             // The bytes Apollo sends: JSON of the result and a newline.
             const json = Buffer.from(`${JSON.stringify(response.body.singleResult)}\n`);
-            this.store(pending.requestKey, { projectId: pending.projectId, role: pending.role, revision: pending.revision, json, gzip: gzipSync(json) });
+            this.store(pending.requestKey, pending.projectId, { role: pending.role, revision: pending.revision, json, gzip: gzipSync(json) });
           },
         };
       },
     };
   }
 
-  private store(requestKey: string, entry: LadderCacheEntry): void {
+  private store(requestKey: string, projectId: string, entry: LadderCacheEntry): void {
     if (entry.json.length + entry.gzip.length > this.maxBytes) return;
     const key = entryKey(entry.role, requestKey);
-    this.projects.set(requestKey, entry.projectId);
+    this.projects.set(requestKey, projectId);
     const previous = this.entries.get(key);
     if (previous) {
       this.entries.delete(key);
@@ -168,11 +167,9 @@ export class EventLadderCache {
       if (this.bytes <= this.maxBytes) break;
       this.entries.delete(oldest);
       this.bytes -= dropped.json.length + dropped.gzip.length;
-    }
-    // Forget the projects of requests with no answer left.
-    if (this.projects.size > this.entries.size) {
-      const live = new Set([...this.entries.keys()].map((k) => k.slice(k.indexOf('\u0000') + 1)));
-      for (const request of this.projects.keys()) if (!live.has(request)) this.projects.delete(request);
+      // A request with no answer left for any role needs no project either.
+      const droppedRequest = oldest.slice(dropped.role.length + 1);
+      if (!ROLES.some((role) => this.entries.has(entryKey(role, droppedRequest)))) this.projects.delete(droppedRequest);
     }
   }
 
@@ -203,7 +200,7 @@ export class EventLadderCache {
         .map((d) => [d.name.value, d]),
     );
     if (!coveredByLadderRevision(context.schema, operation, fragments)) return undefined;
-    const claims = this.bearerUser(req.headers?.authorization);
+    const claims = this.bearerClaims(req.headers?.authorization);
     if (!claims) return undefined;
     return { userId: claims.sub, requestKey: this.requestKey(body as GraphqlHttpBody), projectId };
   }
