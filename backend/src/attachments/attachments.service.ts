@@ -102,21 +102,23 @@ export class AttachmentsService {
   }
 
   /** The thumbnail bytes of an image attachment for a project member; NOT_FOUND while there is none. */
-  async thumbnail(user: AuthUser, id: string): Promise<AttachmentDownload> {
+  thumbnail(user: AuthUser, id: string): Promise<AttachmentDownload> {
+    return this.read(user, id, (attachment) => attachment.thumbnailKey, 'thumbnail');
+  }
+
+  /** One stored object of an attachment, for a project member; NOT_FOUND for anyone else or when it is missing. */
+  private async read(user: AuthUser, id: string, keyOf: (attachment: AttachmentRow) => string | null, what: string): Promise<AttachmentDownload> {
     const attachment = await this.find(id);
     await this.access.requireAccess({ user, permission: Permission.ProjectRead, projectId: attachment.projectId, objectName: 'attachment' });
-    const bytes = attachment.thumbnailKey ? await this.storage.get(attachment.thumbnailKey) : undefined;
-    if (!bytes) throw notFound('thumbnail');
+    const key = keyOf(attachment);
+    const bytes = key ? await this.storage.get(key) : undefined;
+    if (!bytes) throw notFound(what);
     return { attachment, bytes };
   }
 
   /** The bytes of an attachment for a project member; NOT_FOUND for anyone else. */
-  async download(user: AuthUser, id: string): Promise<AttachmentDownload> {
-    const attachment = await this.find(id);
-    await this.access.requireAccess({ user, permission: Permission.ProjectRead, projectId: attachment.projectId, objectName: 'attachment' });
-    const bytes = await this.storage.get(attachment.storageKey);
-    if (!bytes) throw notFound('attachment file');
-    return { attachment, bytes };
+  download(user: AuthUser, id: string): Promise<AttachmentDownload> {
+    return this.read(user, id, (attachment) => attachment.storageKey, 'attachment file');
   }
 
   async delete(user: AuthUser, id: string): Promise<boolean> {
