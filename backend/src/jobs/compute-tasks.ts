@@ -5,6 +5,7 @@
 import { makeThumbnail, Thumbnail, ThumbnailContentType } from '../attachments/thumbnail';
 import { AgeModelResult, AgeModelSettings, runAgeModel } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
+import { HemipelagicRunSettings, runHemipelagicModel } from '../chronology/age-model/hemipelagic/hemipelagic-model';
 import {
   computeRecurrence,
   RecurrenceComputeSettings,
@@ -15,7 +16,8 @@ import {
 export interface AgeModelRequest {
   kind: 'age-model';
   input: AgeModelInput;
-  settings: AgeModelSettings;
+  /** `depthModel` picks the model; absent (older runs) is ORDER_ONLY. */
+  settings: AgeModelSettings & { depthModel?: 'ORDER_ONLY' | 'HEMIPELAGIC_RATE'; hemipelagic?: HemipelagicRunSettings['hemipelagic'] };
 }
 
 export interface RecurrenceRequest {
@@ -43,7 +45,9 @@ export type ComputeResult<K extends ComputeRequest['kind']> = K extends 'age-mod
 export function runCompute(request: ComputeRequest, onProgress: (fraction: number) => void): ComputeResult<ComputeRequest['kind']> {
   switch (request.kind) {
     case 'age-model':
-      return runAgeModel(request.input, request.settings, { onProgress });
+      return request.settings.depthModel === 'HEMIPELAGIC_RATE'
+        ? runHemipelagicModel(request.input, request.settings, { onProgress })
+        : runAgeModel(request.input, request.settings, { onProgress });
     case 'recurrence':
       return computeRecurrence(request.source, request.settings, onProgress);
     case 'thumbnail':
