@@ -31,6 +31,7 @@ import { MembersModule } from './members/members.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { PasswordResetsModule } from './password-resets/password-resets.module';
 import { ProjectsModule } from './projects/projects.module';
+import { ProvenanceModule } from './provenance/provenance.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
@@ -72,6 +73,7 @@ import { ReleasesModule } from './releases/releases.module';
     UsersModule,
     MembershipsModule,
     ProjectsModule,
+    ProvenanceModule,
     SegmentsModule,
     SitesModule,
     UnitsModule,
