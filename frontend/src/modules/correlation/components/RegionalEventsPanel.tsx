@@ -1,8 +1,8 @@
 import { Callout, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
-import type { LadderHypothesis } from '@/modules/ladder/components/EventLadderChart';
-import { LOW_CONCORDANCE } from '@/modules/ladder/utils/ladderData';
+import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
+import { LOW_CONCORDANCE } from '@/modules/correlation/utils/ladderData';
 
 export type RegionalEventsPanelProps = {
   hypothesis: LadderHypothesis;
