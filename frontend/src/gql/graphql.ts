@@ -1511,13 +1511,6 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
 
-export type ImportSamplesMutationVariables = Exact<{
-  input: ImportSamplesInput;
-}>;
-
-
-export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
-
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -1559,6 +1552,13 @@ export type SetPreferredHypothesisMutationVariables = Exact<{
 
 
 export type SetPreferredHypothesisMutation = { __typename?: 'Mutation', setPreferredHypothesis: { __typename?: 'Hypothesis', id: string, preferred: boolean } };
+
+export type ImportSamplesMutationVariables = Exact<{
+  input: ImportSamplesInput;
+}>;
+
+
+export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
@@ -2136,33 +2136,6 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
-export const ImportSamplesDocument = new TypedDocumentString(`
-    mutation ImportSamples($input: ImportSamplesInput!) {
-  importSamples(input: $input) {
-    rowCount
-    committed
-    errors {
-      row
-      field
-      message
-    }
-    preview {
-      row
-      labCode
-      unitName
-      medianCalBp
-      hpd95 {
-        ...HpdRangeFields
-      }
-      warnings
-    }
-  }
-}
-    fragment HpdRangeFields on HpdRange {
-  olderCalBp
-  youngerCalBp
-  probability
-}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2318,6 +2291,33 @@ export const SetPreferredHypothesisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<SetPreferredHypothesisMutation, SetPreferredHypothesisMutationVariables>;
+export const ImportSamplesDocument = new TypedDocumentString(`
+    mutation ImportSamples($input: ImportSamplesInput!) {
+  importSamples(input: $input) {
+    rowCount
+    committed
+    errors {
+      row
+      field
+      message
+    }
+    preview {
+      row
+      labCode
+      unitName
+      medianCalBp
+      hpd95 {
+        ...HpdRangeFields
+      }
+      warnings
+    }
+  }
+}
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const ProjectsDocument = new TypedDocumentString(`
     query Projects {
   projects {

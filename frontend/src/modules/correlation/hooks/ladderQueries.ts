@@ -1,8 +1,8 @@
 import { queryOptions } from '@tanstack/react-query';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
-import { EventLadderDocument, HypothesisDocument } from '@/modules/ladder/graphql/ladder';
+import { EventLadderDocument, HypothesisDocument } from '@/modules/correlation/graphql/ladder';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
-import { gridToDensity } from '@/modules/ladder/utils/ladderData';
+import { gridToDensity } from '@/modules/correlation/utils/ladderData';
 import type { EventLadderQuery } from '@/gql/graphql';
 
 type WireColumn = EventLadderQuery['eventLadder']['columns'][number];

@@ -1,7 +1,7 @@
 import { Button, ButtonGroup, Intent } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useState, type RefObject } from 'react';
-import { downloadPngFigure, downloadSvgFigure } from '@/modules/ladder/utils/figureDownload';
+import { downloadPngFigure, downloadSvgFigure } from '@/modules/correlation/utils/figureDownload';
 
 export type FigureExportButtonsProps = {
   /** The chart's root <svg>. */

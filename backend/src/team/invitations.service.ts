@@ -12,7 +12,7 @@ import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
 import { invitationMail } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
-import { MembershipsRepository } from '../memberships/memberships.repository';
+import { MembershipsRepository } from './memberships.repository';
 import { ProjectsRepository } from '../projects/projects.repository';
 import { UsersRepository } from '../users/users.repository';
 import { AcceptInvitationInput, InviteMemberInput } from './dto/invitation.inputs';

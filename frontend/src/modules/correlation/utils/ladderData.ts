@@ -3,7 +3,7 @@
  * anchors by event id, site positions by event id, conflicting tie ids.
  */
 import type { DensityPoint } from '@/modules/calibration/utils/calibrationChart';
-import type { EventAnchor, HpdRangeLike } from '@/modules/ladder/utils/ladderLayout';
+import type { EventAnchor, HpdRangeLike } from '@/modules/correlation/utils/ladderLayout';
 
 export type LadderEventLike = {
   medianCalBp?: number | null;

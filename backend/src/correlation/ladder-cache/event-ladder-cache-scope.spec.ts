@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { buildSchema, FragmentDefinitionNode, Kind, OperationDefinitionNode, parse } from 'graphql';
 import { describe, expect, it } from 'vitest';
-import { repositoryRoot } from '../common/repo-paths';
+import { repositoryRoot } from '../../common/repo-paths';
 import { coveredByLadderRevision } from './event-ladder-cache-scope';
 
 const schema = buildSchema(readFileSync(join(repositoryRoot(), 'schema.graphql'), 'utf8'));
@@ -26,7 +26,7 @@ function frontendDocument(file: string, name: string): string {
 
 describe(coveredByLadderRevision.name, () => {
   it('keeps the ladder page query, which reads only what the revision covers', () => {
-    expect(covered(frontendDocument('ladder/graphql/ladder.ts', 'EventLadderDocument'))).toBe(true);
+    expect(covered(frontendDocument('correlation/graphql/ladder.ts', 'EventLadderDocument'))).toBe(true);
   });
 
   it('never keeps a project query about members, releases or analyses (the revision does not move with them)', () => {

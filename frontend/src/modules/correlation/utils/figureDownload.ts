@@ -1,4 +1,4 @@
-import { figureFileName, svgDocumentText } from '@/modules/ladder/utils/figureExport';
+import { figureFileName, svgDocumentText } from '@/modules/correlation/utils/figureExport';
 
 function downloadBlob(fileName: string, blob: Blob): void {
   const url = URL.createObjectURL(blob);

@@ -1,16 +1,14 @@
 import type { ApolloServerPlugin, GraphQLRequestContext } from '@apollo/server';
 import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { sql } from 'drizzle-orm';
 import { FieldNode, FragmentDefinitionNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'graphql';
 import type { Request } from 'express';
 import { gzipSync } from 'node:zlib';
-import { QueryResult } from 'pg';
-import { Role, ROLES } from '../access/permissions';
-import { APP_CONFIG, AppConfig } from '../config/config';
-import { DatabaseService } from '../database/database.service';
+import { Role, ROLES } from '../../access/permissions';
+import { APP_CONFIG, AppConfig } from '../../config/config';
 import { coveredByLadderRevision } from './event-ladder-cache-scope';
-import { epochCurrent, TokenClaims } from '../auth/token-claims';
+import { LadderCacheState, LadderRevisionRepository } from './ladder-revision.repository';
+import { epochCurrent, TokenClaims } from '../../auth/token-claims';
 
 /** Root fields a cached ladder operation may ask for, each of one project. */
 const CACHEABLE_ROOT_FIELDS: Record<string, string> = { eventLadder: 'projectId', project: 'id' };
@@ -60,7 +58,7 @@ export class EventLadderCache {
 
   constructor(
     private readonly jwt: JwtService,
-    private readonly database: DatabaseService,
+    private readonly revisions: LadderRevisionRepository,
     @Inject(APP_CONFIG) config: AppConfig,
   ) {
     this.maxBytes = config.ladderCacheMiB * 1024 * 1024;
@@ -104,26 +102,9 @@ export class EventLadderCache {
     return entry;
   }
 
-  /**
-   * The caller's token epoch (null when the user is gone), role (null when not a member) and the
-   * project data revision, in one query.
-   */
-  async state(userId: string, projectId: string): Promise<{ epoch: number | null; role: Role | null; revision: string }> {
-    const result = (await this.database.db.execute(sql`
-      select
-        (select token_epoch from users where id = ${userId}) as epoch,
-        (select role from memberships where project_id = ${projectId} and user_id = ${userId}) as role,
-        concat_ws('|',
-          (select concat_ws(':', count(*), sum(column_revision), sum(version), max(updated_at)) from sites where project_id = ${projectId}),
-          (select concat_ws(':', count(*), sum(version), max(updated_at)) from segments where project_id = ${projectId}),
-          (select concat_ws(':', count(*), max(r.updated_at)) from age_model_runs r join sites s on s.id = r.site_id where s.project_id = ${projectId}),
-          (select concat_ws(':', count(*), sum(version), max(updated_at)) from hypotheses where project_id = ${projectId}),
-          (select concat_ws(':', version, updated_at) from projects where id = ${projectId})) as revision`)) as unknown as QueryResult<{
-      epoch: number | null;
-      role: Role | null;
-      revision: string;
-    }>;
-    return result.rows[0];
+  /** The caller's token epoch, role and the project's data revision (one query). */
+  state(userId: string, projectId: string): Promise<LadderCacheState> {
+    return this.revisions.state(userId, projectId);
   }
 
   /** The Apollo plugin that stores successful answers of cacheable operations. */

@@ -1,6 +1,6 @@
 import { Button, HTMLTable, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
-import type { LadderHypothesis } from '@/modules/ladder/components/EventLadderChart';
+import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
 
 export type TiesListProps = {
   hypothesis: LadderHypothesis;

@@ -2,7 +2,7 @@ import { ParseUUIDPipe } from '@nestjs/common';
 import { Args, Mutation, Resolver } from '@nestjs/graphql';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { MembershipRow } from '../memberships/memberships.repository';
+import { MembershipRow } from './memberships.repository';
 import { SetMemberRoleInput } from './dto/set-member-role.input';
 import { MembersService } from './members.service';
 

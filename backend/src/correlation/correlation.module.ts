@@ -1,6 +1,7 @@
 import { MiddlewareConsumer, Module, NestModule, RequestMethod } from '@nestjs/common';
-import { EventLadderCache } from './event-ladder-cache';
-import { EventLadderCacheMiddleware } from './event-ladder-cache.middleware';
+import { EventLadderCache } from './ladder-cache/event-ladder-cache';
+import { EventLadderCacheMiddleware } from './ladder-cache/event-ladder-cache.middleware';
+import { LadderRevisionRepository } from './ladder-cache/ladder-revision.repository';
 import { AgeModelsModule } from '../age-models/age-models.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { SitesModule } from '../sites/sites.module';
@@ -16,6 +17,7 @@ import { HypothesesService } from './hypotheses.service';
   imports: [ProjectsModule, SitesModule, UsersModule, AgeModelsModule],
   providers: [
     EventLadderCache,
+    LadderRevisionRepository,
     HypothesesRepository,
     CorrelationDataService,
     HypothesesService,
@@ -27,7 +29,7 @@ import { HypothesesService } from './hypotheses.service';
   ],
   exports: [HypothesesService, CorrelationDataService, EventLadderCache],
 })
-export class HypothesesModule implements NestModule {
+export class CorrelationModule implements NestModule {
   configure(consumer: MiddlewareConsumer): void {
     consumer.apply(EventLadderCacheMiddleware).forRoutes({ path: 'graphql', method: RequestMethod.POST });
   }

@@ -3,8 +3,8 @@ import { useEffect, useId, useMemo, useRef, useState, type RefObject } from 'rea
 import type { HypothesisQuery } from '@/gql/graphql';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
-import { conflictingTieIds, eventAnchors } from '@/modules/ladder/utils/ladderData';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
+import { conflictingTieIds, eventAnchors } from '@/modules/correlation/utils/ladderData';
 import {
   columnLabel,
   createColumnScale,
@@ -15,7 +15,7 @@ import {
   regionalBands,
   tieSegments,
   zoomedTimeWindow,
-} from '@/modules/ladder/utils/ladderLayout';
+} from '@/modules/correlation/utils/ladderLayout';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const MARGIN = { top: 84, right: 16, bottom: 16, left: 64 };
@@ -24,8 +24,8 @@ const MAX_ZOOM = 40;
 const calBpOf = (point: DensityPoint) => point.calBp;
 const probabilityOf = (point: DensityPoint) => point.probability;
 
-export type { LadderColumn } from '@/modules/ladder/hooks/ladderQueries';
-import type { LadderColumn } from '@/modules/ladder/hooks/ladderQueries';
+export type { LadderColumn } from '@/modules/correlation/hooks/ladderQueries';
+import type { LadderColumn } from '@/modules/correlation/hooks/ladderQueries';
 export type LadderHypothesis = HypothesisQuery['hypothesis'];
 
 export type EventLadderChartProps = {

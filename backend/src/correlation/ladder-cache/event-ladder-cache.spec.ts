@@ -4,10 +4,10 @@ import { join } from 'node:path';
 import type { JwtService } from '@nestjs/jwt';
 import { buildSchema, Kind, OperationDefinitionNode, parse } from 'graphql';
 import { describe, expect, it } from 'vitest';
-import { repositoryRoot } from '../common/repo-paths';
-import { loadConfig } from '../config/config';
-import type { DatabaseService } from '../database/database.service';
+import { repositoryRoot } from '../../common/repo-paths';
+import { loadConfig } from '../../config/config';
 import { EventLadderCache } from './event-ladder-cache';
+import type { LadderRevisionRepository } from './ladder-revision.repository';
 
 const schema = buildSchema(readFileSync(join(repositoryRoot(), 'schema.graphql'), 'utf8'));
 const QUERY = `query($p: ID!) { project(id: $p) { id name } }`;
@@ -16,8 +16,8 @@ const claims = { sub: 'user-1', email: 'a@b.test', epoch: 0 };
 /** A cache over a fake token check and a fake state query (role VIEWER, one fixed revision). */
 function cacheOf(megabytes: number) {
   const jwt = { verify: () => claims } as unknown as JwtService;
-  const database = { db: { execute: async () => ({ rows: [{ epoch: 0, role: 'VIEWER', revision: 'r1' }] }) } } as unknown as DatabaseService;
-  return new EventLadderCache(jwt, database, loadConfig({ DATABASE_URL: 'postgres://x@127.0.0.1/x', LADDER_CACHE_MIB: String(megabytes) }));
+  const revisions = { state: async () => ({ epoch: 0, role: 'VIEWER', revision: 'r1' }) } as unknown as LadderRevisionRepository;
+  return new EventLadderCache(jwt, revisions, loadConfig({ DATABASE_URL: 'postgres://x@127.0.0.1/x', LADDER_CACHE_MIB: String(megabytes) }));
 }
 
 /** Run one request through the plugin as Apollo would, answering `bytes` bytes of data. */

@@ -1,7 +1,7 @@
 import { Callout, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
-import type { LadderHypothesis } from '@/modules/ladder/components/EventLadderChart';
+import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
 
 export type RegionalEventsPanelProps = {
   hypothesis: LadderHypothesis;

@@ -5,7 +5,7 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { MembershipRow, MembershipsRepository } from '../memberships/memberships.repository';
+import { MembershipRow, MembershipsRepository } from './memberships.repository';
 import { SetMemberRoleInput } from './dto/set-member-role.input';
 import { MembersRepository } from './members.repository';
 

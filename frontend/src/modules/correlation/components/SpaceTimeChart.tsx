@@ -1,10 +1,10 @@
 import { scaleLinear } from 'd3';
 import { useMemo, type RefObject } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
-import type { LadderColumn, LadderHypothesis } from '@/modules/ladder/components/EventLadderChart';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
-import { eventSiteKm } from '@/modules/ladder/utils/ladderData';
-import { createTimeScale, ladderTimeWindow, spaceTimeBars, type SpaceTimeBar } from '@/modules/ladder/utils/ladderLayout';
+import type { LadderColumn, LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
+import { eventSiteKm } from '@/modules/correlation/utils/ladderData';
+import { createTimeScale, ladderTimeWindow, spaceTimeBars, type SpaceTimeBar } from '@/modules/correlation/utils/ladderLayout';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const MARGIN = { top: 56, right: 24, bottom: 28, left: 64 };
