@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -118,7 +119,7 @@ describe('startAgeModelRun depthModel', () => {
   it('defaults to ORDER_ONLY, whose run has no age-depth curve', async () => {
     const { startAgeModelRun } = await clients.RESEARCHER.ok(START, { i: { siteId: coreId, seed: 2, iterations: 2000 } });
     expect(startAgeModelRun.depthModel).toBe('ORDER_ONLY');
-    await server.app.get(AgeModelJob).execute(startAgeModelRun.id);
+    await server.app.get(RunExecutor).execute(server.app.get(AgeModelJob), startAgeModelRun.id);
     const run = (await clients.VIEWER.ok(RUN, { id: startAgeModelRun.id })).ageModelRun;
     expect(run.status).toBe('SUCCEEDED');
     expect(run.ageDepth).toEqual([]);
@@ -128,7 +129,7 @@ describe('startAgeModelRun depthModel', () => {
     const { startAgeModelRun } = await clients.RESEARCHER.ok(START, { i: { siteId: coreId, seed: 5, depthModel: 'HEMIPELAGIC_RATE', iterations: 20000 } });
     expect(startAgeModelRun.depthModel).toBe('HEMIPELAGIC_RATE');
     expect(startAgeModelRun.settings.depthModel).toBe('HEMIPELAGIC_RATE');
-    await server.app.get(AgeModelJob).execute(startAgeModelRun.id);
+    await server.app.get(RunExecutor).execute(server.app.get(AgeModelJob), startAgeModelRun.id);
     const run = (await clients.VIEWER.ok(RUN, { id: startAgeModelRun.id })).ageModelRun;
     expect(run.status).toBe('SUCCEEDED');
     const byName = Object.fromEntries(run.events.map((e: { eventHorizon: { name: string }; medianCalBp: number }) => [e.eventHorizon.name, e.medianCalBp]));
