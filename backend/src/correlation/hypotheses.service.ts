@@ -5,7 +5,7 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { CorrelationInputError, validateTie, type HypothesisCheck, type Tie } from '../chronology/correlation';
 import type { HpdRange } from '../chronology/common/density';
-import { badInput, notFound } from '../common/errors/domain-error';
+import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { withConstraintErrors } from '../common/errors/database-errors';
 import { DatabaseService } from '../database/database.service';
 import type { EventHorizonRow } from '../event-horizons/event-horizons.repository';
@@ -243,7 +243,7 @@ export class HypothesesService {
   async removeTie(user: AuthUser, id: string): Promise<boolean> {
     const tie = await this.hypotheses.findTie(id);
     if (!tie) throw notFound('tie');
-    const hypothesis = await this.get(user, tie.hypothesisId, Permission.CorrelationWrite);
+    const hypothesis = await asNotFoundOf('tie', () => this.get(user, tie.hypothesisId, Permission.CorrelationWrite));
     await this.database.transaction(async (tx) => {
       await this.hypotheses.lock(hypothesis.id, tx);
       await this.hypotheses.deleteTie(id, tx);
