@@ -6,18 +6,20 @@ import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository'
 import { StoredAgeModelResults, storeDensity } from '../age-models/age-model-results';
 import { LatestRunsService } from '../age-models/latest-runs.service';
 import { AuditService } from '../audit/audit.service';
+import { ProvenanceService } from '../provenance/provenance.service';
 import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
 import type { SiteEvent } from '../chronology/correlation';
 import { fitRenewalModel, RecurrenceInputError, RENEWAL_MODELS, renewalDistribution } from '../chronology/recurrence';
 import { badInput, conflict, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { SegmentRow } from '../segments/segments.repository';
 import { SegmentsService } from '../segments/segments.service';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { FitRenewalInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { RecurrenceJob } from './recurrence.job';
 import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
 import { RecurrenceExport, recurrenceExport, recurrenceExportCsv, RecurrenceExportHeader } from './recurrence-export';
@@ -64,9 +66,11 @@ export class RecurrenceService {
     private readonly latestRuns: LatestRunsService,
     private readonly ageModelRuns: AgeModelRunsRepository,
     private readonly jobs: JobQueueService,
+    private readonly recurrenceJob: RecurrenceJob,
     private readonly access: AccessService,
     private readonly audit: AuditService,
     private readonly releases: ReleasesService,
+    private readonly provenance: ProvenanceService,
   ) {}
 
   /** Conditional probability of one renewal model in a window, beside the Poisson figure, and the hazard at the elapsed time. */
@@ -165,9 +169,14 @@ export class RecurrenceService {
         objectId: row.id,
         after: { segmentId: row.segmentId, siteId: row.siteId, hypothesisId: row.hypothesisId, hypothesisVersion: row.hypothesisVersion, seed, forecastStartYear, windowsYears, draws, settings },
       });
+      // Provenance: the runs whose ages it used and the hypothesis version, for `stale` and refresh.
+      await this.provenance.record(tx, row.projectId, { kind: 'recurrenceAnalysis', id: row.id }, [
+        ...settings.ageModelRunIds.map((id) => ({ kind: 'ageModelRun' as const, id })),
+        ...(row.hypothesisId && row.hypothesisVersion !== null ? [{ kind: 'hypothesis' as const, id: row.hypothesisId, revision: row.hypothesisVersion }] : []),
+      ]);
       return row;
     });
-    await this.jobs.send(QUEUES.recurrence, { runId: analysis.id });
+    await this.jobs.send(this.recurrenceJob, { runId: analysis.id });
     return this.view(analysis);
   }
 
