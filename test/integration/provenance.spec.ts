@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseRangesCalBp } from '../../backend/src/provenance/result-tables';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture } from '../support/fixtures';
@@ -50,15 +51,20 @@ let hypothesisId: string;
 let firstTieId: string;
 const analyses = { segment: '', siteC: '' };
 
+/** Run a queued job in the test process, as a worker would. */
+async function executeRun(kind: typeof AgeModelJob | typeof RecurrenceJob, id: string): Promise<void> {
+  await server.app.get(RunExecutor).execute(server.app.get(kind), id);
+}
+
 async function runAgeModel(siteId: string): Promise<string> {
   const { startAgeModelRun } = await clients.RESEARCHER.ok(START_RUN, { i: { siteId, iterations: 1500, seed: 11 } });
-  await server.app.get(AgeModelJob).execute(startAgeModelRun.id);
+  await executeRun(AgeModelJob, startAgeModelRun.id);
   return startAgeModelRun.id;
 }
 
 async function runAnalysis(input: Record<string, unknown>): Promise<string> {
   const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START_ANALYSIS, { i: { draws: 200, seed: 5, forecastStartYear: 2030, ...input } });
-  await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+  await executeRun(RecurrenceJob, startRecurrenceAnalysis.id);
   return startRecurrenceAnalysis.id;
 }
 
@@ -315,7 +321,7 @@ describe('refreshStaleResults', () => {
 
     // The fresh run of C is cancelled (a failure); the fresh run of A succeeds.
     await clients.RESEARCHER.ok(CANCEL_RUN, { id: step(site.C.run).freshId });
-    await server.app.get(AgeModelJob).execute(step(site.A.run).freshId!);
+    await executeRun(AgeModelJob, step(site.A.run).freshId!);
     let now = await planOf(plan.id);
     const nowStep = (staleId: string) => (now.steps as Step[]).find((s) => s.staleId === staleId)!;
     expect(nowStep(site.A.run).status).toBe('SUCCEEDED');
@@ -324,7 +330,7 @@ describe('refreshStaleResults', () => {
     expect(nowStep(analyses.segment).status).toBe('QUEUED');
     expect(now.status).toBe('ACTIVE');
 
-    await server.app.get(RecurrenceJob).execute(nowStep(analyses.segment).freshId!);
+    await executeRun(RecurrenceJob, nowStep(analyses.segment).freshId!);
     now = await planOf(plan.id);
     expect(nowStep(analyses.segment).status).toBe('SUCCEEDED');
     expect(now.status).toBe('FINISHED');
