@@ -6,7 +6,7 @@ import { CalibrationService } from '../calibration/calibration.service';
 import { AuthUser } from '../auth/auth-user';
 import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
 import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
-import { badInput, notFound } from '../common/errors/domain-error';
+import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
 import { QUEUES, JobQueueService } from '../jobs/job-queue.service';
@@ -78,14 +78,14 @@ export class AgeModelsService {
   async get(user: AuthUser, id: string): Promise<AgeModelRunRow> {
     const run = await this.runs.findById(id);
     if (!run) throw notFound('age model run');
-    await this.sites.get(user, run.siteId);
+    await asNotFoundOf('age model run', () => this.sites.get(user, run.siteId));
     return run;
   }
 
   async cancel(user: AuthUser, id: string): Promise<AgeModelRunRow> {
     const run = await this.runs.findById(id);
     if (!run) throw notFound('age model run');
-    const site = await this.sites.get(user, run.siteId, Permission.AgeModelRun);
+    const site = await asNotFoundOf('age model run', () => this.sites.get(user, run.siteId, Permission.AgeModelRun));
     const cancelled = await this.runs.cancel(id);
     if (!cancelled) throw badInput('id', `the run has already ended (${run.status})`);
     await this.audit.record(this.database.db, { actor: user, projectId: site.projectId, action: 'cancel', objectType: 'ageModelRun', objectId: id });

@@ -62,6 +62,8 @@ export type AgeModelRun = {
   site: Site;
   /** True when the site's column or samples changed after this run was queued. */
   stale: Scalars['Boolean']['output'];
+  /** What changed in the site's column since this run was queued; empty while it is up to date. */
+  staleReasons: Array<StaleReason>;
   status: JobStatus;
 };
 
@@ -386,6 +388,7 @@ export type Hypothesis = {
   description?: Maybe<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   name: Scalars['String']['output'];
+  /** Every minimal order loop of the hypothesis, of any length (at most 200 are listed). */
   orderConflicts: Array<OrderConflict>;
   preferred: Scalars['Boolean']['output'];
   project: Project;
@@ -468,6 +471,12 @@ export type JobStatus =
   | 'QUEUED'
   | 'RUNNING'
   | 'SUCCEEDED';
+
+/** A joint age model run named as an input (its details are on the joint run itself). */
+export type JointRunReference = {
+  __typename?: 'JointRunReference';
+  id: Scalars['ID']['output'];
+};
 
 export type LadderColumn = {
   __typename?: 'LadderColumn';
@@ -781,11 +790,43 @@ export type MutationUpdateUnitArgs = {
   version: Scalars['Int']['input'];
 };
 
+/**
+ * A minimal cycle of the hypothesis's order graph (each regional event one node, each site's column
+ * ordering its members): ties that cannot all hold, because together they put an event before
+ * itself. A pair of crossing ties is a loop of two regional events.
+ */
 export type OrderConflict = {
   __typename?: 'OrderConflict';
+  /** Every site event on the loop, in loop order. */
+  events: Array<EventHorizon>;
+  /** The loop in plain words, naming the sites, events and ties on it. */
   message: Scalars['String']['output'];
+  /** Ids of the regional events on the loop (as RegionalEvent.id), in loop order. */
+  regionalEventIds: Array<Scalars['ID']['output']>;
+  /** The sites of the loop's steps, along strike. */
+  sites: Array<Site>;
+  /** The loop's steps in order: each step's younger event is tied to the next step's older one. */
+  steps: Array<OrderStep>;
+  /** A tie on the loop (the first of the first regional event's chain). */
   tieA: Tie;
+  /** Another tie on the loop (the first of the second regional event's chain). */
   tieB: Tie;
+  /** Every tie on the loop, in loop order. */
+  ties: Array<Tie>;
+};
+
+/**
+ * One step of an order loop: at one site, the member of one regional event lies below (so is
+ * older than) the member of the next regional event on the loop.
+ */
+export type OrderStep = {
+  __typename?: 'OrderStep';
+  /** The lower, older event at the site. */
+  older: EventHorizon;
+  /** The site whose column orders the two events. */
+  site: Site;
+  /** The higher, younger event at the site. */
+  younger: EventHorizon;
 };
 
 export type PageInfo = {
@@ -952,6 +993,17 @@ export type RangeEstimate = {
   median: Scalars['Float']['output'];
 };
 
+/** One recorded input of a derived result. */
+export type RecordedInput = {
+  __typename?: 'RecordedInput';
+  id: Scalars['ID']['output'];
+  kind: ResultInputKind;
+  /** Its name when it was used. */
+  name: Scalars['String']['output'];
+  /** The site column revision or hypothesis version read; null for a run. */
+  revision?: Maybe<Scalars['Int']['output']>;
+};
+
 /** Interval statistics, renewal fits and forecasts for a segment or site, with their inputs. */
 export type RecurrenceAnalysis = {
   __typename?: 'RecurrenceAnalysis';
@@ -968,6 +1020,8 @@ export type RecurrenceAnalysis = {
   hypothesis?: Maybe<Hypothesis>;
   hypothesisVersion?: Maybe<Scalars['Int']['output']>;
   id: Scalars['ID']['output'];
+  /** The runs, hypothesis version and recorded inputs it was computed from. */
+  inputs: RecurrenceInputs;
   intervals: Array<IntervalEstimate>;
   lastEventMedianCalBp?: Maybe<Scalars['Float']['output']>;
   meanRecurrence?: Maybe<RangeEstimate>;
@@ -989,8 +1043,27 @@ export type RecurrenceAnalysis = {
   segment?: Maybe<Segment>;
   settings: Scalars['JSON']['output'];
   site?: Maybe<Site>;
+  /** True when any input changed after the analysis was queued, directly or through the runs it used. */
+  stale: Scalars['Boolean']['output'];
+  /** Why it is stale; empty while it is up to date. */
+  staleReasons: Array<StaleReason>;
   status: JobStatus;
   windowsYears: Array<Scalars['Float']['output']>;
+};
+
+/** What a recurrence analysis was computed from. */
+export type RecurrenceInputs = {
+  __typename?: 'RecurrenceInputs';
+  /** The site age model runs whose event ages it used (empty for a run that has since been deleted). */
+  ageModelRuns: Array<AgeModelRun>;
+  /** The correlation hypothesis of a segment analysis; null for a single site, or once deleted. */
+  hypothesis?: Maybe<Hypothesis>;
+  /** The hypothesis version it used. */
+  hypothesisVersion?: Maybe<Scalars['Int']['output']>;
+  /** The joint age model run it used; null unless it ran on one. */
+  jointRun?: Maybe<JointRunReference>;
+  /** Every recorded input, with the revision or version read and its name. */
+  recorded: Array<RecordedInput>;
 };
 
 /** A connected group of tied events: one inferred earthquake. */
@@ -1002,6 +1075,13 @@ export type RegionalEvent = {
   combinedMedianCalBp?: Maybe<Scalars['Float']['output']>;
   /** 0-1: how well the members' age densities agree (1 = identical). */
   concordance?: Maybe<Scalars['Float']['output']>;
+  /** True when the concordance is below concordanceThreshold. */
+  concordanceLow: Scalars['Boolean']['output'];
+  /**
+   * The concordance below which a group of this many members is flagged: exp(-chi2_0.95(n-1)/2),
+   * so a true same-event group is flagged about 5 % of the time whatever its size. Null for one member.
+   */
+  concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
   magnitude?: Maybe<MagnitudeEstimate>;
   members: Array<EventHorizon>;
@@ -1200,6 +1280,17 @@ export type ResetPasswordInput = {
   token: Scalars['String']['input'];
 };
 
+/** The kind of input a derived result was computed from. */
+export type ResultInputKind =
+  /** A site age model run. */
+  | 'AGE_MODEL_RUN'
+  /** A correlation hypothesis at one version. */
+  | 'HYPOTHESIS'
+  /** A joint age model run under a hypothesis. */
+  | 'JOINT_RUN'
+  /** A site's column: its units, event horizons and samples. */
+  | 'SITE_COLUMN';
+
 /** A member's role in one project; it decides what the member may change. */
 export type Role =
   | 'ADMIN'
@@ -1317,6 +1408,20 @@ export type SiteKind =
   | 'MARSH'
   | 'OUTCROP'
   | 'TRENCH';
+
+/** One input that changed after a result was computed: the reason the result is stale. */
+export type StaleReason = {
+  __typename?: 'StaleReason';
+  /** The changed site, hypothesis or run. */
+  inputId: Scalars['ID']['output'];
+  inputKind: ResultInputKind;
+  /** Its name (as it was used, when it has since been deleted). */
+  inputName: Scalars['String']['output'];
+  /** What changed, in words (names, not ids). */
+  message: Scalars['String']['output'];
+  /** The results the change reached this one through, nearest first; empty when the input is direct. */
+  via: Array<Scalars['String']['output']>;
+};
 
 export type StartAgeModelRunInput = {
   chains?: InputMaybe<Scalars['Int']['input']>;
@@ -1558,13 +1663,6 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
 
-export type ImportSamplesMutationVariables = Exact<{
-  input: ImportSamplesInput;
-}>;
-
-
-export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
-
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -1577,7 +1675,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string } }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -1606,6 +1704,13 @@ export type SetPreferredHypothesisMutationVariables = Exact<{
 
 
 export type SetPreferredHypothesisMutation = { __typename?: 'Mutation', setPreferredHypothesis: { __typename?: 'Hypothesis', id: string, preferred: boolean } };
+
+export type ImportSamplesMutationVariables = Exact<{
+  input: ImportSamplesInput;
+}>;
+
+
+export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
@@ -2183,33 +2288,6 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
-export const ImportSamplesDocument = new TypedDocumentString(`
-    mutation ImportSamples($input: ImportSamplesInput!) {
-  importSamples(input: $input) {
-    rowCount
-    committed
-    errors {
-      row
-      field
-      message
-    }
-    preview {
-      row
-      labCode
-      unitName
-      medianCalBp
-      hpd95 {
-        ...HpdRangeFields
-      }
-      warnings
-    }
-  }
-}
-    fragment HpdRangeFields on HpdRange {
-  olderCalBp
-  youngerCalBp
-  probability
-}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2296,6 +2374,8 @@ export const HypothesisDocument = new TypedDocumentString(`
       id
       combinedMedianCalBp
       concordance
+      concordanceThreshold
+      concordanceLow
       warnings
       ruptureLengthKm
       members {
@@ -2327,6 +2407,10 @@ export const HypothesisDocument = new TypedDocumentString(`
       tieB {
         id
       }
+      ties {
+        id
+      }
+      regionalEventIds
     }
   }
 }
@@ -2359,6 +2443,33 @@ export const SetPreferredHypothesisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<SetPreferredHypothesisMutation, SetPreferredHypothesisMutationVariables>;
+export const ImportSamplesDocument = new TypedDocumentString(`
+    mutation ImportSamples($input: ImportSamplesInput!) {
+  importSamples(input: $input) {
+    rowCount
+    committed
+    errors {
+      row
+      field
+      message
+    }
+    preview {
+      row
+      labCode
+      unitName
+      medianCalBp
+      hpd95 {
+        ...HpdRangeFields
+      }
+      warnings
+    }
+  }
+}
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const ProjectsDocument = new TypedDocumentString(`
     query Projects {
   projects {

@@ -2,8 +2,8 @@ import { area, scaleLinear } from 'd3';
 import { useMemo } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
-import { createTimeScale, ladderTimeWindow } from '@/modules/ladder/utils/ladderLayout';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
+import { createTimeScale, ladderTimeWindow } from '@/modules/correlation/utils/ladderLayout';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 420;

@@ -1,0 +1,129 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startTestServer, TestServer } from '../support/app';
+import { createProjectFixture, PASSWORD, ProjectFixture } from '../support/fixtures';
+import { GraphqlClient } from '../support/graphql';
+
+let server: TestServer;
+let fixture: ProjectFixture;
+let viewer: GraphqlClient;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  fixture = await createProjectFixture('Hardening');
+  viewer = await new GraphqlClient(server.url).signIn(fixture.emails.VIEWER, PASSWORD);
+});
+
+afterAll(async () => {
+  await server?.close();
+});
+
+async function post(body: unknown, token?: string): Promise<{ status: number; text: string }> {
+  const response = await fetch(`${server.url}/graphql`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: typeof body === 'string' ? body : JSON.stringify(body),
+  });
+  return { status: response.status, text: await response.text() };
+}
+
+/** No answer may carry a statement or its parameters. */
+function expectNoSql(text: string): void {
+  expect(text).not.toMatch(/\bselect\b|\binsert\b|\bupdate\b.*\bset\b|\bfrom "|params:|Failed query/i);
+}
+
+function firstError(text: string): { message: string; extensions: { code?: string; field?: string } } {
+  return (JSON.parse(text) as { errors: { message: string; extensions: { code?: string; field?: string } }[] }).errors[0];
+}
+
+const NO_SUCH_SITE = '00000000-0000-4000-8000-000000000000';
+
+describe('ids, NUL bytes and coercion (issue 17, item 4)', () => {
+  it('refuses a malformed id with 400 BAD_USER_INPUT, literal or variable, and never shows SQL', async () => {
+    for (const body of [
+      { query: '{ site(id: "42") { id } }' },
+      { query: '{ site(id: 42) { id } }' },
+      { query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: '42' } },
+      { query: 'mutation($i: CreateUnitInput!) { u: createUnit(input: $i) { id } }', variables: { i: { siteId: 'does-not-exist', name: 'U', position: 1, facies: 'PEAT' } } },
+    ]) {
+      const { status, text } = await post(body, viewer.token);
+      expect(status, text).toBe(400);
+      expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+      expect(firstError(text).message).toMatch(/not a valid id/);
+      expectNoSql(text);
+    }
+  });
+
+  it('names the variable path at fault', async () => {
+    const { text } = await post({ query: 'mutation($i: CreateUnitInput!) { u: createUnit(input: $i) { id } }', variables: { i: { siteId: '42' } } }, viewer.token);
+    expect(firstError(text).extensions.field).toBe('i.siteId');
+  });
+
+  it('answers a well-formed unknown id NOT_FOUND (control for the refusals above)', async () => {
+    const { status, text } = await post({ query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: NO_SUCH_SITE } }, viewer.token);
+    expect(status).toBe(200);
+    expect(firstError(text)).toMatchObject({ message: 'site not found', extensions: { code: 'NOT_FOUND' } });
+  });
+
+  it('refuses a NUL byte in any string, in variables, literals and JSON values', async () => {
+    for (const body of [
+      { query: 'mutation($i: CreateProjectInput!) { createProject(input: $i) { id } }', variables: { i: { name: 'a\u0000b' } } },
+      { query: 'mutation { createProject(input: { name: "a\\u0000b" }) { id } }' },
+      { query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: `${NO_SUCH_SITE}\u0000` } },
+    ]) {
+      const { status, text } = await post(body, viewer.token);
+      expect(status, text).toBe(400);
+      expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+      expectNoSql(text);
+    }
+  });
+
+  it('answers an unknown enum value in variables 400 BAD_USER_INPUT', async () => {
+    const { status, text } = await post(
+      { query: 'mutation($i: CreateProjectInput!) { createProject(input: $i) { id } }', variables: { i: { name: 'x', tectonicSetting: 'NOPE' } } },
+      viewer.token,
+    );
+    expect(status).toBe(400);
+    expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+    expect(firstError(text).message).toMatch(/NOPE/);
+  });
+
+  it('answers a JSON number beyond double range (1e309) 400 BAD_USER_INPUT', async () => {
+    const body = '{"query":"query($i: CalibrateInput!) { calibrate(input: $i) { medianCalBp } }","variables":{"i":{"c14Age":1e309,"c14Error":30,"curve":"INTCAL20"}}}';
+    const { status, text } = await post(body, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+  });
+});
+
+describe('the cost model (issue 17, item 1)', () => {
+  const calibrations = (n: number, error: number) =>
+    `{ ${Array.from({ length: n }, (_, i) => `c${i}: calibrate(input: { c14Age: 3000, c14Error: ${error}, curve: INTCAL20 }) { medianCalBp density { calBp probability } }`).join(' ')} }`;
+
+  it('refuses twenty aliased calibrations with a huge error before computing any (probe: 59 MB in 3.7 s before)', async () => {
+    const { status, text } = await post({ query: calibrations(20, 1_000_000) }, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text)).toMatchObject({ extensions: { code: 'BAD_USER_INPUT', field: 'query' } });
+    expect(firstError(text).message).toMatch(/calibrate 20 times/);
+    expect(text.length).toBeLessThan(1000);
+  });
+
+  it('still answers a few calibrations in one request (control)', async () => {
+    const { status, text } = await post({ query: calibrations(2, 30) }, viewer.token);
+    expect(status, text).toBe(200);
+    expect(JSON.parse(text).data.c1.medianCalBp).toBeGreaterThan(3000);
+  });
+
+  it('refuses a hundred aliased regional-event checks (probe: 2.3 s before)', async () => {
+    const query = `{ ${Array.from({ length: 100 }, (_, i) => `h${i}: hypothesis(id: "${NO_SUCH_SITE}") { regionalEvents { id } }`).join(' ')} }`;
+    const { status, text } = await post({ query }, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text).message).toMatch(/would cost \d+ units/);
+  });
+
+  it('allows one signIn per request (probe: twenty aliased took 1.4 s of hashing)', async () => {
+    const query = `mutation { ${Array.from({ length: 20 }, (_, i) => `s${i}: signIn(email: "${fixture.emails.VIEWER}", password: "${PASSWORD}") { token }`).join(' ')} }`;
+    const { status, text } = await post({ query });
+    expect(status).toBe(400);
+    expect(firstError(text).message).toMatch(/signIn 20 times; one request may ask for it at most 1 time/);
+  });
+});
