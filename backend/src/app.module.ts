@@ -29,7 +29,7 @@ import { LoadersModule } from './loaders/loaders.module';
 import { RequestLoadersFactory } from './loaders/request-loaders';
 import { EventLadderCache } from './correlation/ladder-cache/event-ladder-cache';
 import { ProjectsModule } from './projects/projects.module';
-import { ProvenanceModule } from './provenance/provenance.module';
+import { ProvenanceApiModule } from './provenance/provenance-api.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
@@ -72,7 +72,7 @@ import { ReleasesModule } from './releases/releases.module';
     HealthModule,
     UsersModule,
     ProjectsModule,
-    ProvenanceModule,
+    ProvenanceApiModule,
     SegmentsModule,
     SitesModule,
     UnitsModule,

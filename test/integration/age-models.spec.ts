@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -51,7 +52,7 @@ async function buildColumn(researcher: GraphqlClient, name: string, withSamples:
 }
 
 async function runInline(id: string) {
-  await server.app.get(AgeModelJob).execute(id);
+  await server.app.get(RunExecutor).execute(server.app.get(AgeModelJob), id);
   return (await clients.VIEWER.ok(RUN, { id })).ageModelRun;
 }
 

@@ -1,4 +1,7 @@
+import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parseRangesCalBp } from '../../backend/src/provenance/result-tables';
+import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
@@ -17,6 +20,8 @@ const ADD_TIE = `mutation($i: AddTieInput!) { addTie(input: $i) { id } }`;
 const REMOVE_TIE = `mutation($id: ID!) { removeTie(id: $id) }`;
 const START_ANALYSIS = `mutation($i: StartRecurrenceAnalysisInput!) { startRecurrenceAnalysis(input: $i) { id } }`;
 const RUN = `query($id: ID!) { ageModelRun(id: $id) { id status stale staleReasons { message inputKind inputId inputName via } } }`;
+const RUN_EVENTS = `query($id: ID!) { ageModelRun(id: $id) { seed events { eventHorizon { id name } medianCalBp hpd68 { olderCalBp youngerCalBp } hpd95 { olderCalBp youngerCalBp } } } }`;
+const REGIONAL = `query($id: ID!) { hypothesis(id: $id) { version regionalEvents { members { id } combinedMedianCalBp combinedHpd95 { olderCalBp youngerCalBp } concordance } } }`;
 const ANALYSIS = `query($id: ID!) { recurrenceAnalysis(id: $id) { id status stale
   staleReasons { message inputKind inputId inputName via }
   inputs { ageModelRuns { id } jointRun { id } hypothesis { id } hypothesisVersion recorded { kind id name revision } } } }`;
@@ -147,5 +152,118 @@ describe('staleness downstream', () => {
   it('hides a run and an analysis from outsiders', async () => {
     expect((await clients.OUTSIDER.errorOf(ANALYSIS, { id: analyses.segment })).code).toBe('NOT_FOUND');
     expect((await clients.OUTSIDER.errorOf(RUN, { id: site.A.run })).code).toBe('NOT_FOUND');
+  });
+});
+
+/** GET with a client's bearer token. */
+async function download(client: GraphqlClient, path: string): Promise<Response> {
+  return fetch(`${server.url}${path}`, { headers: client.token ? { authorization: `Bearer ${client.token}` } : {} });
+}
+
+/** A table download split into its inputs (field -> value) and its rows under the title line. */
+function readTableCsv(text: string, title: string) {
+  const rows = Papa.parse<string[]>(text, { skipEmptyLines: false }).data;
+  const inputs = new Map<string, string>();
+  const start = rows.findIndex((r) => r[0] === 'inputs');
+  let i = start + 2;
+  for (; rows[i] && rows[i].length === 2; i++) inputs.set(rows[i][0], rows[i][1]);
+  const at = rows.findIndex((r) => r[0] === title && r.length === 1);
+  const header = rows[at + 1];
+  const body = rows.slice(at + 2).filter((r) => r.length === header.length);
+  return { inputs, body: body.map((r) => Object.fromEntries(header.map((h, k) => [h, r[k]]))) };
+}
+
+const pairs = (ranges: { olderCalBp: number; youngerCalBp: number }[]) => ranges.map((r) => [r.olderCalBp, r.youngerCalBp]);
+
+describe('exports', () => {
+  it('round-trips a run\'s event ages through CSV and JSON, naming site, run and seed', async () => {
+    const { ageModelRun } = await clients.VIEWER.ok(RUN_EVENTS, { id: site.B.run });
+    const csv = await download(clients.VIEWER, `/api/age-model-runs/${site.B.run}/events.csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get('content-type')).toContain('text/csv');
+    const { inputs, body } = readTableCsv(await csv.text(), 'event ages');
+    expect(inputs.get('site')).toBe('Wren Core');
+    expect(inputs.get('age model run id')).toBe(site.B.run);
+    expect(Number(inputs.get('seed'))).toBe(ageModelRun.seed);
+    expect(body).toHaveLength(3);
+    for (const event of ageModelRun.events) {
+      const row = body.find((r) => r['event horizon id'] === event.eventHorizon.id)!;
+      expect(row.site).toBe('Wren Core');
+      expect(row.event).toBe(event.eventHorizon.name);
+      expect(Number(row['median (cal BP)'])).toBe(event.medianCalBp);
+      expect(parseRangesCalBp(row['68.3 % range (cal BP)'])).toEqual(pairs(event.hpd68));
+      expect(parseRangesCalBp(row['95.4 % range (cal BP)'])).toEqual(pairs(event.hpd95));
+      // CE/BCE: 1950 - cal BP, with no year 0 (1 BCE is astronomical year 0) [common practice].
+      const year = 1950 - Math.round(event.medianCalBp);
+      expect(row['median (CE/BCE)']).toBe(year > 0 ? `${year} CE` : `${1 - year} BCE`);
+    }
+    const json = await (await download(clients.VIEWER, `/api/age-model-runs/${site.B.run}/events.json`)).json();
+    expect(json.inputs).toContainEqual({ field: 'seed', value: ageModelRun.seed });
+    for (const event of ageModelRun.events) {
+      const row = json.rows.find((r: { eventHorizonId: string }) => r.eventHorizonId === event.eventHorizon.id);
+      expect(row.medianCalBp).toBe(event.medianCalBp);
+      expect(pairs(row.hpd95)).toEqual(pairs(event.hpd95));
+    }
+  });
+
+  it('round-trips a hypothesis\' regional events with their checks', async () => {
+    const { hypothesis } = await clients.VIEWER.ok(REGIONAL, { id: hypothesisId });
+    const response = await download(clients.ANALYST, `/api/hypotheses/${hypothesisId}/regional-events.csv`);
+    expect(response.status).toBe(200);
+    const { inputs, body } = readTableCsv(await response.text(), 'regional events');
+    expect(inputs.get('hypothesis')).toBe('Invented one-to-one');
+    expect(Number(inputs.get('hypothesis version'))).toBe(hypothesis.version);
+    expect(inputs.get('age model run of Wren Core')).toContain(site.B.run);
+    expect(body).toHaveLength(hypothesis.regionalEvents.length);
+    for (const [i, event] of hypothesis.regionalEvents.entries()) {
+      const row = body[i];
+      expect(row['member event horizon ids'].split(' ').sort()).toEqual(event.members.map((m: { id: string }) => m.id).sort());
+      if (event.combinedMedianCalBp === null) continue;
+      expect(Number(row['median (cal BP)'])).toBe(event.combinedMedianCalBp);
+      expect(parseRangesCalBp(row['95.4 % range (cal BP)'])).toEqual(pairs(event.combinedHpd95));
+      expect(row['age concordance'] === '' ? null : Number(row['age concordance'])).toBe(event.concordance);
+    }
+    expect(body.some((r) => r['members (site: event)'].includes('Tarn Flat: A-E'))).toBe(true);
+  });
+
+  it('gives an analysis\' event table with its caution, inputs and seed', async () => {
+    const response = await download(clients.VIEWER, `/api/recurrence-analyses/${analyses.segment}/events.csv`);
+    const text = await response.text();
+    expect(text.startsWith(RECURRENCE_CAUTION)).toBe(true);
+    const { inputs, body } = readTableCsv(text, 'analysis events');
+    expect(Number(inputs.get('seed'))).toBe(5);
+    expect(inputs.get('hypothesis')).toContain('Invented one-to-one version 4');
+    expect(body.length).toBeGreaterThanOrEqual(3);
+    const medians = body.map((r) => Number(r['median (cal BP)']));
+    expect(medians).toEqual([...medians].sort((a, b) => a - b));
+  });
+
+  it('answers 404 to outsiders and 401 without a token, for every table', async () => {
+    for (const path of [
+      `/api/age-model-runs/${site.A.run}/events.csv`,
+      `/api/hypotheses/${hypothesisId}/regional-events.csv`,
+      `/api/recurrence-analyses/${analyses.segment}/events.json`,
+    ]) {
+      expect((await download(clients.OUTSIDER, path)).status).toBe(404);
+      expect((await download(new GraphqlClient(server.url), path)).status).toBe(401);
+    }
+    expect((await download(clients.VIEWER, '/api/age-model-runs/not-a-uuid/events.csv')).status).toBe(404);
+  });
+
+  it('downloads a release as one bundle: frozen data, pinned analyses with their event tables and the runs they used', async () => {
+    const { createRelease } = await clients.ADMIN.ok(`mutation($i: CreateReleaseInput!) { createRelease(input: $i) { id number } }`, {
+      i: { projectId: fixture.projectId, note: 'Invented data set for the provenance spec' },
+    });
+    const pinned = await runAnalysis({ siteId: site.C.id, releaseId: createRelease.id });
+    const response = await download(clients.VIEWER, `/api/releases/${createRelease.id}/bundle.json`);
+    expect(response.status).toBe(200);
+    const bundle = await response.json();
+    expect(bundle.release).toMatchObject({ id: createRelease.id, number: createRelease.number });
+    expect(bundle.data.sites.map((s: { name: string }) => s.name).sort()).toEqual(['Sedge Bank', 'Tarn Flat', 'Wren Core']);
+    expect(bundle.recurrenceAnalyses).toHaveLength(1);
+    expect(bundle.recurrenceAnalyses[0].results.analysis.id).toBe(pinned);
+    expect(bundle.recurrenceAnalyses[0].events.inputs).toContainEqual({ field: 'seed', value: 5 });
+    expect(bundle.ageModelRuns.map((t: { inputs: { field: string; value: unknown }[] }) => t.inputs.find((i) => i.field === 'age model run id')?.value)).toEqual([site.C.run]);
+    expect((await download(clients.OUTSIDER, `/api/releases/${createRelease.id}/bundle.json`)).status).toBe(404);
   });
 });

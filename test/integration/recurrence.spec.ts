@@ -3,11 +3,12 @@ import { storeDensity, type StoredAgeModelResults } from '../../backend/src/age-
 import { normalDensity, summarise } from '../../backend/src/chronology/common/density';
 import { SeededRandom } from '../../backend/src/chronology/common/random';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
-import { AgeModelRunsRepository } from '../../backend/src/age-models/age-model-runs.repository';
 import { JobQueueService } from '../../backend/src/jobs/job-queue.service';
 import { JobReaper } from '../../backend/src/jobs/job-reaper';
+import { JobRegistry } from '../../backend/src/jobs/job-registry';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
+import { RunsRepository } from '../../backend/src/jobs/runs.repository';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
-import { RecurrenceRepository } from '../../backend/src/recurrence/recurrence.repository';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -75,7 +76,7 @@ async function writeSucceededRun(siteId: string, horizonIds: string[], ages: rea
 
 async function runAnalysis(input: Record<string, unknown>, client = clients.ANALYST) {
   const { startRecurrenceAnalysis } = await client.ok(START, { i: input });
-  await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+  await server.app.get(RunExecutor).execute(server.app.get(RecurrenceJob), startRecurrenceAnalysis.id);
   return (await client.ok(ANALYSIS, { id: startRecurrenceAnalysis.id })).recurrenceAnalysis;
 }
 
@@ -434,7 +435,7 @@ describe('cancelRecurrenceAnalysis', () => {
     expect((await clients.VIEWER.errorOf(CANCEL, { id: startRecurrenceAnalysis.id })).code).toBe('FORBIDDEN');
     const { cancelRecurrenceAnalysis } = await clients.ANALYST.ok(CANCEL, { id: startRecurrenceAnalysis.id });
     expect(cancelRecurrenceAnalysis.status).toBe('CANCELLED');
-    await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+    await server.app.get(RunExecutor).execute(server.app.get(RecurrenceJob), startRecurrenceAnalysis.id);
     const { recurrenceAnalysis } = await clients.ANALYST.ok(ANALYSIS, { id: startRecurrenceAnalysis.id });
     expect(recurrenceAnalysis).toMatchObject({ status: 'CANCELLED', intervals: [], models: [], meanRecurrence: null });
     expect((await clients.ANALYST.errorOf(CANCEL, { id: startRecurrenceAnalysis.id })).code).toBe('BAD_USER_INPUT');
@@ -443,7 +444,7 @@ describe('cancelRecurrenceAnalysis', () => {
 
 describe('the job reaper', () => {
   it('queues again a recurrence analysis whose worker went silent, and gives it up after two attempts', async () => {
-    const reaper = new JobReaper(server.app.get(AgeModelRunsRepository), server.app.get(RecurrenceRepository), server.app.get(JobQueueService));
+    const reaper = new JobReaper(server.app.get(JobRegistry), server.app.get(RunsRepository), server.app.get(JobQueueService));
     const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START, { i: { siteId: siteIds.A, draws: 200 } });
     const id = startRecurrenceAnalysis.id;
     const silence = (attempts: number) =>

@@ -9,12 +9,13 @@ import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
 import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
-import { QUEUES, JobQueueService } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { SamplesRepository } from '../samples/samples.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
+import { AgeModelJob } from './age-model.job';
 import { storeInput } from './age-model-results';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
@@ -32,6 +33,7 @@ export class AgeModelsService {
     private readonly samples: SamplesRepository,
     private readonly calibration: CalibrationService,
     private readonly jobs: JobQueueService,
+    private readonly ageModelJob: AgeModelJob,
     private readonly access: AccessService,
     private readonly audit: AuditService,
   ) {}
@@ -71,7 +73,7 @@ export class AgeModelsService {
       });
       return row;
     });
-    await this.jobs.send(QUEUES.ageModel, { runId: run.id });
+    await this.jobs.send(this.ageModelJob, { runId: run.id });
     return run;
   }
 

@@ -20,12 +20,13 @@ import {
 } from '../chronology/recurrence';
 import { badInput, conflict, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { SegmentRow } from '../segments/segments.repository';
 import { SegmentsService } from '../segments/segments.service';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { RecurrenceJob } from './recurrence.job';
 import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
 import { RecurrenceExport, recurrenceExport, recurrenceExportCsv, RecurrenceExportHeader } from './recurrence-export';
@@ -72,6 +73,7 @@ export class RecurrenceService {
     private readonly latestRuns: LatestRunsService,
     private readonly ageModelRuns: AgeModelRunsRepository,
     private readonly jobs: JobQueueService,
+    private readonly recurrenceJob: RecurrenceJob,
     private readonly access: AccessService,
     private readonly audit: AuditService,
     private readonly releases: ReleasesService,
@@ -206,7 +208,7 @@ export class RecurrenceService {
       ]);
       return row;
     });
-    await this.jobs.send(QUEUES.recurrence, { runId: analysis.id });
+    await this.jobs.send(this.recurrenceJob, { runId: analysis.id });
     return this.view(analysis);
   }
 
