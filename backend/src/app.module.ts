@@ -23,6 +23,7 @@ import { DatabaseModule } from './database/database.module';
 import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
+import { CoreLogsModule } from './core-logs/core-logs.module';
 import { CorrelationModule } from './correlation/correlation.module';
 import { JobsModule } from './jobs/jobs.module';
 import { LoadersModule } from './loaders/loaders.module';
@@ -85,6 +86,7 @@ import { ReleasesModule } from './releases/releases.module';
     AgeModelsModule,
     RecurrenceModule,
     CorrelationModule,
+    CoreLogsModule,
     AttachmentsModule,
     ExchangeModule,
     ReleasesModule,

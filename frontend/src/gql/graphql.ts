@@ -183,6 +183,47 @@ export type ChiSquareTest = {
   t: Scalars['Float']['output'];
 };
 
+/** A physical-property log of a core (magnetic susceptibility, density, CT number, ...). */
+export type CoreLog = {
+  __typename?: 'CoreLog';
+  baseDepthM: Scalars['Float']['output'];
+  /** Channel names in sheet order. */
+  channels: Array<Scalars['String']['output']>;
+  createdAt: Scalars['DateTime']['output'];
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  /** Number of depth rows stored. */
+  rowCount: Scalars['Int']['output'];
+  site: Site;
+  /** Depth of the first and last rows (m below the core top). */
+  topDepthM: Scalars['Float']['output'];
+  /**
+   * Channels for drawing, each at most maxPoints (2-2000) block means; all channels unless some
+   * are named.
+   */
+  traces: Array<CoreLogTrace>;
+  /** The unit of each channel, in the same order. */
+  units: Array<Scalars['String']['output']>;
+};
+
+
+/** A physical-property log of a core (magnetic susceptibility, density, CT number, ...). */
+export type CoreLogTracesArgs = {
+  channels?: InputMaybe<Array<Scalars['String']['input']>>;
+  maxPoints?: Scalars['Int']['input'];
+};
+
+/** One channel of a core log thinned for drawing: block means over equal depth bins. */
+export type CoreLogTrace = {
+  __typename?: 'CoreLogTrace';
+  channel: Scalars['String']['output'];
+  /** Depths (m below the core top) of the drawn points, increasing. */
+  depthsM: Array<Scalars['Float']['output']>;
+  unit: Scalars['String']['output'];
+  /** Readings at those depths (block means), in the channel's unit. */
+  values: Array<Scalars['Float']['output']>;
+};
+
 export type CreateEventHorizonInput = {
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name: Scalars['String']['input'];
@@ -563,6 +604,8 @@ export type Mutation = {
   createSite: Site;
   createUnit: Unit;
   deleteAttachment: Scalars['Boolean']['output'];
+  /** Remove a core log (RESEARCHER, ADMIN). */
+  deleteCoreLog: Scalars['Boolean']['output'];
   deleteEventHorizon: Scalars['Boolean']['output'];
   deleteHypothesis: Scalars['Boolean']['output'];
   deleteSample: Scalars['Boolean']['output'];
@@ -590,6 +633,8 @@ export type Mutation = {
   updateSegment: Segment;
   updateSite: Site;
   updateUnit: Unit;
+  /** Check a core log sheet row by row and store it on its core (RESEARCHER, ADMIN). */
+  uploadCoreLog: CoreLog;
 };
 
 
@@ -654,6 +699,11 @@ export type MutationCreateUnitArgs = {
 
 
 export type MutationDeleteAttachmentArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationDeleteCoreLogArgs = {
   id: Scalars['ID']['input'];
 };
 
@@ -788,6 +838,11 @@ export type MutationUpdateUnitArgs = {
   id: Scalars['ID']['input'];
   input: UpdateUnitInput;
   version: Scalars['Int']['input'];
+};
+
+
+export type MutationUploadCoreLogArgs = {
+  input: UploadCoreLogInput;
 };
 
 /**
@@ -1378,6 +1433,8 @@ export type Site = {
   ageModelRuns: Array<AgeModelRun>;
   alongStrikeKm: Scalars['Float']['output'];
   attachments: Array<Attachment>;
+  /** Physical-property logs of this core, by name. */
+  coreLogs: Array<CoreLog>;
   /** Ground elevation (m above sea level) for land sites. */
   elevationM?: Maybe<Scalars['Float']['output']>;
   /** Event horizons, oldest first. */
@@ -1540,6 +1597,21 @@ export type UpdateUnitInput = {
   notes?: InputMaybe<Scalars['String']['input']>;
   position?: InputMaybe<Scalars['Int']['input']>;
   topDepthM?: InputMaybe<Scalars['Float']['input']>;
+};
+
+export type UploadCoreLogInput = {
+  /**
+   * CSV: a header row "depth (m)" then one "name (unit)" per channel, e.g.
+   * "depth (m),magnetic susceptibility (SI 1e-5),density (g/cm3)"; one row per depth, depths in
+   * metres below the core top, strictly increasing; an empty cell is no reading. At most 20,000
+   * rows and 16 channels. Checked row by row: any problem refuses the sheet (BAD_USER_INPUT on
+   * csv with extensions.problems, the first 50 by row, and extensions.problemCount).
+   */
+  csv: Scalars['String']['input'];
+  /** The log's name, unique within the core (e.g. "MSCL 2026"). */
+  name: Scalars['String']['input'];
+  /** A CORE or LAKE site. */
+  siteId: Scalars['ID']['input'];
 };
 
 export type User = {
