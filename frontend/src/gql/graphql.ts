@@ -561,15 +561,31 @@ export type ModelCurves = {
   survival: Array<CurvePoint>;
 };
 
+/** One renewal model in a recurrence analysis. */
 export type ModelResult = {
   __typename?: 'ModelResult';
+  /** AIC of the fit to the median event ages. */
   aic: Scalars['Float']['output'];
+  /** AICc (Hurvich & Tsai 1989), n = intervals with the open one; null when the record is too short (n <= k + 1). */
+  aicc?: Maybe<Scalars['Float']['output']>;
+  /** Akaike weight from AICc (from AIC only when no model has an AICc). */
   akaikeWeight: Scalars['Float']['output'];
+  /** Maximum-likelihood aperiodicity of the median event ages. */
   aperiodicity: Scalars['Float']['output'];
+  /** Aperiodicity over draws, with parameter uncertainty and from dating alone; null in older analyses. */
+  aperiodicityRange?: Maybe<ParameterRange>;
   deltaAic: Scalars['Float']['output'];
+  /** AICc minus the lowest AICc. */
+  deltaAicc?: Maybe<Scalars['Float']['output']>;
   logLikelihood: Scalars['Float']['output'];
+  /** Mean recurrence over draws, with parameter uncertainty and from dating alone; null in older analyses. */
+  meanRecurrenceRange?: Maybe<ParameterRange>;
+  /** Maximum-likelihood mean recurrence of the median event ages, years. */
   meanRecurrenceYears: Scalars['Float']['output'];
   model: RenewalModel;
+  /** Share of draws in which this model has the lowest AICc. */
+  preferredShare?: Maybe<Scalars['Float']['output']>;
+  /** Window probabilities: headline ranges with parameter uncertainty, dating-only ranges beside. */
   probabilities: Array<WindowProbability>;
 };
 
@@ -888,6 +904,16 @@ export type PageInfo = {
   hasNextPage: Scalars['Boolean']['output'];
 };
 
+/** A parameter's range over draws with parameter uncertainty (headline) and from dating alone. */
+export type ParameterRange = {
+  __typename?: 'ParameterRange';
+  datingOnlyHigh95?: Maybe<Scalars['Float']['output']>;
+  datingOnlyLow95?: Maybe<Scalars['Float']['output']>;
+  high95: Scalars['Float']['output'];
+  low95: Scalars['Float']['output'];
+  median: Scalars['Float']['output'];
+};
+
 /** A study: all data belongs to exactly one project. */
 export type Project = {
   __typename?: 'Project';
@@ -936,6 +962,8 @@ export type Query = {
   refreshPlan: RefreshPlan;
   release: Release;
   releaseDiff: ReleaseDiff;
+  /** Posterior ranges of one renewal model's parameters and window probabilities for intervals known exactly (no project data; 4,000 parameter draws). */
+  renewalForecast: RenewalForecast;
   renewalProbability: RenewalProbability;
   sample: Sample;
   segment: Segment;
@@ -1011,6 +1039,11 @@ export type QueryReleaseDiffArgs = {
 };
 
 
+export type QueryRenewalForecastArgs = {
+  input: RenewalForecastInput;
+};
+
+
 export type QueryRenewalProbabilityArgs = {
   input: RenewalProbabilityInput;
 };
@@ -1072,9 +1105,13 @@ export type RecurrenceAnalysis = {
   meanRecurrence?: Maybe<RangeEstimate>;
   medianRecurrence?: Maybe<RangeEstimate>;
   message?: Maybe<Scalars['String']['output']>;
+  /** Per draw, the models' probabilities weighted by that draw's Akaike weights from AICc (model averaging, Burnham & Anderson 2002); empty in older analyses. */
+  modelAveraged: Array<WindowProbability>;
   modelComparisonNote?: Maybe<Scalars['String']['output']>;
   models: Array<ModelResult>;
   openInterval?: Maybe<RangeEstimate>;
+  /** How the renewal parameters were drawn and under which priors; null in older analyses. */
+  parameterNote?: Maybe<Scalars['String']['output']>;
   poisson: Array<WindowProbability>;
   progress: Scalars['Float']['output'];
   project: Project;
@@ -1300,10 +1337,49 @@ export type ReleasedUnit = {
 export type RenewalFit = {
   __typename?: 'RenewalFit';
   aic: Scalars['Float']['output'];
+  /** AIC with the small-sample correction of Hurvich & Tsai (1989), n = intervals with the open one; null when n <= k + 1. */
+  aicc?: Maybe<Scalars['Float']['output']>;
   aperiodicity: Scalars['Float']['output'];
   logLikelihood: Scalars['Float']['output'];
   meanRecurrenceYears: Scalars['Float']['output'];
   model: RenewalModel;
+};
+
+/** Posterior ranges of a renewal model given exactly known intervals. */
+export type RenewalForecast = {
+  __typename?: 'RenewalForecast';
+  /** Aperiodicity (coefficient of variation of the interval); 1 for POISSON. */
+  aperiodicity: RangeEstimate;
+  /** Draws taken by importance resampling because the open interval is far beyond the record (0 normally). */
+  approximateDraws: Scalars['Int']['output'];
+  /** The caution every recurrence figure carries. */
+  caution: Scalars['String']['output'];
+  /** Number of parameter draws. */
+  draws: Scalars['Int']['output'];
+  /** Mean recurrence, years: posterior median and central 95 % range. */
+  meanRecurrence: RangeEstimate;
+  model: RenewalModel;
+  /** The priors and how the draws were made. */
+  priorNote: Scalars['String']['output'];
+  /** Conditional probability of the next event within each window, given the open interval. */
+  probabilities: Array<WindowProbability>;
+};
+
+/**
+ * A stateless forecast: one renewal model's parameters drawn from their posterior given exactly known
+ * intervals and the censored open interval (reference priors, aperiodicity below 5; the priors are in
+ * `priorNote`), and each draw's conditional probability of the next event in each window.
+ */
+export type RenewalForecastInput = {
+  /** Closed inter-event times, years (2 to 1,000 values, each up to 1,000,000). */
+  intervalsYears: Array<Scalars['Float']['input']>;
+  model: RenewalModel;
+  /** Years since the last event at the start of the windows (right-censored). */
+  openIntervalYears: Scalars['Float']['input'];
+  /** Seed of the parameter draws (default 1): the same input and seed give the same answer. */
+  seed?: InputMaybe<Scalars['Int']['input']>;
+  /** Forecast window lengths, years (1 to 10). */
+  windowsYears: Array<Scalars['Float']['input']>;
 };
 
 /** Renewal model of earthquake recurrence. */
@@ -1644,8 +1720,19 @@ export type User = {
   operator: Scalars['Boolean']['output'];
 };
 
+/**
+ * Probability of the next event within a window: median and central 95 % range over draws. In a
+ * recurrence analysis the headline range carries both dating and renewal-parameter uncertainty; the
+ * dating-only range (each age draw's maximum-likelihood fit plugged in) is beside it.
+ */
 export type WindowProbability = {
   __typename?: 'WindowProbability';
+  /** 97.5 % point with dating uncertainty only. */
+  datingOnlyHigh95?: Maybe<Scalars['Float']['output']>;
+  /** 2.5 % point with dating uncertainty only. */
+  datingOnlyLow95?: Maybe<Scalars['Float']['output']>;
+  /** Median with dating uncertainty only (plug-in fits); null where not computed (stateless forecast, older analyses). */
+  datingOnlyMedian?: Maybe<Scalars['Float']['output']>;
   high95: Scalars['Float']['output'];
   low95: Scalars['Float']['output'];
   median: Scalars['Float']['output'];
@@ -1863,7 +1950,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }> }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -2757,17 +2844,44 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
       model
       aic
       deltaAic
+      aicc
+      deltaAicc
       akaikeWeight
       meanRecurrenceYears
       aperiodicity
       logLikelihood
+      meanRecurrenceRange {
+        median
+        low95
+        high95
+        datingOnlyLow95
+        datingOnlyHigh95
+      }
+      aperiodicityRange {
+        median
+        low95
+        high95
+        datingOnlyLow95
+        datingOnlyHigh95
+      }
       probabilities {
         windowYears
         median
         low95
         high95
+        datingOnlyLow95
+        datingOnlyHigh95
       }
     }
+    modelAveraged {
+      windowYears
+      median
+      low95
+      high95
+      datingOnlyLow95
+      datingOnlyHigh95
+    }
+    parameterNote
     modelComparisonNote
     curves {
       model
