@@ -671,7 +671,7 @@ function diagnose(
     maxRhat: worstRhat.rhat,
     minEss: worstEss.ess,
     message,
-    acceptance: { blockShift: rate, boundaries: rate },
+    acceptance: { blockShift: rate, boundaries: rate, paths: rate },
     keptDrawsPerChain,
   };
 }
