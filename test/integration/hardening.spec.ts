@@ -35,6 +35,7 @@ function firstError(text: string): { message: string; extensions: { code?: strin
   return (JSON.parse(text) as { errors: { message: string; extensions: { code?: string; field?: string } }[] }).errors[0];
 }
 
+const runTag = Date.now().toString(36);
 const NO_SUCH_SITE = '00000000-0000-4000-8000-000000000000';
 
 describe('ids, NUL bytes and coercion (issue 17, item 4)', () => {
@@ -228,7 +229,7 @@ describe('sign-in throttling instead of lockout (issue 17, item 3)', () => {
 
   it('after twelve wrong passwords for unknown addresses from one client, a real account signs in from it', async () => {
     const codes: string[] = [];
-    for (let i = 0; i < 12; i++) codes.push(await signInFrom(proxied.url, '203.0.113.7', `nobody-${i % 3}@unknown.test`, 'wrong-password'));
+    for (let i = 0; i < 12; i++) codes.push(await signInFrom(proxied.url, '203.0.113.7', `nobody-${i % 3}-${runTag}@unknown.test`, 'wrong-password'));
     expect(codes.filter((code) => code === 'UNAUTHENTICATED').length).toBeGreaterThanOrEqual(12 - 3 * 2);
     expect(await signInFrom(proxied.url, '203.0.113.7', fixture.emails.CORRELATOR, PASSWORD)).toBe('OK');
   });
