@@ -2,15 +2,15 @@
  * The hemipelagic depth model of a turbidite core (issue 12, item 7).
  *
  * Ages follow event-free depth z (true depth with every event bed above removed; `core-depth.ts`).
- * Event-free depth is cut into sections of thickness D; section i accumulated at x_i years per
- * metre. Following the autoregressive gamma model of Blaauw & Christen (2011, "Flexible
+ * The mud between consecutive beds is one interval, cut into sections of at most 10 cm; section i
+ * accumulated at x_i years per metre. Following the autoregressive gamma model of Blaauw & Christen (2011, "Flexible
  * paleoclimate age-depth models using an autoregressive gamma process", Bayesian Analysis
  * 6(3):457-474):
  *
- *   x_1 = a_1,   x_i = w x_(i-1) + (1 - w) a_i,   a_i ~ Gamma(shape k, mean m),   w = r^(D / 1 m),
+ *   x_1 = a_1,   x_i = w x_(i-1) + (1 - w) a_i,   a_i ~ Gamma(shape k, mean m),   w = r^(s_i / 10 cm),
  *
- * so each section's rate remembers its neighbour's with weight w, and r is the memory across one
- * metre with a Beta prior. The age at event-free depth z is
+ * so each section's rate remembers its neighbour's with weight w, s_i the distance between their
+ * centres and r the memory across 10 cm with a Beta prior. The age at event-free depth z is
  *
  *   age(z) = top + sum_i x_i |section i within [0, z]| + sum_(contacts c above z) E_c x_(c),
  *
@@ -53,49 +53,55 @@ import { coreDepthScale, CoreDepthScale, hemipelagicProblems } from './core-dept
 import { GridLevelLikelihoods, LevelLikelihoods } from './levels';
 
 export interface HemipelagicSettings {
-  /** Thickness (m) of the event-free depth sections that each carry one accumulation rate. */
+  /**
+   * Thickest section (m of event-free depth) that carries one accumulation rate: each mud interval
+   * between beds is one section, or is cut into equal sections no thicker than this.
+   */
   readonly sectionThicknessM: number;
   /** Most sections: a longer core gets thicker sections, which bounds the cost of a run. */
   readonly maxSections: number;
+  /** The depth (m of event-free depth) across which the memory r is stated. */
+  readonly memoryDepthM: number;
   /** Prior mean accumulation rate (cm per thousand years); null measures it from the dated levels. */
   readonly rateMeanCmPerKyr: number | null;
   /** Shape k of the gamma prior on each section's rate innovation. */
   readonly rateShape: number;
-  /** Beta(a, b) prior on the memory r across one metre of event-free depth. */
+  /** Beta(a, b) prior on the memory r across `memoryDepthM` of event-free depth. */
   readonly memoryPriorA: number;
   readonly memoryPriorB: number;
   /** Shape of the gamma prior on each eroded thickness, whose mean is the researcher's estimate. */
   readonly erosionShape: number;
-  /** Scale (sd, years) of an outlying level's unknown age offset. */
-  readonly outlierOffsetScaleYears: number;
   /** Spacing (m of true depth) of the age-depth curve's points (contacts are added). */
   readonly ageDepthStepM: number;
 }
 
 /**
  * Our defaults, with why:
- * - sections of 5 cm: the age-depth curve is reported every 5 cm, and 5 cm of mud is roughly
- *   100-1,000 years at 5-40 cm/kyr, finer than any core's dating; at most 120 sections bound the cost;
+ * - a rate per mud interval between beds, cut into sections of at most 10 cm: between two beds the
+ *   mud is one depositional episode, and 10 cm is some 250-2,000 years at 5-40 cm/kyr, as fine as a
+ *   core's few dated levels can resolve; at most 120 sections bound the cost;
  * - rate shape 2: a gamma of shape 2 puts 90 % of an innovation between 0.18 and 2.4 times its
  *   mean, covering a factor of eight (the 5-40 cm/kyr spread of active margins) about the measured
  *   mean while keeping rates away from zero;
- * - memory Beta(2, 2) per metre: centred on 0.5, excluding the degenerate ends (no memory, or
- *   rates fixed down the core), weak enough for the dates to decide;
+ * - memory Beta(2, 2) across 10 cm: centred on 0.5, so neighbouring intervals (about 10 cm apart)
+ *   share about half their rate while rates a metre apart are free, excluding the degenerate ends
+ *   (no memory, or one rate for the whole core); a few dated levels cannot learn the memory, so
+ *   this prior sets how far rates may wander between dated levels: the stationary spread of a
+ *   section's rate is then about 0.4 of the mean, the size of the interval-to-interval changes
+ *   of hemipelagic rates [common practice, stated as our assumption];
  * - erosion shape 4: a coefficient of variation of 0.5 about the estimate, as a logged scour
- *   depth is a judgement good to about a factor of two;
- * - outlier offsets of sd 1,000 years: broad against the few hundred years of a 14C age's
- *   spread, so an outlier's pull is small, yet proper, so the outlier probability does not depend
- *   on an arbitrary window.
+ *   depth is a judgement good to about a factor of two.
+ * Outliers take the ordering model's prior and shift scale (`AgeModelSettings`).
  */
 export const DEFAULT_HEMIPELAGIC_SETTINGS: HemipelagicSettings = {
-  sectionThicknessM: 0.05,
+  sectionThicknessM: 0.1,
   maxSections: 120,
+  memoryDepthM: 0.1,
   rateMeanCmPerKyr: null,
   rateShape: 2,
   memoryPriorA: 2,
   memoryPriorB: 2,
   erosionShape: 4,
-  outlierOffsetScaleYears: 1000,
   ageDepthStepM: 0.05,
 };
 
@@ -155,7 +161,12 @@ interface Probe {
 
 interface Structure {
   readonly scale: CoreDepthScale;
-  readonly sectionM: number;
+  /** Event-free depth of each section's top, and one more for the base (sections + 1 values). */
+  readonly sectionTops: Float64Array;
+  /** Thickness of each section (m). */
+  readonly thickness: Float64Array;
+  /** Distance between the centres of section i - 1 and i (m); 0 for the first. */
+  readonly spacing: Float64Array;
   readonly sections: number;
   /** Gap contacts top down: section index and the estimate. */
   readonly gaps: readonly { section: number; estimateM: number; unitId: string }[];
@@ -165,20 +176,56 @@ interface Structure {
   readonly curve: readonly { depthM: number; eventFreeDepthM: number; probe: Probe }[];
 }
 
-function probeAt(eventFreeDepthM: number, gapsAbove: number, sectionM: number, sections: number): Probe {
-  const section = Math.min(sections - 1, Math.max(0, Math.floor(eventFreeDepthM / sectionM)));
-  return { section, within: Math.max(0, eventFreeDepthM - section * sectionM), gapsAbove };
+/** The section holding an event-free depth (a section's top belongs to it), and the depth within it. */
+function probeAt(eventFreeDepthM: number, gapsAbove: number, sectionTops: Float64Array): Probe {
+  let lo = 0;
+  let hi = sectionTops.length - 2;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (sectionTops[mid] <= eventFreeDepthM + 1e-9) lo = mid;
+    else hi = mid - 1;
+  }
+  return { section: lo, within: Math.max(0, eventFreeDepthM - sectionTops[lo]), gapsAbove };
+}
+
+/**
+ * Sections of event-free depth: the mud between consecutive beds (and above the first and below
+ * the last) is one interval, cut into equal sections no thicker than the setting (thicker when the
+ * core would need more than `maxSections`).
+ */
+function sectionsOf(scale: CoreDepthScale, settings: HemipelagicSettings): Float64Array {
+  const length = Math.max(scale.eventFreeLengthM, 1e-3);
+  const cuts = [0, ...scale.beds.map((b) => scale.eventFreeDepth(b.topDepthM)), length]
+    .filter((z, i, all) => i === 0 || z - all[i - 1] > 1e-6)
+    .filter((z) => z <= length);
+  if (cuts[cuts.length - 1] < length - 1e-6) cuts.push(length);
+  let thickest = settings.sectionThicknessM;
+  const count = (limit: number) => cuts.slice(1).reduce((n, z, i) => n + Math.max(1, Math.ceil((z - cuts[i]) / limit - 1e-9)), 0);
+  while (count(thickest) > settings.maxSections) thickest *= 1.25;
+  const tops: number[] = [];
+  for (let i = 1; i < cuts.length; i++) {
+    const pieces = Math.max(1, Math.ceil((cuts[i] - cuts[i - 1]) / thickest - 1e-9));
+    for (let k = 0; k < pieces; k++) tops.push(cuts[i - 1] + ((cuts[i] - cuts[i - 1]) * k) / pieces);
+  }
+  tops.push(length);
+  return Float64Array.from(tops);
 }
 
 function buildStructure(input: AgeModelInput, settings: HemipelagicSettings): Structure {
   const scale = coreDepthScale(input.units);
-  const length = Math.max(scale.eventFreeLengthM, 1e-3);
-  const sectionM = Math.max(settings.sectionThicknessM, length / settings.maxSections);
-  const sections = Math.max(1, Math.ceil(length / sectionM - 1e-9));
+  const sectionTops = sectionsOf(scale, settings);
+  const sections = sectionTops.length - 1;
+  const thickness = new Float64Array(sections);
+  const spacing = new Float64Array(sections);
+  for (let i = 0; i < sections; i++) {
+    thickness[i] = sectionTops[i + 1] - sectionTops[i];
+    if (i > 0) spacing[i] = (thickness[i - 1] + thickness[i]) / 2;
+  }
   const unitsById = new Map(input.units.map((u) => [u.id, u]));
   const gapContacts = scale.contacts.filter((c) => c.erosionEstimateM > 0);
   const gaps = gapContacts.map((c) => ({
-    section: probeAt(c.eventFreeDepthM, 0, sectionM, sections).section,
+    // The eroded mud was the top of the interval below the contact: it accrued at that section's rate.
+    section: probeAt(c.eventFreeDepthM, 0, sectionTops).section,
     estimateM: c.erosionEstimateM,
     unitId: c.unitAboveId,
   }));
@@ -193,11 +240,11 @@ function buildStructure(input: AgeModelInput, settings: HemipelagicSettings): St
     const above = unitsById.get(h.unitAboveId)!;
     const contactDepth = above.baseDepthM!;
     // The event is the surface the bed buried: the young side of any erosion gap at its base.
-    return probeAt(scale.eventFreeDepth(contactDepth), gapsAbove(contactDepth, above.position), sectionM, sections);
+    return probeAt(scale.eventFreeDepth(contactDepth), gapsAbove(contactDepth, above.position), sectionTops);
   });
   const levelProbes = input.samples.filter(isModelled).map((s) => {
     const unit = unitsById.get(s.unitId)!;
-    return probeAt(scale.eventFreeDepth(s.depthM!), gapsAbove(s.depthM!, unit.position), sectionM, sections);
+    return probeAt(scale.eventFreeDepth(s.depthM!), gapsAbove(s.depthM!, unit.position), sectionTops);
   });
 
   const curve: { depthM: number; eventFreeDepthM: number; probe: Probe }[] = [];
@@ -210,11 +257,11 @@ function buildStructure(input: AgeModelInput, settings: HemipelagicSettings): St
   for (const d of [...depths].sort((a, b) => a - b)) {
     const z = scale.eventFreeDepth(d);
     const young = gapCountAt(d, false);
-    curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, young, sectionM, sections) });
+    curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, young, sectionTops) });
     const old = gapCountAt(d, true);
-    if (old !== young) curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, old, sectionM, sections) });
+    if (old !== young) curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, old, sectionTops) });
   }
-  return { scale, sectionM, sections, gaps, events, eventProbes, levelProbes, curve };
+  return { scale, sectionTops, thickness, spacing, sections, gaps, events, eventProbes, levelProbes, curve };
 }
 
 function round(m: number): number {
@@ -228,10 +275,10 @@ function round(m: number): number {
  */
 export function measuredYearsPerMetre(
   levels: LevelLikelihoods,
-  structure: Pick<Structure, 'levelProbes' | 'gaps' | 'sectionM'>,
+  structure: Pick<Structure, 'levelProbes' | 'gaps' | 'sectionTops'>,
 ): number | undefined {
   const restored = structure.levelProbes.map((p) => {
-    let depth = p.section * structure.sectionM + p.within;
+    let depth = structure.sectionTops[p.section] + p.within;
     for (let g = 0; g < p.gapsAbove; g++) depth += structure.gaps[g].estimateM;
     return depth;
   });
@@ -292,15 +339,17 @@ class HemipelagicPosterior {
 
   /** Fill rates, cumulative section ages and cumulative gap years from a state. */
   expand(x: Float64Array): void {
-    const { sections, sectionM, gaps } = this.structure;
-    const w = Math.pow(this.memory(x), sectionM);
+    const { sections, thickness, spacing, gaps } = this.structure;
+    const logMemory = Math.log(this.memory(x)) / this.settings.memoryDepthM;
     let rate = 0;
     this.cumulative[0] = x[0];
     for (let i = 0; i < sections; i++) {
       const innovation = Math.exp(x[1 + i]);
-      rate = i === 0 ? innovation : w * rate + (1 - w) * innovation;
+      // w = r^(spacing / memoryDepth): memory fades with the distance between section centres.
+      const w = i === 0 ? 0 : Math.exp(logMemory * spacing[i]);
+      rate = w * rate + (1 - w) * innovation;
       this.rates[i] = rate;
-      this.cumulative[i + 1] = this.cumulative[i] + rate * sectionM;
+      this.cumulative[i + 1] = this.cumulative[i] + rate * thickness[i];
     }
     this.gapYears[0] = 0;
     for (let g = 0; g < gaps.length; g++) this.gapYears[g + 1] = this.gapYears[g] + this.erosion(x, g) * this.rates[gaps[g].section];
@@ -318,10 +367,9 @@ class HemipelagicPosterior {
     const s = this.settings;
     let lp = 0;
     // Gamma innovations on the log scale: density times the Jacobian a.
-    for (let i = 1; i <= sections; i++) {
-      const a = Math.exp(x[i]);
-      lp += logGammaKernel(a, s.rateShape, this.meanYearsPerMetre) + x[i];
-    }
+    // Gamma innovations on the log scale, density times the Jacobian a: k log a - (k / m) a.
+    const beta = s.rateShape / this.meanYearsPerMetre;
+    for (let i = 1; i <= sections; i++) lp += s.rateShape * x[i] - beta * Math.exp(x[i]);
     // Beta memory on the logit scale: density times the Jacobian r (1 - r).
     const r = this.memory(x);
     if (!(r > 0 && r < 1)) return -Infinity;
@@ -348,7 +396,7 @@ function checkHemipelagicSettings(settings: HemipelagicRunSettings): void {
   positive('memoryPriorA', h.memoryPriorA);
   positive('memoryPriorB', h.memoryPriorB);
   positive('erosionShape', h.erosionShape);
-  positive('outlierOffsetScaleYears', h.outlierOffsetScaleYears);
+  positive('memoryDepthM', h.memoryDepthM);
   positive('ageDepthStepM', h.ageDepthStepM);
   if (h.rateMeanCmPerKyr !== null) positive('rateMeanCmPerKyr', h.rateMeanCmPerKyr);
   if (!Number.isInteger(h.maxSections) || h.maxSections < 1 || h.maxSections > 500) {
@@ -454,7 +502,7 @@ export function runHemipelagicModel(
     makeLevels?.(modelled, settings) ??
     new GridLevelLikelihoods(modelled, settings.inheritanceScaleYears, {
       prior: settings.outlierPrior,
-      offsetScaleYears: h.outlierOffsetScaleYears,
+      shiftScaleYears: settings.outlierShiftScaleYears,
     });
 
   const measured = measuredYearsPerMetre(levels, structure);
@@ -495,13 +543,13 @@ export function runHemipelagicModel(
   let lastReported = -1;
   let accepted = 0;
   let proposed = 0;
-  const basePoint = probeAt(structure.scale.eventFreeLengthM, structure.gaps.length, structure.sectionM, structure.sections);
+  const basePoint = probeAt(structure.scale.eventFreeLengthM, structure.gaps.length, structure.sectionTops);
 
   // Starting values: the levels' youngest centre extrapolated to the top at the mean rate.
   let topGuess = Infinity;
   for (let j = 0; j < S; j++) {
     const p = structure.levelProbes[j];
-    topGuess = Math.min(topGuess, levels.centreCalBp(j) - (p.section * structure.sectionM + p.within) * meanYearsPerMetre);
+    topGuess = Math.min(topGuess, levels.centreCalBp(j) - (structure.sectionTops[p.section] + p.within) * meanYearsPerMetre);
   }
   topGuess = Math.max(LATEST_CAL_BP + 1, topGuess);
 
@@ -632,7 +680,7 @@ export function runHemipelagicModel(
     hemipelagic: {
       rateMeanCmPerKyr: 100_000 / meanYearsPerMetre,
       rateMeanSource,
-      sectionThicknessM: structure.sectionM,
+      sectionThicknessM: Math.max(...structure.thickness),
       sections: structure.sections,
       memoryMedian: median(memoryDraws),
       erosion: structure.gaps.map((g, k) => ({ unitId: g.unitId, estimateM: g.estimateM, medianM: median(erosionDraws[k]) })),

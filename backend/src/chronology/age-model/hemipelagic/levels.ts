@@ -8,7 +8,7 @@
  */
 import { CalendarDensity } from '../../common/density';
 import { ColumnSample } from '../column';
-import { depositLikelihood, DepositLikelihood } from '../likelihood';
+import { CalendarWindow, depositLikelihood, DepositLikelihood, outlierShiftLikelihood } from '../likelihood';
 
 /** What the hemipelagic sampler needs of the dated levels. */
 export interface LevelLikelihoods {
@@ -26,31 +26,31 @@ export interface LevelLikelihoods {
 export interface OutlierModel {
   /** Prior probability that a level is an outlier (Christen 1994). */
   readonly prior: number;
-  /** Scale (sd, years) of the normal prior on an outlier's unknown age offset. */
-  readonly offsetScaleYears: number;
+  /** Mean absolute shift (years) of an outlier's two-sided exponential shift prior (the ordering model's). */
+  readonly shiftScaleYears: number;
 }
 
 const LOG_FLOOR = -745;
 
 /**
- * Grid likelihoods with the outlier-and-offset mixture of Christen (1994, Applied Statistics
- * 43(3):489-503 [memory for pages]): a level is an outlier with prior probability q, and an
- * outlier's measured age is shifted by an unknown offset delta ~ N(0, S^2) (the broad-offset form
- * of Christen & Perez 2009, Radiocarbon 51(3):1047-1059 [memory for pages]):
+ * Grid likelihoods with the ordering model's outlier mixture (`MixtureLikelihoods` and
+ * `outlierShiftLikelihood` in `../likelihood.ts`; Christen 1994, Applied Statistics 43(3):489-503,
+ * with the outlier-as-shift form of Bronk Ramsey 2009, Radiocarbon 51(3):1023-1045): a level is an
+ * outlier with prior probability q, and an outlier's measurement is read through its likelihood
+ * convolved with a two-sided exponential shift of stated scale,
  *
- *   L_q(t) = (1 - q) L(t) + q (L * N(0, S^2))(t).
+ *   L_q(t) = (1 - q) L(t) + q O(t).
  *
- * The shifted alternative is evaluated with L replaced by a normal of L's own mean and sd, so
- * (L * N)(t) = N(t; mean, sd^2 + S^2): with S several times the sd, as it is by design, the shape
- * of L no longer matters after smoothing by S [analytic approximation, stated]. L is normalised to
- * unit mass over t and read between grid years by linear interpolation.
+ * Both are held on whole years around the level (its likelihood widened by 25 shift scales each
+ * side, beyond which O is below e^-25 of its peak) and read between years by linear interpolation.
  */
 export class GridLevelLikelihoods implements LevelLikelihoods {
   readonly count: number;
-  private readonly deposits: DepositLikelihood[];
-  private readonly means: Float64Array;
-  private readonly sds: Float64Array;
+  private readonly starts: Int32Array;
+  private readonly plainValues: Float64Array[];
+  private readonly shiftedValues: Float64Array[];
   private readonly medians: Float64Array;
+  private readonly sds: Float64Array;
 
   constructor(
     samples: readonly Pick<ColumnSample, 'likelihood' | 'ageRelation'>[],
@@ -58,45 +58,52 @@ export class GridLevelLikelihoods implements LevelLikelihoods {
     private readonly outliers: OutlierModel,
   ) {
     this.count = samples.length;
-    this.deposits = samples.map((s) => normalised(depositLikelihood(s.likelihood, s.ageRelation, inheritanceScaleYears)));
-    this.means = new Float64Array(this.count);
-    this.sds = new Float64Array(this.count);
+    this.starts = new Int32Array(this.count);
+    this.plainValues = [];
+    this.shiftedValues = [];
     this.medians = new Float64Array(this.count);
-    this.deposits.forEach((d, j) => {
+    this.sds = new Float64Array(this.count);
+    samples.forEach((sample, j) => {
+      const d = normalised(depositLikelihood(sample.likelihood, sample.ageRelation, inheritanceScaleYears));
+      const margin = Math.ceil(25 * outliers.shiftScaleYears);
+      const window: CalendarWindow = { youngCalBp: d.startCalBp - margin, oldCalBp: d.startCalBp + d.values.length - 1 + margin };
+      const plain = new Float64Array(window.oldCalBp - window.youngCalBp + 1);
+      plain.set(d.values, margin);
+      this.starts[j] = window.youngCalBp;
+      this.plainValues.push(plain);
+      this.shiftedValues.push(outlierShiftLikelihood(d, window, outliers.shiftScaleYears));
       let mean = 0;
       d.values.forEach((p, i) => (mean += p * (d.startCalBp + i)));
       let variance = 0;
       d.values.forEach((p, i) => (variance += p * (d.startCalBp + i - mean) ** 2));
+      this.sds[j] = Math.sqrt(variance);
       let cumulative = 0;
-      let median = d.startCalBp;
       for (let i = 0; i < d.values.length; i++) {
         cumulative += d.values[i];
         if (cumulative >= 0.5) {
-          median = d.startCalBp + i;
+          this.medians[j] = d.startCalBp + i;
           break;
         }
       }
-      this.means[j] = mean;
-      this.sds[j] = Math.sqrt(variance);
-      this.medians[j] = median;
     });
   }
 
-  /** L(t) without the outlier term, linearly interpolated between grid years. */
-  plain(level: number, calBp: number): number {
-    const d = this.deposits[level];
-    const x = calBp - d.startCalBp;
-    if (x < 0 || x > d.values.length - 1) return 0;
+  private read(values: Float64Array, level: number, calBp: number): number {
+    const x = calBp - this.starts[level];
+    if (!(x >= 0 && x <= values.length - 1)) return 0;
     const i = Math.floor(x);
     const f = x - i;
-    return i + 1 < d.values.length ? d.values[i] * (1 - f) + d.values[i + 1] * f : d.values[i];
+    return i + 1 < values.length ? values[i] * (1 - f) + values[i + 1] * f : values[i];
   }
 
-  /** The outlier alternative N(t; mean, sd^2 + S^2). */
+  /** L(t) without the outlier term. */
+  plain(level: number, calBp: number): number {
+    return this.read(this.plainValues[level], level, calBp);
+  }
+
+  /** The outlier alternative O(t). */
   shifted(level: number, calBp: number): number {
-    const variance = this.sds[level] ** 2 + this.outliers.offsetScaleYears ** 2;
-    const z = calBp - this.means[level];
-    return Math.exp((-0.5 * z * z) / variance) / Math.sqrt(2 * Math.PI * variance);
+    return this.read(this.shiftedValues[level], level, calBp);
   }
 
   logLikelihood(level: number, calBp: number): number {

@@ -1,8 +1,9 @@
 /**
  * Simulated turbidite cores with a known history, for validating the hemipelagic depth model from
  * outside: the generator is deliberately not the model's prior. Intervals between events are
- * uniform, mud accumulates at a constant rate per interval drawn lognormally about a core's own
- * base rate (no gamma innovations, no autoregressive memory), beds erode a uniform thickness of
+ * uniform, mud accumulates at a rate per interval drawn lognormally about a core's own base rate
+ * (no gamma innovations, no autoregressive memory) that changes again halfway through each
+ * interval (so no section of the model is exactly right), beds erode a uniform thickness of
  * the mud below them, which the researcher logs with lognormal error (or misses when under 5 mm),
  * all foram levels of a core share one true Delta-R (the model is told only its mean and sd), and
  * some levels are reworked (older by hundreds of years) or burrowed in (younger) without the
@@ -79,8 +80,19 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
   const older = [baseCalBp, ...events];
   const younger = [...events, topCalBp];
   const rates = older.map(() => baseRate * Math.exp(0.4 * random.normal()));
+  // The older half of each interval's years at rates[u] x lower[u], the younger half at rates[u] x upper[u].
+  const lower = older.map(() => Math.exp(0.2 * random.normal()));
+  const upper = older.map(() => Math.exp(0.2 * random.normal()));
+  const halfM = (u: number, factor: number) => ((older[u] - younger[u]) / 2) * rates[u] * factor / 100_000;
   const erosion = events.map(() => 0);
-  const mudM = older.map((o, u) => ((o - younger[u]) * rates[u]) / 100_000);
+  const mudM = older.map((_, u) => halfM(u, lower[u]) + halfM(u, upper[u]));
+  /** True age of the mud `below` m under the top of interval u as deposited (before erosion). */
+  const ageBelowTop = (u: number, below: number): number => {
+    const upperM = halfM(u, upper[u]);
+    return below <= upperM
+      ? younger[u] + (below * 100_000) / (rates[u] * upper[u])
+      : younger[u] + (older[u] - younger[u]) / 2 + ((below - upperM) * 100_000) / (rates[u] * lower[u]);
+  };
   for (let k = 0; k < n; k++) {
     // Bed k erodes the top of interval k; at most 60 % of that mud.
     if (random.uniform() < 0.6) erosion[k] = Math.min(between(random, 0.002, 0.04), 0.6 * mudM[k]);
@@ -136,7 +148,7 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
     const fromTop = between(random, 0.1, 0.9) * preserved;
     // Age at that depth: the top of the preserved mud is (eroded thickness) below the interval's young end.
     const removed = u < n ? erosion[u] : 0;
-    const age = younger[u] + ((removed + fromTop) * 100_000) / rates[u];
+    const age = ageBelowTop(u, removed + fromTop);
     let measuredAge = age;
     if (random.uniform() < options.displacedShare) {
       measuredAge = random.uniform() < 0.7 ? age + between(random, 200, 1500) : Math.max(topCalBp, age - between(random, 100, 600));
