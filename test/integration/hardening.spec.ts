@@ -127,3 +127,78 @@ describe('the cost model (issue 17, item 1)', () => {
     expect(firstError(text).message).toMatch(/signIn 20 times; one request may ask for it at most 1 time/);
   });
 });
+
+describe('bounds on uncertainties, sheets and bundles (issue 17, item 2)', () => {
+  let researcher: GraphqlClient;
+  let siteId: string;
+
+  beforeAll(async () => {
+    researcher = await new GraphqlClient(server.url).signIn(fixture.emails.RESEARCHER, PASSWORD);
+    const { createSite } = await researcher.ok('mutation($i: CreateSiteInput!) { createSite(input: $i) { id } }', {
+      i: { projectId: fixture.projectId, name: 'Bounds trench', kind: 'TRENCH', latitude: -41.2, longitude: 172.5, alongStrikeKm: 40 },
+    });
+    siteId = createSite.id;
+    await researcher.ok('mutation($i: CreateUnitInput!) { createUnit(input: $i) { id } }', {
+      i: { siteId, position: 1, name: 'U1', topDepthM: 0, baseDepthM: 3, facies: 'PEAT' },
+    });
+  });
+
+  it('answers calibrateLuminescence with a 1,000,000-year error BAD_USER_INPUT naming errorYears (probe: memory grew, then INTERNAL_SERVER_ERROR)', async () => {
+    const error = await viewer.errorOf('query($i: CalibrateLuminescenceInput!) { calibrateLuminescence(input: $i) { medianCalBp } }', {
+      i: { ageYears: 5000, errorYears: 1_000_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'errorYears' });
+  });
+
+  it('refuses a luminescence error whose grid would be wider than IntCal20 (below the 20,000-year cap)', async () => {
+    const error = await viewer.errorOf('query($i: CalibrateLuminescenceInput!) { calibrateLuminescence(input: $i) { medianCalBp } }', {
+      i: { ageYears: 50_000, errorYears: 10_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'errorYears' });
+    expect(error.message).toMatch(/span of IntCal20/);
+  });
+
+  it('refuses storing a sample with a 100,000-year calendar error (probe: 11 MB and 0.8 s on every read)', async () => {
+    const unitId = (await researcher.ok<{ site: { units: { id: string }[] } }>('query($id: ID!) { site(id: $id) { units { id } } }', { id: siteId })).site.units[0].id;
+    const error = await researcher.errorOf('mutation($i: CreateSampleInput!) { createSample(input: $i) { id } }', {
+      i: { siteId, unitId, labCode: 'BIG-1', method: 'LUMINESCENCE', material: 'OTHER', ageRelation: 'DATES_DEPOSIT', calendarAgeBp: 5000, calendarErrorYears: 100_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'calendarErrorYears' });
+  });
+
+  it('answers a 2,000-row lab sheet of one duplicated lab code in under 1 MB (probe: 22 MB)', async () => {
+    const rows = Array.from({ length: 2000 }, () => 'DUP-1,U1,1,RADIOCARBON,DETRITAL_CHARCOAL,2450,30,INTCAL20');
+    const csv = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve', ...rows].join('\n');
+    const { status, text } = await post(
+      { query: 'mutation($i: ImportSamplesInput!) { importSamples(input: $i) { rowCount committed errors { row field message } } }', variables: { i: { siteId, csv, commit: false } } },
+      researcher.token,
+    );
+    expect(status).toBe(200);
+    expect(text.length).toBeLessThan(1_000_000);
+    const result = JSON.parse(text).data.importSamples;
+    expect(result.rowCount).toBe(2000);
+    expect(result.errors.at(-1)).toMatchObject({ row: 0, field: 'csv', message: expect.stringMatching(/^and 1,800 more problems not listed/) });
+    process.stderr.write(`[probe] 2,000 duplicate lab codes: ${text.length} bytes\n`);
+  });
+
+  it('refuses a bundle with __proto__ or constructor keys and one with an age error above 20,000 years', async () => {
+    const exported = await fetch(`${server.url}/api/projects/${fixture.projectId}/bundle.json`, { headers: { authorization: `Bearer ${researcher.token}` } });
+    expect(exported.status).toBe(200);
+    const text = await exported.text();
+    const send = (body: string) =>
+      fetch(`${server.url}/api/projects/import`, { method: 'POST', headers: { 'content-type': 'application/json', authorization: `Bearer ${researcher.token}` }, body });
+    const withProto = text.replace('"project":{', '"project":{"__proto__":{"polluted":true},');
+    const refused = await send(withProto);
+    expect(refused.status).toBe(400);
+    expect(await refused.text()).toMatch(/__proto__ is not a field/);
+    const bundle = JSON.parse(text);
+    bundle.samples.push({
+      ref: 'x-1', siteRef: bundle.sites[0].ref, unitRef: bundle.units[0].ref, labCode: 'X-1', method: 'LUMINESCENCE', material: 'OTHER', depthM: null,
+      ageRelation: 'DATES_DEPOSIT', c14Age: null, c14Error: null, delta13C: null, curve: null, deltaR: null, deltaRError: null,
+      calendarAgeBp: 5000, calendarErrorYears: 100_000, measurementYear: 2020, excluded: false, exclusionReason: null, notes: null,
+    });
+    const wide = await send(JSON.stringify(bundle));
+    expect(wide.status).toBe(400);
+    expect(await wide.text()).toMatch(/calendarErrorYears must be at most 20000/);
+  });
+});

@@ -37,7 +37,7 @@ export const FIELD_WEIGHTS: Readonly<Record<string, number>> = {
   'Query.calibrate': 5_000,
   'Query.calibrateLuminescence': 1_000,
   'Query.calibrationCurveBand': 200,
-  'Sample.calibration': 100,
+  'Sample.calibration': 2, // stored summaries; its density is recomputed (Calibration.density)
   'Calibration.density': 200,
   'EventPosterior.density': 50,
   'LadderEvent.density': 20,
