@@ -10,7 +10,14 @@ import { ProvenanceService } from '../provenance/provenance.service';
 import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
 import type { SiteEvent } from '../chronology/correlation';
-import { fitRenewalModel, RecurrenceInputError, RENEWAL_MODELS, renewalDistribution } from '../chronology/recurrence';
+import {
+  fitRenewalModel,
+  forecastRenewal,
+  RecurrenceInputError,
+  RENEWAL_MODELS,
+  RENEWAL_PRIOR_NOTE,
+  renewalDistribution,
+} from '../chronology/recurrence';
 import { badInput, conflict, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { JobQueueService } from '../jobs/job-queue.service';
@@ -18,7 +25,7 @@ import { SegmentRow } from '../segments/segments.repository';
 import { SegmentsService } from '../segments/segments.service';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
-import { FitRenewalInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
 import { RecurrenceJob } from './recurrence.job';
 import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
@@ -52,9 +59,9 @@ export type RecurrenceInputSnapshot =
 /** The analysis as the API serves it: the row, its stored results spread in, and the caution. */
 export type RecurrenceAnalysisView = RecurrenceAnalysisRow &
   Partial<StoredRecurrenceResults> &
-  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { caution: string };
+  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { modelAveraged: NonNullable<StoredRecurrenceResults['modelAveraged']> } & { caution: string };
 
-const NO_RESULTS = { intervals: [], poisson: [], models: [], curves: [], histogram: [] };
+const NO_RESULTS = { intervals: [], poisson: [], models: [], modelAveraged: [], curves: [], histogram: [] };
 
 @Injectable()
 export class RecurrenceService {
@@ -94,7 +101,32 @@ export class RecurrenceService {
   fitRenewal(input: FitRenewalInput) {
     try {
       const fit = fitRenewalModel(input.model, { closedIntervals: input.intervalsYears, openInterval: input.openIntervalYears ?? null });
-      return { model: fit.model, meanRecurrenceYears: fit.mu, aperiodicity: fit.alpha, logLikelihood: fit.logLikelihood, aic: fit.aic };
+      return { model: fit.model, meanRecurrenceYears: fit.mu, aperiodicity: fit.alpha, logLikelihood: fit.logLikelihood, aic: fit.aic, aicc: fit.aicc };
+    } catch (error) {
+      throw asDomainError(error, { closedIntervals: 'intervalsYears', openInterval: 'openIntervalYears' });
+    }
+  }
+
+  /** Posterior ranges for exactly known intervals (no project data, so no access check); bounded by the input's limits. */
+  renewalForecast(input: RenewalForecastInput) {
+    try {
+      const result = forecastRenewal({
+        model: input.model,
+        intervalsYears: input.intervalsYears,
+        openIntervalYears: input.openIntervalYears,
+        windowsYears: input.windowsYears,
+        seed: input.seed ?? 1,
+      });
+      return {
+        model: result.model,
+        draws: result.draws,
+        meanRecurrence: result.meanRecurrence,
+        aperiodicity: result.aperiodicity,
+        probabilities: result.probabilities.map((p) => ({ windowYears: p.windowYears, ...p.range })),
+        approximateDraws: result.approximateDraws,
+        priorNote: RENEWAL_PRIOR_NOTE,
+        caution: RECURRENCE_CAUTION,
+      };
     } catch (error) {
       throw asDomainError(error, { closedIntervals: 'intervalsYears', openInterval: 'openIntervalYears' });
     }

@@ -81,3 +81,16 @@ export function recurrenceExportUrl(analysisId: string, format: 'csv' | 'json'):
 export function isJobActive(status: string): boolean {
   return status === 'QUEUED' || status === 'RUNNING';
 }
+
+/** Renewal model names as the trade writes them (the API's enum is upper-case). */
+export const MODEL_LABELS: Readonly<Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIBULL', string>> = {
+  POISSON: 'Poisson',
+  BPT: 'BPT',
+  LOGNORMAL: 'Lognormal',
+  WEIBULL: 'Weibull',
+};
+
+/** A model's screen name; unknown values pass through. */
+export function modelLabel(model: string): string {
+  return (MODEL_LABELS as Record<string, string>)[model] ?? model;
+}
