@@ -40,3 +40,17 @@ export const paths = {
 export function afterSignInPath(next: string | null): string {
   return next && next.startsWith('/') && !next.startsWith('//') ? next : paths.projects();
 }
+
+/** Record ids are UUIDs made by PostgreSQL (backend `database/schema/columns.ts`). */
+const RECORD_ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Whether every id parameter of a route (`projectId`, `siteId`, ...) is shaped like a record id.
+ * Anything else names no record, so the route is not found at once instead of after a request
+ * and its retries.
+ */
+export function routeIdsWellFormed(params: Readonly<Record<string, string | undefined>>): boolean {
+  return Object.entries(params)
+    .filter(([name]) => name.endsWith('Id'))
+    .every(([, value]) => value !== undefined && RECORD_ID.test(value));
+}

@@ -7,12 +7,11 @@ import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
 import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
-import { bracketingSamples, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { roleAllows } from '@/modules/auth/utils/permissions';
-import { calendarWindow } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
@@ -140,10 +139,6 @@ type RunResultsProps = {
 };
 
 function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResultsProps) {
-  const window = useMemo(() => {
-    const found = calendarWindow(events.flatMap(({ posterior, likelihoods }) => [posterior.density, ...likelihoods.map((likelihood) => likelihood.density)]));
-    return found ? ([found.youngerCalBp, found.olderCalBp] as const) : ([0, 1000] as const);
-  }, [events]);
   const compactEvents = useMemo(
     () =>
       events.map(({ posterior }) => ({
@@ -183,7 +178,12 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                 <h4>
                   {posterior.eventHorizon.name} <AgeValue calBp={posterior.medianCalBp} />
                 </h4>
-                <EventPosteriorChart eventName={posterior.eventHorizon.name} posterior={posterior.density} likelihoods={likelihoods} window={window} />
+                <EventPosteriorChart
+                  eventName={posterior.eventHorizon.name}
+                  posterior={posterior.density}
+                  likelihoods={likelihoods}
+                  window={eventChartWindow(posterior.density, likelihoods.map((likelihood) => likelihood.density))}
+                />
               </div>
             ))}
             <HTMLTable compact striped className="sc-table">
