@@ -21,21 +21,19 @@ import { DatabaseModule } from './database/database.module';
 import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
-import { HypothesesModule } from './hypotheses/hypotheses.module';
-import { InvitationsModule } from './invitations/invitations.module';
+import { CorrelationModule } from './correlation/correlation.module';
 import { JobsModule } from './jobs/jobs.module';
 import { LoadersModule } from './loaders/loaders.module';
 import { RequestLoadersFactory } from './loaders/request-loaders';
-import { EventLadderCache } from './hypotheses/event-ladder-cache';
-import { MembersModule } from './members/members.module';
-import { MembershipsModule } from './memberships/memberships.module';
-import { PasswordResetsModule } from './password-resets/password-resets.module';
+import { EventLadderCache } from './correlation/ladder-cache/event-ladder-cache';
 import { ProjectsModule } from './projects/projects.module';
+import { ProvenanceModule } from './provenance/provenance.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
 import { SegmentsModule } from './segments/segments.module';
 import { SitesModule } from './sites/sites.module';
+import { TeamModule } from './team/team.module';
 import { UnitsModule } from './units/units.module';
 import { UsersModule } from './users/users.module';
 import { AttachmentsModule } from './attachments/attachments.module';
@@ -51,7 +49,7 @@ import { ReleasesModule } from './releases/releases.module';
     AuthModule,
     GraphQLModule.forRootAsync<ApolloDriverConfig>({
       driver: ApolloDriver,
-      imports: [LoadersModule, HypothesesModule],
+      imports: [LoadersModule, CorrelationModule],
       inject: [APP_CONFIG, RequestLoadersFactory, EventLadderCache],
       useFactory: (config: AppConfig, loaders: RequestLoadersFactory, ladderCache: EventLadderCache) => ({
         typePaths: [join(repositoryRoot(), 'schema.graphql')],
@@ -70,8 +68,8 @@ import { ReleasesModule } from './releases/releases.module';
     }),
     HealthModule,
     UsersModule,
-    MembershipsModule,
     ProjectsModule,
+    ProvenanceModule,
     SegmentsModule,
     SitesModule,
     UnitsModule,
@@ -83,13 +81,11 @@ import { ReleasesModule } from './releases/releases.module';
     JobsModule,
     AgeModelsModule,
     RecurrenceModule,
-    HypothesesModule,
+    CorrelationModule,
     AttachmentsModule,
     ExchangeModule,
     ReleasesModule,
-    InvitationsModule,
-    PasswordResetsModule,
-    MembersModule,
+    TeamModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

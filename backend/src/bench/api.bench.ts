@@ -83,7 +83,7 @@ const LOAD_SECONDS = 10;
 const IMPORT_ROWS = 10_000;
 const PASSWORD = 'bench-password-1';
 
-/** The ladder query of frontend/src/modules/ladder/graphql/ladder.ts as it was, with densities as points. */
+/** The ladder query of frontend/src/modules/correlation/graphql/ladder.ts as it was, with densities as points. */
 const LADDER_QUERY = `query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
     columns {

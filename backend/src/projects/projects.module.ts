@@ -1,5 +1,4 @@
 import { Module } from '@nestjs/common';
-import { MembershipsModule } from '../memberships/memberships.module';
 import { SegmentsModule } from '../segments/segments.module';
 import { SitesModule } from '../sites/sites.module';
 import { PROJECT_FIELD_RESOLVERS } from './project-parent.resolver';
@@ -8,7 +7,7 @@ import { ProjectsResolver } from './projects.resolver';
 import { ProjectsService } from './projects.service';
 
 @Module({
-  imports: [MembershipsModule, SegmentsModule, SitesModule],
+  imports: [SegmentsModule, SitesModule],
   providers: [ProjectsRepository, ProjectsService, ProjectsResolver, ...PROJECT_FIELD_RESOLVERS],
   exports: [ProjectsService, ProjectsRepository],
 })

@@ -24,6 +24,11 @@ export class ProjectsRepository {
     return rows.map((r) => r.project);
   }
 
+  /** The first member of a new project, its ADMIN. */
+  async insertFounder(projectId: string, userId: string, executor: Executor = this.database.db): Promise<void> {
+    await executor.insert(memberships).values({ projectId, userId, role: 'ADMIN' });
+  }
+
   async insert(values: typeof projects.$inferInsert, executor: Executor = this.database.db): Promise<ProjectRow> {
     const [row] = await executor.insert(projects).values(values).returning();
     return row;

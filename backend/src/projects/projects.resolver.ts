@@ -2,7 +2,6 @@ import { Args, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/g
 import { Role } from '../access/permissions';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { MembershipsService, MembershipView } from '../memberships/memberships.service';
 import { SegmentRow } from '../segments/segments.repository';
 import { SegmentsService } from '../segments/segments.service';
 import { SiteRow } from '../sites/sites.repository';
@@ -17,7 +16,6 @@ export class ProjectsResolver {
     private readonly projects: ProjectsService,
     private readonly segments: SegmentsService,
     private readonly sites: SitesService,
-    private readonly memberships: MembershipsService,
   ) {}
 
   @Query('projects')
@@ -48,10 +46,5 @@ export class ProjectsResolver {
   @ResolveField('sites')
   sitesOf(@Parent() project: ProjectRow): Promise<SiteRow[]> {
     return this.sites.listForProject(project.id);
-  }
-
-  @ResolveField('members')
-  members(@Parent() project: ProjectRow): Promise<MembershipView[]> {
-    return this.memberships.listForProject(project.id);
   }
 }

@@ -5,7 +5,6 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { MembershipsRepository } from '../memberships/memberships.repository';
 import { CreateProjectInput } from './dto/create-project.input';
 import { ProjectRow, ProjectsRepository } from './projects.repository';
 
@@ -14,7 +13,6 @@ export class ProjectsService {
   constructor(
     private readonly database: DatabaseService,
     private readonly projects: ProjectsRepository,
-    private readonly memberships: MembershipsRepository,
     private readonly access: AccessService,
     private readonly audit: AuditService,
   ) {}
@@ -38,7 +36,7 @@ export class ProjectsService {
         { name: input.name, description: input.description, tectonicSetting: input.tectonicSetting },
         tx,
       );
-      await this.memberships.upsert(project.id, user.id, 'ADMIN', tx);
+      await this.projects.insertFounder(project.id, user.id, tx);
       await this.audit.record(tx, {
         actor: user, projectId: project.id, action: 'create', objectType: 'project', objectId: project.id, after: project,
       });

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ProvenanceModule } from '../provenance/provenance.module';
 import { ReleasesModule } from '../releases/releases.module';
 import { AgeModelsModule } from '../age-models/age-models.module';
 import { SegmentsModule } from '../segments/segments.module';
@@ -11,7 +12,7 @@ import { RecurrenceService } from './recurrence.service';
 
 /** Recurrence analyses of a segment or site: renewal fits, conditional probabilities, exports, and their job. */
 @Module({
-  imports: [SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule],
+  imports: [SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule, ProvenanceModule],
   controllers: [RecurrenceExportController],
   providers: [RecurrenceRepository, RecurrenceService, RecurrenceJob, RecurrenceResolver, ProjectRecurrenceResolver],
   exports: [RecurrenceJob, RecurrenceRepository, RecurrenceService],

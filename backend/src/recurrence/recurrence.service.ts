@@ -6,6 +6,7 @@ import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository'
 import { StoredAgeModelResults, storeDensity } from '../age-models/age-model-results';
 import { LatestRunsService } from '../age-models/latest-runs.service';
 import { AuditService } from '../audit/audit.service';
+import { ProvenanceService } from '../provenance/provenance.service';
 import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
 import type { SiteEvent } from '../chronology/correlation';
@@ -67,6 +68,7 @@ export class RecurrenceService {
     private readonly access: AccessService,
     private readonly audit: AuditService,
     private readonly releases: ReleasesService,
+    private readonly provenance: ProvenanceService,
   ) {}
 
   /** Conditional probability of one renewal model in a window, beside the Poisson figure, and the hazard at the elapsed time. */
@@ -165,6 +167,11 @@ export class RecurrenceService {
         objectId: row.id,
         after: { segmentId: row.segmentId, siteId: row.siteId, hypothesisId: row.hypothesisId, hypothesisVersion: row.hypothesisVersion, seed, forecastStartYear, windowsYears, draws, settings },
       });
+      // Provenance: the runs whose ages it used and the hypothesis version, for `stale` and refresh.
+      await this.provenance.record(tx, row.projectId, { kind: 'recurrenceAnalysis', id: row.id }, [
+        ...settings.ageModelRunIds.map((id) => ({ kind: 'ageModelRun' as const, id })),
+        ...(row.hypothesisId && row.hypothesisVersion !== null ? [{ kind: 'hypothesis' as const, id: row.hypothesisId, revision: row.hypothesisVersion }] : []),
+      ]);
       return row;
     });
     await this.jobs.send(QUEUES.recurrence, { runId: analysis.id });

@@ -5,7 +5,7 @@ import { routeIdsWellFormed, routePatterns } from '@/app/paths';
 import { sessionStore } from '@/modules/auth/utils/sessionStore';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
 import { calibrationQueries } from '@/modules/calibration/hooks/calibrationQueries';
-import { ladderQueries } from '@/modules/ladder/hooks/ladderQueries';
+import { ladderQueries } from '@/modules/correlation/hooks/ladderQueries';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
 import { AppShell } from '@/modules/shell/components/AppShell';

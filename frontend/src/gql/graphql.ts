@@ -62,6 +62,8 @@ export type AgeModelRun = {
   site: Site;
   /** True when the site's column or samples changed after this run was queued. */
   stale: Scalars['Boolean']['output'];
+  /** What changed in the site's column since this run was queued; empty while it is up to date. */
+  staleReasons: Array<StaleReason>;
   status: JobStatus;
 };
 
@@ -468,6 +470,12 @@ export type JobStatus =
   | 'QUEUED'
   | 'RUNNING'
   | 'SUCCEEDED';
+
+/** A joint age model run named as an input (its details are on the joint run itself). */
+export type JointRunReference = {
+  __typename?: 'JointRunReference';
+  id: Scalars['ID']['output'];
+};
 
 export type LadderColumn = {
   __typename?: 'LadderColumn';
@@ -919,6 +927,17 @@ export type RangeEstimate = {
   median: Scalars['Float']['output'];
 };
 
+/** One recorded input of a derived result. */
+export type RecordedInput = {
+  __typename?: 'RecordedInput';
+  id: Scalars['ID']['output'];
+  kind: ResultInputKind;
+  /** Its name when it was used. */
+  name: Scalars['String']['output'];
+  /** The site column revision or hypothesis version read; null for a run. */
+  revision?: Maybe<Scalars['Int']['output']>;
+};
+
 /** Interval statistics, renewal fits and forecasts for a segment or site, with their inputs. */
 export type RecurrenceAnalysis = {
   __typename?: 'RecurrenceAnalysis';
@@ -935,6 +954,8 @@ export type RecurrenceAnalysis = {
   hypothesis?: Maybe<Hypothesis>;
   hypothesisVersion?: Maybe<Scalars['Int']['output']>;
   id: Scalars['ID']['output'];
+  /** The runs, hypothesis version and recorded inputs it was computed from. */
+  inputs: RecurrenceInputs;
   intervals: Array<IntervalEstimate>;
   lastEventMedianCalBp?: Maybe<Scalars['Float']['output']>;
   meanRecurrence?: Maybe<RangeEstimate>;
@@ -952,8 +973,27 @@ export type RecurrenceAnalysis = {
   segment?: Maybe<Segment>;
   settings: Scalars['JSON']['output'];
   site?: Maybe<Site>;
+  /** True when any input changed after the analysis was queued, directly or through the runs it used. */
+  stale: Scalars['Boolean']['output'];
+  /** Why it is stale; empty while it is up to date. */
+  staleReasons: Array<StaleReason>;
   status: JobStatus;
   windowsYears: Array<Scalars['Float']['output']>;
+};
+
+/** What a recurrence analysis was computed from. */
+export type RecurrenceInputs = {
+  __typename?: 'RecurrenceInputs';
+  /** The site age model runs whose event ages it used (empty for a run that has since been deleted). */
+  ageModelRuns: Array<AgeModelRun>;
+  /** The correlation hypothesis of a segment analysis; null for a single site, or once deleted. */
+  hypothesis?: Maybe<Hypothesis>;
+  /** The hypothesis version it used. */
+  hypothesisVersion?: Maybe<Scalars['Int']['output']>;
+  /** The joint age model run it used; null unless it ran on one. */
+  jointRun?: Maybe<JointRunReference>;
+  /** Every recorded input, with the revision or version read and its name. */
+  recorded: Array<RecordedInput>;
 };
 
 /** A connected group of tied events: one inferred earthquake. */
@@ -1124,6 +1164,17 @@ export type ResetPasswordInput = {
   token: Scalars['String']['input'];
 };
 
+/** The kind of input a derived result was computed from. */
+export type ResultInputKind =
+  /** A site age model run. */
+  | 'AGE_MODEL_RUN'
+  /** A correlation hypothesis at one version. */
+  | 'HYPOTHESIS'
+  /** A joint age model run under a hypothesis. */
+  | 'JOINT_RUN'
+  /** A site's column: its units, event horizons and samples. */
+  | 'SITE_COLUMN';
+
 /** A member's role in one project; it decides what the member may change. */
 export type Role =
   | 'ADMIN'
@@ -1241,6 +1292,20 @@ export type SiteKind =
   | 'MARSH'
   | 'OUTCROP'
   | 'TRENCH';
+
+/** One input that changed after a result was computed: the reason the result is stale. */
+export type StaleReason = {
+  __typename?: 'StaleReason';
+  /** The changed site, hypothesis or run. */
+  inputId: Scalars['ID']['output'];
+  inputKind: ResultInputKind;
+  /** Its name (as it was used, when it has since been deleted). */
+  inputName: Scalars['String']['output'];
+  /** What changed, in words (names, not ids). */
+  message: Scalars['String']['output'];
+  /** The results the change reached this one through, nearest first; empty when the input is direct. */
+  via: Array<Scalars['String']['output']>;
+};
 
 export type StartAgeModelRunInput = {
   chains?: InputMaybe<Scalars['Int']['input']>;

@@ -67,7 +67,7 @@ describe(summariseRecurrence.name, () => {
     };
     expect(fieldOf(() => summariseRecurrence([[900, 500]], options))).toBe('eventAgeDraws');
     expect(fieldOf(() => summariseRecurrence([[900, 700, 500], [900, 500]], options))).toBe('eventAgeDraws');
-    expect(fieldOf(() => summariseRecurrence([[900, 500, 500]], options))).toBe('eventAgeDraws');
+    expect(fieldOf(() => summariseRecurrence([[900, 500, Number.NaN]], options))).toBe('eventAgeDraws');
     expect(fieldOf(() => summariseRecurrence(draws, { ...options, forecastStartYearCe: 1000 }))).toBe('forecastStartYearCe');
     expect(fieldOf(() => summariseRecurrence(draws, { ...options, windowsYears: [0] }))).toBe('windowsYears');
     expect(fieldOf(() => summariseRecurrence([], options))).toBe('eventAgeDraws');

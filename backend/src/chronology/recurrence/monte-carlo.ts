@@ -101,6 +101,12 @@ export interface RecurrenceOptions {
   readonly shouldCancel?: () => boolean;
   /** Draws between progress reports and cancellation checks (default 200). */
   readonly progressInterval?: number;
+  /**
+   * Seed for spreading tied ages (default 1). A site model's draws are grid years, each standing
+   * for the year centred on it (as the ordered sampler reads it); events that share a year become
+   * ordered uniform points in that year, so they still give intervals longer than zero.
+   */
+  readonly spreadSeed?: number;
 }
 
 /**
@@ -142,6 +148,7 @@ export function summariseRecurrence(
   const unconverged = new Float64Array(models.length);
 
   const ages = new Float64Array(eventCount);
+  const spreadRandom = new SeededRandom(options.spreadSeed ?? 1);
   const intervals = new Float64Array(intervalCount);
   const scratch = new Float64Array(intervalCount);
   for (let d = 0; d < drawCount; d++) {
@@ -149,7 +156,7 @@ export function summariseRecurrence(
       if (options.shouldCancel?.()) throw new RecurrenceCancelledError(d);
       if (d > 0) options.onProgress?.(d, drawCount);
     }
-    readDraw(eventAgeDraws[d], d, eventCount, ages);
+    readDraw(eventAgeDraws[d], d, eventCount, ages, spreadRandom);
     for (let k = 0; k < eventCount; k++) sortedAges[k][d] = ages[k];
     for (let i = 0; i < intervalCount; i++) {
       intervals[i] = ages[i] - ages[i + 1];
@@ -299,8 +306,13 @@ function checkOptions(options: RecurrenceOptions, models: readonly RenewalModel[
   return windows;
 }
 
-/** Copies a draw into `ages`, oldest first, checking it. */
-function readDraw(draw: ArrayLike<number>, index: number, eventCount: number, ages: Float64Array): void {
+/**
+ * Copies a draw into `ages`, oldest first, checking it. Ages that tie are spread as ordered
+ * uniform points in the year centred on them (sorted uniforms, so the order is kept): events a
+ * site model puts in one grid year get an interval below a year rather than an error. Spreading
+ * keeps the mean interval: two grid years d apart stay d apart on average either way.
+ */
+function readDraw(draw: ArrayLike<number>, index: number, eventCount: number, ages: Float64Array, random: SeededRandom): void {
   if (draw.length !== eventCount) {
     throw new RecurrenceInputError(
       'eventAgeDraws',
@@ -314,13 +326,34 @@ function readDraw(draw: ArrayLike<number>, index: number, eventCount: number, ag
     ages[k] = draw[k];
   }
   ages.sort().reverse();
-  for (let k = 0; k + 1 < eventCount; k++) {
-    if (!(ages[k] > ages[k + 1])) {
-      throw new RecurrenceInputError(
-        'eventAgeDraws',
-        `Draw ${index + 1} puts two events at the same age (${formatAge(ages[k])} cal BP); intervals must be longer than zero.`,
-      );
+  spreadWithinYears(ages, random);
+}
+
+/**
+ * Spreads ties in ages sorted oldest first: each run of equal ages becomes sorted uniform points
+ * in the year centred on it, [age - 0.5, age + 0.5), held strictly between its neighbours when a
+ * continuous neighbour lies inside that year. Ages that do not tie are left as they are.
+ */
+export function spreadWithinYears(ages: Float64Array, random: SeededRandom): void {
+  const n = ages.length;
+  let start = 0;
+  while (start < n) {
+    let end = start + 1;
+    while (end < n && ages[end] === ages[start]) end++;
+    if (end - start > 1) {
+      const centre = ages[start];
+      const high = start > 0 ? Math.min(centre + 0.5, ages[start - 1]) : centre + 0.5;
+      const low = end < n ? Math.max(centre - 0.5, ages[end]) : centre - 0.5;
+      for (let k = start; k < end; k++) {
+        let value: number;
+        do value = low + (high - low) * random.uniform();
+        while (value <= low || value >= high);
+        ages[k] = value;
+      }
+      // Oldest first: descending within the run.
+      ages.subarray(start, end).sort().reverse();
     }
+    start = end;
   }
 }
 

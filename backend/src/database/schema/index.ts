@@ -16,3 +16,4 @@ export * from './releases';
 export * from './recurrence-analyses';
 export * from './invitations';
 export * from './attachments';
+export * from './provenance';

@@ -1,5 +1,5 @@
 import { useParams } from 'react-router-dom';
-import { LadderView } from '@/modules/ladder/components/LadderView';
+import { LadderView } from '@/modules/correlation/components/LadderView';
 
 /** /projects/:projectId/ladder */
 export function LadderPage() {

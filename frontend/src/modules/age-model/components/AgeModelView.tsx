@@ -12,7 +12,7 @@ import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { roleAllows } from '@/modules/auth/utils/permissions';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
 import { CompactSiteLadder } from './CompactSiteLadder';
@@ -20,7 +20,7 @@ import { EventPosteriorChart, type LikelihoodOutline } from './EventPosteriorCha
 import { RunDiagnostics } from './RunDiagnostics';
 import { RunSettingsForm } from './RunSettingsForm';
 import { RunStatusPanel } from './RunStatusPanel';
-import '@/modules/ladder/components/charts.css';
+import '@/modules/correlation/components/charts.css';
 
 export type AgeModelViewProps = { projectId: string; siteId: string };
 

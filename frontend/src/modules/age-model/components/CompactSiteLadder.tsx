@@ -3,8 +3,8 @@ import { useMemo } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { verticalTicks } from '@/modules/ages/utils/ageAxis';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
-import { createTimeScale, ladderTimeWindow } from '@/modules/ladder/utils/ladderLayout';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
+import { createTimeScale, ladderTimeWindow } from '@/modules/correlation/utils/ladderLayout';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 420;

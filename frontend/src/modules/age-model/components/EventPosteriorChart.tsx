@@ -3,7 +3,7 @@ import { useMemo } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { ageAxisTitle, horizontalAgeTicks } from '@/modules/ages/utils/formatAge';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 146;

@@ -1,7 +1,7 @@
 import { line, scaleLinear } from 'd3';
 import { useMemo, type RefObject } from 'react';
 import type { RenewalModel } from '@/gql/graphql';
-import { CHART_COLOURS } from '@/modules/ladder/utils/chartPalette';
+import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/modules/recurrence/utils/recurrenceCharts';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 

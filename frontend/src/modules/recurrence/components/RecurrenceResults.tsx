@@ -4,9 +4,9 @@ import { useMemo, useRef, useState } from 'react';
 import type { RecurrenceAnalysisQuery } from '@/gql/graphql';
 import { AgeValue } from '@/modules/ages/components/AgeValues';
 import { useSession } from '@/modules/auth/hooks/useSession';
-import { FigureExportButtons } from '@/modules/ladder/components/FigureExportButtons';
-import { downloadWithToken } from '@/modules/ladder/utils/figureDownload';
-import { figureFileName } from '@/modules/ladder/utils/figureExport';
+import { FigureExportButtons } from '@/modules/correlation/components/FigureExportButtons';
+import { downloadWithToken } from '@/modules/correlation/utils/figureDownload';
+import { figureFileName } from '@/modules/correlation/utils/figureExport';
 import { MODEL_ORDER, RecurrenceCurveChart, type ModelCurve } from '@/modules/recurrence/components/RecurrenceCurveChart';
 import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, isJobActive, recurrenceExportUrl } from '@/modules/recurrence/utils/recurrenceCharts';
 

@@ -11,7 +11,7 @@ import { CancelRecurrenceAnalysisDocument, StartRecurrenceAnalysisDocument } fro
 import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
 import type { RecurrenceSettingsInput } from '@/modules/recurrence/utils/recurrenceForm';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
-import '@/modules/ladder/components/charts.css';
+import '@/modules/correlation/components/charts.css';
 
 export type RecurrenceViewProps = { projectId: string };
 

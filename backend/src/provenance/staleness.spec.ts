@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { type ProvenanceGraph, type ResultInput, type ResultKind, resultKey, staleReasons } from './staleness';
+
+/** A small project: two site runs, a joint run over both, analyses on the joint run and on one site run. */
+function graph(sites: Record<string, number>, hypothesisVersion: number | undefined, missing: string[] = []): ProvenanceGraph {
+  const inputs = new Map<string, ResultInput[]>([
+    [resultKey('ageModelRun', 'runA'), [{ kind: 'site', id: 'A', revision: 3, name: 'Tarn Flat' }]],
+    [resultKey('ageModelRun', 'runB'), [{ kind: 'site', id: 'B', revision: 5, name: 'Wren Core' }]],
+    [resultKey('jointRun', 'joint'), [
+      { kind: 'hypothesis', id: 'H', revision: 2, name: 'One to one' },
+      { kind: 'site', id: 'A', revision: 3, name: 'Tarn Flat' },
+      { kind: 'site', id: 'B', revision: 5, name: 'Wren Core' },
+    ]],
+    [resultKey('recurrenceAnalysis', 'onJoint'), [{ kind: 'jointRun', id: 'joint', revision: null, name: 'One to one' }]],
+    [resultKey('recurrenceAnalysis', 'onB'), [{ kind: 'ageModelRun', id: 'runB', revision: null, name: 'Wren Core' }]],
+    [resultKey('recurrenceAnalysis', 'segment'), [
+      { kind: 'hypothesis', id: 'H', revision: 2, name: 'One to one' },
+      { kind: 'ageModelRun', id: 'runA', revision: null, name: 'Tarn Flat' },
+      { kind: 'ageModelRun', id: 'runB', revision: null, name: 'Wren Core' },
+    ]],
+  ]);
+  for (const key of missing) inputs.delete(key);
+  const names: Record<string, string> = { A: 'Tarn Flat', B: 'Wren Core' };
+  return {
+    inputsOf: (kind: ResultKind, id: string) => inputs.get(resultKey(kind, id)),
+    site: (id) => (id in sites ? { revision: sites[id], name: names[id] } : undefined),
+    hypothesis: () => (hypothesisVersion === undefined ? undefined : { version: hypothesisVersion, name: 'One to one' }),
+  };
+}
+
+const stale = (g: ProvenanceGraph, kind: ResultKind, id: string) => staleReasons(kind, id, g).length > 0;
+
+describe('staleReasons', () => {
+  it('finds nothing while every input is as it was read', () => {
+    const g = graph({ A: 3, B: 5 }, 2);
+    for (const [kind, id] of [['ageModelRun', 'runA'], ['jointRun', 'joint'], ['recurrenceAnalysis', 'onJoint'], ['recurrenceAnalysis', 'segment']] as const) {
+      expect(staleReasons(kind, id, g)).toEqual([]);
+    }
+  });
+
+  it('carries a change at one site through every step that used it, and to nothing else', () => {
+    const g = graph({ A: 4, B: 5 }, 2);
+    expect(stale(g, 'ageModelRun', 'runA')).toBe(true);
+    expect(stale(g, 'jointRun', 'joint')).toBe(true);
+    expect(stale(g, 'recurrenceAnalysis', 'onJoint')).toBe(true);
+    expect(stale(g, 'recurrenceAnalysis', 'segment')).toBe(true);
+    expect(stale(g, 'ageModelRun', 'runB')).toBe(false);
+    expect(stale(g, 'recurrenceAnalysis', 'onB')).toBe(false);
+    const [reason] = staleReasons('recurrenceAnalysis', 'onJoint', g);
+    expect(reason).toMatchObject({ inputKind: 'site', inputId: 'A', via: ['joint age model run of One to one'] });
+    expect(reason.message).toContain('Tarn Flat');
+  });
+
+  it('names a new hypothesis version and a deleted input', () => {
+    expect(staleReasons('recurrenceAnalysis', 'segment', graph({ A: 3, B: 5 }, 4))[0].message).toContain('now version 4, this used version 2');
+    expect(staleReasons('recurrenceAnalysis', 'onB', graph({ A: 3, B: 5 }, 2, [resultKey('ageModelRun', 'runB')]))[0].message).toContain('was deleted');
+    expect(staleReasons('ageModelRun', 'runA', graph({ B: 5 }, 2))[0].message).toBe('site Tarn Flat was deleted');
+  });
+
+  it('checks a shared run once across calls with one memo', () => {
+    const g = graph({ A: 4, B: 5 }, 2);
+    let reads = 0;
+    const counting: ProvenanceGraph = { ...g, inputsOf: (kind, id) => ((reads += kind === 'ageModelRun' && id === 'runA' ? 1 : 0), g.inputsOf(kind, id)) };
+    const memo = new Map();
+    staleReasons('recurrenceAnalysis', 'segment', counting, memo);
+    const before = reads;
+    staleReasons('ageModelRun', 'runA', counting, memo);
+    expect(reads).toBe(before);
+  });
+});

@@ -1,0 +1,63 @@
+/**
+ * Plain reshaping of the API's ladder and hypothesis answers into what the charts look up:
+ * anchors by event id, site positions by event id, conflicting tie ids.
+ */
+import type { DensityPoint } from '@/modules/calibration/utils/calibrationChart';
+import type { EventAnchor, HpdRangeLike } from '@/modules/correlation/utils/ladderLayout';
+
+export type LadderEventLike = {
+  medianCalBp?: number | null;
+  eventHorizon: { id: string; name: string };
+  hpd95: readonly HpdRangeLike[];
+  density: readonly DensityPoint[];
+};
+export type LadderColumnLike = {
+  site: { id: string; name: string; kind: string; alongStrikeKm: number };
+  events: readonly LadderEventLike[];
+};
+
+/** Each event's column and median, by event id. */
+export function eventAnchors(columns: readonly LadderColumnLike[]): Map<string, EventAnchor> {
+  const anchors = new Map<string, EventAnchor>();
+  for (const column of columns) {
+    for (const event of column.events) {
+      anchors.set(event.eventHorizon.id, { eventId: event.eventHorizon.id, columnId: column.site.id, medianCalBp: event.medianCalBp ?? null });
+    }
+  }
+  return anchors;
+}
+
+/** The along-strike position of each event's site, by event id. */
+export function eventSiteKm(columns: readonly LadderColumnLike[]): Map<string, number> {
+  const positions = new Map<string, number>();
+  for (const column of columns) for (const event of column.events) positions.set(event.eventHorizon.id, column.site.alongStrikeKm);
+  return positions;
+}
+
+/** Ids of every tie named in an order conflict. */
+export function conflictingTieIds(conflicts: readonly { tieA: { id: string }; tieB: { id: string } }[]): Set<string> {
+  const ids = new Set<string>();
+  for (const conflict of conflicts) {
+    ids.add(conflict.tieA.id);
+    ids.add(conflict.tieB.id);
+  }
+  return ids;
+}
+
+/**
+ * Concordance below this is shown as a warning.
+ * [common practice]: members whose densities share less than half their mass are a weak match.
+ */
+export const LOW_CONCORDANCE = 0.5;
+
+/** A thinned posterior as the API's DensityGrid sends it (values are mean probability per year). */
+export type DensityGridLike = { startCalBp: number; stepYears: number; values: readonly number[] };
+
+/**
+ * A density grid as points for drawing: value i sits at startCalBp + i x stepYears. The values
+ * are per year already, so shapes drawn from a grid and from a 1-year density share one scale.
+ */
+export function gridToDensity(grid: DensityGridLike | null | undefined): DensityPoint[] {
+  if (!grid) return [];
+  return grid.values.map((probability, index) => ({ calBp: grid.startCalBp + index * grid.stepYears, probability }));
+}
