@@ -457,6 +457,26 @@ export type Invitation = {
   role: Role;
 };
 
+/** An invitation link's state, as its holder may see it. */
+export type InvitationLink = {
+  __typename?: 'InvitationLink';
+  /** The project the link invites to; null for an unknown token. */
+  projectName?: Maybe<Scalars['String']['output']>;
+  /** Whether the link can still be used. */
+  status: InvitationLinkStatus;
+};
+
+/** Whether an invitation link can still be used. */
+export type InvitationLinkStatus =
+  /** Past its expiry; a project admin can send a new one. */
+  | 'EXPIRED'
+  /** Not used and not expired: the form can be filled in. */
+  | 'OPEN'
+  /** No invitation has this token (mistyped or cut short). */
+  | 'UNKNOWN'
+  /** Already used to join the project; the holder signs in instead. */
+  | 'USED';
+
 export type InviteMemberInput = {
   email: Scalars['String']['input'];
   projectId: Scalars['ID']['input'];
@@ -822,6 +842,8 @@ export type Query = {
   eventLadder: EventLadder;
   fitRenewal: RenewalFit;
   hypothesis: Hypothesis;
+  /** What an invitation link can still do, asked before its form is shown (public: the token is the key). */
+  invitationLink: InvitationLink;
   /** The signed-in user. */
   me: User;
   project: Project;
@@ -876,6 +898,11 @@ export type QueryFitRenewalArgs = {
 
 export type QueryHypothesisArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type QueryInvitationLinkArgs = {
+  token: Scalars['String']['input'];
 };
 
 
@@ -1536,13 +1563,6 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
 
-export type ImportSamplesMutationVariables = Exact<{
-  input: ImportSamplesInput;
-}>;
-
-
-export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
-
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -1584,6 +1604,13 @@ export type SetPreferredHypothesisMutationVariables = Exact<{
 
 
 export type SetPreferredHypothesisMutation = { __typename?: 'Mutation', setPreferredHypothesis: { __typename?: 'Hypothesis', id: string, preferred: boolean } };
+
+export type ImportSamplesMutationVariables = Exact<{
+  input: ImportSamplesInput;
+}>;
+
+
+export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
@@ -1825,6 +1852,13 @@ export type RemoveMemberMutationVariables = Exact<{
 
 
 export type RemoveMemberMutation = { __typename?: 'Mutation', removeMember: boolean };
+
+export type InvitationLinkQueryVariables = Exact<{
+  token: Scalars['String']['input'];
+}>;
+
+
+export type InvitationLinkQuery = { __typename?: 'Query', invitationLink: { __typename?: 'InvitationLink', status: InvitationLinkStatus, projectName?: string | null } };
 
 export class TypedDocumentString<TResult, TVariables>
   extends String
@@ -2161,33 +2195,6 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
-export const ImportSamplesDocument = new TypedDocumentString(`
-    mutation ImportSamples($input: ImportSamplesInput!) {
-  importSamples(input: $input) {
-    rowCount
-    committed
-    errors {
-      row
-      field
-      message
-    }
-    preview {
-      row
-      labCode
-      unitName
-      medianCalBp
-      hpd95 {
-        ...HpdRangeFields
-      }
-      warnings
-    }
-  }
-}
-    fragment HpdRangeFields on HpdRange {
-  olderCalBp
-  youngerCalBp
-  probability
-}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2337,6 +2344,33 @@ export const SetPreferredHypothesisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<SetPreferredHypothesisMutation, SetPreferredHypothesisMutationVariables>;
+export const ImportSamplesDocument = new TypedDocumentString(`
+    mutation ImportSamples($input: ImportSamplesInput!) {
+  importSamples(input: $input) {
+    rowCount
+    committed
+    errors {
+      row
+      field
+      message
+    }
+    preview {
+      row
+      labCode
+      unitName
+      medianCalBp
+      hpd95 {
+        ...HpdRangeFields
+      }
+      warnings
+    }
+  }
+}
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<ImportSamplesMutation, ImportSamplesMutationVariables>;
 export const ProjectsDocument = new TypedDocumentString(`
     query Projects {
   projects {
@@ -2904,3 +2938,11 @@ export const RemoveMemberDocument = new TypedDocumentString(`
   removeMember(projectId: $projectId, userId: $userId)
 }
     `) as unknown as TypedDocumentString<RemoveMemberMutation, RemoveMemberMutationVariables>;
+export const InvitationLinkDocument = new TypedDocumentString(`
+    query InvitationLink($token: String!) {
+  invitationLink(token: $token) {
+    status
+    projectName
+  }
+}
+    `) as unknown as TypedDocumentString<InvitationLinkQuery, InvitationLinkQueryVariables>;
