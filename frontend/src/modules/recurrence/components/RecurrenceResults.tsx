@@ -8,7 +8,15 @@ import { FigureExportButtons } from '@/modules/correlation/components/FigureExpo
 import { downloadWithToken } from '@/modules/correlation/utils/figureDownload';
 import { figureFileName } from '@/modules/correlation/utils/figureExport';
 import { MODEL_ORDER, RecurrenceCurveChart, type ModelCurve } from '@/modules/recurrence/components/RecurrenceCurveChart';
-import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, isJobActive, recurrenceExportUrl } from '@/modules/recurrence/utils/recurrenceCharts';
+import {
+  elapsedSinceLastEvent,
+  formatProbability,
+  histogramAsDensity,
+  isJobActive,
+  recurrenceExportUrl,
+  RENEWAL_MODEL_NAMES,
+  type SharedRecurrenceAxes,
+} from '@/modules/recurrence/utils/recurrenceCharts';
 
 export type RecurrenceAnalysisData = RecurrenceAnalysisQuery['recurrenceAnalysis'];
 
@@ -17,6 +25,8 @@ export type RecurrenceResultsProps = {
   canCancel: boolean;
   cancelling: boolean;
   onCancel: () => void;
+  /** Axes shared with the other side of a comparison; each figure fits its own data without them. */
+  sharedAxes?: SharedRecurrenceAxes;
 };
 
 type Range = { median: number; low95: number; high95: number } | null | undefined;
@@ -44,7 +54,7 @@ export function analysisLabel(analysis: { segment?: { name: string } | null; sit
  * One recurrence analysis: the caution first, then progress or the figures, probabilities,
  * model comparison and statistics, with exports of the numbers and the figures.
  */
-export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }: RecurrenceResultsProps) {
+export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, sharedAxes }: RecurrenceResultsProps) {
   const session = useSession();
   const [exportError, setExportError] = useState<string | null>(null);
   const histogramFigure = useRef<SVGSVGElement | null>(null);
@@ -112,21 +122,45 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 <strong>Inter-event times and fitted densities</strong>
                 <FigureExportButtons figure={histogramFigure} title={`Intervals ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={densityCurves} bars={bars} xLabel="inter-event time, years" yLabel="density per year" figure={histogramFigure} />
+              <RecurrenceCurveChart
+                curves={densityCurves}
+                bars={bars}
+                xLabel="inter-event time, years"
+                yLabel="density per year"
+                yMax={sharedAxes?.densityMax}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={histogramFigure}
+              />
             </section>
             <section>
               <div className="sc-figure-head">
                 <strong>Hazard rate</strong>
                 <FigureExportButtons figure={hazardFigure} title={`Hazard ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={hazardCurves} marker={marker} xLabel="years since an event" yLabel="hazard per year" figure={hazardFigure} />
+              <RecurrenceCurveChart
+                curves={hazardCurves}
+                marker={marker}
+                xLabel="years since an event"
+                yLabel="hazard per year"
+                yMax={sharedAxes?.hazardMax}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={hazardFigure}
+              />
             </section>
             <section>
               <div className="sc-figure-head">
                 <strong>Survival</strong>
                 <FigureExportButtons figure={survivalFigure} title={`Survival ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={survivalCurves} marker={marker} xLabel="years since an event" yLabel="probability of no event" yMax={1} figure={survivalFigure} />
+              <RecurrenceCurveChart
+                curves={survivalCurves}
+                marker={marker}
+                xLabel="years since an event"
+                yLabel="probability of no event"
+                yMax={1}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={survivalFigure}
+              />
             </section>
           </div>
 
@@ -148,7 +182,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
             <tbody>
               {models.map((model) => (
                 <tr key={model.model}>
-                  <td>{model.model.toLowerCase()}</td>
+                  <td>{RENEWAL_MODEL_NAMES[model.model]}</td>
                   {windows.map((window) => {
                     const probability = model.probabilities.find((entry) => entry.windowYears === window);
                     const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
@@ -169,7 +203,10 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 </tr>
               ))}
               <tr>
-                <td>Poisson, 1 − exp(−ΔT/μ)</td>
+                <td>
+                  Poisson from each draw's mean recurrence,
+                  <br />1 − exp(−ΔT/μ)
+                </td>
                 {windows.map((window) => {
                   const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
                   return (
@@ -209,7 +246,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 .sort((a, b) => a.deltaAic - b.deltaAic)
                 .map((model) => (
                   <tr key={model.model}>
-                    <td>{model.model.toLowerCase()}</td>
+                    <td>{RENEWAL_MODEL_NAMES[model.model]}</td>
                     <td className="num">{model.meanRecurrenceYears.toFixed(0)}</td>
                     <td className="num">{model.model === 'POISSON' ? '–' : model.aperiodicity.toFixed(2)}</td>
                     <td className="num">{model.logLikelihood.toFixed(2)}</td>
@@ -220,9 +257,17 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 ))}
             </tbody>
           </HTMLTable>
+          <p className="sc-chart-legend">
+            Mean recurrence here is each model's fitted mean μ: the maximum-likelihood fit to the median event ages, with the time
+            since the last event as an interval still open. It is one number per model, not a range.
+          </p>
           {analysis.modelComparisonNote && <p className="sc-chart-legend">{analysis.modelComparisonNote}</p>}
 
           <h3>Interval statistics</h3>
+          <p className="sc-chart-legend">
+            Each figure is the median over the Monte Carlo draws of the event ages, with its 95 % range in brackets. The Poisson
+            row of the probability table uses this mean recurrence draw by draw.
+          </p>
           <HTMLTable compact className="sc-table">
             <tbody>
               <tr>
@@ -240,7 +285,10 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 <RangeCell range={analysis.openInterval} />
               </tr>
               <tr>
-                <th>Mean recurrence, yr</th>
+                <th>
+                  Mean recurrence, yr
+                  <div className="sc-chart-legend">mean of the closed intervals in each draw of the event ages</div>
+                </th>
                 <RangeCell range={analysis.meanRecurrence} />
               </tr>
               <tr>

@@ -81,3 +81,50 @@ export function recurrenceExportUrl(analysisId: string, format: 'csv' | 'json'):
 export function isJobActive(status: string): boolean {
   return status === 'QUEUED' || status === 'RUNNING';
 }
+
+/** Renewal models by name as written in text (the API's enum values are upper-case codes). */
+export const RENEWAL_MODEL_NAMES: Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIBULL', string> = {
+  POISSON: 'Poisson (memoryless)',
+  BPT: 'BPT (Brownian passage time)',
+  LOGNORMAL: 'Lognormal',
+  WEIBULL: 'Weibull',
+};
+
+/** The same, short, for chart legends. */
+export const RENEWAL_MODEL_SHORT_NAMES: Record<keyof typeof RENEWAL_MODEL_NAMES, string> = {
+  POISSON: 'Poisson',
+  BPT: 'BPT',
+  LOGNORMAL: 'Lognormal',
+  WEIBULL: 'Weibull',
+};
+
+/** What a side-by-side comparison needs of each analysis to put both on the same axes. */
+export type ComparableAnalysis = {
+  histogram: readonly HistogramBinLike[];
+  curves: readonly { density: readonly CurvePointLike[]; hazard: readonly CurvePointLike[]; survival: readonly CurvePointLike[] }[];
+  markerYears?: number | null;
+};
+
+/** Axes shared by two analyses shown side by side: one years range and one peak per figure. */
+export type SharedRecurrenceAxes = { yearsMax: number; densityMax: number; hazardMax: number };
+
+/**
+ * The axes both sides of a comparison use, so equal heights and positions mean equal values:
+ * the furthest year and the highest density and hazard of either analysis.
+ */
+export function sharedRecurrenceAxes(analyses: readonly ComparableAnalysis[]): SharedRecurrenceAxes {
+  const years = yearsExtent(
+    analyses.flatMap((analysis) => analysis.curves.flatMap((curve) => [curve.density, curve.hazard, curve.survival])),
+    analyses.flatMap((analysis) => analysis.histogram),
+    analyses.map((analysis) => analysis.markerYears),
+  )[1];
+  return {
+    yearsMax: years,
+    densityMax: valuePeak(
+      analyses.flatMap((analysis) => analysis.curves.map((curve) => curve.density)),
+      // Each histogram is a density of its own draws: normalised per analysis, never pooled.
+      analyses.flatMap((analysis) => histogramAsDensity(analysis.histogram)),
+    ),
+    hazardMax: valuePeak(analyses.flatMap((analysis) => analysis.curves.map((curve) => curve.hazard))),
+  };
+}
