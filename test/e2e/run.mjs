@@ -457,9 +457,10 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   // The regional event now holds both events, with its concordance, chi-square, rupture and Mw checks.
   const card = page.locator('.sc-regional-card').filter({ hasText: labelA }).filter({ hasText: labelB }).first();
   await card.waitFor();
-  for (const label of ['Concordance', 'χ² test', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
-  const chiSquare = (await card.locator('dt:has-text("χ² test") + dd').innerText()).trim();
-  check(/T = /.test(chiSquare), `the regional event has no chi-square test: "${chiSquare}"`);
+  for (const label of ['Concordance', 'Same age?', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
+  // The same-age test in words: the spread, the 5 % limit and what it means.
+  const chiSquare = (await card.locator('dt:has-text("Same age?") + dd').innerText()).trim();
+  check(/spread by [\d.]+, (under|over) [\d.]+.*1 time in 20/.test(chiSquare), `the regional event's same-age test does not say spread, limit and meaning: "${chiSquare}"`);
   await card.scrollIntoViewIfNeeded();
   log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');

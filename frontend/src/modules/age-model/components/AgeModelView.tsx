@@ -223,8 +223,8 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
             <h3>Samples</h3>
             {flaggedCount > 0 && (
               <Callout intent={Intent.WARNING} icon={IconNames.FLAG}>
-                {flaggedCount} sample{flaggedCount === 1 ? '' : 's'} with an outlier probability above{' '}
-                <span className="num">{OUTLIER_FLAG_PROBABILITY}</span>: check the material and its position.
+                {flaggedCount} sample{flaggedCount === 1 ? '' : 's'} the run finds more than <span className="num">{Math.round(OUTLIER_FLAG_PROBABILITY * 100)} %</span>{' '}
+                likely to be misplaced: check the material and where it was taken.
               </Callout>
             )}
             <HTMLTable compact striped className="sc-table">
@@ -233,7 +233,7 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                   <th>Lab code</th>
                   <th>Median</th>
                   <th>95.4 % range</th>
-                  <th>Outlier p</th>
+                  <th title="After the run: how likely the sample is misplaced (reworked, intruded, mislabelled), given the column's order">Misplaced?</th>
                 </tr>
               </thead>
               <tbody>
@@ -247,10 +247,10 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                       <AgeRangesValue ranges={entry.hpd95} />
                     </td>
                     <td>
-                      <span className="num">{entry.outlierProbability.toFixed(2)}</span>{' '}
+                      <span className="num">{Math.round(entry.outlierProbability * 100)} %</span>{' '}
                       {isFlaggedOutlier(entry.outlierProbability) && (
                         <Tag intent={Intent.WARNING} minimal icon={IconNames.FLAG}>
-                          outlier?
+                          check
                         </Tag>
                       )}
                     </td>

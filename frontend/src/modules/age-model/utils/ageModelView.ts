@@ -66,7 +66,12 @@ export type RunSettingsInput = {
   inheritanceScaleYears: number | null;
 };
 
-/** The form's starting values: the server's documented defaults, and a blank seed (random). */
+/**
+ * The form's starting values: the server's documented defaults, and a blank seed (random). The
+ * chance a sample is misplaced starts at 0.05: one sample in twenty reworked, intruded or
+ * mislabelled, the prior most often used for outlier models of radiocarbon sequences
+ * (Bronk Ramsey 2009, Radiocarbon 51(3):1023-1045) [common practice].
+ */
 export const DEFAULT_RUN_SETTINGS: RunSettingsForm = {
   seed: '',
   iterations: '20000',
