@@ -12,7 +12,9 @@ import { CalibrationModule } from './calibration/calibration.module';
 import { formatGraphqlError } from './common/errors/format-graphql-error';
 import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
-import { complexityLimitPlugin, depthLimitRule } from './common/graphql-limits';
+import { costLimitPlugin } from './common/graphql-cost';
+import { inputScreeningPlugin } from './common/graphql-input-screen';
+import { depthLimitRule } from './common/graphql-limits';
 import { repositoryRoot } from './common/repo-paths';
 import { DateTimeScalar, JsonScalar, NumberListScalar } from './common/scalars/scalars';
 import { APP_CONFIG, AppConfig } from './config/config';
@@ -21,13 +23,14 @@ import { DatabaseModule } from './database/database.module';
 import { DemoModule } from './demo/demo.module';
 import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
+import { CoreLogsModule } from './core-logs/core-logs.module';
 import { CorrelationModule } from './correlation/correlation.module';
 import { JobsModule } from './jobs/jobs.module';
 import { LoadersModule } from './loaders/loaders.module';
 import { RequestLoadersFactory } from './loaders/request-loaders';
 import { EventLadderCache } from './correlation/ladder-cache/event-ladder-cache';
 import { ProjectsModule } from './projects/projects.module';
-import { ProvenanceModule } from './provenance/provenance.module';
+import { ProvenanceApiModule } from './provenance/provenance-api.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
@@ -59,7 +62,8 @@ import { ReleasesModule } from './releases/releases.module';
         validationRules: [depthLimitRule()],
         // No field carries cache hints, and the default cache-control plugin's per-field hook
         // cost ~10 % of executing a large answer such as the event ladder.
-        plugins: [ApolloServerPluginCacheControlDisabled(), complexityLimitPlugin(), ladderCache.plugin()],
+        // Inputs are screened (ids, NUL) and the operation priced before any resolver runs.
+        plugins: [ApolloServerPluginCacheControlDisabled(), inputScreeningPlugin(), costLimitPlugin(), ladderCache.plugin()],
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
         context: ({ req }: { req: unknown }) => ({ req, loaders: loaders.create() }),
@@ -69,7 +73,7 @@ import { ReleasesModule } from './releases/releases.module';
     HealthModule,
     UsersModule,
     ProjectsModule,
-    ProvenanceModule,
+    ProvenanceApiModule,
     SegmentsModule,
     SitesModule,
     UnitsModule,
@@ -82,6 +86,7 @@ import { ReleasesModule } from './releases/releases.module';
     AgeModelsModule,
     RecurrenceModule,
     CorrelationModule,
+    CoreLogsModule,
     AttachmentsModule,
     ExchangeModule,
     ReleasesModule,

@@ -1,12 +1,11 @@
 import 'reflect-metadata';
 import { NestFactory } from '@nestjs/core';
-import { AgeModelJob } from './age-models/age-model.job';
-import { ThumbnailJob } from './attachments/thumbnail.job';
 import { loadConfig } from './config/config';
 import { runMigrations } from './database/migrate';
-import { JobQueueService, QUEUES } from './jobs/job-queue.service';
+import { JobQueueService } from './jobs/job-queue.service';
 import { JobReaper } from './jobs/job-reaper';
-import { RecurrenceJob } from './recurrence/recurrence.job';
+import { JobRegistry } from './jobs/job-registry';
+import { RunExecutor } from './jobs/run-executor';
 import { WorkerModule } from './worker.module';
 
 /** How often each worker looks for runs whose worker died. */
@@ -18,12 +17,12 @@ async function bootstrap(): Promise<void> {
   const app = await NestFactory.createApplicationContext(WorkerModule, { logger: ['log', 'error', 'warn'] });
   app.enableShutdownHooks();
   const jobs = app.get(JobQueueService);
-  const ageModel = app.get(AgeModelJob);
-  await jobs.work(QUEUES.ageModel, config.workerConcurrency, ({ runId }) => ageModel.execute(runId));
-  const recurrence = app.get(RecurrenceJob);
-  await jobs.work(QUEUES.recurrence, config.workerConcurrency, ({ runId }) => recurrence.execute(runId));
-  const thumbnails = app.get(ThumbnailJob);
-  await jobs.work(QUEUES.thumbnail, config.workerConcurrency, ({ attachmentId }) => thumbnails.execute(attachmentId));
+  const runs = app.get(RunExecutor);
+  // Every kind the worker module's features registered: runs through the shared executor, tasks by themselves.
+  for (const kind of app.get(JobRegistry).all()) {
+    if (kind.type === 'run') await jobs.work(kind, config.workerConcurrency, ({ runId }) => runs.execute(kind, runId));
+    else await jobs.work(kind, config.workerConcurrency, (payload) => kind.handle(payload));
+  }
   const reaper = app.get(JobReaper);
   setInterval(() => void reaper.reapOnce().catch(() => undefined), REAP_INTERVAL_MS).unref();
   console.log(`Stratochron worker ${process.pid} ready (concurrency ${config.workerConcurrency})`);

@@ -190,6 +190,35 @@ describe('hypotheses and regional events', () => {
     expect(conflict.message).toContain('cross');
   });
 
+  it('reports a loop through three sites that no pair of sites shows, with its sites, events and ties', async () => {
+    // X = A2 + B1, Y = B2 + C1, Z = C2 + A1: at Gorse Marsh Z is below X, at Heron Core X below
+    // Y, at Ivel Trench Y below Z. Each pair meets at one site only, yet Z < X < Y < Z in age.
+    const loop = await createHypothesis(clients.CORRELATOR, 'Three-site loop');
+    const tieIds: string[] = [];
+    for (const [a, b] of [['A2', 'B1'], ['B2', 'C1'], ['C2', 'A1']]) {
+      const { addTie } = await clients.CORRELATOR.ok(ADD_TIE, tieInput(loop.id, a, b));
+      tieIds.push(addTie.id);
+    }
+    const { hypothesis } = await clients.VIEWER.ok(
+      `query($id: ID!) { hypothesis(id: $id) { orderConflicts { message ties { id } events { id } sites { id name }
+        steps { site { id } older { id } younger { id } } regionalEventIds } } }`,
+      { id: loop.id },
+    );
+    expect(hypothesis.orderConflicts).toHaveLength(1);
+    const [conflict] = hypothesis.orderConflicts;
+    expect(conflict.ties.map((t: { id: string }) => t.id).sort()).toEqual([...tieIds].sort());
+    expect(conflict.sites.map((site: { id: string }) => site.id)).toEqual([siteIds.A, siteIds.B, siteIds.C]);
+    expect(conflict.events.map((e: { id: string }) => e.id).sort()).toEqual(Object.values(events).sort());
+    expect(conflict.regionalEventIds).toHaveLength(3);
+    expect(conflict.steps).toHaveLength(3);
+    for (const step of conflict.steps) {
+      const site = Object.keys(siteIds).find((key) => siteIds[key] === step.site.id) as string;
+      expect(step.older.id).toBe(events[`${site}1`]);
+      expect(step.younger.id).toBe(events[`${site}2`]);
+    }
+    for (const name of ['Gorse Marsh', 'Heron Core', 'Ivel Trench']) expect(conflict.message).toContain(name);
+  });
+
   it('removes a tie, bumps the version and audits every tie change', async () => {
     const scratch = await createHypothesis(clients.CORRELATOR, 'Scratch');
     const { addTie } = await clients.CORRELATOR.ok(ADD_TIE, tieInput(scratch.id, 'A1', 'C1'));

@@ -1,5 +1,9 @@
+import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parseRangesCalBp } from '../../backend/src/provenance/result-tables';
+import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture } from '../support/fixtures';
@@ -17,6 +21,13 @@ const ADD_TIE = `mutation($i: AddTieInput!) { addTie(input: $i) { id } }`;
 const REMOVE_TIE = `mutation($id: ID!) { removeTie(id: $id) }`;
 const START_ANALYSIS = `mutation($i: StartRecurrenceAnalysisInput!) { startRecurrenceAnalysis(input: $i) { id } }`;
 const RUN = `query($id: ID!) { ageModelRun(id: $id) { id status stale staleReasons { message inputKind inputId inputName via } } }`;
+const RUN_EVENTS = `query($id: ID!) { ageModelRun(id: $id) { seed events { eventHorizon { id name } medianCalBp hpd68 { olderCalBp youngerCalBp } hpd95 { olderCalBp youngerCalBp } } } }`;
+const REGIONAL = `query($id: ID!) { hypothesis(id: $id) { version regionalEvents { members { id } combinedMedianCalBp combinedHpd95 { olderCalBp youngerCalBp } concordance } } }`;
+const REFRESH = `mutation($p: ID!) { refreshStaleResults(projectId: $p) { id status ageModelRuns { id } jointRuns { id } recurrenceAnalyses { id }
+  steps { id stage kind staleId label status freshId message dependsOn } skipped { kind id label reason } } }`;
+const PLAN = `query($id: ID!) { refreshPlan(id: $id) { id status ageModelRuns { id } recurrenceAnalyses { id seed stale inputs { ageModelRuns { id } hypothesisVersion } }
+  steps { id stage kind staleId label status freshId message dependsOn } } }`;
+const CANCEL_RUN = `mutation($id: ID!) { cancelAgeModelRun(id: $id) { id status } }`;
 const ANALYSIS = `query($id: ID!) { recurrenceAnalysis(id: $id) { id status stale
   staleReasons { message inputKind inputId inputName via }
   inputs { ageModelRuns { id } jointRun { id } hypothesis { id } hypothesisVersion recorded { kind id name revision } } } }`;
@@ -40,15 +51,20 @@ let hypothesisId: string;
 let firstTieId: string;
 const analyses = { segment: '', siteC: '' };
 
+/** Run a queued job in the test process, as a worker would. */
+async function executeRun(kind: typeof AgeModelJob | typeof RecurrenceJob, id: string): Promise<void> {
+  await server.app.get(RunExecutor).execute(server.app.get(kind), id);
+}
+
 async function runAgeModel(siteId: string): Promise<string> {
   const { startAgeModelRun } = await clients.RESEARCHER.ok(START_RUN, { i: { siteId, iterations: 1500, seed: 11 } });
-  await server.app.get(AgeModelJob).execute(startAgeModelRun.id);
+  await executeRun(AgeModelJob, startAgeModelRun.id);
   return startAgeModelRun.id;
 }
 
 async function runAnalysis(input: Record<string, unknown>): Promise<string> {
   const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START_ANALYSIS, { i: { draws: 200, seed: 5, forecastStartYear: 2030, ...input } });
-  await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+  await executeRun(RecurrenceJob, startRecurrenceAnalysis.id);
   return startRecurrenceAnalysis.id;
 }
 
@@ -147,5 +163,189 @@ describe('staleness downstream', () => {
   it('hides a run and an analysis from outsiders', async () => {
     expect((await clients.OUTSIDER.errorOf(ANALYSIS, { id: analyses.segment })).code).toBe('NOT_FOUND');
     expect((await clients.OUTSIDER.errorOf(RUN, { id: site.A.run })).code).toBe('NOT_FOUND');
+  });
+});
+
+/** GET with a client's bearer token. */
+async function download(client: GraphqlClient, path: string): Promise<Response> {
+  return fetch(`${server.url}${path}`, { headers: client.token ? { authorization: `Bearer ${client.token}` } : {} });
+}
+
+/** A table download split into its inputs (field -> value) and its rows under the title line. */
+function readTableCsv(text: string, title: string) {
+  const rows = Papa.parse<string[]>(text, { skipEmptyLines: false }).data;
+  const inputs = new Map<string, string>();
+  const start = rows.findIndex((r) => r[0] === 'inputs');
+  let i = start + 2;
+  for (; rows[i] && rows[i].length === 2; i++) inputs.set(rows[i][0], rows[i][1]);
+  const at = rows.findIndex((r) => r[0] === title && r.length === 1);
+  const header = rows[at + 1];
+  const body = rows.slice(at + 2).filter((r) => r.length === header.length);
+  return { inputs, body: body.map((r) => Object.fromEntries(header.map((h, k) => [h, r[k]]))) };
+}
+
+const pairs = (ranges: { olderCalBp: number; youngerCalBp: number }[]) => ranges.map((r) => [r.olderCalBp, r.youngerCalBp]);
+
+describe('exports', () => {
+  it('round-trips a run\'s event ages through CSV and JSON, naming site, run and seed', async () => {
+    const { ageModelRun } = await clients.VIEWER.ok(RUN_EVENTS, { id: site.B.run });
+    const csv = await download(clients.VIEWER, `/api/age-model-runs/${site.B.run}/events.csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get('content-type')).toContain('text/csv');
+    const { inputs, body } = readTableCsv(await csv.text(), 'event ages');
+    expect(inputs.get('site')).toBe('Wren Core');
+    expect(inputs.get('age model run id')).toBe(site.B.run);
+    expect(Number(inputs.get('seed'))).toBe(ageModelRun.seed);
+    expect(body).toHaveLength(3);
+    for (const event of ageModelRun.events) {
+      const row = body.find((r) => r['event horizon id'] === event.eventHorizon.id)!;
+      expect(row.site).toBe('Wren Core');
+      expect(row.event).toBe(event.eventHorizon.name);
+      expect(Number(row['median (cal BP)'])).toBe(event.medianCalBp);
+      expect(parseRangesCalBp(row['68.3 % range (cal BP)'])).toEqual(pairs(event.hpd68));
+      expect(parseRangesCalBp(row['95.4 % range (cal BP)'])).toEqual(pairs(event.hpd95));
+      // CE/BCE: 1950 - cal BP, with no year 0 (1 BCE is astronomical year 0) [common practice].
+      const year = 1950 - Math.round(event.medianCalBp);
+      expect(row['median (CE/BCE)']).toBe(year > 0 ? `${year} CE` : `${1 - year} BCE`);
+    }
+    const json = await (await download(clients.VIEWER, `/api/age-model-runs/${site.B.run}/events.json`)).json();
+    expect(json.inputs).toContainEqual({ field: 'seed', value: ageModelRun.seed });
+    for (const event of ageModelRun.events) {
+      const row = json.rows.find((r: { eventHorizonId: string }) => r.eventHorizonId === event.eventHorizon.id);
+      expect(row.medianCalBp).toBe(event.medianCalBp);
+      expect(pairs(row.hpd95)).toEqual(pairs(event.hpd95));
+    }
+  });
+
+  it('round-trips a hypothesis\' regional events with their checks', async () => {
+    const { hypothesis } = await clients.VIEWER.ok(REGIONAL, { id: hypothesisId });
+    const response = await download(clients.ANALYST, `/api/hypotheses/${hypothesisId}/regional-events.csv`);
+    expect(response.status).toBe(200);
+    const { inputs, body } = readTableCsv(await response.text(), 'regional events');
+    expect(inputs.get('hypothesis')).toBe('Invented one-to-one');
+    expect(Number(inputs.get('hypothesis version'))).toBe(hypothesis.version);
+    expect(inputs.get('age model run of Wren Core')).toContain(site.B.run);
+    expect(body).toHaveLength(hypothesis.regionalEvents.length);
+    for (const [i, event] of hypothesis.regionalEvents.entries()) {
+      const row = body[i];
+      expect(row['member event horizon ids'].split(' ').sort()).toEqual(event.members.map((m: { id: string }) => m.id).sort());
+      if (event.combinedMedianCalBp === null) continue;
+      expect(Number(row['median (cal BP)'])).toBe(event.combinedMedianCalBp);
+      expect(parseRangesCalBp(row['95.4 % range (cal BP)'])).toEqual(pairs(event.combinedHpd95));
+      expect(row['age concordance'] === '' ? null : Number(row['age concordance'])).toBe(event.concordance);
+    }
+    expect(body.some((r) => r['members (site: event)'].includes('Tarn Flat: A-E'))).toBe(true);
+  });
+
+  it('gives an analysis\' event table with its caution, inputs and seed', async () => {
+    const response = await download(clients.VIEWER, `/api/recurrence-analyses/${analyses.segment}/events.csv`);
+    const text = await response.text();
+    expect(text.startsWith(RECURRENCE_CAUTION)).toBe(true);
+    const { inputs, body } = readTableCsv(text, 'analysis events');
+    expect(Number(inputs.get('seed'))).toBe(5);
+    expect(inputs.get('hypothesis')).toContain('Invented one-to-one version 4');
+    expect(body.length).toBeGreaterThanOrEqual(3);
+    const medians = body.map((r) => Number(r['median (cal BP)']));
+    expect(medians).toEqual([...medians].sort((a, b) => a - b));
+  });
+
+  it('answers 404 to outsiders and 401 without a token, for every table', async () => {
+    for (const path of [
+      `/api/age-model-runs/${site.A.run}/events.csv`,
+      `/api/hypotheses/${hypothesisId}/regional-events.csv`,
+      `/api/recurrence-analyses/${analyses.segment}/events.json`,
+    ]) {
+      expect((await download(clients.OUTSIDER, path)).status).toBe(404);
+      expect((await download(new GraphqlClient(server.url), path)).status).toBe(401);
+    }
+    expect((await download(clients.VIEWER, '/api/age-model-runs/not-a-uuid/events.csv')).status).toBe(404);
+  });
+
+  it('downloads a release as one bundle: frozen data, pinned analyses with their event tables and the runs they used', async () => {
+    const { createRelease } = await clients.ADMIN.ok(`mutation($i: CreateReleaseInput!) { createRelease(input: $i) { id number } }`, {
+      i: { projectId: fixture.projectId, note: 'Invented data set for the provenance spec' },
+    });
+    const pinned = await runAnalysis({ siteId: site.C.id, releaseId: createRelease.id });
+    const response = await download(clients.VIEWER, `/api/releases/${createRelease.id}/bundle.json`);
+    expect(response.status).toBe(200);
+    const bundle = await response.json();
+    expect(bundle.release).toMatchObject({ id: createRelease.id, number: createRelease.number });
+    expect(bundle.data.sites.map((s: { name: string }) => s.name).sort()).toEqual(['Sedge Bank', 'Tarn Flat', 'Wren Core']);
+    expect(bundle.recurrenceAnalyses).toHaveLength(1);
+    expect(bundle.recurrenceAnalyses[0].results.analysis.id).toBe(pinned);
+    expect(bundle.recurrenceAnalyses[0].events.inputs).toContainEqual({ field: 'seed', value: 5 });
+    expect(bundle.ageModelRuns.map((t: { inputs: { field: string; value: unknown }[] }) => t.inputs.find((i) => i.field === 'age model run id')?.value)).toEqual([site.C.run]);
+    expect((await download(clients.OUTSIDER, `/api/releases/${createRelease.id}/bundle.json`)).status).toBe(404);
+  });
+});
+
+describe('refreshStaleResults', () => {
+  type Step = { id: string; stage: number; kind: string; staleId: string; label: string; status: string; freshId: string | null; message: string | null; dependsOn: string[] };
+  const planOf = async (id: string) => (await clients.VIEWER.ok(PLAN, { id })).refreshPlan;
+
+  it('is refused to viewers and hidden from outsiders', async () => {
+    expect((await clients.VIEWER.errorOf(REFRESH, { p: fixture.projectId })).code).toBe('FORBIDDEN');
+    expect((await clients.OUTSIDER.errorOf(REFRESH, { p: fixture.projectId })).code).toBe('NOT_FOUND');
+  });
+
+  it('queues nothing an analyst or correlator may not start, and says what it skipped and why', async () => {
+    const { refreshStaleResults: analyst } = await clients.ANALYST.ok(REFRESH, { p: fixture.projectId });
+    expect(analyst).toMatchObject({ status: 'FINISHED', steps: [], ageModelRuns: [], recurrenceAnalyses: [] });
+    expect(analyst.skipped).toEqual(expect.arrayContaining([
+      expect.objectContaining({ kind: 'ageModelRun', id: site.A.run, label: 'age model of Tarn Flat', reason: expect.stringContaining('cannot run age models') }),
+      expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.segment, reason: expect.stringContaining('not refreshed by you') }),
+    ]));
+    const { refreshStaleResults: correlator } = await clients.CORRELATOR.ok(REFRESH, { p: fixture.projectId });
+    expect(correlator.steps).toEqual([]);
+    expect(correlator.skipped.map((s: { id: string }) => s.id).sort()).toEqual([site.A.run, analyses.segment].sort());
+  });
+
+  it('re-runs exactly the stale results in dependency order, with their seeds; a failure stops only what depends on it', async () => {
+    // Site C changes too: now runs A and C, the segment analysis (A, B) and the site analysis of C are stale; B and its run are not.
+    const unitC = site.C.units[0];
+    await clients.RESEARCHER.ok(UPDATE_UNIT, { id: unitC.id, v: unitC.version, i: { notes: 'base re-measured' } });
+    unitC.version += 1;
+    const { refreshStaleResults: plan } = await clients.ADMIN.ok(REFRESH, { p: fixture.projectId });
+    const steps = plan.steps as Step[];
+    expect(steps.map((s) => `${s.kind}:${s.staleId}`).sort()).toEqual(
+      [`ageModelRun:${site.A.run}`, `ageModelRun:${site.C.run}`, `recurrenceAnalysis:${analyses.segment}`, `recurrenceAnalysis:${analyses.siteC}`].sort(),
+    );
+    const step = (staleId: string) => steps.find((s) => s.staleId === staleId)!;
+    expect(step(site.A.run)).toMatchObject({ stage: 1, status: 'QUEUED' });
+    expect(step(site.C.run)).toMatchObject({ stage: 1, status: 'QUEUED' });
+    expect(step(analyses.segment)).toMatchObject({ stage: 3, status: 'WAITING', freshId: null, dependsOn: [step(site.A.run).id] });
+    expect(step(analyses.siteC)).toMatchObject({ stage: 3, status: 'WAITING', dependsOn: [step(site.C.run).id] });
+    expect(plan.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([step(site.A.run).freshId, step(site.C.run).freshId].sort());
+    expect(plan.recurrenceAnalyses).toEqual([]);
+    expect(plan.skipped).toEqual([]);
+
+    // The fresh run of C is cancelled (a failure); the fresh run of A succeeds.
+    await clients.RESEARCHER.ok(CANCEL_RUN, { id: step(site.C.run).freshId });
+    await executeRun(AgeModelJob, step(site.A.run).freshId!);
+    let now = await planOf(plan.id);
+    const nowStep = (staleId: string) => (now.steps as Step[]).find((s) => s.staleId === staleId)!;
+    expect(nowStep(site.A.run).status).toBe('SUCCEEDED');
+    expect(nowStep(site.C.run).status).toBe('FAILED');
+    expect(nowStep(analyses.siteC)).toMatchObject({ status: 'BLOCKED', message: 'not started: age model of Sedge Bank failed' });
+    expect(nowStep(analyses.segment).status).toBe('QUEUED');
+    expect(now.status).toBe('ACTIVE');
+
+    await executeRun(RecurrenceJob, nowStep(analyses.segment).freshId!);
+    now = await planOf(plan.id);
+    expect(nowStep(analyses.segment).status).toBe('SUCCEEDED');
+    expect(now.status).toBe('FINISHED');
+    const [fresh] = now.recurrenceAnalyses;
+    expect(fresh.id).toBe(nowStep(analyses.segment).freshId);
+    expect(fresh).toMatchObject({ seed: 5, stale: false, inputs: { hypothesisVersion: 5 } });
+    expect(fresh.inputs.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([nowStep(site.A.run).freshId, site.B.run].sort());
+    // The fresh run kept the stale run's seed and settings.
+    const { ageModelRun } = await clients.VIEWER.ok(`query($id: ID!) { ageModelRun(id: $id) { seed settings stale } }`, { id: nowStep(site.A.run).freshId });
+    expect(ageModelRun).toMatchObject({ seed: 11, stale: false, settings: expect.objectContaining({ iterations: 1500 }) });
+  });
+
+  it('lets a researcher refresh the site run that is still stale, skipping the analysis it may not start', async () => {
+    const { refreshStaleResults: plan } = await clients.RESEARCHER.ok(REFRESH, { p: fixture.projectId });
+    expect((plan.steps as Step[]).map((s) => s.staleId)).toEqual([site.C.run]);
+    expect(plan.skipped).toEqual([expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.siteC, reason: expect.stringContaining('cannot run recurrence analyses') })]);
   });
 });

@@ -3,11 +3,12 @@ import { storeDensity, type StoredAgeModelResults } from '../../backend/src/age-
 import { normalDensity, summarise } from '../../backend/src/chronology/common/density';
 import { SeededRandom } from '../../backend/src/chronology/common/random';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
-import { AgeModelRunsRepository } from '../../backend/src/age-models/age-model-runs.repository';
 import { JobQueueService } from '../../backend/src/jobs/job-queue.service';
 import { JobReaper } from '../../backend/src/jobs/job-reaper';
+import { JobRegistry } from '../../backend/src/jobs/job-registry';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
+import { RunsRepository } from '../../backend/src/jobs/runs.repository';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
-import { RecurrenceRepository } from '../../backend/src/recurrence/recurrence.repository';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -26,8 +27,14 @@ const ANALYSIS = `query($id: ID!) { recurrenceAnalysis(id: $id) { id status prog
   intervals { index medianYears low95 high95 }
   meanRecurrence { median low95 high95 } medianRecurrence { median low95 high95 } sdRecurrence { median low95 high95 }
   aperiodicity { median low95 high95 } poisson { windowYears median low95 high95 }
-  models { model aic deltaAic akaikeWeight meanRecurrenceYears aperiodicity logLikelihood probabilities { windowYears median low95 high95 } }
+  models { model aic aicc akaikeWeight meanRecurrenceYears aperiodicity logLikelihood deltaAic deltaAicc
+    meanRecurrenceRange { median low95 high95 datingOnlyLow95 datingOnlyHigh95 }
+    probabilities { windowYears median low95 high95 datingOnlyLow95 datingOnlyHigh95 } }
+  modelAveraged { windowYears median low95 high95 datingOnlyLow95 datingOnlyHigh95 } parameterNote
   modelComparisonNote histogram { fromYears toYears count } caution } }`;
+const FORECAST = `query($i: RenewalForecastInput!) { renewalForecast(input: $i) {
+  meanRecurrence { median low95 high95 } aperiodicity { median low95 high95 }
+  probabilities { windowYears median low95 high95 } approximateDraws priorNote caution } }`;
 const CURVES = `query($id: ID!) { recurrenceAnalysis(id: $id) { curves { model density { years value } hazard { years value } survival { years value } } } }`;
 
 let server: TestServer;
@@ -69,7 +76,7 @@ async function writeSucceededRun(siteId: string, horizonIds: string[], ages: rea
 
 async function runAnalysis(input: Record<string, unknown>, client = clients.ANALYST) {
   const { startRecurrenceAnalysis } = await client.ok(START, { i: input });
-  await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+  await server.app.get(RunExecutor).execute(server.app.get(RecurrenceJob), startRecurrenceAnalysis.id);
   return (await client.ok(ANALYSIS, { id: startRecurrenceAnalysis.id })).recurrenceAnalysis;
 }
 
@@ -166,6 +173,38 @@ describe('fitRenewal', () => {
   });
 });
 
+describe('renewalForecast', () => {
+  const record = { intervalsYears: [420, 610, 380, 550, 490, 600], openIntervalYears: 300, windowsYears: [30, 50, 100], seed: 2 };
+
+  it('gives posterior ranges of the BPT parameters and window probabilities [reference library: scipy grid quadrature, see posterior.spec.ts]', async () => {
+    const { renewalForecast } = await clients.VIEWER.ok(FORECAST, { i: { model: 'BPT', ...record } });
+    // SciPy quadrature of the censored posterior: mean recurrence 426.6-508.9-638.5, 50-year probability median 0.035, 97.5 % 0.171.
+    expect(renewalForecast.meanRecurrence.low95).toBeGreaterThan(426.6 * 0.96);
+    expect(renewalForecast.meanRecurrence.high95).toBeLessThan(638.5 * 1.04);
+    expect(renewalForecast.probabilities[1]).toMatchObject({ windowYears: 50 });
+    expect(renewalForecast.probabilities[1].median).toBeCloseTo(0.035, 1);
+    expect(renewalForecast.probabilities[1].high95).toBeCloseTo(0.171, 1);
+    expect(renewalForecast.aperiodicity.low95).toBeLessThan(renewalForecast.aperiodicity.high95);
+    expect(renewalForecast.caution).toBe(RECURRENCE_CAUTION);
+    expect(renewalForecast.priorNote).toMatch(/Jeffreys/);
+  });
+
+  it('answers every model, Poisson with aperiodicity 1', async () => {
+    for (const model of ['POISSON', 'LOGNORMAL', 'WEIBULL']) {
+      const { renewalForecast } = await clients.VIEWER.ok(FORECAST, { i: { model, ...record } });
+      expect(renewalForecast.probabilities).toHaveLength(3);
+      if (model === 'POISSON') expect(renewalForecast.aperiodicity.median).toBe(1);
+    }
+  });
+
+  it('refuses fewer than two intervals, and inputs past its bounds, naming the field', async () => {
+    expect(await clients.VIEWER.errorOf(FORECAST, { i: { model: 'BPT', ...record, intervalsYears: [500] } })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'intervalsYears' });
+    expect(await clients.VIEWER.errorOf(FORECAST, { i: { model: 'BPT', ...record, windowsYears: Array(11).fill(50) } })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'windowsYears' });
+    expect(await clients.VIEWER.errorOf(FORECAST, { i: { model: 'BPT', ...record, intervalsYears: Array(1001).fill(500) } })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'intervalsYears' });
+    expect(await clients.VIEWER.errorOf(FORECAST, { i: { model: 'BPT', ...record, openIntervalYears: -1 } })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'openIntervalYears' });
+  });
+});
+
 describe('startRecurrenceAnalysis', () => {
   it('lets analysts and admins start; other roles are FORBIDDEN and outsiders NOT_FOUND', async () => {
     const input = { i: { siteId: siteIds.A, draws: 200, seed: 1 } };
@@ -248,6 +287,25 @@ describe('a site analysis', () => {
     expect(analysis.caution).toBe(RECURRENCE_CAUTION);
   });
 
+  it('heads each model with ranges that carry parameter uncertainty, the dating-only range beside, AICc and a model-averaged row', () => {
+    for (const model of analysis.models) {
+      // With two closed intervals, AICc exists only for the 1-parameter Poisson (n = 3 with the open interval).
+      if (model.model === 'POISSON') expect(model.aicc).toBeCloseTo(model.aic + 2 * 1 * 2 / (3 - 1 - 1), 9);
+      else expect(model.aicc).toBeNull();
+      for (const row of model.probabilities) {
+        expect(row.datingOnlyLow95).toBeLessThanOrEqual(row.datingOnlyHigh95);
+        // Poisson's posterior is exact Gamma; its range must be wider than plugging in the fit.
+        // (The two-parameter plug-in fits of two intervals swing wildly; the prior's aperiodicity limit tames them.)
+        if (model.model === 'POISSON') expect(row.high95 - row.low95).toBeGreaterThan(row.datingOnlyHigh95 - row.datingOnlyLow95);
+      }
+      expect(model.meanRecurrenceRange.high95 - model.meanRecurrenceRange.low95).toBeGreaterThan(
+        model.meanRecurrenceRange.datingOnlyHigh95 - model.meanRecurrenceRange.datingOnlyLow95,
+      );
+    }
+    expect(analysis.modelAveraged.map((row: { windowYears: number }) => row.windowYears)).toEqual([30, 50, 100]);
+    expect(analysis.parameterNote).toMatch(/posterior/);
+  });
+
   it('serves a density, hazard and survival curve per model', async () => {
     const { recurrenceAnalysis } = await clients.VIEWER.ok(CURVES, { id: analysis.id });
     expect(recurrenceAnalysis.curves).toHaveLength(4);
@@ -284,12 +342,50 @@ describe('a site analysis', () => {
     const body = await json.json();
     expect(body.caution).toBe(RECURRENCE_CAUTION);
     expect(body.analysis).toMatchObject({ id: analysis.id, seed: 42, ageModelRunIds: [runIds.A] });
-    expect(body.probabilities).toHaveLength((1 + 4) * 3);
+    expect(body.probabilities).toHaveLength((4 + 1 + 1) * 3); // four models, the model-averaged row, the plain Poisson figure
 
     const outsider = await fetch(`${server.url}/api/recurrence-analyses/${analysis.id}/export.csv`, { headers: { authorization: `Bearer ${clients.OUTSIDER.token}` } });
     expect(outsider.status).toBe(404);
     const anonymous = await fetch(`${server.url}/api/recurrence-analyses/${analysis.id}/export.json`);
     expect(anonymous.status).toBe(401);
+  });
+});
+
+describe('a site analysis on draws that put two events in one year', () => {
+  it('succeeds, spreading the tied events within their year (issue 12 item 6)', async () => {
+    const { createSite } = await clients.RESEARCHER.ok(CREATE_SITE, {
+      i: { projectId: fixture.projectId, name: 'Tied Hollow', kind: 'TRENCH', latitude: -40, longitude: 175, alongStrikeKm: 500 },
+    });
+    const units: string[] = [];
+    for (const position of [1, 2, 3, 4]) {
+      const { createUnit } = await clients.RESEARCHER.ok(CREATE_UNIT, { i: { siteId: createSite.id, position, name: `T${position}`, topDepthM: 4 - position, baseDepthM: 5 - position, facies: 'PEAT' } });
+      units.push(createUnit.id);
+    }
+    const horizons: string[] = [];
+    for (const index of [1, 2, 3]) {
+      const { createEventHorizon } = await clients.RESEARCHER.ok(CREATE_HORIZON, {
+        i: { siteId: createSite.id, name: `T${index}`, unitBelowId: units[index - 1], unitAboveId: units[index], quality: 1 },
+      });
+      horizons.push(createEventHorizon.id);
+    }
+    // Grid-year draws, oldest first; in every other draw the two older events share year 1000.
+    const draws: number[] = [];
+    for (let d = 0; d < 400; d++) draws.push(d % 2 === 0 ? 1000 : 1001 + (d % 7), 1000, 450 + (d % 11));
+    const results = {
+      events: horizons.map((eventHorizonId, i) => ({ eventHorizonId, summary: summarise(normalDensity([1000, 1000, 450][i], 5)), rhat: 1, ess: 400, density: storeDensity(normalDensity([1000, 1000, 450][i], 5)) })),
+      samples: [],
+      eventDraws: { eventHorizonIds: horizons, drawCount: 400, draws },
+    };
+    await sql(
+      `insert into age_model_runs (site_id, status, progress, seed, settings, input_snapshot, input_fingerprint, results, finished_at)
+       values ($1, 'SUCCEEDED', 1, 7, '{}'::jsonb, '{}'::jsonb, 'fixture', $2::jsonb, now())`,
+      [createSite.id, JSON.stringify(results)],
+    );
+    const analysis = await runAnalysis({ siteId: createSite.id, forecastStartYear: 2025, windowsYears: [50], draws: 400, seed: 5 });
+    expect(analysis.message).toBe('400 draws of 3 events');
+    expect(analysis.status).toBe('SUCCEEDED');
+    expect(analysis.intervals[1].low95).toBeGreaterThan(0);
+    expect(analysis.intervals[1].low95).toBeLessThan(1);
   });
 });
 
@@ -339,7 +435,7 @@ describe('cancelRecurrenceAnalysis', () => {
     expect((await clients.VIEWER.errorOf(CANCEL, { id: startRecurrenceAnalysis.id })).code).toBe('FORBIDDEN');
     const { cancelRecurrenceAnalysis } = await clients.ANALYST.ok(CANCEL, { id: startRecurrenceAnalysis.id });
     expect(cancelRecurrenceAnalysis.status).toBe('CANCELLED');
-    await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+    await server.app.get(RunExecutor).execute(server.app.get(RecurrenceJob), startRecurrenceAnalysis.id);
     const { recurrenceAnalysis } = await clients.ANALYST.ok(ANALYSIS, { id: startRecurrenceAnalysis.id });
     expect(recurrenceAnalysis).toMatchObject({ status: 'CANCELLED', intervals: [], models: [], meanRecurrence: null });
     expect((await clients.ANALYST.errorOf(CANCEL, { id: startRecurrenceAnalysis.id })).code).toBe('BAD_USER_INPUT');
@@ -348,7 +444,7 @@ describe('cancelRecurrenceAnalysis', () => {
 
 describe('the job reaper', () => {
   it('queues again a recurrence analysis whose worker went silent, and gives it up after two attempts', async () => {
-    const reaper = new JobReaper(server.app.get(AgeModelRunsRepository), server.app.get(RecurrenceRepository), server.app.get(JobQueueService));
+    const reaper = new JobReaper(server.app.get(JobRegistry), server.app.get(RunsRepository), server.app.get(JobQueueService));
     const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START, { i: { siteId: siteIds.A, draws: 200 } });
     const id = startRecurrenceAnalysis.id;
     const silence = (attempts: number) =>

@@ -1,8 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray, lt, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { QueryResult } from 'pg';
 import { DatabaseService, Executor } from '../database/database.service';
 import { ageModelRuns } from '../database/schema';
+import { RunsRepository } from '../jobs/runs.repository';
 
 export type AgeModelRunRow = typeof ageModelRuns.$inferSelect;
 
@@ -11,7 +12,10 @@ export const EMPTY_COLUMN_FINGERPRINT = 'd41d8cd98f00b204e9800998ecf8427e';
 
 @Injectable()
 export class AgeModelRunsRepository {
-  constructor(private readonly database: DatabaseService) {}
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly runs: RunsRepository,
+  ) {}
 
   async insert(values: typeof ageModelRuns.$inferInsert, executor: Executor = this.database.db): Promise<AgeModelRunRow> {
     const [row] = await executor.insert(ageModelRuns).values(values).returning();
@@ -68,67 +72,13 @@ export class AgeModelRunsRepository {
     return fingerprints;
   }
 
-  /** Claim a queued run for a worker: QUEUED -> RUNNING, counting the attempt. */
-  async claim(id: string): Promise<AgeModelRunRow | undefined> {
-    const [row] = await this.database.db
-      .update(ageModelRuns)
-      .set({ status: 'RUNNING', attempts: sql`${ageModelRuns.attempts} + 1`, startedAt: new Date(), updatedAt: new Date(), progress: 0 })
-      .where(and(eq(ageModelRuns.id, id), eq(ageModelRuns.status, 'QUEUED')))
-      .returning();
-    return row;
+  /** A user's cancel; undefined when the run had already ended. */
+  cancel(id: string): Promise<AgeModelRunRow | undefined> {
+    return this.runs.cancel(ageModelRuns, id);
   }
 
-  /** Progress doubles as the worker's heartbeat (updated_at). */
-  async setProgress(id: string, progress: number): Promise<void> {
-    await this.database.db
-      .update(ageModelRuns)
-      .set({ progress, updatedAt: new Date() })
-      .where(and(eq(ageModelRuns.id, id), eq(ageModelRuns.status, 'RUNNING')));
-  }
-
-  async finish(id: string, values: Partial<typeof ageModelRuns.$inferInsert>): Promise<void> {
-    await this.database.db
-      .update(ageModelRuns)
-      .set({ ...values, finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(ageModelRuns.id, id), eq(ageModelRuns.status, 'RUNNING')));
-  }
-
-  async cancel(id: string): Promise<AgeModelRunRow | undefined> {
-    const [row] = await this.database.db
-      .update(ageModelRuns)
-      .set({ status: 'CANCELLED', message: 'cancelled by a user', finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(ageModelRuns.id, id), inArray(ageModelRuns.status, ['QUEUED', 'RUNNING'])))
-      .returning();
-    return row;
-  }
-
-  async statusOf(id: string): Promise<AgeModelRunRow['status'] | undefined> {
-    const [row] = await this.database.db.select({ status: ageModelRuns.status }).from(ageModelRuns).where(eq(ageModelRuns.id, id));
-    return row?.status;
-  }
-
-  /** Runs whose worker stopped sending heartbeats. */
-  listAbandoned(heartbeatBefore: Date): Promise<AgeModelRunRow[]> {
-    return this.database.db
-      .select()
-      .from(ageModelRuns)
-      .where(and(eq(ageModelRuns.status, 'RUNNING'), lt(ageModelRuns.updatedAt, heartbeatBefore)));
-  }
-
-  async requeue(id: string): Promise<boolean> {
-    const rows = await this.database.db
-      .update(ageModelRuns)
-      .set({ status: 'QUEUED', progress: 0, message: 'the worker stopped during the run; queued again', updatedAt: new Date() })
-      .where(and(eq(ageModelRuns.id, id), eq(ageModelRuns.status, 'RUNNING')))
-      .returning({ id: ageModelRuns.id });
-    return rows.length > 0;
-  }
-
-  async fail(id: string, message: string): Promise<void> {
-    await this.database.db
-      .update(ageModelRuns)
-      .set({ status: 'FAILED', message, finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(ageModelRuns.id, id), inArray(ageModelRuns.status, ['RUNNING', 'QUEUED'])));
+  statusOf(id: string): Promise<AgeModelRunRow['status'] | undefined> {
+    return this.runs.statusOf(ageModelRuns, id);
   }
 
   /** Id of each site's newest successful age model run, without loading its results. */

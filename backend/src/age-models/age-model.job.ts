@@ -1,48 +1,44 @@
-import { Injectable, Logger } from '@nestjs/common';
-import { AgeModelSettings } from '../chronology/age-model/age-model';
-import { ComputeCancelled, runInThread } from '../jobs/compute-runner';
-import { AgeModelRunsRepository } from './age-model-runs.repository';
+import { Injectable, OnModuleInit } from '@nestjs/common';
+import { AgeModelResult, AgeModelSettings } from '../chronology/age-model/age-model';
+import { ageModelRuns } from '../database/schema';
+import { JobRegistry } from '../jobs/job-registry';
+import { RUN_SEND_OPTIONS, RunKind } from '../jobs/run-kind';
+import { RunRow, RunValues } from '../jobs/runs.repository';
+import { ageModelCompute, AgeModelComputeInput } from './age-model.compute';
 import { loadInput, storeResults, StoredAgeModelInput } from './age-model-results';
 
 /** Most attempts a run gets when its worker dies under it. */
 export const MAX_ATTEMPTS = 2;
 
-/** Executes one queued age model run in a worker process. */
+type AgeModelRunTable = typeof ageModelRuns;
+
+/** Age model runs as a kind of run: the snapshotted column in, posteriors and diagnostics out. */
 @Injectable()
-export class AgeModelJob {
-  private readonly logger = new Logger(AgeModelJob.name);
+export class AgeModelJob implements RunKind<AgeModelRunTable, AgeModelComputeInput, AgeModelResult>, OnModuleInit {
+  readonly type = 'run';
+  readonly label = 'age model run';
+  readonly queue = 'age-model-run';
+  readonly sendOptions = RUN_SEND_OPTIONS;
+  readonly table = ageModelRuns;
+  readonly maxAttempts = MAX_ATTEMPTS;
+  readonly requeueMessage = 'the worker stopped during the run; queued again';
+  readonly compute = ageModelCompute;
 
-  constructor(private readonly runs: AgeModelRunsRepository) {}
+  constructor(private readonly registry: JobRegistry) {}
 
-  async execute(runId: string): Promise<void> {
-    const run = await this.runs.claim(runId);
-    if (!run) return; // cancelled, or already taken by another worker
-    let lastWrite = 0;
-    try {
-      const result = await runInThread(
-        { kind: 'age-model', input: loadInput(run.inputSnapshot as StoredAgeModelInput), settings: run.settings as AgeModelSettings },
-        {
-          onProgress: (fraction) => {
-            const now = Date.now();
-            if (now - lastWrite < 1000 && fraction < 1) return;
-            lastWrite = now;
-            void this.runs.setProgress(runId, Math.min(0.99, fraction)).catch(() => undefined);
-          },
-          shouldCancel: async () => (await this.runs.statusOf(runId)) === 'CANCELLED',
-        },
-      );
-      await this.runs.finish(runId, {
-        status: 'SUCCEEDED',
-        progress: 1,
-        message: result.diagnostics.message,
-        diagnostics: result.diagnostics,
-        results: storeResults(result),
-      });
-    } catch (error) {
-      if (error instanceof ComputeCancelled) return;
-      const message = error instanceof Error ? error.message : String(error);
-      this.logger.warn(`age model run ${runId} failed: ${message}`);
-      await this.runs.finish(runId, { status: 'FAILED', message: `the computation failed: ${message}` });
-    }
+  onModuleInit(): void {
+    this.registry.register(this);
+  }
+
+  async input(run: RunRow<AgeModelRunTable>): Promise<AgeModelComputeInput> {
+    return { input: loadInput(run.inputSnapshot as StoredAgeModelInput), settings: run.settings as AgeModelSettings };
+  }
+
+  succeeded(result: AgeModelResult): RunValues<AgeModelRunTable> {
+    return { message: result.diagnostics.message, diagnostics: result.diagnostics, results: storeResults(result) };
+  }
+
+  failureMessage(error: unknown): string {
+    return `the computation failed: ${error instanceof Error ? error.message : String(error)}`;
   }
 }

@@ -6,15 +6,16 @@ import { CalibrationService } from '../calibration/calibration.service';
 import { AuthUser } from '../auth/auth-user';
 import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
 import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
-import { badInput, notFound } from '../common/errors/domain-error';
+import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
-import { QUEUES, JobQueueService } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { SamplesRepository } from '../samples/samples.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
+import { AgeModelJob } from './age-model.job';
 import { storeInput } from './age-model-results';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
@@ -32,6 +33,7 @@ export class AgeModelsService {
     private readonly samples: SamplesRepository,
     private readonly calibration: CalibrationService,
     private readonly jobs: JobQueueService,
+    private readonly ageModelJob: AgeModelJob,
     private readonly access: AccessService,
     private readonly audit: AuditService,
   ) {}
@@ -58,6 +60,7 @@ export class AgeModelsService {
       iterations: input.iterations ?? DEFAULT_ITERATIONS,
       chains: input.chains ?? DEFAULT_AGE_MODEL_SETTINGS.chains,
       outlierPrior: input.outlierPrior ?? DEFAULT_AGE_MODEL_SETTINGS.outlierPrior,
+      outlierShiftScaleYears: input.outlierShiftScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.outlierShiftScaleYears,
       inheritanceScaleYears: input.inheritanceScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.inheritanceScaleYears,
       seed: input.seed ?? Math.floor(Math.random() * 2 ** 31),
     };
@@ -71,21 +74,21 @@ export class AgeModelsService {
       });
       return row;
     });
-    await this.jobs.send(QUEUES.ageModel, { runId: run.id });
+    await this.jobs.send(this.ageModelJob, { runId: run.id });
     return run;
   }
 
   async get(user: AuthUser, id: string): Promise<AgeModelRunRow> {
     const run = await this.runs.findById(id);
     if (!run) throw notFound('age model run');
-    await this.sites.get(user, run.siteId);
+    await asNotFoundOf('age model run', () => this.sites.get(user, run.siteId));
     return run;
   }
 
   async cancel(user: AuthUser, id: string): Promise<AgeModelRunRow> {
     const run = await this.runs.findById(id);
     if (!run) throw notFound('age model run');
-    const site = await this.sites.get(user, run.siteId, Permission.AgeModelRun);
+    const site = await asNotFoundOf('age model run', () => this.sites.get(user, run.siteId, Permission.AgeModelRun));
     const cancelled = await this.runs.cancel(id);
     if (!cancelled) throw badInput('id', `the run has already ended (${run.status})`);
     await this.audit.record(this.database.db, { actor: user, projectId: site.projectId, action: 'cancel', objectType: 'ageModelRun', objectId: id });

@@ -6,11 +6,11 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { ALLOWED_CONTENT_TYPES, isImage, sniffContentType } from './content-type';
 import { AttachmentOwner, AttachmentRow, AttachmentsRepository } from './attachments.repository';
 import { ObjectStorageService } from './object-storage.service';
-import { thumbnailKeyOf } from './thumbnail.job';
+import { thumbnailKeyOf, ThumbnailJob } from './thumbnail.job';
 
 /** The largest attachment accepted, bytes. */
 export const MAX_ATTACHMENT_BYTES = 20 * 1024 * 1024;
@@ -49,6 +49,7 @@ export class AttachmentsService {
     private readonly access: AccessService,
     private readonly audit: AuditService,
     private readonly jobs: JobQueueService,
+    private readonly thumbnails: ThumbnailJob,
   ) {}
 
   listForSite(siteId: string): Promise<AttachmentRow[]> {
@@ -94,7 +95,7 @@ export class AttachmentsService {
     }
     if (isImage(contentType)) {
       // The upload stands without a thumbnail: a queue that is away only costs the preview.
-      await this.jobs.send(QUEUES.thumbnail, { attachmentId: attachment.id }).catch((error: unknown) => {
+      await this.jobs.send(this.thumbnails, { attachmentId: attachment.id }).catch((error: unknown) => {
         this.logger.warn(`thumbnail of ${attachment.id} not queued: ${error instanceof Error ? error.message : String(error)}`);
       });
     }

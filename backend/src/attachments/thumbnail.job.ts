@@ -1,9 +1,12 @@
-import { Injectable, Logger } from '@nestjs/common';
+import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { runInThread } from '../jobs/compute-runner';
+import { JobRegistry } from '../jobs/job-registry';
+import { TaskKind } from '../jobs/run-kind';
 import { AttachmentsRepository } from './attachments.repository';
 import { isImage } from './content-type';
 import { ObjectStorageService } from './object-storage.service';
 import type { ThumbnailContentType } from './thumbnail';
+import { thumbnailCompute } from './thumbnail.compute';
 
 /** The object key of an attachment's thumbnail, beside its file. */
 export function thumbnailKeyOf(storageKey: string): string {
@@ -13,16 +16,29 @@ export function thumbnailKeyOf(storageKey: string): string {
 /**
  * Makes the thumbnail of one image attachment in a worker process (decoding runs in a worker
  * thread). An image that gets none (too large, undecodable) keeps none and is logged; it stays
- * downloadable. Idempotent: a retried job overwrites the same object.
+ * downloadable. Idempotent: a retried job overwrites the same object. A thumbnail has no row of its
+ * own to watch, so pg-boss retries it.
  */
 @Injectable()
-export class ThumbnailJob {
+export class ThumbnailJob implements TaskKind<{ attachmentId: string }>, OnModuleInit {
+  readonly type = 'task';
+  readonly queue = 'attachment-thumbnail';
+  readonly sendOptions = { retryLimit: 2, retryDelay: 5, expireInSeconds: 300 };
   private readonly logger = new Logger(ThumbnailJob.name);
 
   constructor(
+    private readonly registry: JobRegistry,
     private readonly attachments: AttachmentsRepository,
     private readonly storage: ObjectStorageService,
   ) {}
+
+  onModuleInit(): void {
+    this.registry.register(this);
+  }
+
+  handle({ attachmentId }: { attachmentId: string }): Promise<void> {
+    return this.execute(attachmentId);
+  }
 
   async execute(attachmentId: string): Promise<void> {
     const attachment = await this.attachments.findById(attachmentId);
@@ -32,7 +48,8 @@ export class ThumbnailJob {
     let thumbnail;
     try {
       thumbnail = await runInThread(
-        { kind: 'thumbnail', bytes, contentType: attachment.contentType as ThumbnailContentType },
+        thumbnailCompute,
+        { bytes, contentType: attachment.contentType as ThumbnailContentType },
         { onProgress: () => undefined, shouldCancel: async () => false },
       );
     } catch (error) {

@@ -1,11 +1,7 @@
 import { ASTVisitor, FieldNode, FragmentDefinitionNode, GraphQLError, Kind, SelectionSetNode, ValidationContext } from 'graphql';
-import type { ApolloServerPlugin } from '@apollo/server';
-import { getComplexity, simpleEstimator } from 'graphql-query-complexity';
 
 /** Deepest selection nesting a query may have; the deepest screen query (the ladder) needs 7. */
 export const MAX_QUERY_DEPTH = 12;
-/** Most fields one operation may select (each field costs 1, lists are not multiplied). */
-export const MAX_QUERY_COMPLEXITY = 2000;
 
 function depthOf(selectionSet: SelectionSetNode | undefined, fragments: Record<string, FragmentDefinitionNode>, seen: Set<string>): number {
   if (!selectionSet) return 0;
@@ -41,30 +37,5 @@ export function depthLimitRule(maxDepth = MAX_QUERY_DEPTH) {
         }
       },
     };
-  };
-}
-
-/**
- * Refuse operations selecting more than `maximum` fields in all (graphql-query-complexity), as an
- * Apollo plugin: it runs after variables are known, which a plain validation rule cannot.
- */
-export function complexityLimitPlugin(maximum = MAX_QUERY_COMPLEXITY): ApolloServerPlugin {
-  return {
-    async requestDidStart() {
-      return {
-        async didResolveOperation({ request, document, schema }) {
-          const complexity = getComplexity({
-            schema,
-            query: document,
-            operationName: request.operationName ?? undefined,
-            variables: request.variables ?? {},
-            estimators: [simpleEstimator({ defaultComplexity: 1 })],
-          });
-          if (complexity > maximum) {
-            throw new GraphQLError(`query selects ${complexity} fields; the limit is ${maximum}`, { extensions: { code: 'BAD_USER_INPUT' } });
-          }
-        },
-      };
-    },
   };
 }

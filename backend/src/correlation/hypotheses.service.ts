@@ -5,11 +5,12 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { CorrelationInputError, validateTie, type HypothesisCheck, type Tie } from '../chronology/correlation';
 import type { HpdRange } from '../chronology/common/density';
-import { badInput, notFound } from '../common/errors/domain-error';
+import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { withConstraintErrors } from '../common/errors/database-errors';
 import { DatabaseService } from '../database/database.service';
 import type { EventHorizonRow } from '../event-horizons/event-horizons.repository';
 import { ProjectsRepository } from '../projects/projects.repository';
+import type { SiteRow } from '../sites/sites.repository';
 import { thinDensity, type DensityPoint } from '../chronology/common/density-views';
 import { checkProjectHypothesis, forGrouping } from './correlation-adapter';
 import { CorrelationDataService, projectEvents, toProjectEvent, type ProjectCorrelationData } from './correlation-data.service';
@@ -25,6 +26,8 @@ export interface RegionalEventView {
   combinedHpd95: readonly HpdRange[];
   combinedDensity: DensityPoint[];
   concordance: number | null;
+  concordanceThreshold: number | null;
+  concordanceLow: boolean;
   warnings: readonly string[];
   chiSquare: { t: number; df: number; critical5: number; passes: boolean } | null;
   ruptureLengthKm: number | null;
@@ -36,6 +39,11 @@ export interface OrderConflictView {
   tieA: TieView;
   tieB: TieView;
   message: string;
+  ties: TieView[];
+  events: EventHorizonRow[];
+  sites: SiteRow[];
+  steps: { site: SiteRow; older: EventHorizonRow; younger: EventHorizonRow }[];
+  regionalEventIds: readonly string[];
 }
 
 export interface HypothesisChecksView {
@@ -235,7 +243,7 @@ export class HypothesesService {
   async removeTie(user: AuthUser, id: string): Promise<boolean> {
     const tie = await this.hypotheses.findTie(id);
     if (!tie) throw notFound('tie');
-    const hypothesis = await this.get(user, tie.hypothesisId, Permission.CorrelationWrite);
+    const hypothesis = await asNotFoundOf('tie', () => this.get(user, tie.hypothesisId, Permission.CorrelationWrite));
     await this.database.transaction(async (tx) => {
       await this.hypotheses.lock(hypothesis.id, tx);
       await this.hypotheses.deleteTie(id, tx);
@@ -272,6 +280,7 @@ export class HypothesesService {
 function toView(check: HypothesisCheck, data: ProjectCorrelationData, ties: readonly TieView[]): HypothesisChecksView {
   const horizons = new Map(data.events.map((event) => [event.eventHorizon.id, event.eventHorizon]));
   const tiesById = new Map(ties.map((tie) => [tie.id, tie]));
+  const sitesById = new Map(data.sites.map((site) => [site.id, site]));
   return {
     regionalEvents: check.regionalEvents.map((regional) => ({
       id: regional.id,
@@ -280,6 +289,8 @@ function toView(check: HypothesisCheck, data: ProjectCorrelationData, ties: read
       combinedHpd95: regional.combined?.hpd95 ?? [],
       combinedDensity: regional.combinedDensity ? thinDensity(regional.combinedDensity) : [],
       concordance: regional.concordance,
+      concordanceThreshold: regional.concordanceThreshold,
+      concordanceLow: regional.concordanceWarning,
       warnings: regional.notes,
       chiSquare: regional.chiSquare
         ? { t: regional.chiSquare.t, df: regional.chiSquare.df, critical5: regional.chiSquare.critical5, passes: regional.chiSquare.passes }
@@ -291,6 +302,15 @@ function toView(check: HypothesisCheck, data: ProjectCorrelationData, ties: read
       tieA: tiesById.get(conflict.tieAId) as TieView,
       tieB: tiesById.get(conflict.tieBId) as TieView,
       message: conflict.message,
+      ties: conflict.tieIds.map((id) => tiesById.get(id) as TieView),
+      events: conflict.eventIds.map((id) => horizons.get(id) as EventHorizonRow),
+      sites: conflict.siteIds.map((id) => sitesById.get(id) as SiteRow),
+      steps: conflict.steps.map((step) => ({
+        site: sitesById.get(step.siteId) as SiteRow,
+        older: horizons.get(step.olderEventId) as EventHorizonRow,
+        younger: horizons.get(step.youngerEventId) as EventHorizonRow,
+      })),
+      regionalEventIds: conflict.regionalEventIds,
     })),
   };
 }

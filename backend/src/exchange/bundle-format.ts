@@ -7,6 +7,7 @@
  * not part of version 1. README.md beside this file documents the format; bundle.schema.json is
  * its JSON Schema, generated from the field tables here (a spec checks they agree).
  */
+import { MAX_AGE_ERROR_YEARS } from '../chronology/calibration/bounds';
 
 export const BUNDLE_FORMAT = 'stratochron-bundle';
 export const BUNDLE_VERSION = 1;
@@ -128,6 +129,20 @@ export interface ProjectBundle {
 export const BUNDLE_TABLES = ['segments', 'sites', 'units', 'eventHorizons', 'samples', 'hypotheses', 'ties'] as const;
 export type BundleTable = (typeof BUNDLE_TABLES)[number];
 
+/**
+ * Most records per table one bundle may hold: a bound on the work of one import (every sample is
+ * calibrated). Samples match the lab sheet's row cap (MAX_LAB_SHEET_ROWS).
+ */
+export const BUNDLE_TABLE_MAX_ITEMS: Readonly<Record<BundleTable, number>> = {
+  segments: 1_000,
+  sites: 5_000,
+  units: 50_000,
+  eventHorizons: 20_000,
+  samples: 50_000,
+  hypotheses: 1_000,
+  ties: 50_000,
+};
+
 /** One field of a bundle record: its JSON type and the bounds the database enforces. */
 export type FieldSpec =
   | { type: 'string'; nullable?: boolean; minLength?: number; maxLength: number }
@@ -197,13 +212,13 @@ export const RECORD_FIELDS: { [T in BundleTable]: Record<string, FieldSpec> } = 
     depthM: { type: 'number', nullable: true, minimum: 0, maximum: 100000 },
     ageRelation: { type: 'enum', values: AGE_RELATIONS },
     c14Age: { type: 'number', nullable: true, minimum: 0, maximum: 100000 },
-    c14Error: { type: 'number', nullable: true, exclusiveMinimum: 0, maximum: 100000 },
+    c14Error: { type: 'number', nullable: true, exclusiveMinimum: 0, maximum: MAX_AGE_ERROR_YEARS },
     delta13C: { type: 'number', nullable: true, minimum: -100, maximum: 100 },
     curve: { type: 'string', nullable: true, minLength: 1, maxLength: 50 },
     deltaR: { type: 'number', nullable: true, minimum: -10000, maximum: 10000 },
-    deltaRError: { type: 'number', nullable: true, minimum: 0, maximum: 10000 },
+    deltaRError: { type: 'number', nullable: true, minimum: 0, maximum: MAX_AGE_ERROR_YEARS },
     calendarAgeBp: { type: 'number', nullable: true, minimum: -100, maximum: 1000000 },
-    calendarErrorYears: { type: 'number', nullable: true, exclusiveMinimum: 0, maximum: 1000000 },
+    calendarErrorYears: { type: 'number', nullable: true, exclusiveMinimum: 0, maximum: MAX_AGE_ERROR_YEARS },
     measurementYear: { type: 'integer', nullable: true, minimum: 1900, maximum: 2200 },
     excluded: { type: 'boolean' },
     exclusionReason: { type: 'string', nullable: true, maxLength: 2000 },

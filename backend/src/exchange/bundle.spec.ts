@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { diffSnapshots } from '../releases/release-diff';
 import { buildBundle, ProjectRecords } from './bundle-builder';
 import { bundleContent, bundleJsonSchema, validateBundle } from './bundle';
-import { ProjectBundle } from './bundle-format';
+import { BUNDLE_TABLE_MAX_ITEMS, ProjectBundle } from './bundle-format';
 
 /** An invented two-site project with every kind of record. */
 function records(prefix = ''): ProjectRecords {
@@ -81,6 +81,26 @@ describe(validateBundle.name, () => {
     if (!result.ok) {
       expect(result.problems.map((p) => p.path)).toEqual(['sites[0].latitude', 'units[0].facies', 'samples[0].notes', 'ties[0].extra']);
     }
+  });
+
+  it('refuses __proto__ and constructor keys as unknown fields (issue 17: `in` took them for fields)', () => {
+    const text = JSON.stringify(valid()).replace('"ref":"s1"', '"__proto__":{"x":1},"constructor":"y","ref":"s1"');
+    const result = validateBundle(JSON.parse(text));
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.problems.map((p) => p.path)).toEqual(['sites[0].__proto__', 'sites[0].constructor']);
+  });
+
+  it('refuses a table above its record cap and an age error above 20,000 years', () => {
+    const bundle = valid();
+    bundle.ties = Array.from({ length: BUNDLE_TABLE_MAX_ITEMS.ties + 1 }, () => bundle.ties[0]);
+    const capped = validateBundle(bundle);
+    expect(capped.ok).toBe(false);
+    if (!capped.ok) expect(capped.problems[0]).toEqual({ path: 'ties', message: `holds ${BUNDLE_TABLE_MAX_ITEMS.ties + 1} records; a bundle may hold at most ${BUNDLE_TABLE_MAX_ITEMS.ties}` });
+    const wide = valid();
+    wide.samples[0].c14Error = 100_000;
+    const result = validateBundle(wide);
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.problems).toEqual([{ path: 'samples[0].c14Error', message: 'must be at most 20000' }]);
   });
 
   it('checks the rules between records', () => {

@@ -1,5 +1,6 @@
 import {
   BUNDLE_FORMAT,
+  BUNDLE_TABLE_MAX_ITEMS,
   BUNDLE_TABLES,
   BUNDLE_VERSION,
   BundleTable,
@@ -71,10 +72,11 @@ function checkField(value: unknown, spec: FieldSpec, path: string, problems: Bun
 function checkObject(value: unknown, fields: Record<string, FieldSpec>, path: string, problems: BundleProblem[]): void {
   if (!isRecord(value)) return void problems.push({ path, message: 'must be an object' });
   for (const [name, spec] of Object.entries(fields)) {
-    if (!(name in value)) problems.push({ path: `${path}.${name}`, message: 'is required (use null for no value)' });
+    if (!Object.hasOwn(value, name)) problems.push({ path: `${path}.${name}`, message: 'is required (use null for no value)' });
     else checkField(value[name], spec, `${path}.${name}`, problems);
   }
-  for (const name of Object.keys(value)) if (!(name in fields)) problems.push({ path: `${path}.${name}`, message: 'is not a field of this format version' });
+  // Own keys only: `in` would take `__proto__` or `constructor` for fields of every object.
+  for (const name of Object.keys(value)) if (!Object.hasOwn(fields, name)) problems.push({ path: `${path}.${name}`, message: 'is not a field of this format version' });
 }
 
 /**
@@ -100,6 +102,10 @@ export function validateBundle(input: unknown): BundleValidation {
     const rows = input[table];
     if (!Array.isArray(rows)) {
       problems.push({ path: table, message: 'must be an array' });
+      continue;
+    }
+    if (rows.length > BUNDLE_TABLE_MAX_ITEMS[table]) {
+      problems.push({ path: table, message: `holds ${rows.length} records; a bundle may hold at most ${BUNDLE_TABLE_MAX_ITEMS[table]}` });
       continue;
     }
     rows.forEach((row, i) => checkObject(row, RECORD_FIELDS[table], `${table}[${i}]`, problems));
@@ -291,7 +297,7 @@ export function bundleJsonSchema(): JsonSchema {
       exportedAt: { type: 'string', format: 'date-time' },
       project: objectSchema(PROJECT_FIELDS, 'The project the records belong to; an import makes a new one.'),
       ...Object.fromEntries(
-        BUNDLE_TABLES.map((table) => [table, { type: 'array', items: { $ref: `#/$defs/${table}` } }]),
+        BUNDLE_TABLES.map((table) => [table, { type: 'array', maxItems: BUNDLE_TABLE_MAX_ITEMS[table], items: { $ref: `#/$defs/${table}` } }]),
       ),
     },
     $defs: {

@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { ComputeRequest, ComputeResult, runCompute } from './compute-tasks';
+import { ComputeTask, ComputeThreadData } from './compute-task';
 
 export class ComputeCancelled extends Error {
   constructor() {
@@ -21,16 +21,14 @@ export interface ComputeHooks {
  * and polling for cancellation. From the built JavaScript it uses a worker thread (terminated on
  * cancel); from TypeScript sources (unit tests) it runs inline, reporting progress synchronously.
  */
-export async function runInThread<K extends ComputeRequest['kind']>(
-  request: Extract<ComputeRequest, { kind: K }>,
-  hooks: ComputeHooks,
-): Promise<ComputeResult<K>> {
+export async function runInThread<Input, Output>(task: ComputeTask<Input, Output>, input: Input, hooks: ComputeHooks): Promise<Output> {
   const threadFile = join(__dirname, 'compute.thread.js');
-  if (!existsSync(threadFile)) {
+  if (!existsSync(threadFile) || !task.file.endsWith('.js')) {
     if (await hooks.shouldCancel()) throw new ComputeCancelled();
-    return runCompute(request, hooks.onProgress) as ComputeResult<K>;
+    return task.run(input, hooks.onProgress);
   }
-  const worker = new Worker(threadFile, { workerData: request });
+  const workerData: ComputeThreadData = { file: task.file, exportName: task.exportName, input };
+  const worker = new Worker(threadFile, { workerData });
   let cancelled = false;
   const poll = setInterval(() => {
     hooks.shouldCancel().then(
@@ -44,8 +42,8 @@ export async function runInThread<K extends ComputeRequest['kind']>(
     );
   }, 1000);
   try {
-    return await new Promise<ComputeResult<K>>((resolve, reject) => {
-      worker.on('message', (message: { type: 'progress'; fraction: number } | { type: 'result'; result: ComputeResult<K> }) => {
+    return await new Promise<Output>((resolve, reject) => {
+      worker.on('message', (message: { type: 'progress'; fraction: number } | { type: 'result'; result: Output }) => {
         if (message.type === 'progress') hooks.onProgress(message.fraction);
         else resolve(message.result);
       });

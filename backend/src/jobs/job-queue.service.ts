@@ -1,42 +1,23 @@
 import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
 import PgBoss from 'pg-boss';
 import { APP_CONFIG, AppConfig } from '../config/config';
+import { RunJob, RunKind, TaskKind } from './run-kind';
 
-export const QUEUES = { ageModel: 'age-model-run', recurrence: 'recurrence-analysis', thumbnail: 'attachment-thumbnail' } as const;
-export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
-
-export interface RunJob {
-  runId: string;
-}
-
-/** What each queue's jobs carry. */
-export interface QueueJobs {
-  'age-model-run': RunJob;
-  'recurrence-analysis': RunJob;
-  'attachment-thumbnail': { attachmentId: string };
-}
-
-/**
- * How pg-boss delivers each queue's jobs. Runs get no pg-boss retries: the reaper re-queues runs
- * whose worker vanished, with the run's own attempt count. A thumbnail has no row of its own to
- * watch, so pg-boss retries it.
- */
-const SEND_OPTIONS: Record<QueueName, PgBoss.SendOptions> = {
-  [QUEUES.ageModel]: { retryLimit: 0, expireInSeconds: 3600 },
-  [QUEUES.recurrence]: { retryLimit: 0, expireInSeconds: 3600 },
-  [QUEUES.thumbnail]: { retryLimit: 2, retryDelay: 5, expireInSeconds: 300 },
-};
+/** What a kind's jobs carry: a run id for runs, the task's own payload otherwise. */
+export type JobPayload<K> = K extends RunKind ? RunJob : K extends TaskKind<infer P> ? P : never;
 
 /**
  * The PostgreSQL-backed job queue (pg-boss). API replicas only send; worker processes also work.
- * Delivery is pg-boss's; retries after a lost worker are ours (see JobReaper), because a run's
- * own row is the truth users see.
+ * Each kind brings its queue name and send options (`RunKind`, `TaskKind`). Delivery is pg-boss's;
+ * retries after a lost worker are ours for runs (see JobReaper), because a run's own row is the
+ * truth users see.
  */
 @Injectable()
 export class JobQueueService implements OnModuleDestroy {
   private readonly logger = new Logger(JobQueueService.name);
   private boss: PgBoss | undefined;
   private starting: Promise<PgBoss> | undefined;
+  private readonly queues = new Map<string, Promise<void>>();
 
   constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {}
 
@@ -46,22 +27,34 @@ export class JobQueueService implements OnModuleDestroy {
       const boss = new PgBoss({ connectionString: this.config.databaseUrl, max: 4 });
       boss.on('error', (error: Error) => this.logger.warn(`job queue: ${error.message}`));
       await boss.start();
-      for (const name of Object.values(QUEUES)) await boss.createQueue(name);
       this.boss = boss;
       return boss;
     })();
     return this.starting;
   }
 
-  async send<Q extends QueueName>(queue: Q, job: QueueJobs[Q]): Promise<void> {
+  /** The started queue, created once per process (createQueue leaves an existing queue as it is). */
+  private async queue(name: string): Promise<PgBoss> {
     const boss = await this.start();
-    await boss.send(queue, job, SEND_OPTIONS[queue]);
+    let created = this.queues.get(name);
+    if (!created) {
+      created = boss.createQueue(name);
+      this.queues.set(name, created);
+      created.catch(() => this.queues.delete(name));
+    }
+    await created;
+    return boss;
   }
 
-  async work<Q extends QueueName>(queue: Q, concurrency: number, handler: (job: QueueJobs[Q]) => Promise<void>): Promise<void> {
-    const boss = await this.start();
+  async send<K extends RunKind | TaskKind<object>>(kind: K, job: JobPayload<K>): Promise<void> {
+    const boss = await this.queue(kind.queue);
+    await boss.send(kind.queue, job as object, kind.sendOptions);
+  }
+
+  async work<K extends RunKind | TaskKind<object>>(kind: K, concurrency: number, handler: (job: JobPayload<K>) => Promise<void>): Promise<void> {
+    const boss = await this.queue(kind.queue);
     for (let i = 0; i < concurrency; i++) {
-      await boss.work<QueueJobs[Q]>(queue, { batchSize: 1, pollingIntervalSeconds: 1 }, async (jobs) => {
+      await boss.work<JobPayload<K>>(kind.queue, { batchSize: 1, pollingIntervalSeconds: 1 }, async (jobs) => {
         for (const job of jobs) await handler(job.data);
       });
     }

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { and, eq, inArray } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
-import { ageModelRuns, hypotheses, resultInputs, sites } from '../database/schema';
+import { ageModelRuns, eventHorizons, hypotheses, projects, recurrenceAnalyses, resultInputs, segments, sites, ties } from '../database/schema';
 import type { InputKind, ResultKind } from './staleness';
 
 export type ResultInputRow = typeof resultInputs.$inferSelect;
@@ -64,5 +64,34 @@ export class ProvenanceRepository {
   hypothesisRows(ids: readonly string[], executor: Executor = this.database.db) {
     if (ids.length === 0) return Promise.resolve([]);
     return executor.select().from(hypotheses).where(inArray(hypotheses.id, [...ids]));
+  }
+
+  /** Event horizons with their site's name, for naming rows. */
+  eventHorizonNames(ids: readonly string[], executor: Executor = this.database.db) {
+    if (ids.length === 0) return Promise.resolve([]);
+    return executor
+      .select({ id: eventHorizons.id, name: eventHorizons.name, siteId: sites.id, siteName: sites.name })
+      .from(eventHorizons)
+      .innerJoin(sites, eq(sites.id, eventHorizons.siteId))
+      .where(inArray(eventHorizons.id, [...ids]));
+  }
+
+  tiesOf(hypothesisId: string, executor: Executor = this.database.db) {
+    return executor.select({ id: ties.id, eventAId: ties.eventAId, eventBId: ties.eventBId }).from(ties).where(eq(ties.hypothesisId, hypothesisId));
+  }
+
+  async projectOf(projectId: string, executor: Executor = this.database.db) {
+    const [row] = await executor.select({ id: projects.id, name: projects.name, tectonicSetting: projects.tectonicSetting }).from(projects).where(eq(projects.id, projectId));
+    return row;
+  }
+
+  /** Analyses pinned to a release, oldest first. */
+  analysesOfRelease(releaseId: string, executor: Executor = this.database.db) {
+    return executor.select({ id: recurrenceAnalyses.id, status: recurrenceAnalyses.status }).from(recurrenceAnalyses).where(eq(recurrenceAnalyses.releaseId, releaseId)).orderBy(recurrenceAnalyses.createdAt);
+  }
+
+  segmentName(id: string | null, executor: Executor = this.database.db): Promise<string | null> {
+    if (!id) return Promise.resolve(null);
+    return executor.select({ name: segments.name }).from(segments).where(eq(segments.id, id)).then((rows) => rows[0]?.name ?? null);
   }
 }

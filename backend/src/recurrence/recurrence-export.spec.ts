@@ -36,7 +36,8 @@ describe(recurrenceExportCsv.name, () => {
   it('holds the four tables with every interval, model and window', () => {
     for (const title of ['intervals', 'statistics', 'models', 'probabilities']) expect(lines).toContain(title);
     const probabilityRows = lines.slice(lines.indexOf('probabilities') + 2).filter((line) => line !== '');
-    expect(probabilityRows).toHaveLength((1 + 4) * 2);
+    // Four models, the model-averaged row and the plain Poisson figure, two windows each.
+    expect(probabilityRows).toHaveLength((4 + 1 + 1) * 2);
     expect(lines.filter((line) => /^[0-2],/.test(line))).toHaveLength(3);
     expect(csv).toContain('hypothesis version,3');
   });
@@ -55,6 +56,6 @@ describe(recurrenceExport.name, () => {
     expect(json.analysis.ageModelRunIds).toEqual(['r1', 'r2']);
     expect(json.intervals).toHaveLength(3);
     expect(json.models).toHaveLength(4);
-    expect(json.probabilities).toHaveLength(10);
+    expect(json.probabilities).toHaveLength(12);
   });
 });

@@ -6,7 +6,7 @@
 import { RENEWAL_MODEL_LABELS } from '../chronology/recurrence';
 import { type CsvValue, toCsv } from '../common/csv';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
-import type { StoredRange, StoredRecurrenceResults } from './recurrence-results';
+import type { StoredParameterRange, StoredRecurrenceResults, StoredWindowProbability } from './recurrence-results';
 
 /** What an export says about the analysis itself, so the numbers can be traced and rerun. */
 export interface RecurrenceExportHeader {
@@ -35,22 +35,35 @@ export interface RecurrenceExport {
     model: string;
     aic: number;
     deltaAic: number;
+    aicc: number | null;
+    deltaAicc: number | null;
     akaikeWeight: number;
     meanRecurrenceYears: number;
     aperiodicity: number;
     logLikelihood: number;
-    meanRecurrenceRange: StoredRange;
-    aperiodicityRange: StoredRange;
+    meanRecurrenceRange: StoredParameterRange;
+    aperiodicityRange: StoredParameterRange;
     preferredShare: number;
   }[];
   modelComparisonNote: string;
-  probabilities: { model: string; windowYears: number; median: number; low95: number; high95: number }[];
+  /** How the parameters were drawn, with the priors. */
+  parameterNote: string | null;
+  /** Headline ranges carry dating and parameter uncertainty; the dating-only range is beside them. */
+  probabilities: {
+    model: string;
+    windowYears: number;
+    median: number;
+    low95: number;
+    high95: number;
+    datingOnlyLow95: number | null;
+    datingOnlyHigh95: number | null;
+  }[];
   histogram: StoredRecurrenceResults['histogram'];
 }
 
 /** The JSON export. */
 export function recurrenceExport(header: RecurrenceExportHeader, results: StoredRecurrenceResults): RecurrenceExport {
-  const statistic = (quantity: string, unit: string, value: StoredRange) => ({ quantity, unit, ...value });
+  const statistic = (quantity: string, unit: string, value: StoredParameterRange) => ({ quantity, unit, ...value });
   return {
     caution: RECURRENCE_CAUTION,
     analysis: header,
@@ -67,6 +80,8 @@ export function recurrenceExport(header: RecurrenceExportHeader, results: Stored
       model: m.model,
       aic: m.aic,
       deltaAic: m.deltaAic,
+      aicc: m.aicc ?? null,
+      deltaAicc: m.deltaAicc ?? null,
       akaikeWeight: m.akaikeWeight,
       meanRecurrenceYears: m.meanRecurrenceYears,
       aperiodicity: m.aperiodicity,
@@ -76,9 +91,11 @@ export function recurrenceExport(header: RecurrenceExportHeader, results: Stored
       preferredShare: m.preferredShare,
     })),
     modelComparisonNote: results.modelComparisonNote,
+    parameterNote: results.parameterNote ?? null,
     probabilities: [
-      ...results.poisson.map((w) => ({ model: 'POISSON_FROM_MEAN_RECURRENCE', ...w })),
-      ...results.models.flatMap((m) => m.probabilities.map((w) => ({ model: m.model, ...w }))),
+      ...results.models.flatMap((m) => m.probabilities.map((w) => probabilityRow(m.model, w))),
+      ...(results.modelAveraged ?? []).map((w) => probabilityRow('MODEL_AVERAGED', w)),
+      ...results.poisson.map((w) => probabilityRow('POISSON_FROM_MEAN_RECURRENCE', w)),
     ],
     histogram: results.histogram,
   };
@@ -115,27 +132,66 @@ export function recurrenceExportCsv(header: RecurrenceExportHeader, results: Sto
     ...data.statistics.map((s) => [s.quantity, s.unit, s.median, s.low95, s.high95]),
     [],
     ['models'],
-    ['model', 'AIC', 'delta AIC', 'Akaike weight', 'mean recurrence (years)', 'aperiodicity', 'log likelihood', 'share of draws preferred'],
+    [
+      'model',
+      'AIC',
+      'delta AIC',
+      'AICc',
+      'delta AICc',
+      'Akaike weight (AICc)',
+      'mean recurrence (years)',
+      'mean recurrence low95',
+      'mean recurrence high95',
+      'mean recurrence dating-only low95',
+      'mean recurrence dating-only high95',
+      'aperiodicity',
+      'aperiodicity low95',
+      'aperiodicity high95',
+      'log likelihood',
+      'share of draws preferred',
+    ],
     ...data.models.map((m) => [
       RENEWAL_MODEL_LABELS[m.model as keyof typeof RENEWAL_MODEL_LABELS] ?? m.model,
       m.aic,
       m.deltaAic,
+      m.aicc,
+      m.deltaAicc,
       m.akaikeWeight,
       m.meanRecurrenceYears,
+      m.meanRecurrenceRange.low95,
+      m.meanRecurrenceRange.high95,
+      m.meanRecurrenceRange.datingOnlyLow95 ?? null,
+      m.meanRecurrenceRange.datingOnlyHigh95 ?? null,
       m.aperiodicity,
+      m.aperiodicityRange.low95,
+      m.aperiodicityRange.high95,
       m.logLikelihood,
       m.preferredShare,
     ]),
     ['note', data.modelComparisonNote],
+    ['parameters', data.parameterNote],
     [],
     ['probabilities'],
-    ['model', 'window (years)', 'median', 'low95', 'high95'],
-    ...data.probabilities.map((p) => [probabilityLabel(p.model), p.windowYears, p.median, p.low95, p.high95]),
+    ['model', 'window (years)', 'median', 'low95 (dating and parameters)', 'high95 (dating and parameters)', 'dating-only low95', 'dating-only high95'],
+    ...data.probabilities.map((p) => [probabilityLabel(p.model), p.windowYears, p.median, p.low95, p.high95, p.datingOnlyLow95, p.datingOnlyHigh95]),
   ];
   return toCsv(rows);
 }
 
+function probabilityRow(model: string, w: StoredWindowProbability): RecurrenceExport['probabilities'][number] {
+  return {
+    model,
+    windowYears: w.windowYears,
+    median: w.median,
+    low95: w.low95,
+    high95: w.high95,
+    datingOnlyLow95: w.datingOnlyLow95 ?? null,
+    datingOnlyHigh95: w.datingOnlyHigh95 ?? null,
+  };
+}
+
 function probabilityLabel(model: string): string {
-  if (model === 'POISSON_FROM_MEAN_RECURRENCE') return 'Poisson 1 - exp(-dT/mean recurrence)';
+  if (model === 'POISSON_FROM_MEAN_RECURRENCE') return 'Poisson 1 - exp(-dT/mean recurrence) (dating only)';
+  if (model === 'MODEL_AVERAGED') return 'model-averaged (AICc weights)';
   return RENEWAL_MODEL_LABELS[model as keyof typeof RENEWAL_MODEL_LABELS] ?? model;
 }

@@ -91,7 +91,7 @@ export function segmentRegionalEvents(input: SegmentEventsInput): SegmentEvents 
 }
 
 function conflictTouches(conflict: OrderConflict, ids: ReadonlySet<string>): boolean {
-  return ids.has(conflict.regionalEventAId) || ids.has(conflict.regionalEventBId);
+  return conflict.regionalEventIds.some((id) => ids.has(id));
 }
 
 /**

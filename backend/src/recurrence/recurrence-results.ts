@@ -9,6 +9,8 @@ import { SeededRandom } from '../chronology/common/random';
 import {
   type CredibleRange,
   distributionFromFit,
+  RENEWAL_PRIOR_NOTE,
+  type WindowProbability,
   RENEWAL_MODEL_LABELS,
   type RecurrenceSummary,
   type RenewalModel,
@@ -41,6 +43,16 @@ export interface StoredRange {
 
 export interface StoredWindowProbability extends StoredRange {
   windowYears: number;
+  /** The range from dating uncertainty alone (plug-in fits); absent in analyses stored before it. */
+  datingOnlyMedian?: number;
+  datingOnlyLow95?: number;
+  datingOnlyHigh95?: number;
+}
+
+/** A headline range (dating and parameters) with the dating-only range beside it. */
+export interface StoredParameterRange extends StoredRange {
+  datingOnlyLow95?: number;
+  datingOnlyHigh95?: number;
 }
 
 export interface StoredIntervalEstimate {
@@ -53,20 +65,25 @@ export interface StoredIntervalEstimate {
 
 export interface StoredModelResult {
   model: RenewalModel;
-  /** AIC, delta AIC, weight, parameters and ln L of the fit to the median event sequence. */
+  /** AIC, AICc, deltas, weight (from AICc), parameters and ln L of the fit to the median event sequence. */
   aic: number;
   deltaAic: number;
+  /** Null when the record is too short for AICc (n <= k + 1). */
+  aicc?: number | null;
+  deltaAicc?: number | null;
   akaikeWeight: number;
   meanRecurrenceYears: number;
   aperiodicity: number;
   logLikelihood: number;
   converged: boolean;
-  /** Monte Carlo ranges of the per-draw fits. */
-  meanRecurrenceRange: StoredRange;
-  aperiodicityRange: StoredRange;
-  /** Share of draws in which this model had the lowest AIC. */
+  /** Ranges over draws: dating and parameters (headline), with the dating-only range beside. */
+  meanRecurrenceRange: StoredParameterRange;
+  aperiodicityRange: StoredParameterRange;
+  /** Share of draws in which this model had the lowest AICc. */
   preferredShare: number;
   unconvergedDraws: number;
+  /** Parameter draws taken by importance resampling (an open interval far beyond the record). */
+  approximateDraws?: number;
   probabilities: StoredWindowProbability[];
 }
 
@@ -106,6 +123,10 @@ export interface StoredRecurrenceResults {
   /** 1 - exp(-dT / mean recurrence) over the draws. */
   poisson: StoredWindowProbability[];
   models: StoredModelResult[];
+  /** Per draw, the models' probabilities weighted by that draw's Akaike weights from AICc. */
+  modelAveraged?: StoredWindowProbability[];
+  /** How the parameters were drawn, with the priors (absent before parameter uncertainty). */
+  parameterNote?: string;
   preferredModel: RenewalModel;
   modelComparisonNote: string;
   curves: StoredModelCurves[];
@@ -176,16 +197,19 @@ export function storeSummary(summary: RecurrenceSummary, curvePoints = 200): Sto
       model: mc.model,
       aic: fit.aic,
       deltaAic: row.deltaAic,
+      aicc: row.aicc,
+      deltaAicc: row.deltaAicc,
       akaikeWeight: row.akaikeWeight,
       meanRecurrenceYears: fit.mu,
       aperiodicity: fit.alpha,
       logLikelihood: fit.logLikelihood,
       converged: fit.converged,
-      meanRecurrenceRange: range(mc.mu),
-      aperiodicityRange: range(mc.alpha),
+      meanRecurrenceRange: { ...range(mc.mu), datingOnlyLow95: mc.muDatingOnly.low95, datingOnlyHigh95: mc.muDatingOnly.high95 },
+      aperiodicityRange: { ...range(mc.alpha), datingOnlyLow95: mc.alphaDatingOnly.low95, datingOnlyHigh95: mc.alphaDatingOnly.high95 },
       preferredShare: mc.preferredShare,
       unconvergedDraws: mc.unconvergedDraws,
-      probabilities: mc.probabilities.map((w) => ({ windowYears: w.windowYears, ...range(w.probability) })),
+      approximateDraws: mc.approximateDraws,
+      probabilities: mc.probabilities.map(windowProbability),
     };
   });
 
@@ -218,6 +242,10 @@ export function storeSummary(summary: RecurrenceSummary, curvePoints = 200): Sto
     aperiodicity: range(summary.aperiodicity),
     poisson: summary.poissonFromMeanRecurrence.map((w) => ({ windowYears: w.windowYears, ...range(w.probability) })),
     models,
+    modelAveraged: summary.modelAveraged.map(windowProbability),
+    parameterNote: summary.parameterUncertainty
+      ? RENEWAL_PRIOR_NOTE
+      : 'Probabilities are plug-in figures: the maximum-likelihood fit of each age draw, so their ranges show dating uncertainty only.',
     preferredModel: median.comparison.preferred,
     modelComparisonNote: comparisonNote(median.comparison.note, models, summary.drawCount),
     curves: curves.curves.map((curve) => ({
@@ -230,6 +258,16 @@ export function storeSummary(summary: RecurrenceSummary, curvePoints = 200): Sto
   };
 }
 
+function windowProbability(w: WindowProbability): StoredWindowProbability {
+  return {
+    windowYears: w.windowYears,
+    ...range(w.probability),
+    datingOnlyMedian: w.datingOnly.median,
+    datingOnlyLow95: w.datingOnly.low95,
+    datingOnlyHigh95: w.datingOnly.high95,
+  };
+}
+
 function range(value: CredibleRange): StoredRange {
   return { median: value.median, low95: value.low95, high95: value.high95 };
 }
@@ -237,9 +275,14 @@ function range(value: CredibleRange): StoredRange {
 function comparisonNote(note: string, models: readonly StoredModelResult[], drawCount: number): string {
   const warnings = models
     .filter((m) => m.unconvergedDraws > UNCONVERGED_WARNING_SHARE * drawCount)
-    .map((m) => ` The ${RENEWAL_MODEL_LABELS[m.model]} fit did not converge in ${m.unconvergedDraws} of ${drawCount} draws; treat its ranges with care.`);
+    .map((m) => ` The ${RENEWAL_MODEL_LABELS[m.model]} fit did not converge in ${m.unconvergedDraws} of ${drawCount} draws; treat its dating-only ranges with care.`);
+  const approximate = models
+    .filter((m) => (m.approximateDraws ?? 0) > 0)
+    .map((m) => ` ${m.approximateDraws} ${RENEWAL_MODEL_LABELS[m.model]} parameter draws were importance-resampled (the open interval is far beyond the record).`);
   return (
-    `${note} AIC and parameters are from the fit to the median event ages; probability ranges are over all draws.` +
-    warnings.join('')
+    `${note} AIC, AICc and the point parameters are from the fit to the median event ages; ranges are over all draws, ` +
+    'with parameter uncertainty (headline) and from dating alone (beside it).' +
+    warnings.join('') +
+    approximate.join('')
   );
 }

@@ -1,67 +1,61 @@
-import { Injectable, Logger } from '@nestjs/common';
+import { Injectable, OnModuleInit } from '@nestjs/common';
 import { AgeModelRunsRepository } from '../age-models/age-model-runs.repository';
 import { loadDensity, StoredAgeModelResults } from '../age-models/age-model-results';
 import { RecurrenceInputError } from '../chronology/recurrence';
-import { ComputeCancelled, runInThread } from '../jobs/compute-runner';
-import { RecurrenceSource } from './recurrence-results';
-import { RecurrenceAnalysisRow, RecurrenceRepository } from './recurrence.repository';
+import { recurrenceAnalyses } from '../database/schema';
+import { JobRegistry } from '../jobs/job-registry';
+import { RUN_SEND_OPTIONS, RunKind } from '../jobs/run-kind';
+import { RunRow, RunValues } from '../jobs/runs.repository';
+import { recurrenceCompute, RecurrenceComputeInput } from './recurrence.compute';
+import { RecurrenceSource, StoredRecurrenceResults } from './recurrence-results';
+import { RecurrenceAnalysisRow } from './recurrence.repository';
 import type { RecurrenceInputSnapshot } from './recurrence.service';
 
 /** Most attempts an analysis gets when its worker dies under it. */
 export const RECURRENCE_MAX_ATTEMPTS = 2;
 
-/** Executes one queued recurrence analysis in a worker process. */
+type RecurrenceTable = typeof recurrenceAnalyses;
+
+/** Recurrence analyses as a kind of run: the queued event ages in, stored summaries out. */
 @Injectable()
-export class RecurrenceJob {
-  private readonly logger = new Logger(RecurrenceJob.name);
+export class RecurrenceJob implements RunKind<RecurrenceTable, RecurrenceComputeInput, StoredRecurrenceResults>, OnModuleInit {
+  readonly type = 'run';
+  readonly label = 'recurrence analysis';
+  readonly queue = 'recurrence-analysis';
+  readonly sendOptions = RUN_SEND_OPTIONS;
+  readonly table = recurrenceAnalyses;
+  readonly maxAttempts = RECURRENCE_MAX_ATTEMPTS;
+  readonly requeueMessage = 'the worker stopped during the analysis; queued again';
+  readonly compute = recurrenceCompute;
 
   constructor(
-    private readonly analyses: RecurrenceRepository,
+    private readonly registry: JobRegistry,
     private readonly ageModelRuns: AgeModelRunsRepository,
   ) {}
 
-  async execute(analysisId: string): Promise<void> {
-    const analysis = await this.analyses.claim(analysisId);
-    if (!analysis) return; // cancelled, or already taken by another worker
-    let lastWrite = 0;
-    try {
-      const source = await this.sourceOf(analysis);
-      const results = await runInThread(
-        {
-          kind: 'recurrence',
-          source,
-          settings: {
-            forecastStartYearCe: analysis.forecastStartYear,
-            windowsYears: analysis.windowsYears,
-            drawCount: analysis.draws,
-            seed: analysis.seed,
-          },
-        },
-        {
-          onProgress: (fraction) => {
-            const now = Date.now();
-            if (now - lastWrite < 1000 && fraction < 1) return;
-            lastWrite = now;
-            void this.analyses.setProgress(analysisId, Math.min(0.99, fraction)).catch(() => undefined);
-          },
-          shouldCancel: async () => (await this.analyses.statusOf(analysisId)) === 'CANCELLED',
-        },
-      );
-      await this.analyses.finish(analysisId, {
-        status: 'SUCCEEDED',
-        progress: 1,
-        message: `${results.drawCount} draws of ${results.eventCount} events`,
-        results,
-      });
-    } catch (error) {
-      if (error instanceof ComputeCancelled) return;
-      const message = error instanceof Error ? error.message : String(error);
-      this.logger.warn(`recurrence analysis ${analysisId} failed: ${message}`);
-      await this.analyses.finish(analysisId, {
-        status: 'FAILED',
-        message: error instanceof RecurrenceInputError ? message : `the computation failed: ${message}`,
-      });
-    }
+  onModuleInit(): void {
+    this.registry.register(this);
+  }
+
+  async input(analysis: RunRow<RecurrenceTable>): Promise<RecurrenceComputeInput> {
+    return {
+      source: await this.sourceOf(analysis),
+      settings: {
+        forecastStartYearCe: analysis.forecastStartYear,
+        windowsYears: analysis.windowsYears,
+        drawCount: analysis.draws,
+        seed: analysis.seed,
+      },
+    };
+  }
+
+  succeeded(results: StoredRecurrenceResults): RunValues<RecurrenceTable> {
+    return { message: `${results.drawCount} draws of ${results.eventCount} events`, results };
+  }
+
+  failureMessage(error: unknown): string {
+    const message = error instanceof Error ? error.message : String(error);
+    return error instanceof RecurrenceInputError ? message : `the computation failed: ${message}`;
   }
 
   /** The event ages the analysis was queued with: stored regional densities, or the cited age model run's draws. */

@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray, lt, sql } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, sites, ties, units } from '../database/schema';
+import { RunsRepository } from '../jobs/runs.repository';
 
 export type RecurrenceAnalysisRow = typeof recurrenceAnalyses.$inferSelect;
 export type HypothesisRow = typeof hypotheses.$inferSelect;
@@ -24,7 +25,10 @@ export interface ProjectEventRow {
  */
 @Injectable()
 export class RecurrenceRepository {
-  constructor(private readonly database: DatabaseService) {}
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly runs: RunsRepository,
+  ) {}
 
   async insert(values: typeof recurrenceAnalyses.$inferInsert, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow> {
     const [row] = await executor.insert(recurrenceAnalyses).values(values).returning();
@@ -45,70 +49,9 @@ export class RecurrenceRepository {
       .limit(100);
   }
 
-  /** Claim a queued analysis for a worker: QUEUED -> RUNNING, counting the attempt. */
-  async claim(id: string): Promise<RecurrenceAnalysisRow | undefined> {
-    const [row] = await this.database.db
-      .update(recurrenceAnalyses)
-      .set({ status: 'RUNNING', attempts: sql`${recurrenceAnalyses.attempts} + 1`, startedAt: new Date(), updatedAt: new Date(), progress: 0 })
-      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'QUEUED')))
-      .returning();
-    return row;
-  }
-
-  /** Progress doubles as the worker's heartbeat (updated_at). */
-  async setProgress(id: string, progress: number): Promise<void> {
-    await this.database.db
-      .update(recurrenceAnalyses)
-      .set({ progress, updatedAt: new Date() })
-      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')));
-  }
-
-  async finish(id: string, values: Partial<typeof recurrenceAnalyses.$inferInsert>): Promise<void> {
-    await this.database.db
-      .update(recurrenceAnalyses)
-      .set({ ...values, finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')));
-  }
-
-  async cancel(id: string, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow | undefined> {
-    const [row] = await executor
-      .update(recurrenceAnalyses)
-      .set({ status: 'CANCELLED', message: 'cancelled by a user', finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(recurrenceAnalyses.id, id), inArray(recurrenceAnalyses.status, ['QUEUED', 'RUNNING'])))
-      .returning();
-    return row;
-  }
-
-  async statusOf(id: string): Promise<RecurrenceAnalysisRow['status'] | undefined> {
-    const [row] = await this.database.db
-      .select({ status: recurrenceAnalyses.status })
-      .from(recurrenceAnalyses)
-      .where(eq(recurrenceAnalyses.id, id));
-    return row?.status;
-  }
-
-  /** Analyses whose worker stopped sending heartbeats. */
-  listAbandoned(heartbeatBefore: Date): Promise<RecurrenceAnalysisRow[]> {
-    return this.database.db
-      .select()
-      .from(recurrenceAnalyses)
-      .where(and(eq(recurrenceAnalyses.status, 'RUNNING'), lt(recurrenceAnalyses.updatedAt, heartbeatBefore)));
-  }
-
-  async requeue(id: string): Promise<boolean> {
-    const rows = await this.database.db
-      .update(recurrenceAnalyses)
-      .set({ status: 'QUEUED', progress: 0, message: 'the worker stopped during the analysis; queued again', updatedAt: new Date() })
-      .where(and(eq(recurrenceAnalyses.id, id), eq(recurrenceAnalyses.status, 'RUNNING')))
-      .returning({ id: recurrenceAnalyses.id });
-    return rows.length > 0;
-  }
-
-  async fail(id: string, message: string): Promise<void> {
-    await this.database.db
-      .update(recurrenceAnalyses)
-      .set({ status: 'FAILED', message, finishedAt: new Date(), updatedAt: new Date() })
-      .where(and(eq(recurrenceAnalyses.id, id), inArray(recurrenceAnalyses.status, ['RUNNING', 'QUEUED'])));
+  /** A user's cancel; undefined when the analysis had already ended. */
+  cancel(id: string, executor: Executor = this.database.db): Promise<RecurrenceAnalysisRow | undefined> {
+    return this.runs.cancel(recurrenceAnalyses, id, executor);
   }
 
   async findHypothesis(id: string, executor: Executor = this.database.db): Promise<HypothesisRow | undefined> {

@@ -4,7 +4,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { ProjectRow } from '../projects/projects.repository';
 import { SegmentRow } from '../segments/segments.repository';
 import { SiteRow } from '../sites/sites.repository';
-import { FitRenewalInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
 import { StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { HypothesisRow, RecurrenceAnalysisRow, ReleaseRow } from './recurrence.repository';
 import { RecurrenceAnalysisView, RecurrenceService } from './recurrence.service';
@@ -21,6 +21,11 @@ export class RecurrenceResolver {
   @Query('fitRenewal')
   fitRenewal(@Args('input') input: FitRenewalInput) {
     return this.recurrence.fitRenewal(input);
+  }
+
+  @Query('renewalForecast')
+  renewalForecast(@Args('input') input: RenewalForecastInput) {
+    return this.recurrence.renewalForecast(input);
   }
 
   @Query('recurrenceAnalysis')

@@ -10,15 +10,23 @@ import { ProvenanceService } from '../provenance/provenance.service';
 import { ReleasesService } from '../releases/releases.service';
 import { AuthUser } from '../auth/auth-user';
 import type { SiteEvent } from '../chronology/correlation';
-import { fitRenewalModel, RecurrenceInputError, RENEWAL_MODELS, renewalDistribution } from '../chronology/recurrence';
+import {
+  fitRenewalModel,
+  forecastRenewal,
+  RecurrenceInputError,
+  RENEWAL_MODELS,
+  RENEWAL_PRIOR_NOTE,
+  renewalDistribution,
+} from '../chronology/recurrence';
 import { badInput, conflict, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { JobQueueService, QUEUES } from '../jobs/job-queue.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { SegmentRow } from '../segments/segments.repository';
 import { SegmentsService } from '../segments/segments.service';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
-import { FitRenewalInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
+import { RecurrenceJob } from './recurrence.job';
 import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
 import { RecurrenceExport, recurrenceExport, recurrenceExportCsv, RecurrenceExportHeader } from './recurrence-export';
@@ -51,9 +59,9 @@ export type RecurrenceInputSnapshot =
 /** The analysis as the API serves it: the row, its stored results spread in, and the caution. */
 export type RecurrenceAnalysisView = RecurrenceAnalysisRow &
   Partial<StoredRecurrenceResults> &
-  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { caution: string };
+  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { modelAveraged: NonNullable<StoredRecurrenceResults['modelAveraged']> } & { caution: string };
 
-const NO_RESULTS = { intervals: [], poisson: [], models: [], curves: [], histogram: [] };
+const NO_RESULTS = { intervals: [], poisson: [], models: [], modelAveraged: [], curves: [], histogram: [] };
 
 @Injectable()
 export class RecurrenceService {
@@ -65,6 +73,7 @@ export class RecurrenceService {
     private readonly latestRuns: LatestRunsService,
     private readonly ageModelRuns: AgeModelRunsRepository,
     private readonly jobs: JobQueueService,
+    private readonly recurrenceJob: RecurrenceJob,
     private readonly access: AccessService,
     private readonly audit: AuditService,
     private readonly releases: ReleasesService,
@@ -92,7 +101,32 @@ export class RecurrenceService {
   fitRenewal(input: FitRenewalInput) {
     try {
       const fit = fitRenewalModel(input.model, { closedIntervals: input.intervalsYears, openInterval: input.openIntervalYears ?? null });
-      return { model: fit.model, meanRecurrenceYears: fit.mu, aperiodicity: fit.alpha, logLikelihood: fit.logLikelihood, aic: fit.aic };
+      return { model: fit.model, meanRecurrenceYears: fit.mu, aperiodicity: fit.alpha, logLikelihood: fit.logLikelihood, aic: fit.aic, aicc: fit.aicc };
+    } catch (error) {
+      throw asDomainError(error, { closedIntervals: 'intervalsYears', openInterval: 'openIntervalYears' });
+    }
+  }
+
+  /** Posterior ranges for exactly known intervals (no project data, so no access check); bounded by the input's limits. */
+  renewalForecast(input: RenewalForecastInput) {
+    try {
+      const result = forecastRenewal({
+        model: input.model,
+        intervalsYears: input.intervalsYears,
+        openIntervalYears: input.openIntervalYears,
+        windowsYears: input.windowsYears,
+        seed: input.seed ?? 1,
+      });
+      return {
+        model: result.model,
+        draws: result.draws,
+        meanRecurrence: result.meanRecurrence,
+        aperiodicity: result.aperiodicity,
+        probabilities: result.probabilities.map((p) => ({ windowYears: p.windowYears, ...p.range })),
+        approximateDraws: result.approximateDraws,
+        priorNote: RENEWAL_PRIOR_NOTE,
+        caution: RECURRENCE_CAUTION,
+      };
     } catch (error) {
       throw asDomainError(error, { closedIntervals: 'intervalsYears', openInterval: 'openIntervalYears' });
     }
@@ -174,7 +208,7 @@ export class RecurrenceService {
       ]);
       return row;
     });
-    await this.jobs.send(QUEUES.recurrence, { runId: analysis.id });
+    await this.jobs.send(this.recurrenceJob, { runId: analysis.id });
     return this.view(analysis);
   }
 

@@ -12,6 +12,7 @@ import {
   LabSheetCalibration,
   LabSheetContext,
   LabSheetUnit,
+  listedProblems,
   MAX_LAB_SHEET_ROWS,
   readBoolean,
   readLabSheet,
@@ -308,5 +309,26 @@ describe(checkLabSheet.name, () => {
     const check = checkLabSheet(sheet(...rows), context());
     expect(check.problems.map((p) => p.row)).toEqual(Array.from({ length: 10 }, (_, i) => 4 * i + 1));
     expect(check.accepted).toHaveLength(30);
+  });
+});
+
+describe('listedProblems and duplicate lab codes at scale (issue 17: 2,000 duplicates gave a 22 MB error list)', () => {
+  it('names at most five other rows per duplicate, with the count of the rest', () => {
+    const rows = Array.from({ length: 2000 }, () => 'R-1,Lower peat,2.5,RADIOCARBON,CHARCOAL,1000,30,INTCAL20').join('\n');
+    const check = checkLabSheet(`${HEADER}\n${rows}`, context());
+    const duplicates = check.problems.filter((p) => p.field === 'labCode');
+    expect(duplicates).toHaveLength(2000);
+    expect(duplicates[0].message).toBe('lab code R-1 appears more than once in the sheet: also on rows 2, 3, 4, 5, 6 and 1,994 more');
+    expect(duplicates[1999].message).toBe('lab code R-1 appears more than once in the sheet: also on rows 1, 2, 3, 4, 5 and 1,994 more');
+    expect(JSON.stringify(duplicates).length).toBeLessThan(300_000);
+  });
+
+  it('lists the first problems and counts the rest in one last entry', () => {
+    const problems = Array.from({ length: 250 }, (_, i) => ({ row: i + 1, field: 'labCode', message: 'x' }));
+    const listed = listedProblems(problems, 200);
+    expect(listed).toHaveLength(201);
+    expect(listed[199].row).toBe(200);
+    expect(listed[200]).toEqual({ row: 0, field: 'csv', message: 'and 50 more problems not listed; fix these and check the sheet again' });
+    expect(listedProblems(problems.slice(0, 200), 200)).toHaveLength(200);
   });
 });

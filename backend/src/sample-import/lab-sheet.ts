@@ -192,9 +192,13 @@ export function checkLabSheetRows<C extends LabSheetCalibration>(reading: LabShe
       if (outside) problems.add(row, 'depthM', outside);
     }
     if (sample.labCode !== null) {
-      const others = (rowsByLabCode.get(sample.labCode) ?? []).filter((other) => other !== row);
-      if (others.length > 0) {
-        problems.add(row, 'labCode', `lab code ${sample.labCode} appears more than once in the sheet: also on ${plural('row', others)}`);
+      const rows = rowsByLabCode.get(sample.labCode) ?? [];
+      if (rows.length > 1) {
+        // Name a few of the other rows, not all: n duplicates naming each other would be n^2 long.
+        const others = rows.slice(0, LISTED_DUPLICATE_ROWS + 1).filter((other) => other !== row).slice(0, LISTED_DUPLICATE_ROWS);
+        const unlisted = rows.length - 1 - others.length;
+        const more = unlisted > 0 ? ` and ${formatCount(unlisted)} more` : '';
+        problems.add(row, 'labCode', `lab code ${sample.labCode} appears more than once in the sheet: also on ${plural('row', others)}${more}`);
       }
       if (context.takenLabCodes.has(sample.labCode)) {
         problems.add(row, 'labCode', `lab code ${sample.labCode} is already used by another sample in this project`);
@@ -214,6 +218,30 @@ export function checkLabSheetRows<C extends LabSheetCalibration>(reading: LabShe
     }
   }
   return { rowCount: reading.rowCount, problems: sortProblems(problems.all()), accepted };
+}
+
+/** Other rows named in a duplicate lab code's message. */
+const LISTED_DUPLICATE_ROWS = 5;
+
+/** Most problems an answer lists; the rest are counted in a last entry ("and N more"). */
+export const MAX_LISTED_PROBLEMS = 200;
+
+function formatCount(n: number): string {
+  return String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+}
+
+/**
+ * The problems as an answer lists them: the first `max` in row order and, when there are more,
+ * one last entry (row 0, field `csv`) saying how many were left out, so a sheet with thousands of
+ * bad rows answers in kilobytes.
+ */
+export function listedProblems(problems: readonly LabSheetProblem[], max = MAX_LISTED_PROBLEMS): LabSheetProblem[] {
+  if (problems.length <= max) return [...problems];
+  const rest = problems.length - max;
+  return [
+    ...problems.slice(0, max),
+    { row: 0, field: 'csv', message: `and ${formatCount(rest)} more ${rest === 1 ? 'problem' : 'problems'} not listed; fix these and check the sheet again` },
+  ];
 }
 
 /** Problems keyed by row, keeping the first for each field so one bad cell is reported once. */

@@ -11,7 +11,7 @@ import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { ImportSamplesInput } from './dto/import-samples.input';
-import { CheckedLabSheetRow, checkLabSheetRows, LabSheetProblem, readLabSheet } from './lab-sheet';
+import { CheckedLabSheetRow, checkLabSheetRows, LabSheetProblem, listedProblems, readLabSheet } from './lab-sheet';
 import { sampleFormRules } from './sample-form-rules';
 
 /** `ImportPreviewRow` of the schema. */
@@ -62,7 +62,7 @@ export class SampleImportService {
     });
     const result: ImportResult = {
       rowCount: check.rowCount,
-      errors: check.problems,
+      errors: listedProblems(check.problems),
       committed: false,
       preview: check.accepted.map(previewRow),
     };

@@ -183,6 +183,47 @@ export type ChiSquareTest = {
   t: Scalars['Float']['output'];
 };
 
+/** A physical-property log of a core (magnetic susceptibility, density, CT number, ...). */
+export type CoreLog = {
+  __typename?: 'CoreLog';
+  baseDepthM: Scalars['Float']['output'];
+  /** Channel names in sheet order. */
+  channels: Array<Scalars['String']['output']>;
+  createdAt: Scalars['DateTime']['output'];
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+  /** Number of depth rows stored. */
+  rowCount: Scalars['Int']['output'];
+  site: Site;
+  /** Depth of the first and last rows (m below the core top). */
+  topDepthM: Scalars['Float']['output'];
+  /**
+   * Channels for drawing, each at most maxPoints (2-2000) block means; all channels unless some
+   * are named.
+   */
+  traces: Array<CoreLogTrace>;
+  /** The unit of each channel, in the same order. */
+  units: Array<Scalars['String']['output']>;
+};
+
+
+/** A physical-property log of a core (magnetic susceptibility, density, CT number, ...). */
+export type CoreLogTracesArgs = {
+  channels?: InputMaybe<Array<Scalars['String']['input']>>;
+  maxPoints?: Scalars['Int']['input'];
+};
+
+/** One channel of a core log thinned for drawing: block means over equal depth bins. */
+export type CoreLogTrace = {
+  __typename?: 'CoreLogTrace';
+  channel: Scalars['String']['output'];
+  /** Depths (m below the core top) of the drawn points, increasing. */
+  depthsM: Array<Scalars['Float']['output']>;
+  unit: Scalars['String']['output'];
+  /** Readings at those depths (block means), in the channel's unit. */
+  values: Array<Scalars['Float']['output']>;
+};
+
 export type CreateEventHorizonInput = {
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name: Scalars['String']['input'];
@@ -388,6 +429,7 @@ export type Hypothesis = {
   description?: Maybe<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   name: Scalars['String']['output'];
+  /** Every minimal order loop of the hypothesis, of any length (at most 200 are listed). */
   orderConflicts: Array<OrderConflict>;
   preferred: Scalars['Boolean']['output'];
   project: Project;
@@ -539,15 +581,31 @@ export type ModelCurves = {
   survival: Array<CurvePoint>;
 };
 
+/** One renewal model in a recurrence analysis. */
 export type ModelResult = {
   __typename?: 'ModelResult';
+  /** AIC of the fit to the median event ages. */
   aic: Scalars['Float']['output'];
+  /** AICc (Hurvich & Tsai 1989), n = intervals with the open one; null when the record is too short (n <= k + 1). */
+  aicc?: Maybe<Scalars['Float']['output']>;
+  /** Akaike weight from AICc (from AIC only when no model has an AICc). */
   akaikeWeight: Scalars['Float']['output'];
+  /** Maximum-likelihood aperiodicity of the median event ages. */
   aperiodicity: Scalars['Float']['output'];
+  /** Aperiodicity over draws, with parameter uncertainty and from dating alone; null in older analyses. */
+  aperiodicityRange?: Maybe<ParameterRange>;
   deltaAic: Scalars['Float']['output'];
+  /** AICc minus the lowest AICc. */
+  deltaAicc?: Maybe<Scalars['Float']['output']>;
   logLikelihood: Scalars['Float']['output'];
+  /** Mean recurrence over draws, with parameter uncertainty and from dating alone; null in older analyses. */
+  meanRecurrenceRange?: Maybe<ParameterRange>;
+  /** Maximum-likelihood mean recurrence of the median event ages, years. */
   meanRecurrenceYears: Scalars['Float']['output'];
   model: RenewalModel;
+  /** Share of draws in which this model has the lowest AICc. */
+  preferredShare?: Maybe<Scalars['Float']['output']>;
+  /** Window probabilities: headline ranges with parameter uncertainty, dating-only ranges beside. */
   probabilities: Array<WindowProbability>;
 };
 
@@ -566,6 +624,8 @@ export type Mutation = {
   createSite: Site;
   createUnit: Unit;
   deleteAttachment: Scalars['Boolean']['output'];
+  /** Remove a core log (RESEARCHER, ADMIN). */
+  deleteCoreLog: Scalars['Boolean']['output'];
   deleteEventHorizon: Scalars['Boolean']['output'];
   deleteHypothesis: Scalars['Boolean']['output'];
   deleteSample: Scalars['Boolean']['output'];
@@ -577,12 +637,16 @@ export type Mutation = {
   /** Install or replace a calibration curve (e.g. SHCal20) from its published five-column file. Installed curves serve every project on the server: operators only (OPERATOR_EMAILS). */
   installCalibrationCurve: CalibrationCurveInfo;
   inviteMember: Invitation;
+  /** Queue fresh runs for every stale result the caller's role may start, in dependency order, with the same settings and seeds (RESEARCHER, CORRELATOR, ANALYST, ADMIN). */
+  refreshStaleResults: RefreshPlan;
   removeMember: Scalars['Boolean']['output'];
   removeTie: Scalars['Boolean']['output'];
   requestPasswordReset: Scalars['Boolean']['output'];
   resetPassword: Scalars['Boolean']['output'];
   setMemberRole: Membership;
   setPreferredHypothesis: Hypothesis;
+  /** Turn the automatic refresh after changes on or off (ADMIN). */
+  setRefreshSettings: RefreshSettings;
   /** Sign in with e-mail and password; returns a bearer token. */
   signIn: AuthPayload;
   startAgeModelRun: AgeModelRun;
@@ -593,6 +657,8 @@ export type Mutation = {
   updateSegment: Segment;
   updateSite: Site;
   updateUnit: Unit;
+  /** Check a core log sheet row by row and store it on its core (RESEARCHER, ADMIN). */
+  uploadCoreLog: CoreLog;
 };
 
 
@@ -661,6 +727,11 @@ export type MutationDeleteAttachmentArgs = {
 };
 
 
+export type MutationDeleteCoreLogArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
 export type MutationDeleteEventHorizonArgs = {
   id: Scalars['ID']['input'];
 };
@@ -706,6 +777,11 @@ export type MutationInviteMemberArgs = {
 };
 
 
+export type MutationRefreshStaleResultsArgs = {
+  projectId: Scalars['ID']['input'];
+};
+
+
 export type MutationRemoveMemberArgs = {
   projectId: Scalars['ID']['input'];
   userId: Scalars['ID']['input'];
@@ -734,6 +810,11 @@ export type MutationSetMemberRoleArgs = {
 
 export type MutationSetPreferredHypothesisArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type MutationSetRefreshSettingsArgs = {
+  input: SetRefreshSettingsInput;
 };
 
 
@@ -793,17 +874,64 @@ export type MutationUpdateUnitArgs = {
   version: Scalars['Int']['input'];
 };
 
+
+export type MutationUploadCoreLogArgs = {
+  input: UploadCoreLogInput;
+};
+
+/**
+ * A minimal cycle of the hypothesis's order graph (each regional event one node, each site's column
+ * ordering its members): ties that cannot all hold, because together they put an event before
+ * itself. A pair of crossing ties is a loop of two regional events.
+ */
 export type OrderConflict = {
   __typename?: 'OrderConflict';
+  /** Every site event on the loop, in loop order. */
+  events: Array<EventHorizon>;
+  /** The loop in plain words, naming the sites, events and ties on it. */
   message: Scalars['String']['output'];
+  /** Ids of the regional events on the loop (as RegionalEvent.id), in loop order. */
+  regionalEventIds: Array<Scalars['ID']['output']>;
+  /** The sites of the loop's steps, along strike. */
+  sites: Array<Site>;
+  /** The loop's steps in order: each step's younger event is tied to the next step's older one. */
+  steps: Array<OrderStep>;
+  /** A tie on the loop (the first of the first regional event's chain). */
   tieA: Tie;
+  /** Another tie on the loop (the first of the second regional event's chain). */
   tieB: Tie;
+  /** Every tie on the loop, in loop order. */
+  ties: Array<Tie>;
+};
+
+/**
+ * One step of an order loop: at one site, the member of one regional event lies below (so is
+ * older than) the member of the next regional event on the loop.
+ */
+export type OrderStep = {
+  __typename?: 'OrderStep';
+  /** The lower, older event at the site. */
+  older: EventHorizon;
+  /** The site whose column orders the two events. */
+  site: Site;
+  /** The higher, younger event at the site. */
+  younger: EventHorizon;
 };
 
 export type PageInfo = {
   __typename?: 'PageInfo';
   endCursor?: Maybe<Scalars['String']['output']>;
   hasNextPage: Scalars['Boolean']['output'];
+};
+
+/** A parameter's range over draws with parameter uncertainty (headline) and from dating alone. */
+export type ParameterRange = {
+  __typename?: 'ParameterRange';
+  datingOnlyHigh95?: Maybe<Scalars['Float']['output']>;
+  datingOnlyLow95?: Maybe<Scalars['Float']['output']>;
+  high95: Scalars['Float']['output'];
+  low95: Scalars['Float']['output'];
+  median: Scalars['Float']['output'];
 };
 
 /** A study: all data belongs to exactly one project. */
@@ -820,6 +948,9 @@ export type Project = {
   name: Scalars['String']['output'];
   preferredHypothesis?: Maybe<Hypothesis>;
   recurrenceAnalyses: Array<RecurrenceAnalysis>;
+  /** The project's latest refreshes, newest first (at most 10). */
+  refreshPlans: Array<RefreshPlan>;
+  refreshSettings: RefreshSettings;
   releases: Array<Release>;
   segments: Array<Segment>;
   sites: Array<Site>;
@@ -850,8 +981,11 @@ export type Query = {
   /** Projects the caller is a member of. */
   projects: Array<Project>;
   recurrenceAnalysis: RecurrenceAnalysis;
+  refreshPlan: RefreshPlan;
   release: Release;
   releaseDiff: ReleaseDiff;
+  /** Posterior ranges of one renewal model's parameters and window probabilities for intervals known exactly (no project data; 4,000 parameter draws). */
+  renewalForecast: RenewalForecast;
   renewalProbability: RenewalProbability;
   sample: Sample;
   segment: Segment;
@@ -916,6 +1050,11 @@ export type QueryRecurrenceAnalysisArgs = {
 };
 
 
+export type QueryRefreshPlanArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
 export type QueryReleaseArgs = {
   id: Scalars['ID']['input'];
 };
@@ -924,6 +1063,11 @@ export type QueryReleaseArgs = {
 export type QueryReleaseDiffArgs = {
   fromId: Scalars['ID']['input'];
   toId: Scalars['ID']['input'];
+};
+
+
+export type QueryRenewalForecastArgs = {
+  input: RenewalForecastInput;
 };
 
 
@@ -988,9 +1132,13 @@ export type RecurrenceAnalysis = {
   meanRecurrence?: Maybe<RangeEstimate>;
   medianRecurrence?: Maybe<RangeEstimate>;
   message?: Maybe<Scalars['String']['output']>;
+  /** Per draw, the models' probabilities weighted by that draw's Akaike weights from AICc (model averaging, Burnham & Anderson 2002); empty in older analyses. */
+  modelAveraged: Array<WindowProbability>;
   modelComparisonNote?: Maybe<Scalars['String']['output']>;
   models: Array<ModelResult>;
   openInterval?: Maybe<RangeEstimate>;
+  /** How the renewal parameters were drawn and under which priors; null in older analyses. */
+  parameterNote?: Maybe<Scalars['String']['output']>;
   poisson: Array<WindowProbability>;
   progress: Scalars['Float']['output'];
   project: Project;
@@ -1023,6 +1171,61 @@ export type RecurrenceInputs = {
   recorded: Array<RecordedInput>;
 };
 
+/**
+ * One refresh of a project's stale results: the plan in dependency order and its progress. The
+ * result lists hold the fresh results queued so far; a step still waiting for the runs it needs
+ * adds its fresh result when it starts.
+ */
+export type RefreshPlan = {
+  __typename?: 'RefreshPlan';
+  /** Fresh site age model runs queued by this refresh. */
+  ageModelRuns: Array<AgeModelRun>;
+  /** True when the project's automatic refresh started it. */
+  automatic: Scalars['Boolean']['output'];
+  createdAt: Scalars['DateTime']['output'];
+  id: Scalars['ID']['output'];
+  /** Fresh joint age model runs queued by this refresh. */
+  jointRuns: Array<JointRunReference>;
+  /** Fresh recurrence analyses queued by this refresh. */
+  recurrenceAnalyses: Array<RecurrenceAnalysis>;
+  requestedBy?: Maybe<User>;
+  /** Stale results it did not re-run, and why. */
+  skipped: Array<SkippedRefresh>;
+  /** ACTIVE while a step waits or runs, then FINISHED. */
+  status: Scalars['String']['output'];
+  steps: Array<RefreshStep>;
+};
+
+/** Whether a project refreshes stale results by itself after each change. */
+export type RefreshSettings = {
+  __typename?: 'RefreshSettings';
+  automatic: Scalars['Boolean']['output'];
+  /** Seconds without a further change before the automatic refresh starts. */
+  debounceSeconds: Scalars['Int']['output'];
+};
+
+/** One stale result of a refresh and the fresh result queued for it. */
+export type RefreshStep = {
+  __typename?: 'RefreshStep';
+  /** Ids of the steps it waits for. */
+  dependsOn: Array<Scalars['ID']['output']>;
+  /** The fresh result, once queued. */
+  freshId?: Maybe<Scalars['ID']['output']>;
+  id: Scalars['ID']['output'];
+  /** ageModelRun, jointRun or recurrenceAnalysis. */
+  kind: Scalars['String']['output'];
+  /** What it refreshes, in words. */
+  label: Scalars['String']['output'];
+  /** Why it failed or was blocked. */
+  message?: Maybe<Scalars['String']['output']>;
+  /** 1 site age model runs, 2 joint runs, 3 recurrence analyses. */
+  stage: Scalars['Int']['output'];
+  /** The stale result re-run with its settings and seed. */
+  staleId: Scalars['ID']['output'];
+  /** WAITING (for the steps it needs), STARTING, QUEUED (fresh result queued or running), SUCCEEDED, FAILED, or BLOCKED (a step it needs failed). */
+  status: Scalars['String']['output'];
+};
+
 /** A connected group of tied events: one inferred earthquake. */
 export type RegionalEvent = {
   __typename?: 'RegionalEvent';
@@ -1032,6 +1235,13 @@ export type RegionalEvent = {
   combinedMedianCalBp?: Maybe<Scalars['Float']['output']>;
   /** 0-1: how well the members' age densities agree (1 = identical). */
   concordance?: Maybe<Scalars['Float']['output']>;
+  /** True when the concordance is below concordanceThreshold. */
+  concordanceLow: Scalars['Boolean']['output'];
+  /**
+   * The concordance below which a group of this many members is flagged: exp(-chi2_0.95(n-1)/2),
+   * so a true same-event group is flagged about 5 % of the time whatever its size. Null for one member.
+   */
+  concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
   magnitude?: Maybe<MagnitudeEstimate>;
   members: Array<EventHorizon>;
@@ -1154,10 +1364,49 @@ export type ReleasedUnit = {
 export type RenewalFit = {
   __typename?: 'RenewalFit';
   aic: Scalars['Float']['output'];
+  /** AIC with the small-sample correction of Hurvich & Tsai (1989), n = intervals with the open one; null when n <= k + 1. */
+  aicc?: Maybe<Scalars['Float']['output']>;
   aperiodicity: Scalars['Float']['output'];
   logLikelihood: Scalars['Float']['output'];
   meanRecurrenceYears: Scalars['Float']['output'];
   model: RenewalModel;
+};
+
+/** Posterior ranges of a renewal model given exactly known intervals. */
+export type RenewalForecast = {
+  __typename?: 'RenewalForecast';
+  /** Aperiodicity (coefficient of variation of the interval); 1 for POISSON. */
+  aperiodicity: RangeEstimate;
+  /** Draws taken by importance resampling because the open interval is far beyond the record (0 normally). */
+  approximateDraws: Scalars['Int']['output'];
+  /** The caution every recurrence figure carries. */
+  caution: Scalars['String']['output'];
+  /** Number of parameter draws. */
+  draws: Scalars['Int']['output'];
+  /** Mean recurrence, years: posterior median and central 95 % range. */
+  meanRecurrence: RangeEstimate;
+  model: RenewalModel;
+  /** The priors and how the draws were made. */
+  priorNote: Scalars['String']['output'];
+  /** Conditional probability of the next event within each window, given the open interval. */
+  probabilities: Array<WindowProbability>;
+};
+
+/**
+ * A stateless forecast: one renewal model's parameters drawn from their posterior given exactly known
+ * intervals and the censored open interval (reference priors, aperiodicity below 5; the priors are in
+ * `priorNote`), and each draw's conditional probability of the next event in each window.
+ */
+export type RenewalForecastInput = {
+  /** Closed inter-event times, years (2 to 1,000 values, each up to 1,000,000). */
+  intervalsYears: Array<Scalars['Float']['input']>;
+  model: RenewalModel;
+  /** Years since the last event at the start of the windows (right-censored). */
+  openIntervalYears: Scalars['Float']['input'];
+  /** Seed of the parameter draws (default 1): the same input and seed give the same answer. */
+  seed?: InputMaybe<Scalars['Int']['input']>;
+  /** Forecast window lengths, years (1 to 10). */
+  windowsYears: Array<Scalars['Float']['input']>;
 };
 
 /** Renewal model of earthquake recurrence. */
@@ -1283,12 +1532,21 @@ export type SetMemberRoleInput = {
   userId: Scalars['ID']['input'];
 };
 
+export type SetRefreshSettingsInput = {
+  automatic: Scalars['Boolean']['input'];
+  /** 10 to 3600 seconds (default 60). */
+  debounceSeconds?: InputMaybe<Scalars['Int']['input']>;
+  projectId: Scalars['ID']['input'];
+};
+
 /** A place with evidence: a trench, core, outcrop, marsh or lake site. */
 export type Site = {
   __typename?: 'Site';
   ageModelRuns: Array<AgeModelRun>;
   alongStrikeKm: Scalars['Float']['output'];
   attachments: Array<Attachment>;
+  /** Physical-property logs of this core, by name. */
+  coreLogs: Array<CoreLog>;
   /** Ground elevation (m above sea level) for land sites. */
   elevationM?: Maybe<Scalars['Float']['output']>;
   /** Event horizons, oldest first. */
@@ -1320,6 +1578,17 @@ export type SiteKind =
   | 'OUTCROP'
   | 'TRENCH';
 
+/** A stale result a refresh did not re-run, and why (the requester's role, or it waits for something else). */
+export type SkippedRefresh = {
+  __typename?: 'SkippedRefresh';
+  /** The stale result's id. */
+  id: Scalars['ID']['output'];
+  kind: Scalars['String']['output'];
+  /** What it is, in words. */
+  label: Scalars['String']['output'];
+  reason: Scalars['String']['output'];
+};
+
 /** One input that changed after a result was computed: the reason the result is stale. */
 export type StaleReason = {
   __typename?: 'StaleReason';
@@ -1340,8 +1609,17 @@ export type StartAgeModelRunInput = {
   inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   /** Iterations per chain after burn-in. */
   iterations?: InputMaybe<Scalars['Int']['input']>;
-  /** Prior probability that any one sample is an outlier (default 0.05). */
+  /**
+   * Prior probability that any one sample is an outlier (default 0.05): the few per cent of dates
+   * the trade expects to disagree with their context beyond their quoted errors.
+   */
   outlierPrior?: InputMaybe<Scalars['Float']['input']>;
+  /**
+   * Scale of an outlier's unknown shift, years (default 500, from 10 to 10,000): an outlying
+   * sample's age is read as its likelihood shifted by an amount with a two-sided exponential prior
+   * of this mean absolute size, so outlier probabilities depend on this stated scale only.
+   */
+  outlierShiftScaleYears?: InputMaybe<Scalars['Float']['input']>;
   seed?: InputMaybe<Scalars['Int']['input']>;
   siteId: Scalars['ID']['input'];
 };
@@ -1453,6 +1731,21 @@ export type UpdateUnitInput = {
   topDepthM?: InputMaybe<Scalars['Float']['input']>;
 };
 
+export type UploadCoreLogInput = {
+  /**
+   * CSV: a header row "depth (m)" then one "name (unit)" per channel, e.g.
+   * "depth (m),magnetic susceptibility (SI 1e-5),density (g/cm3)"; one row per depth, depths in
+   * metres below the core top, strictly increasing; an empty cell is no reading. At most 20,000
+   * rows and 16 channels. Checked row by row: any problem refuses the sheet (BAD_USER_INPUT on
+   * csv with extensions.problems, the first 50 by row, and extensions.problemCount).
+   */
+  csv: Scalars['String']['input'];
+  /** The log's name, unique within the core (e.g. "MSCL 2026"). */
+  name: Scalars['String']['input'];
+  /** A CORE or LAKE site. */
+  siteId: Scalars['ID']['input'];
+};
+
 export type User = {
   __typename?: 'User';
   displayName: Scalars['String']['output'];
@@ -1463,8 +1756,19 @@ export type User = {
   operator: Scalars['Boolean']['output'];
 };
 
+/**
+ * Probability of the next event within a window: median and central 95 % range over draws. In a
+ * recurrence analysis the headline range carries both dating and renewal-parameter uncertainty; the
+ * dating-only range (each age draw's maximum-likelihood fit plugged in) is beside it.
+ */
 export type WindowProbability = {
   __typename?: 'WindowProbability';
+  /** 97.5 % point with dating uncertainty only. */
+  datingOnlyHigh95?: Maybe<Scalars['Float']['output']>;
+  /** 2.5 % point with dating uncertainty only. */
+  datingOnlyLow95?: Maybe<Scalars['Float']['output']>;
+  /** Median with dating uncertainty only (plug-in fits); null where not computed (stateless forecast, older analyses). */
+  datingOnlyMedian?: Maybe<Scalars['Float']['output']>;
   high95: Scalars['Float']['output'];
   low95: Scalars['Float']['output'];
   median: Scalars['Float']['output'];
@@ -1575,7 +1879,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string } }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -1682,7 +1986,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }> }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -2281,6 +2585,8 @@ export const HypothesisDocument = new TypedDocumentString(`
       id
       combinedMedianCalBp
       concordance
+      concordanceThreshold
+      concordanceLow
       warnings
       ruptureLengthKm
       members {
@@ -2312,6 +2618,10 @@ export const HypothesisDocument = new TypedDocumentString(`
       tieB {
         id
       }
+      ties {
+        id
+      }
+      regionalEventIds
     }
   }
 }
@@ -2577,17 +2887,44 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
       model
       aic
       deltaAic
+      aicc
+      deltaAicc
       akaikeWeight
       meanRecurrenceYears
       aperiodicity
       logLikelihood
+      meanRecurrenceRange {
+        median
+        low95
+        high95
+        datingOnlyLow95
+        datingOnlyHigh95
+      }
+      aperiodicityRange {
+        median
+        low95
+        high95
+        datingOnlyLow95
+        datingOnlyHigh95
+      }
       probabilities {
         windowYears
         median
         low95
         high95
+        datingOnlyLow95
+        datingOnlyHigh95
       }
     }
+    modelAveraged {
+      windowYears
+      median
+      low95
+      high95
+      datingOnlyLow95
+      datingOnlyHigh95
+    }
+    parameterNote
     modelComparisonNote
     curves {
       model

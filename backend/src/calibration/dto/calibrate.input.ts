@@ -1,16 +1,20 @@
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
+import { MAX_AGE_ERROR_YEARS, MAX_AGE_YEARS } from '../../chronology/calibration/bounds';
 
 export const CURVE_CODES = ['INTCAL20', 'MARINE20', 'SHCAL20'] as const;
 export type CurveCode = (typeof CURVE_CODES)[number];
 
 const finite = { allowNaN: false, allowInfinity: false };
 
-/** Range checks here are only for sanity; the engine gives the researcher-facing messages. */
+/** Range checks here bound the work of one request (chronology/calibration/bounds.ts); the engine gives the researcher-facing messages. */
 export class CalibrateInput {
   @IsNumber(finite)
+  @Min(-MAX_AGE_YEARS)
+  @Max(MAX_AGE_YEARS)
   c14Age: number;
 
   @IsNumber(finite)
+  @Max(MAX_AGE_ERROR_YEARS, { message: `c14Error must not be greater than ${MAX_AGE_ERROR_YEARS} (14C years)` })
   c14Error: number;
 
   @IsIn(CURVE_CODES)
@@ -18,10 +22,13 @@ export class CalibrateInput {
 
   @IsOptional()
   @IsNumber(finite)
+  @Min(-MAX_AGE_YEARS)
+  @Max(MAX_AGE_YEARS)
   deltaR?: number | null;
 
   @IsOptional()
   @IsNumber(finite)
+  @Max(MAX_AGE_ERROR_YEARS, { message: `deltaRError must not be greater than ${MAX_AGE_ERROR_YEARS} (14C years)` })
   deltaRError?: number | null;
 
   @IsOptional()
@@ -33,9 +40,11 @@ export class CalibrateInput {
 
 export class CalibrateLuminescenceInput {
   @IsNumber(finite)
+  @Max(MAX_AGE_YEARS)
   ageYears: number;
 
   @IsNumber(finite)
+  @Max(MAX_AGE_ERROR_YEARS, { message: `errorYears must not be greater than ${MAX_AGE_ERROR_YEARS} years` })
   errorYears: number;
 
   @IsInt()

@@ -4,6 +4,7 @@
  */
 import { normalDensity, uniformDensity } from '../common/density';
 import { CalibrationResult, calibrationResult } from './calibrate';
+import { requireBoundedAge, requireBoundedError, requireGridWidth } from './bounds';
 import { CalibrationInputError, formatYears } from './errors';
 
 /** Year zero of the cal BP scale (AD 1950). */
@@ -59,6 +60,10 @@ export function calibrateLuminescence(input: LuminescenceInput): CalibrationResu
         'Luminescence ages count back from the year the sample was measured, so it is needed to place the age.',
     );
   }
+  requireBoundedAge('ageYears', ageYears, 'A luminescence age');
+  requireBoundedError('errorYears', errorYears, 'A luminescence age error');
+  // normalDensity spans mean +- 6 sd on the 1-year grid.
+  requireGridWidth('errorYears', Math.ceil(12 * errorYears) + 1, `A luminescence age with a 1-sigma of ${formatYears(errorYears)} years`);
   const meanCalBp = ageYears - (measurementYear - CAL_BP_ZERO_YEAR);
   return calibrationResult(normalDensity(meanCalBp, errorYears));
 }
@@ -97,5 +102,8 @@ export function calendarRange(input: CalendarRangeInput): CalibrationResult {
         `(${formatYears(youngerCalBp)} cal BP); cal BP counts back from 1950, so the older end is the larger number.`,
     );
   }
+  requireBoundedAge('youngerCalBp', youngerCalBp, 'The younger end of a calendar range');
+  requireBoundedAge('olderCalBp', olderCalBp, 'The older end of a calendar range');
+  requireGridWidth('olderCalBp', Math.round(olderCalBp) - Math.round(youngerCalBp) + 1, 'The calendar range');
   return calibrationResult(uniformDensity(youngerCalBp, olderCalBp));
 }

@@ -15,6 +15,7 @@
  */
 import { CalendarDensity, HpdRange, summariseNormalised, totalMass, trim } from '../common/density';
 import { CalibrationCurve } from './curve';
+import { requireBoundedAge, requireBoundedError } from './bounds';
 import { CalibrationInputError, formatYears } from './errors';
 
 /** A calendar age from any dating method, in the form the rest of Stratochron consumes. */
@@ -207,6 +208,8 @@ function checkRadiocarbonInput(input: RadiocarbonInput): { deltaR: number; delta
       `The 14C age error must be a positive 1-sigma in 14C years; got ${c14Error}.`,
     );
   }
+  requireBoundedAge('c14Age', c14Age, 'A 14C age');
+  requireBoundedError('c14Error', c14Error, 'A 14C age error');
   let deltaR = 0;
   let deltaRError = 0;
   if (curve.marine) {
@@ -217,6 +220,7 @@ function checkRadiocarbonInput(input: RadiocarbonInput): { deltaR: number; delta
       );
     }
     requireFinite('deltaR', input.deltaR, 'Delta-R');
+    requireBoundedAge('deltaR', input.deltaR, 'A Delta-R');
     if (!isGiven(input.deltaRError)) {
       throw new CalibrationInputError(
         'deltaRError',
@@ -230,6 +234,7 @@ function checkRadiocarbonInput(input: RadiocarbonInput): { deltaR: number; delta
         `The Delta-R error is a 1-sigma and cannot be negative; got ${input.deltaRError}.`,
       );
     }
+    requireBoundedError('deltaRError', input.deltaRError, 'A Delta-R error');
     deltaR = input.deltaR;
     deltaRError = input.deltaRError;
   } else {

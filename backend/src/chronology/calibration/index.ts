@@ -8,5 +8,6 @@ export type { CalendarRangeInput, LuminescenceInput } from './calendar-ages';
 export { calendarRange, calibrateLuminescence } from './calendar-ages';
 export type { CurveLookup, DatingMethod, SampleCalibrationOptions, SampleDating } from './sample-calibration';
 export { calibrationForSample } from './sample-calibration';
+export { MAX_AGE_ERROR_YEARS, MAX_AGE_YEARS, MAX_CALENDAR_GRID_YEARS } from './bounds';
 export type { CurveCoverage, CurveMeta } from './custom-curve';
 export { validateCurveText } from './custom-curve';

@@ -6,6 +6,7 @@
 import { CalibrationResult, calibrateRadiocarbon } from './calibrate';
 import { CalendarRangeInput, calendarRange, calibrateLuminescence } from './calendar-ages';
 import { CalibrationCurve } from './curve';
+import { requireBoundedError } from './bounds';
 import { CalibrationInputError, withFieldNames } from './errors';
 
 export type DatingMethod = 'RADIOCARBON' | 'LUMINESCENCE' | 'HISTORICAL' | 'TEPHRA';
@@ -130,7 +131,10 @@ export function calibrationForSample(
           `The half-width of the calendar range must be zero or a positive number of years; got ${halfWidth}.`,
         );
       }
-      return calendarRange({ youngerCalBp: centre - halfWidth, olderCalBp: centre + halfWidth });
+      requireBoundedError('calendarErrorYears', halfWidth, 'A half-width');
+      return withFieldNames({ youngerCalBp: 'calendarAgeBp', olderCalBp: 'calendarErrorYears' }, () =>
+        calendarRange({ youngerCalBp: centre - halfWidth, olderCalBp: centre + halfWidth }),
+      );
     }
     default: {
       const unknown: never = sample.method;

@@ -7,14 +7,27 @@
  * is zero wherever any member is zero, so it is computed only on the overlap of the supports.
  */
 import { normalise, trim, type CalendarDensity } from '../common/density';
+import { chiSquareCritical5 } from './chi-square';
 
 /**
- * Below this age concordance a regional event's members are flagged as unlikely to share one
- * age. For Gaussian members of equal spread the concordance equals exp(-T/2), where T is the
- * Ward & Wilson (1978) statistic; exp(-T/2) is also the chi-square tail probability with 2
- * degrees of freedom, so 0.05 matches T = 2 ln 20 = 5.99, the 5 % critical value for df 2.
+ * The age concordance below which a regional event of `memberCount` members is flagged as
+ * unlikely to share one age: exp(-chi2_0.95(n - 1) / 2).
+ *
+ * For Gaussian members of equal spread the concordance equals exp(-T/2), where T is the Ward &
+ * Wilson (1978) statistic, which is chi-square with n - 1 degrees of freedom when the members
+ * date one event (see `combineAges`). So C < exp(-c/2) exactly when T > c, and taking c the 95 %
+ * point of chi-square(n - 1) flags a true same-event group 5 % of the time whatever its size
+ * [analytic]: n = 2 -> 0.147, n = 3 -> 0.050, n = 8 -> 0.00088 (CHECKS.md). A fixed threshold
+ * would flag large groups far more often (the chi-square's mean grows with n - 1). Null for a
+ * single member, which has nothing to disagree with.
  */
-export const CONCORDANCE_WARNING_THRESHOLD = 0.05;
+export function concordanceWarningThreshold(memberCount: number): number | null {
+  if (!Number.isInteger(memberCount) || memberCount < 1) {
+    throw new RangeError(`a regional event has a whole number of members, at least 1 (got ${memberCount})`);
+  }
+  if (memberCount === 1) return null;
+  return Math.exp(-chiSquareCritical5(memberCount - 1) / 2);
+}
 
 /** Relative mass below which the grid years at either end of a combined density are dropped. */
 const COMBINED_TRIM_THRESHOLD = 1e-9;

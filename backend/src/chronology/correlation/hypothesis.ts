@@ -5,7 +5,7 @@
  */
 import { summarise, type CalendarDensity, type DensitySummary } from '../common/density';
 import { wardWilsonTest, type GaussianAge, type WardWilsonTest } from './chi-square';
-import { combineAges, CONCORDANCE_WARNING_THRESHOLD } from './combined-age';
+import { combineAges, concordanceWarningThreshold } from './combined-age';
 import { orderConflicts, type OrderConflict } from './order-conflicts';
 import {
   CorrelationInputError,
@@ -47,7 +47,9 @@ export interface RegionalEventCheck {
   readonly combinedDensity: CalendarDensity | null;
   /** Age concordance in [0, 1]; null for an event seen at one site only. */
   readonly concordance: number | null;
-  /** Concordance below `CONCORDANCE_WARNING_THRESHOLD`. */
+  /** The concordance below which this many members are flagged; null for a single member. */
+  readonly concordanceThreshold: number | null;
+  /** Concordance below `concordanceThreshold` (a true same-event group is flagged about 5 % of the time). */
   readonly concordanceWarning: boolean;
   /** Ward & Wilson test on the members' posterior means and SDs; null for a single member. */
   readonly chiSquare: WardWilsonTest | null;
@@ -134,10 +136,12 @@ export function checkHypothesis({
       );
     }
     const single = members.length === 1;
-    const concordanceWarning = !single && concordance < CONCORDANCE_WARNING_THRESHOLD;
+    const concordanceThreshold = concordanceWarningThreshold(members.length);
+    const concordanceWarning = concordanceThreshold !== null && concordance < concordanceThreshold;
     if (concordanceWarning && density) {
       notes.push(
-        `Age concordance ${formatNumber(concordance, 3)} is below ${CONCORDANCE_WARNING_THRESHOLD}: ` +
+        `Age concordance ${formatNumber(concordance, 4)} is below ${formatNumber(concordanceThreshold, 4)}, ` +
+          `the level a true same-event group of ${members.length} falls below 5 % of the time: ` +
           "the members' ages barely overlap.",
       );
     }
@@ -179,6 +183,7 @@ export function checkHypothesis({
         combined,
         combinedDensity: density,
         concordance: single ? null : concordance,
+        concordanceThreshold,
         concordanceWarning,
         chiSquare,
         ruptureLengthKm,

@@ -82,7 +82,12 @@ describe(fitPoisson.name, () => {
     expect(fit.alpha).toBe(1);
     expect(fit.logLikelihood).toBeCloseTo(-3 * Math.log(300) - 3, 12);
     expect(fit.aic).toBeCloseTo(2 - 2 * (-3 * Math.log(300) - 3), 12);
+    // AICc with n = 4 intervals (the open one counts), k = 1: + 2*1*2/(4-1-1) = 2 [analytic].
+    expect(fit.aicc).toBeCloseTo(fit.aic + 2, 12);
     expect(fit.parameterCount).toBe(1);
+    // Without the open interval n = 3 and k = 1 gives 4/1; a 2-parameter fit has none (n <= k + 1).
+    expect(fitPoisson({ closedIntervals: [200, 300, 250] }).aicc).toBeCloseTo(fitPoisson({ closedIntervals: [200, 300, 250] }).aic + 4, 12);
+    expect(fitBpt({ closedIntervals: [200, 300, 250] }).aicc).toBeNull();
   });
 
   it('gives the sample mean without an open interval [analytic]', () => {
@@ -279,6 +284,7 @@ describe(compareModels.name, () => {
       parameters: { model: 'BPT', mu: 500, alpha: 0.5 },
       logLikelihood: -aic / 2 + 2,
       aic,
+      aicc: aic + 12 / 7,
       parameterCount: 2,
       closedIntervalCount: 10,
       openIntervalYears: null,
@@ -293,6 +299,26 @@ describe(compareModels.name, () => {
     expect(comparison.rows[0].akaikeWeight).toBeCloseTo(1 / (1 + Math.exp(-1)), 12);
     expect(comparison.rows[0].akaikeWeight + comparison.rows[1].akaikeWeight).toBeCloseTo(1, 14);
     expect(comparison.preferred).toBe('BPT');
+    expect(comparison.rows[1].deltaAicc).toBeCloseTo(2, 12);
+    expect(comparison.weightsFrom).toBe('AICC');
+  });
+
+  it('weighs by AICc: a 2-parameter model that wins on AIC by 1 loses with 6 intervals (Hurvich & Tsai 1989) [analytic]', () => {
+    // n = 6 intervals (5 closed + open): AICc adds 2k(k+1)/(n-k-1) = 4/4 = 1 for k = 1, 12/3 = 4 for k = 2.
+    const poisson = { ...fakeFit('POISSON', 101), parameterCount: 1, aicc: 101 + 1 };
+    const bpt = { ...fakeFit('BPT', 100), aicc: 100 + 4 };
+    const comparison = compareModels([poisson, bpt]);
+    expect(comparison.preferred).toBe('POISSON');
+    expect(comparison.rows[0].deltaAic).toBeCloseTo(1, 12);
+    expect(comparison.rows[1].deltaAicc).toBeCloseTo(2, 12);
+    expect(comparison.rows[0].akaikeWeight).toBeCloseTo(1 / (1 + Math.exp(-1)), 12);
+  });
+
+  it('gives no weight to a model the record is too short to score by AICc', () => {
+    const comparison = compareModels([{ ...fakeFit('POISSON', 104), parameterCount: 1, aicc: 106 }, { ...fakeFit('BPT', 100), aicc: null }]);
+    expect(comparison.preferred).toBe('POISSON');
+    expect(comparison.rows[1].akaikeWeight).toBe(0);
+    expect(comparison.note).toMatch(/too few intervals for AICc with Brownian Passage Time/);
   });
 
   it('says the record cannot tell the models apart when every delta AIC is below 2 [common practice]', () => {
@@ -315,7 +341,7 @@ describe(compareModels.name, () => {
     ]);
     expect(comparison.distinguishable).toBe(true);
     expect(comparison.note).toMatch(/cannot tell lognormal and Brownian Passage Time apart/);
-    expect(comparison.note).toMatch(/Weibull is considerably less supported \(delta AIC 5\.0\)/);
-    expect(comparison.note).toMatch(/Poisson \(exponential\) is essentially unsupported \(delta AIC 25\.0\)/);
+    expect(comparison.note).toMatch(/Weibull is considerably less supported \(delta AICc 5\.0\)/);
+    expect(comparison.note).toMatch(/Poisson \(exponential\) is essentially unsupported \(delta AICc 25\.0\)/);
   });
 });

@@ -4,7 +4,11 @@
  * right-censored (no event yet), so the likelihood is
  *   L = prod_i f(tau_i) x S(t_e),  S = 1 - F
  * (Biasi, Weldon, Fumal & Seitz 2002, BSSA 92(7); Parsons 2008, JGR 113, B03302).
- * Models are compared by AIC = 2k - 2 ln L (Akaike 1974, IEEE Trans. Autom. Control 19(6)).
+ * Models are compared by AIC = 2k - 2 ln L (Akaike 1974, IEEE Trans. Autom. Control 19(6)) and,
+ * because records hold 5-15 intervals, by its small-sample correction
+ *   AICc = AIC + 2k(k + 1) / (n - k - 1)
+ * (Hurvich & Tsai 1989, Biometrika 76(2):297-307 [memory for the pages]), with n the number of
+ * intervals, the open one counted; AICc is undefined (null) when n <= k + 1.
  *
  * The exponential (Poisson) fit has a closed form. The others are maximised by Nelder-Mead over
  * unbounded coordinates of each model's own parameters (BPT: ln mu, ln alpha; lognormal:
@@ -46,6 +50,8 @@ export interface RenewalFit {
   readonly logLikelihood: number;
   /** 2k - 2 ln L. */
   readonly aic: number;
+  /** AIC + 2k(k+1)/(n-k-1), n intervals with the open one; null when n <= k + 1. */
+  readonly aicc: number | null;
   /** k: 1 for Poisson, 2 for the others. */
   readonly parameterCount: number;
   readonly closedIntervalCount: number;
@@ -160,18 +166,26 @@ function makeFit(
   parameterCount: number,
   converged: boolean,
 ): RenewalFit {
+  const aic = 2 * parameterCount - 2 * logLikelihood;
   return {
     model,
     mu,
     alpha,
     parameters,
     logLikelihood,
-    aic: 2 * parameterCount - 2 * logLikelihood,
+    aic,
+    aicc: smallSampleAic(aic, parameterCount, data.count + (data.hasOpenInterval ? 1 : 0)),
     parameterCount,
     closedIntervalCount: data.count,
     openIntervalYears: data.hasOpenInterval ? data.openInterval : null,
     converged,
   };
+}
+
+/** AICc (Hurvich & Tsai 1989); null when n <= k + 1, where the correction is undefined. */
+export function smallSampleAic(aic: number, parameterCount: number, intervalCount: number): number | null {
+  const denominator = intervalCount - parameterCount - 1;
+  return denominator > 0 ? aic + (2 * parameterCount * (parameterCount + 1)) / denominator : null;
 }
 
 /**
@@ -360,16 +374,25 @@ export interface ModelComparisonRow {
   readonly aic: number;
   /** AIC minus the lowest AIC. */
   readonly deltaAic: number;
-  /** exp(-delta/2) normalised over the models compared. */
+  /** Null when the record is too short for the correction (n <= k + 1). */
+  readonly aicc: number | null;
+  /** AICc minus the lowest AICc; null with `aicc`. */
+  readonly deltaAicc: number | null;
+  /**
+   * exp(-delta/2) normalised over the models compared, from AICc; a model without an AICc gets
+   * weight 0. Only when no model has an AICc do the weights come from AIC (`weightsFrom`).
+   */
   readonly akaikeWeight: number;
 }
 
 export interface ModelComparison {
-  /** Rows in order of increasing AIC. */
+  /** Rows in order of increasing AICc (AIC when no model has one). */
   readonly rows: readonly ModelComparisonRow[];
   readonly preferred: RenewalModel;
-  /** False when every model is within 2 AIC units of the best. */
+  /** False when every model is within 2 units of the best. */
   readonly distinguishable: boolean;
+  /** Which criterion ranks and weighs the models. */
+  readonly weightsFrom: 'AICC' | 'AIC';
   /** A plain-language reading of the table. */
   readonly note: string;
 }
@@ -382,47 +405,86 @@ function supportWording(deltaAic: number): string {
   return 'essentially unsupported';
 }
 
+/** Akaike weights exp(-delta/2) / sum over scores (Burnham & Anderson 2002); Infinity scores weigh 0. */
+export function akaikeWeights(scores: ArrayLike<number>, out = new Float64Array(scores.length)): Float64Array {
+  let lowest = Infinity;
+  for (let i = 0; i < scores.length; i++) if (scores[i] < lowest) lowest = scores[i];
+  let total = 0;
+  for (let i = 0; i < scores.length; i++) {
+    out[i] = Number.isFinite(scores[i]) ? Math.exp(-(scores[i] - lowest) / 2) : 0;
+    total += out[i];
+  }
+  for (let i = 0; i < scores.length; i++) out[i] = total > 0 ? out[i] / total : 1 / scores.length;
+  return out;
+}
+
 /**
- * Delta AIC and Akaike weights (Burnham & Anderson 2002), with a note that says when the record
- * cannot tell the models apart: the rule of thumb that models within 2 AIC units of the best
- * have substantial support [common practice].
+ * Delta AIC, delta AICc and Akaike weights from AICc (Burnham & Anderson 2002, who recommend AICc
+ * whenever n / k is below about 40), with a note that says when the record cannot tell the models
+ * apart: the rule of thumb that models within 2 units of the best have substantial support
+ * [common practice].
  */
 export function compareModels(fits: readonly RenewalFit[]): ModelComparison {
   if (fits.length === 0) throw new RecurrenceInputError('fits', 'There are no model fits to compare.');
-  const sorted = [...fits].sort((x, y) => x.aic - y.aic);
-  const lowest = sorted[0].aic;
-  const relative = sorted.map((fit) => Math.exp(-(fit.aic - lowest) / 2));
-  const total = relative.reduce((sum, value) => sum + value, 0);
+  const anyAicc = fits.some((fit) => fit.aicc !== null);
+  const weightsFrom = anyAicc ? 'AICC' : 'AIC';
+  const score = (fit: RenewalFit): number => (anyAicc ? (fit.aicc ?? Infinity) : fit.aic);
+  const sorted = [...fits].sort((x, y) => score(x) - score(y) || x.aic - y.aic);
+  const lowestAic = Math.min(...fits.map((fit) => fit.aic));
+  const finiteAicc = fits.map((fit) => fit.aicc).filter((value): value is number => value !== null);
+  const lowestAicc = finiteAicc.length > 0 ? Math.min(...finiteAicc) : null;
+  const weights = akaikeWeights(sorted.map(score));
   const rows = sorted.map((fit, i) => ({
     model: fit.model,
     aic: fit.aic,
-    deltaAic: fit.aic - lowest,
-    akaikeWeight: relative[i] / total,
+    deltaAic: fit.aic - lowestAic,
+    aicc: fit.aicc,
+    deltaAicc: fit.aicc !== null && lowestAicc !== null ? fit.aicc - lowestAicc : null,
+    akaikeWeight: weights[i],
   }));
   const preferred = rows[0].model;
-  const distinguishable = rows.length > 1 && rows.some((row) => row.deltaAic >= 2);
-  return { rows, preferred, distinguishable, note: comparisonNote(rows, distinguishable) };
+  const delta = (row: ModelComparisonRow): number => (anyAicc ? (row.deltaAicc ?? Infinity) : row.deltaAic);
+  const distinguishable = rows.length > 1 && rows.some((row) => delta(row) >= 2);
+  const undefinedFor = rows.filter((row) => row.aicc === null).map((row) => RENEWAL_MODEL_LABELS[row.model]);
+  const caveat =
+    undefinedFor.length === 0
+      ? ''
+      : anyAicc
+        ? ` The record has too few intervals for AICc with ${listed(undefinedFor)} (n <= k + 1), so they get no weight.`
+        : ' The record has too few intervals for AICc with any model (n <= k + 1); the weights come from AIC, which favours the richer models here.';
+  return {
+    rows,
+    preferred,
+    distinguishable,
+    weightsFrom,
+    note: comparisonNote(rows, distinguishable, anyAicc ? 'AICc' : 'AIC', delta) + caveat,
+  };
 }
 
-function comparisonNote(rows: readonly ModelComparisonRow[], distinguishable: boolean): string {
+function comparisonNote(
+  rows: readonly ModelComparisonRow[],
+  distinguishable: boolean,
+  criterion: string,
+  delta: (row: ModelComparisonRow) => number,
+): string {
   const label = (model: RenewalModel): string => RENEWAL_MODEL_LABELS[model];
   if (rows.length === 1) return `Only the ${label(rows[0].model)} model was fitted; there is nothing to compare.`;
   if (!distinguishable) {
     return (
-      'The record cannot tell these models apart: every model is within 2 AIC units of the best ' +
+      `The record cannot tell these models apart: every model is within 2 ${criterion} units of the best ` +
       '(a common rule of thumb), so report their probabilities side by side rather than choosing one.'
     );
   }
-  const close = rows.filter((row) => row.deltaAic < 2);
-  const others = rows.slice(close.length);
+  const close = rows.filter((row) => delta(row) < 2);
+  const others = rows.slice(close.length).filter((row) => Number.isFinite(delta(row)));
   const lead =
     close.length > 1
-      ? `The record cannot tell ${listed(close.map((row) => label(row.model)))} apart (all within 2 AIC units of the lowest, a common rule of thumb)`
-      : `${label(rows[0].model)} has the lowest AIC (Akaike weight ${rows[0].akaikeWeight.toFixed(2)})`;
+      ? `The record cannot tell ${listed(close.map((row) => label(row.model)))} apart (all within 2 ${criterion} units of the lowest, a common rule of thumb)`
+      : `${label(rows[0].model)} has the lowest ${criterion} (Akaike weight ${rows[0].akaikeWeight.toFixed(2)})`;
   const rest = others.map(
-    (row) => `${label(row.model)} is ${supportWording(row.deltaAic)} (delta AIC ${row.deltaAic.toFixed(1)})`,
+    (row) => `${label(row.model)} is ${supportWording(delta(row))} (delta ${criterion} ${delta(row).toFixed(1)})`,
   );
-  return `${lead}; ${rest.join('; ')}.`;
+  return rest.length > 0 ? `${lead}; ${rest.join('; ')}.` : `${lead}.`;
 }
 
 function listed(names: readonly string[]): string {

@@ -17,8 +17,10 @@ export {
 export { RecurrenceCancelledError, RecurrenceInputError } from './errors';
 export type { ModelComparison, ModelComparisonRow, RecurrenceIntervals, RenewalFit } from './fit';
 export {
+  akaikeWeights,
   compareModels,
   distributionFromFit,
+  smallSampleAic,
   fitAllModels,
   fitBpt,
   fitLognormal,
@@ -37,7 +39,11 @@ export type {
   SimulationOptions,
   WindowProbability,
 } from './monte-carlo';
-export { credibleRange, intervalStatistics, simulateRecurrence, summariseRecurrence } from './monte-carlo';
+export { credibleRange, intervalStatistics, simulateRecurrence, spreadWithinYears, summariseRecurrence } from './monte-carlo';
+export type { ParameterDraw, PosteriorSampler } from './posterior';
+export { APERIODICITY_LIMIT, gammaVariate, posteriorSampler, RENEWAL_PRIOR_NOTE } from './posterior';
+export type { ForecastInput, ForecastResult } from './forecast';
+export { FORECAST_DEFAULT_DRAWS, forecastRenewal } from './forecast';
 export type { OrderedSequenceSampler } from './ordered-sequence';
 export { drawOrderedSequence, orderedSequenceSampler } from './ordered-sequence';
 export type { HistogramBin, HistogramOptions, RenewalCurve, RenewalCurves } from './curves';

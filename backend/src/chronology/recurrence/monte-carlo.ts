@@ -7,6 +7,14 @@
  * reported as the median and the 2.5-97.5 % range over draws. Point fits on the median sequence
  * sit beside them, as analysts often quote those.
  *
+ * Parameter uncertainty: a maximum-likelihood fit per draw shows the dating error only, and with
+ * 5-15 intervals the parameters are far less certain than the dating (a BPT mean recurrence from
+ * six intervals is known to perhaps +-20 %). So, for every age draw, each model's parameters are
+ * also drawn once from their posterior given that draw's record (posterior.ts), and the window
+ * probabilities computed from those parameters: over all draws this is the posterior mixed over
+ * the dating, the headline range. The plug-in (dating-only) ranges are kept beside it. The
+ * model-averaged row weights each draw's probabilities by that draw's Akaike weights from AICc.
+ *
  * Ages are cal BP (years before AD 1950), so a forecast starting in year Y CE is 1950 - Y cal BP
  * and the open interval is (age of the last event) - (1950 - Y).
  */
@@ -15,6 +23,7 @@ import { SeededRandom } from '../common/random';
 import { RENEWAL_MODELS, type RenewalModel } from './distributions';
 import { RecurrenceCancelledError, RecurrenceInputError } from './errors';
 import {
+  akaikeWeights,
   compareModels,
   distributionFromFit,
   fitAllModels,
@@ -24,6 +33,7 @@ import {
 } from './fit';
 import { type HistogramBin, intervalHistogram } from './curves';
 import { orderedSequenceSampler } from './ordered-sequence';
+import { posteriorSampler } from './posterior';
 
 /** The median and central 95 % range of a quantity over Monte Carlo draws. */
 export interface CredibleRange {
@@ -34,18 +44,33 @@ export interface CredibleRange {
 
 export interface WindowProbability {
   readonly windowYears: number;
+  /**
+   * The headline range: dating and parameter uncertainty together (parameters drawn from their
+   * posterior per age draw) unless the summary was asked for plug-in figures only.
+   */
   readonly probability: CredibleRange;
+  /** Dating uncertainty only: the maximum-likelihood fit of each age draw, plugged in. */
+  readonly datingOnly: CredibleRange;
 }
 
 export interface ModelRecurrence {
   readonly model: RenewalModel;
+  /** Mean recurrence, dating and parameters (headline). */
   readonly mu: CredibleRange;
+  /** Aperiodicity, dating and parameters (headline). */
   readonly alpha: CredibleRange;
+  /** Mean recurrence of the per-draw maximum-likelihood fits: dating only. */
+  readonly muDatingOnly: CredibleRange;
+  readonly alphaDatingOnly: CredibleRange;
   readonly probabilities: readonly WindowProbability[];
-  /** Share of draws in which this model has the lowest AIC. */
+  /** Share of draws in which this model has the lowest AICc (AIC where no AICc exists). */
   readonly preferredShare: number;
+  /** Median over draws of the model's Akaike weight from AICc. */
+  readonly medianAkaikeWeight: number;
   /** Draws whose fit did not converge (kept, but worth a warning above a few per cent). */
   readonly unconvergedDraws: number;
+  /** Parameter draws that fell back to importance resampling (posterior.ts). */
+  readonly approximateDraws: number;
 }
 
 export interface PointWindowProbability {
@@ -81,8 +106,15 @@ export interface RecurrenceSummary {
   readonly aperiodicity: CredibleRange;
   readonly openInterval: CredibleRange;
   readonly models: readonly ModelRecurrence[];
-  /** The plain Poisson figure 1 - exp(-dT / mean recurrence), per draw, beside the models. */
+  /** The plain Poisson figure 1 - exp(-dT / mean recurrence), per draw, beside the models (dating only). */
   readonly poissonFromMeanRecurrence: readonly WindowProbability[];
+  /**
+   * Per draw, the models' probabilities weighted by that draw's Akaike weights from AICc
+   * (Burnham & Anderson 2002, section 4.3, model averaging); headline and dating-only.
+   */
+  readonly modelAveraged: readonly WindowProbability[];
+  /** Whether the headline ranges include parameter uncertainty. */
+  readonly parameterUncertainty: boolean;
   readonly medianSequence: MedianSequenceFits;
   /** All draws' intervals pooled, for the interval histogram. */
   readonly intervalHistogram: readonly HistogramBin[];
@@ -107,6 +139,13 @@ export interface RecurrenceOptions {
    * ordered uniform points in that year, so they still give intervals longer than zero.
    */
   readonly spreadSeed?: number;
+  /**
+   * Draw each model's parameters from their posterior per age draw (default true). False gives
+   * the plug-in figures (maximum-likelihood fit per draw) as the headline, for comparison only.
+   */
+  readonly parameterUncertainty?: boolean;
+  /** Seed of the parameter draws (default 1). */
+  readonly parameterSeed?: number;
 }
 
 /**
@@ -140,12 +179,23 @@ export function summariseRecurrence(
   const sdDraws = new Float64Array(drawCount);
   const cvDraws = new Float64Array(drawCount);
   const openDraws = new Float64Array(drawCount);
+  const withParameters = options.parameterUncertainty ?? true;
+  const parameterRandom = new SeededRandom(options.parameterSeed ?? 1);
   const muDraws = models.map(() => new Float64Array(drawCount));
   const alphaDraws = models.map(() => new Float64Array(drawCount));
   const probabilityDraws = models.map(() => windows.map(() => new Float64Array(drawCount)));
+  const muTotal = withParameters ? models.map(() => new Float64Array(drawCount)) : muDraws;
+  const alphaTotal = withParameters ? models.map(() => new Float64Array(drawCount)) : alphaDraws;
+  const probabilityTotal = withParameters ? models.map(() => windows.map(() => new Float64Array(drawCount))) : probabilityDraws;
+  const weightDraws = models.map(() => new Float64Array(drawCount));
+  const averagedTotal = windows.map(() => new Float64Array(drawCount));
+  const averagedDatingOnly = windows.map(() => new Float64Array(drawCount));
   const poissonDraws = windows.map(() => new Float64Array(drawCount));
   const preferredCounts = new Float64Array(models.length);
   const unconverged = new Float64Array(models.length);
+  const approximate = new Float64Array(models.length);
+  const scores = new Float64Array(models.length);
+  const weights = new Float64Array(models.length);
 
   const ages = new Float64Array(eventCount);
   const spreadRandom = new SeededRandom(options.spreadSeed ?? 1);
@@ -177,17 +227,37 @@ export function summariseRecurrence(
     openDraws[d] = open;
     for (let w = 0; w < windows.length; w++) poissonDraws[w][d] = -Math.expm1(-windows[w] / stats.mean);
 
-    const fits = fitAllModels(prepareIntervals({ closedIntervals: intervals, openInterval: open }), models);
+    const record = prepareIntervals({ closedIntervals: intervals, openInterval: open });
+    const fits = fitAllModels(record, models);
+    const anyAicc = fits.some((fit) => fit.aicc !== null);
+    for (let m = 0; m < fits.length; m++) scores[m] = anyAicc ? (fits[m].aicc ?? Infinity) : fits[m].aic;
+    akaikeWeights(scores, weights);
     let preferred = 0;
     for (let m = 0; m < fits.length; m++) {
       const fit = fits[m];
-      if (fit.aic < fits[preferred].aic) preferred = m;
+      if (scores[m] < scores[preferred]) preferred = m;
       if (!fit.converged) unconverged[m]++;
+      weightDraws[m][d] = weights[m];
       muDraws[m][d] = fit.mu;
       alphaDraws[m][d] = fit.alpha;
       const distribution = distributionFromFit(fit);
       for (let w = 0; w < windows.length; w++) {
-        probabilityDraws[m][w][d] = distribution.conditionalProbability(open, windows[w]);
+        const probability = distribution.conditionalProbability(open, windows[w]);
+        probabilityDraws[m][w][d] = probability;
+        averagedDatingOnly[w][d] += weights[m] * probability;
+      }
+      if (withParameters) {
+        const draw = posteriorSampler(fit.model, record)(parameterRandom);
+        if (draw.approximate) approximate[m]++;
+        muTotal[m][d] = draw.distribution.mu;
+        alphaTotal[m][d] = draw.distribution.alpha;
+        for (let w = 0; w < windows.length; w++) {
+          const probability = draw.distribution.conditionalProbability(open, windows[w]);
+          probabilityTotal[m][w][d] = probability;
+          averagedTotal[w][d] += weights[m] * probability;
+        }
+      } else {
+        for (let w = 0; w < windows.length; w++) averagedTotal[w][d] += weights[m] * probabilityDraws[m][w][d];
       }
     }
     preferredCounts[preferred]++;
@@ -209,16 +279,30 @@ export function summariseRecurrence(
     openInterval: credibleRange(openDraws),
     models: models.map((model, m) => ({
       model,
-      mu: credibleRange(muDraws[m]),
-      alpha: credibleRange(alphaDraws[m]),
-      probabilities: windows.map((windowYears, w) => ({ windowYears, probability: credibleRange(probabilityDraws[m][w]) })),
+      mu: credibleRange(muTotal[m]),
+      alpha: credibleRange(alphaTotal[m]),
+      muDatingOnly: credibleRange(muDraws[m]),
+      alphaDatingOnly: credibleRange(alphaDraws[m]),
+      probabilities: windows.map((windowYears, w) => ({
+        windowYears,
+        probability: credibleRange(probabilityTotal[m][w]),
+        datingOnly: credibleRange(probabilityDraws[m][w]),
+      })),
       preferredShare: preferredCounts[m] / drawCount,
+      medianAkaikeWeight: credibleRange(weightDraws[m]).median,
       unconvergedDraws: unconverged[m],
+      approximateDraws: approximate[m],
     })),
-    poissonFromMeanRecurrence: windows.map((windowYears, w) => ({
+    poissonFromMeanRecurrence: windows.map((windowYears, w) => {
+      const range = credibleRange(poissonDraws[w]);
+      return { windowYears, probability: range, datingOnly: range };
+    }),
+    modelAveraged: windows.map((windowYears, w) => ({
       windowYears,
-      probability: credibleRange(poissonDraws[w]),
+      probability: credibleRange(averagedTotal[w]),
+      datingOnly: credibleRange(averagedDatingOnly[w]),
     })),
+    parameterUncertainty: withParameters,
     medianSequence: fitMedianSequence(medianAges, forecastStartCalBp, windows, models),
     intervalHistogram: intervalHistogram(concatenate(intervalDraws)),
   };

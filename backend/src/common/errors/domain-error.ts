@@ -32,3 +32,16 @@ export const forbidden = (message = 'your role in this project does not allow th
 export const conflict = (message: string) => new DomainError('CONFLICT', message);
 export const unauthenticated = (message = 'sign in first') => new DomainError('UNAUTHENTICATED', message);
 export const unavailable = (message: string) => new DomainError('SERVICE_UNAVAILABLE', message);
+
+/**
+ * Run a lookup through a parent object (a run's site, a tie's hypothesis) and report its NOT_FOUND
+ * as the object's own, so another project's object answers exactly as a missing one does.
+ */
+export async function asNotFoundOf<T>(what: string, lookup: () => Promise<T>): Promise<T> {
+  try {
+    return await lookup();
+  } catch (error) {
+    if (error instanceof DomainError && error.code === 'NOT_FOUND') throw notFound(what);
+    throw error;
+  }
+}

@@ -28,17 +28,22 @@ export function codeForStatus(status: number): ErrorCode | 'INTERNAL_SERVER_ERRO
   }
 }
 
+/** What a client reads for an unexpected error; the server log (GraphqlExceptionFilter) has the details. */
+export const INTERNAL_ERROR_MESSAGE = 'Internal server error';
+
 /**
  * The last word on what a client sees. Errors coded by GraphqlExceptionFilter (and GraphQL's
- * own parse and validation errors) pass with their code; anything else is INTERNAL_SERVER_ERROR,
- * with a generic message in production and never a stack trace.
+ * own parse and validation errors) pass with their code; anything else is INTERNAL_SERVER_ERROR
+ * with a generic message, in development too (a database error's message carries its statement
+ * and parameters), and never a stack trace. `production` is kept for callers; the answer no
+ * longer depends on it.
  */
-export function formatGraphqlError(formatted: GraphQLFormattedError, production: boolean): GraphQLFormattedError {
+export function formatGraphqlError(formatted: GraphQLFormattedError, _production = true): GraphQLFormattedError {
   const code = formatted.extensions?.code;
   const base = { message: formatted.message, locations: formatted.locations, path: formatted.path };
   if (typeof code === 'string' && CLIENT_CODES.has(code)) {
     const { stacktrace: _stacktrace, ...extensions } = formatted.extensions ?? {};
     return { ...base, extensions };
   }
-  return { ...base, message: production ? 'Internal server error' : formatted.message, extensions: { code: 'INTERNAL_SERVER_ERROR' } };
+  return { ...base, message: INTERNAL_ERROR_MESSAGE, extensions: { code: 'INTERNAL_SERVER_ERROR' } };
 }

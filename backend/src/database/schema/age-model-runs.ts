@@ -1,6 +1,5 @@
 import { bigint, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns';
-import { jobStatusEnum } from './enums';
+import { id, runState, timestamps } from './columns';
 import { sites } from './sites';
 import { users } from './users';
 
@@ -11,9 +10,6 @@ export const ageModelRuns = pgTable(
     id: id(),
     siteId: uuid('site_id').notNull().references(() => sites.id, { onDelete: 'cascade' }),
     requestedById: uuid('requested_by_id').references(() => users.id, { onDelete: 'set null' }),
-    status: jobStatusEnum('status').notNull().default('QUEUED'),
-    progress: doublePrecision('progress').notNull().default(0),
-    message: text('message'),
     seed: integer('seed').notNull(),
     settings: jsonb('settings').notNull(),
     inputSnapshot: jsonb('input_snapshot').notNull(),
@@ -23,9 +19,7 @@ export const ageModelRuns = pgTable(
     columnRevision: bigint('column_revision', { mode: 'number' }).notNull().default(0),
     diagnostics: jsonb('diagnostics'),
     results: jsonb('results'),
-    attempts: integer('attempts').notNull().default(0),
-    startedAt: timestamp('started_at', { withTimezone: true, mode: 'date' }),
-    finishedAt: timestamp('finished_at', { withTimezone: true, mode: 'date' }),
+    ...runState(),
     ...timestamps,
   },
   (t) => [index('age_model_runs_site_idx').on(t.siteId, t.createdAt)],

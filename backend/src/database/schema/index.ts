@@ -17,3 +17,4 @@ export * from './recurrence-analyses';
 export * from './invitations';
 export * from './attachments';
 export * from './provenance';
+export * from './core-logs';

@@ -1,6 +1,5 @@
 import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns';
-import { jobStatusEnum } from './enums';
+import { id, runState, timestamps } from './columns';
 import { hypotheses } from './hypotheses';
 import { projects } from './projects';
 import { releases } from './releases';
@@ -20,9 +19,6 @@ export const recurrenceAnalyses = pgTable(
     hypothesisVersion: integer('hypothesis_version'),
     releaseId: uuid('release_id').references(() => releases.id, { onDelete: 'restrict' }),
     requestedById: uuid('requested_by_id').references(() => users.id, { onDelete: 'set null' }),
-    status: jobStatusEnum('status').notNull().default('QUEUED'),
-    progress: doublePrecision('progress').notNull().default(0),
-    message: text('message'),
     seed: integer('seed').notNull(),
     forecastStartYear: integer('forecast_start_year').notNull(),
     windowsYears: doublePrecision('windows_years').array().notNull(),
@@ -30,9 +26,7 @@ export const recurrenceAnalyses = pgTable(
     settings: jsonb('settings').notNull(),
     inputSnapshot: jsonb('input_snapshot').notNull(),
     results: jsonb('results'),
-    attempts: integer('attempts').notNull().default(0),
-    startedAt: timestamp('started_at', { withTimezone: true, mode: 'date' }),
-    finishedAt: timestamp('finished_at', { withTimezone: true, mode: 'date' }),
+    ...runState(),
     ...timestamps,
   },
   (t) => [index('recurrence_analyses_project_idx').on(t.projectId, t.createdAt)],

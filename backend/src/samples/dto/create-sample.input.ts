@@ -1,5 +1,6 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, IsUUID, Length, Matches, Max, Min } from 'class-validator';
+import { MAX_AGE_ERROR_YEARS, MAX_AGE_YEARS } from '../../chronology/calibration/bounds';
 import { CURVE_CODES, CurveCode } from '../../calibration/dto/calibrate.input';
 import { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS } from '../sample-rules';
 
@@ -42,11 +43,13 @@ export class CreateSampleInput {
   @IsOptional()
   @IsNumber(finite)
   @Min(0, { message: 'c14Age cannot be negative: a post-bomb (modern) sample cannot be calibrated on these curves' })
+  @Max(MAX_AGE_YEARS)
   c14Age?: number | null;
 
   @IsOptional()
   @IsNumber(finite)
   @IsPositive({ message: 'c14Error must be greater than 0 (the 1-sigma error in 14C years)' })
+  @Max(MAX_AGE_ERROR_YEARS, { message: `c14Error must not be greater than ${MAX_AGE_ERROR_YEARS} (14C years)` })
   c14Error?: number | null;
 
   @IsOptional()
@@ -68,15 +71,19 @@ export class CreateSampleInput {
   @IsOptional()
   @IsNumber(finite)
   @Min(0, { message: 'deltaRError cannot be negative' })
+  @Max(MAX_AGE_ERROR_YEARS, { message: `deltaRError must not be greater than ${MAX_AGE_ERROR_YEARS} (14C years)` })
   deltaRError?: number | null;
 
   @IsOptional()
   @IsNumber(finite)
+  @Min(-MAX_AGE_YEARS)
+  @Max(MAX_AGE_YEARS)
   calendarAgeBp?: number | null;
 
   @IsOptional()
   @IsNumber(finite)
   @IsPositive({ message: 'calendarErrorYears must be greater than 0' })
+  @Max(MAX_AGE_ERROR_YEARS, { message: `calendarErrorYears must not be greater than ${MAX_AGE_ERROR_YEARS} years` })
   calendarErrorYears?: number | null;
 
   @IsOptional()

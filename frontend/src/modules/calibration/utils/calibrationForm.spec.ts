@@ -26,6 +26,15 @@ describe(readCalibrationForm.name, () => {
   });
 });
 
+describe('error bounds', () => {
+  it('refuses errors above the 20,000 years the server accepts', () => {
+    expect(readCalibrationForm({ c14Age: '3000', c14Error: '1000000', curve: 'MARINE20', deltaR: '0', deltaRError: '20001', latitude: '' }, true)).toEqual({
+      ok: false,
+      errors: { c14Error: 'must be at most 20000', deltaRError: 'must be at most 20000' },
+    });
+  });
+});
+
 describe(calibrationSearchFrom.name, () => {
   it('round-trips through the URL', () => {
     const input = { c14Age: 2410, c14Error: 30, curve: 'MARINE20' as const, deltaR: -40, deltaRError: 55 };

@@ -1,4 +1,5 @@
 import type { CalibrateInput, CurveCode } from '@/gql/graphql';
+import { MAX_AGE_ERROR_YEARS } from '@/modules/ages/utils/ageBounds';
 import { FieldReader, type FormResult } from '@/modules/ui/utils/formFields';
 
 export type CalibrationFormValues = {
@@ -48,9 +49,9 @@ export function calibrationSearchFrom(input: CalibrateInput): URLSearchParams {
 export function readCalibrationForm(values: CalibrationFormValues, marine: boolean): FormResult<CalibrateInput, CalibrationFormField> {
   const reader = new FieldReader<CalibrationFormField>();
   const c14Age = reader.number('c14Age', values.c14Age, { required: true, min: 0 });
-  const c14Error = reader.number('c14Error', values.c14Error, { required: true, above: 0 });
+  const c14Error = reader.number('c14Error', values.c14Error, { required: true, above: 0, max: MAX_AGE_ERROR_YEARS });
   const deltaR = marine ? reader.number('deltaR', values.deltaR, { min: -2000, max: 5000 }) : null;
-  const deltaRError = marine ? reader.number('deltaRError', values.deltaRError, { min: 0 }) : null;
+  const deltaRError = marine ? reader.number('deltaRError', values.deltaRError, { min: 0, max: MAX_AGE_ERROR_YEARS }) : null;
   if (deltaRError !== null && deltaR === null && !reader.errors.deltaR) reader.fail('deltaR', 'give Delta-R with its error');
   const latitude = marine ? reader.number('latitude', values.latitude, { min: -90, max: 90 }) : null;
   return reader.result({

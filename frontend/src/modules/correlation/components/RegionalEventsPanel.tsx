@@ -2,7 +2,6 @@ import { Callout, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
-import { LOW_CONCORDANCE } from '@/modules/correlation/utils/ladderData';
 import { sameAgeVerdict } from '@/modules/correlation/utils/sameAge';
 
 export type RegionalEventsPanelProps = {
@@ -22,17 +21,17 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
   return (
     <div className="sc-side-list">
       {hypothesis.orderConflicts.length > 0 && (
-        <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title={`${hypothesis.orderConflicts.length} order conflict(s)`}>
+        <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title={`${hypothesis.orderConflicts.length} order loop(s): these ties cannot all hold`}>
           <ul>
             {hypothesis.orderConflicts.map((conflict) => (
-              <li key={`${conflict.tieA.id}-${conflict.tieB.id}`}>{conflict.message}</li>
+              <li key={conflict.regionalEventIds.join('>')}>{conflict.message}</li>
             ))}
           </ul>
         </Callout>
       )}
       {regionalEvents.length === 0 && <p>No ties yet: every site event stands alone.</p>}
       {regionalEvents.map((regional, index) => {
-        const low = regional.concordance !== null && regional.concordance !== undefined && regional.concordance < LOW_CONCORDANCE;
+        const low = regional.concordanceLow;
         return (
           <div key={regional.id} className="sc-regional-card">
             <strong>Regional event {index + 1}</strong> <Tag minimal>{regional.members.length} sites</Tag>
@@ -51,7 +50,7 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
                 <span className="num">{regional.concordance === null || regional.concordance === undefined ? '–' : regional.concordance.toFixed(2)}</span>{' '}
                 {low && (
                   <Tag intent={Intent.WARNING} minimal icon={IconNames.WARNING_SIGN}>
-                    low
+                    low (below {regional.concordanceThreshold?.toPrecision(2)} for {regional.members.length} members)
                   </Tag>
                 )}
               </dd>

@@ -89,6 +89,8 @@ export const HypothesisDocument = graphql(`
         id
         combinedMedianCalBp
         concordance
+        concordanceThreshold
+        concordanceLow
         warnings
         ruptureLengthKm
         members {
@@ -120,6 +122,10 @@ export const HypothesisDocument = graphql(`
         tieB {
           id
         }
+        ties {
+          id
+        }
+        regionalEventIds
       }
     }
   }

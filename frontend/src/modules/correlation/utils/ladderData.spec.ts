@@ -25,4 +25,9 @@ describe(conflictingTieIds.name, () => {
   it('collects both ties of every conflict', () => {
     expect([...conflictingTieIds([{ tieA: { id: 'a' }, tieB: { id: 'b' } }, { tieA: { id: 'b' }, tieB: { id: 'c' } }])].sort()).toEqual(['a', 'b', 'c']);
   });
+
+  it('collects every tie of a loop of three', () => {
+    const loop = { tieA: { id: 'x' }, tieB: { id: 'y' }, ties: [{ id: 'x' }, { id: 'y' }, { id: 'z' }] };
+    expect([...conflictingTieIds([loop])].sort()).toEqual(['x', 'y', 'z']);
+  });
 });

@@ -34,21 +34,18 @@ export function eventSiteKm(columns: readonly LadderColumnLike[]): Map<string, n
   return positions;
 }
 
-/** Ids of every tie named in an order conflict. */
-export function conflictingTieIds(conflicts: readonly { tieA: { id: string }; tieB: { id: string } }[]): Set<string> {
+/** Ids of every tie on an order loop (a loop's ties when sent, else its two named ties). */
+export function conflictingTieIds(
+  conflicts: readonly { tieA: { id: string }; tieB: { id: string }; ties?: readonly { id: string }[] }[],
+): Set<string> {
   const ids = new Set<string>();
   for (const conflict of conflicts) {
     ids.add(conflict.tieA.id);
     ids.add(conflict.tieB.id);
+    for (const tie of conflict.ties ?? []) ids.add(tie.id);
   }
   return ids;
 }
-
-/**
- * Concordance below this is shown as a warning.
- * [common practice]: members whose densities share less than half their mass are a weak match.
- */
-export const LOW_CONCORDANCE = 0.5;
 
 /** A thinned posterior as the API's DensityGrid sends it (values are mean probability per year). */
 export type DensityGridLike = { startCalBp: number; stepYears: number; values: readonly number[] };

@@ -2,7 +2,7 @@ import { line, scaleLinear } from 'd3';
 import { useMemo, type RefObject } from 'react';
 import type { RenewalModel } from '@/gql/graphql';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
-import { RENEWAL_MODEL_SHORT_NAMES, valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/modules/recurrence/utils/recurrenceCharts';
+import { MODEL_LABELS, valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/modules/recurrence/utils/recurrenceCharts';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 260;
@@ -112,7 +112,7 @@ export function RecurrenceCurveChart({ curves, bars = [], marker, xLabel, yLabel
             <g key={curve.model} transform={`translate(${MARGIN.left + index * 92},12)`}>
               <line x2={16} stroke={modelColour(curve.model)} strokeWidth={2} />
               <text x={20} dy="0.32em" fontSize={10} fill={CHART_COLOURS.text}>
-                {RENEWAL_MODEL_SHORT_NAMES[curve.model]}
+                {MODEL_LABELS[curve.model]}
               </text>
             </g>
           ))}

@@ -13,8 +13,8 @@ import {
   formatProbability,
   histogramAsDensity,
   isJobActive,
+  modelLabel,
   recurrenceExportUrl,
-  RENEWAL_MODEL_NAMES,
   type SharedRecurrenceAxes,
 } from '@/modules/recurrence/utils/recurrenceCharts';
 
@@ -36,6 +36,44 @@ function RangeCell({ range, digits = 0 }: { range: Range; digits?: number }) {
   return (
     <td className="num">
       {range.median.toFixed(digits)} <span className="sc-chart-legend">({range.low95.toFixed(digits)}–{range.high95.toFixed(digits)})</span>
+    </td>
+  );
+}
+
+type WindowRange = { median: number; low95: number; high95: number; datingOnlyLow95?: number | null; datingOnlyHigh95?: number | null };
+
+/** A probability: median and headline range (dating and parameters), the dating-only range beneath. */
+function ProbabilityCell({ probability }: { probability: WindowRange | undefined }) {
+  if (!probability) return <td className="num">–</td>;
+  return (
+    <td className="num">
+      {formatProbability(probability.median)}{' '}
+      <span className="sc-chart-legend">
+        ({formatProbability(probability.low95)}–{formatProbability(probability.high95)})
+      </span>
+      {probability.datingOnlyLow95 != null && probability.datingOnlyHigh95 != null && (
+        <div className="sc-chart-legend">
+          dating only {formatProbability(probability.datingOnlyLow95)}–{formatProbability(probability.datingOnlyHigh95)}
+        </div>
+      )}
+    </td>
+  );
+}
+
+/** A parameter's range with parameter uncertainty, the dating-only range beneath. */
+function ParameterCell({ range, digits }: { range: WindowRange | null | undefined; digits: number }) {
+  if (!range) return <td className="num">–</td>;
+  return (
+    <td className="num">
+      {range.median.toFixed(digits)}{' '}
+      <span className="sc-chart-legend">
+        ({range.low95.toFixed(digits)}–{range.high95.toFixed(digits)})
+      </span>
+      {range.datingOnlyLow95 != null && range.datingOnlyHigh95 != null && (
+        <div className="sc-chart-legend">
+          dating only {range.datingOnlyLow95.toFixed(digits)}–{range.datingOnlyHigh95.toFixed(digits)}
+        </div>
+      )}
     </td>
   );
 }
@@ -166,7 +204,9 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
 
           <h3>Conditional probability of the next event</h3>
           <p className="sc-chart-legend">
-            In a window starting {analysis.forecastStartYear} CE, given no event since the last one; median with its 95 % Monte Carlo range.
+            In a window starting {analysis.forecastStartYear} CE, given no event since the last one: median with its 95 % range over draws of the
+            event ages and of each model&apos;s parameters; beneath it, the narrower range from dating alone (each draw&apos;s best fit plugged in), which
+            understates the uncertainty.
           </p>
           <HTMLTable compact striped className="sc-table">
             <thead>
@@ -182,31 +222,22 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
             <tbody>
               {models.map((model) => (
                 <tr key={model.model}>
-                  <td>{RENEWAL_MODEL_NAMES[model.model]}</td>
-                  {windows.map((window) => {
-                    const probability = model.probabilities.find((entry) => entry.windowYears === window);
-                    const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
-                    return (
-                      <td key={window} className="num">
-                        {probability ? formatProbability(probability.median) : '–'}{' '}
-                        {probability && (
-                          <span className="sc-chart-legend">
-                            ({formatProbability(probability.low95)}–{formatProbability(probability.high95)})
-                          </span>
-                        )}
-                        {poisson && model.model !== 'POISSON' && (
-                          <div className="sc-chart-legend">Poisson {formatProbability(poisson.median)}</div>
-                        )}
-                      </td>
-                    );
-                  })}
+                  <td>{modelLabel(model.model)}</td>
+                  {windows.map((window) => (
+                    <ProbabilityCell key={window} probability={model.probabilities.find((entry) => entry.windowYears === window)} />
+                  ))}
                 </tr>
               ))}
+              {analysis.modelAveraged.length > 0 && (
+                <tr>
+                  <td>Model-averaged (AICc weights)</td>
+                  {windows.map((window) => (
+                    <ProbabilityCell key={window} probability={analysis.modelAveraged.find((entry) => entry.windowYears === window)} />
+                  ))}
+                </tr>
+              )}
               <tr>
-                <td>
-                  Poisson from each draw's mean recurrence,
-                  <br />1 − exp(−ΔT/μ)
-                </td>
+                <td>Poisson, 1 − exp(−ΔT/μ), dating only</td>
                 {windows.map((window) => {
                   const poisson = analysis.poisson.find((entry) => entry.windowYears === window);
                   return (
@@ -227,6 +258,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
               </tr>
             </tbody>
           </HTMLTable>
+          {analysis.parameterNote && <p className="sc-chart-legend">{analysis.parameterNote}</p>}
 
           <h3>Model comparison</h3>
           <HTMLTable compact striped className="sc-table">
@@ -237,29 +269,42 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
                 <th className="num">Aperiodicity</th>
                 <th className="num">log L</th>
                 <th className="num">AIC</th>
-                <th className="num">ΔAIC</th>
-                <th className="num">Akaike weight</th>
+                <th className="num">AICc</th>
+                <th className="num">ΔAICc</th>
+                <th className="num">Akaike weight (AICc)</th>
               </tr>
             </thead>
             <tbody>
               {[...models]
-                .sort((a, b) => a.deltaAic - b.deltaAic)
+                .sort((a, b) => (a.deltaAicc ?? Infinity) - (b.deltaAicc ?? Infinity) || a.deltaAic - b.deltaAic)
                 .map((model) => (
                   <tr key={model.model}>
-                    <td>{RENEWAL_MODEL_NAMES[model.model]}</td>
-                    <td className="num">{model.meanRecurrenceYears.toFixed(0)}</td>
-                    <td className="num">{model.model === 'POISSON' ? '–' : model.aperiodicity.toFixed(2)}</td>
+                    <td>{modelLabel(model.model)}</td>
+                    {model.meanRecurrenceRange ? (
+                      <ParameterCell range={model.meanRecurrenceRange} digits={0} />
+                    ) : (
+                      <td className="num">{model.meanRecurrenceYears.toFixed(0)}</td>
+                    )}
+                    {model.model === 'POISSON' ? (
+                      <td className="num">1</td>
+                    ) : model.aperiodicityRange ? (
+                      <ParameterCell range={model.aperiodicityRange} digits={2} />
+                    ) : (
+                      <td className="num">{model.aperiodicity.toFixed(2)}</td>
+                    )}
                     <td className="num">{model.logLikelihood.toFixed(2)}</td>
                     <td className="num">{model.aic.toFixed(2)}</td>
-                    <td className="num">{model.deltaAic.toFixed(2)}</td>
+                    <td className="num">{model.aicc == null ? 'too few intervals' : model.aicc.toFixed(2)}</td>
+                    <td className="num">{model.deltaAicc == null ? '–' : model.deltaAicc.toFixed(2)}</td>
                     <td className="num">{model.akaikeWeight.toFixed(3)}</td>
                   </tr>
                 ))}
             </tbody>
           </HTMLTable>
           <p className="sc-chart-legend">
-            Mean recurrence here is each model's fitted mean μ: the maximum-likelihood fit to the median event ages, with the time
-            since the last event as an interval still open. It is one number per model, not a range.
+            Mean recurrence here is each model's fitted mean μ: its maximum-likelihood fit, with the time since the last event as
+            an interval still open, refitted in every draw (median and 95 % range; "dating only" holds the parameters fixed). It
+            differs from the interval statistics below, which average the closed intervals of each draw without any model.
           </p>
           {analysis.modelComparisonNote && <p className="sc-chart-legend">{analysis.modelComparisonNote}</p>}
 

@@ -117,17 +117,44 @@ export const RecurrenceAnalysisDocument = graphql(`
         model
         aic
         deltaAic
+        aicc
+        deltaAicc
         akaikeWeight
         meanRecurrenceYears
         aperiodicity
         logLikelihood
+        meanRecurrenceRange {
+          median
+          low95
+          high95
+          datingOnlyLow95
+          datingOnlyHigh95
+        }
+        aperiodicityRange {
+          median
+          low95
+          high95
+          datingOnlyLow95
+          datingOnlyHigh95
+        }
         probabilities {
           windowYears
           median
           low95
           high95
+          datingOnlyLow95
+          datingOnlyHigh95
         }
       }
+      modelAveraged {
+        windowYears
+        median
+        low95
+        high95
+        datingOnlyLow95
+        datingOnlyHigh95
+      }
+      parameterNote
       modelComparisonNote
       curves {
         model

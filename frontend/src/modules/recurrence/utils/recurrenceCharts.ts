@@ -90,13 +90,18 @@ export const RENEWAL_MODEL_NAMES: Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIB
   WEIBULL: 'Weibull',
 };
 
-/** The same, short, for chart legends. */
-export const RENEWAL_MODEL_SHORT_NAMES: Record<keyof typeof RENEWAL_MODEL_NAMES, string> = {
+/** Renewal model names as the trade writes them (the API's enum is upper-case). */
+export const MODEL_LABELS: Readonly<Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIBULL', string>> = {
   POISSON: 'Poisson',
   BPT: 'BPT',
   LOGNORMAL: 'Lognormal',
   WEIBULL: 'Weibull',
 };
+
+/** A model's screen name; unknown values pass through. */
+export function modelLabel(model: string): string {
+  return (MODEL_LABELS as Record<string, string>)[model] ?? model;
+}
 
 /** What a side-by-side comparison needs of each analysis to put both on the same axes. */
 export type ComparableAnalysis = {

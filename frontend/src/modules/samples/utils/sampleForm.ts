@@ -1,6 +1,7 @@
 import type { AgeRelation, CreateSampleInput, CurveCode, DatingMethod, SampleMaterial, UpdateSampleInput } from '@/gql/graphql';
 import { FieldReader, numberText, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
 import { isMarineCurve, isMarineMaterial } from './sampleVocabulary';
+import { MAX_AGE_ERROR_YEARS } from '@/modules/ages/utils/ageBounds';
 
 /** A sample form as typed: numbers stay text until the form is checked. */
 export type SampleFormValues = {
@@ -156,17 +157,17 @@ export function readSampleForm(
   const radiocarbon = values.method === 'RADIOCARBON';
   const luminescence = values.method === 'LUMINESCENCE';
   const c14Age = shown.has('c14Age') ? reader.number('c14Age', values.c14Age, { required: true, min: 0 }) : null;
-  const c14Error = shown.has('c14Error') ? reader.number('c14Error', values.c14Error, { required: true, above: 0 }) : null;
+  const c14Error = shown.has('c14Error') ? reader.number('c14Error', values.c14Error, { required: true, above: 0, max: MAX_AGE_ERROR_YEARS }) : null;
   const delta13C = shown.has('delta13C') ? reader.number('delta13C', values.delta13C, { min: -60, max: 20 }) : null;
   if (radiocarbon && values.curve === '') reader.fail('curve', 'choose a calibration curve');
   const deltaR = shown.has('deltaR') ? reader.number('deltaR', values.deltaR, { min: -2000, max: 5000 }) : null;
-  const deltaRError = shown.has('deltaRError') ? reader.number('deltaRError', values.deltaRError, { min: 0 }) : null;
+  const deltaRError = shown.has('deltaRError') ? reader.number('deltaRError', values.deltaRError, { min: 0, max: MAX_AGE_ERROR_YEARS }) : null;
   if (deltaRError !== null && deltaR === null && !reader.errors.deltaR) reader.fail('deltaR', 'give Delta-R with its error');
   const calendarAgeBp = shown.has('calendarAgeBp')
     ? reader.number('calendarAgeBp', values.calendarAgeBp, luminescence ? { required: true, above: 0 } : { required: true })
     : null;
   const calendarErrorYears = shown.has('calendarErrorYears')
-    ? reader.number('calendarErrorYears', values.calendarErrorYears, { required: true, above: 0 })
+    ? reader.number('calendarErrorYears', values.calendarErrorYears, { required: true, above: 0, max: MAX_AGE_ERROR_YEARS })
     : null;
   const measurementYear = shown.has('measurementYear')
     ? reader.number('measurementYear', values.measurementYear, { required: true, integer: true, min: 1950, max: 2100 })

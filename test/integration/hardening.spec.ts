@@ -1,0 +1,204 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startTestServer, TestServer } from '../support/app';
+import { createProjectFixture, PASSWORD, ProjectFixture } from '../support/fixtures';
+import { GraphqlClient } from '../support/graphql';
+
+let server: TestServer;
+let fixture: ProjectFixture;
+let viewer: GraphqlClient;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  fixture = await createProjectFixture('Hardening');
+  viewer = await new GraphqlClient(server.url).signIn(fixture.emails.VIEWER, PASSWORD);
+});
+
+afterAll(async () => {
+  await server?.close();
+});
+
+async function post(body: unknown, token?: string): Promise<{ status: number; text: string }> {
+  const response = await fetch(`${server.url}/graphql`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: typeof body === 'string' ? body : JSON.stringify(body),
+  });
+  return { status: response.status, text: await response.text() };
+}
+
+/** No answer may carry a statement or its parameters. */
+function expectNoSql(text: string): void {
+  expect(text).not.toMatch(/\bselect\b|\binsert\b|\bupdate\b.*\bset\b|\bfrom "|params:|Failed query/i);
+}
+
+function firstError(text: string): { message: string; extensions: { code?: string; field?: string } } {
+  return (JSON.parse(text) as { errors: { message: string; extensions: { code?: string; field?: string } }[] }).errors[0];
+}
+
+const NO_SUCH_SITE = '00000000-0000-4000-8000-000000000000';
+
+describe('ids, NUL bytes and coercion (issue 17, item 4)', () => {
+  it('refuses a malformed id with 400 BAD_USER_INPUT, literal or variable, and never shows SQL', async () => {
+    for (const body of [
+      { query: '{ site(id: "42") { id } }' },
+      { query: '{ site(id: 42) { id } }' },
+      { query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: '42' } },
+      { query: 'mutation($i: CreateUnitInput!) { u: createUnit(input: $i) { id } }', variables: { i: { siteId: 'does-not-exist', name: 'U', position: 1, facies: 'PEAT' } } },
+    ]) {
+      const { status, text } = await post(body, viewer.token);
+      expect(status, text).toBe(400);
+      expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+      expect(firstError(text).message).toMatch(/not a valid id/);
+      expectNoSql(text);
+    }
+  });
+
+  it('names the variable path at fault', async () => {
+    const { text } = await post({ query: 'mutation($i: CreateUnitInput!) { u: createUnit(input: $i) { id } }', variables: { i: { siteId: '42' } } }, viewer.token);
+    expect(firstError(text).extensions.field).toBe('i.siteId');
+  });
+
+  it('answers a well-formed unknown id NOT_FOUND (control for the refusals above)', async () => {
+    const { status, text } = await post({ query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: NO_SUCH_SITE } }, viewer.token);
+    expect(status).toBe(200);
+    expect(firstError(text)).toMatchObject({ message: 'site not found', extensions: { code: 'NOT_FOUND' } });
+  });
+
+  it('refuses a NUL byte in any string, in variables, literals and JSON values', async () => {
+    for (const body of [
+      { query: 'mutation($i: CreateProjectInput!) { createProject(input: $i) { id } }', variables: { i: { name: 'a\u0000b' } } },
+      { query: 'mutation { createProject(input: { name: "a\\u0000b" }) { id } }' },
+      { query: 'query($id: ID!) { site(id: $id) { id } }', variables: { id: `${NO_SUCH_SITE}\u0000` } },
+    ]) {
+      const { status, text } = await post(body, viewer.token);
+      expect(status, text).toBe(400);
+      expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+      expectNoSql(text);
+    }
+  });
+
+  it('answers an unknown enum value in variables 400 BAD_USER_INPUT', async () => {
+    const { status, text } = await post(
+      { query: 'mutation($i: CreateProjectInput!) { createProject(input: $i) { id } }', variables: { i: { name: 'x', tectonicSetting: 'NOPE' } } },
+      viewer.token,
+    );
+    expect(status).toBe(400);
+    expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+    expect(firstError(text).message).toMatch(/NOPE/);
+  });
+
+  it('answers a JSON number beyond double range (1e309) 400 BAD_USER_INPUT', async () => {
+    const body = '{"query":"query($i: CalibrateInput!) { calibrate(input: $i) { medianCalBp } }","variables":{"i":{"c14Age":1e309,"c14Error":30,"curve":"INTCAL20"}}}';
+    const { status, text } = await post(body, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text).extensions.code).toBe('BAD_USER_INPUT');
+  });
+});
+
+describe('the cost model (issue 17, item 1)', () => {
+  const calibrations = (n: number, error: number) =>
+    `{ ${Array.from({ length: n }, (_, i) => `c${i}: calibrate(input: { c14Age: 3000, c14Error: ${error}, curve: INTCAL20 }) { medianCalBp density { calBp probability } }`).join(' ')} }`;
+
+  it('refuses twenty aliased calibrations with a huge error before computing any (probe: 59 MB in 3.7 s before)', async () => {
+    const { status, text } = await post({ query: calibrations(20, 1_000_000) }, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text)).toMatchObject({ extensions: { code: 'BAD_USER_INPUT', field: 'query' } });
+    expect(firstError(text).message).toMatch(/calibrate 20 times/);
+    expect(text.length).toBeLessThan(1000);
+  });
+
+  it('still answers a few calibrations in one request (control)', async () => {
+    const { status, text } = await post({ query: calibrations(2, 30) }, viewer.token);
+    expect(status, text).toBe(200);
+    expect(JSON.parse(text).data.c1.medianCalBp).toBeGreaterThan(3000);
+  });
+
+  it('refuses a hundred aliased regional-event checks (probe: 2.3 s before)', async () => {
+    const query = `{ ${Array.from({ length: 100 }, (_, i) => `h${i}: hypothesis(id: "${NO_SUCH_SITE}") { regionalEvents { id } }`).join(' ')} }`;
+    const { status, text } = await post({ query }, viewer.token);
+    expect(status).toBe(400);
+    expect(firstError(text).message).toMatch(/would cost \d+ units/);
+  });
+
+  it('allows one signIn per request (probe: twenty aliased took 1.4 s of hashing)', async () => {
+    const query = `mutation { ${Array.from({ length: 20 }, (_, i) => `s${i}: signIn(email: "${fixture.emails.VIEWER}", password: "${PASSWORD}") { token }`).join(' ')} }`;
+    const { status, text } = await post({ query });
+    expect(status).toBe(400);
+    expect(firstError(text).message).toMatch(/signIn 20 times; one request may ask for it at most 1 time/);
+  });
+});
+
+describe('bounds on uncertainties, sheets and bundles (issue 17, item 2)', () => {
+  let researcher: GraphqlClient;
+  let siteId: string;
+
+  beforeAll(async () => {
+    researcher = await new GraphqlClient(server.url).signIn(fixture.emails.RESEARCHER, PASSWORD);
+    const { createSite } = await researcher.ok('mutation($i: CreateSiteInput!) { createSite(input: $i) { id } }', {
+      i: { projectId: fixture.projectId, name: 'Bounds trench', kind: 'TRENCH', latitude: -41.2, longitude: 172.5, alongStrikeKm: 40 },
+    });
+    siteId = createSite.id;
+    await researcher.ok('mutation($i: CreateUnitInput!) { createUnit(input: $i) { id } }', {
+      i: { siteId, position: 1, name: 'U1', topDepthM: 0, baseDepthM: 3, facies: 'PEAT' },
+    });
+  });
+
+  it('answers calibrateLuminescence with a 1,000,000-year error BAD_USER_INPUT naming errorYears (probe: memory grew, then INTERNAL_SERVER_ERROR)', async () => {
+    const error = await viewer.errorOf('query($i: CalibrateLuminescenceInput!) { calibrateLuminescence(input: $i) { medianCalBp } }', {
+      i: { ageYears: 5000, errorYears: 1_000_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'errorYears' });
+  });
+
+  it('refuses a luminescence error whose grid would be wider than IntCal20 (below the 20,000-year cap)', async () => {
+    const error = await viewer.errorOf('query($i: CalibrateLuminescenceInput!) { calibrateLuminescence(input: $i) { medianCalBp } }', {
+      i: { ageYears: 50_000, errorYears: 10_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'errorYears' });
+    expect(error.message).toMatch(/span of IntCal20/);
+  });
+
+  it('refuses storing a sample with a 100,000-year calendar error (probe: 11 MB and 0.8 s on every read)', async () => {
+    const unitId = (await researcher.ok<{ site: { units: { id: string }[] } }>('query($id: ID!) { site(id: $id) { units { id } } }', { id: siteId })).site.units[0].id;
+    const error = await researcher.errorOf('mutation($i: CreateSampleInput!) { createSample(input: $i) { id } }', {
+      i: { siteId, unitId, labCode: 'BIG-1', method: 'LUMINESCENCE', material: 'OTHER', ageRelation: 'DATES_DEPOSIT', calendarAgeBp: 5000, calendarErrorYears: 100_000, measurementYear: 2020 },
+    });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'calendarErrorYears' });
+  });
+
+  it('answers a 2,000-row lab sheet of one duplicated lab code in under 1 MB (probe: 22 MB)', async () => {
+    const rows = Array.from({ length: 2000 }, () => 'DUP-1,U1,1,RADIOCARBON,DETRITAL_CHARCOAL,2450,30,INTCAL20');
+    const csv = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve', ...rows].join('\n');
+    const { status, text } = await post(
+      { query: 'mutation($i: ImportSamplesInput!) { importSamples(input: $i) { rowCount committed errors { row field message } } }', variables: { i: { siteId, csv, commit: false } } },
+      researcher.token,
+    );
+    expect(status).toBe(200);
+    expect(text.length).toBeLessThan(1_000_000);
+    const result = JSON.parse(text).data.importSamples;
+    expect(result.rowCount).toBe(2000);
+    expect(result.errors.at(-1)).toMatchObject({ row: 0, field: 'csv', message: expect.stringMatching(/^and 1,800 more problems not listed/) });
+    process.stderr.write(`[probe] 2,000 duplicate lab codes: ${text.length} bytes\n`);
+  });
+
+  it('refuses a bundle with __proto__ or constructor keys and one with an age error above 20,000 years', async () => {
+    const exported = await fetch(`${server.url}/api/projects/${fixture.projectId}/bundle.json`, { headers: { authorization: `Bearer ${researcher.token}` } });
+    expect(exported.status).toBe(200);
+    const text = await exported.text();
+    const send = (body: string) =>
+      fetch(`${server.url}/api/projects/import`, { method: 'POST', headers: { 'content-type': 'application/json', authorization: `Bearer ${researcher.token}` }, body });
+    const withProto = text.replace('"project":{', '"project":{"__proto__":{"polluted":true},');
+    const refused = await send(withProto);
+    expect(refused.status).toBe(400);
+    expect(await refused.text()).toMatch(/__proto__ is not a field/);
+    const bundle = JSON.parse(text);
+    bundle.samples.push({
+      ref: 'x-1', siteRef: bundle.sites[0].ref, unitRef: bundle.units[0].ref, labCode: 'X-1', method: 'LUMINESCENCE', material: 'OTHER', depthM: null,
+      ageRelation: 'DATES_DEPOSIT', c14Age: null, c14Error: null, delta13C: null, curve: null, deltaR: null, deltaRError: null,
+      calendarAgeBp: 5000, calendarErrorYears: 100_000, measurementYear: 2020, excluded: false, exclusionReason: null, notes: null,
+    });
+    const wide = await send(JSON.stringify(bundle));
+    expect(wide.status).toBe(400);
+    expect(await wide.text()).toMatch(/calendarErrorYears must be at most 20000/);
+  });
+});
