@@ -315,8 +315,10 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
   await page.getByRole('tab', { name: /Samples/ }).click();
   await page.getByRole('button', { name: 'Import CSV' }).click();
   const importDialog = page.getByRole('dialog');
+  // Lab codes are unique in a project: each width's round imports its own.
+  const [firstCode, secondCode] = [`E2E-${width}-101`, `E2E-${width}-102`];
   const sheet = (secondError) =>
-    [LAB_SHEET_HEADER, 'E2E-101,tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20', `E2E-102,peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
+    [LAB_SHEET_HEADER, `${firstCode},tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20`, `${secondCode},peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
   await importDialog.locator('#import-csv').fill(sheet(0));
   await importDialog.getByRole('button', { name: 'Check sheet' }).click();
   const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
@@ -334,7 +336,7 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
   await importDialog.waitFor({ state: 'detached' });
 
   // The calibrated 95.4 % ranges sit in the samples grid beside each lab code.
-  for (const labCode of ['E2E-101', 'E2E-102']) {
+  for (const labCode of [firstCode, secondCode]) {
     await page.getByText(labCode, { exact: true }).first().waitFor();
   }
   const rangeCells = page.locator('.bp6-table-cell, .bp5-table-cell').filter({ hasText: /\d+\s*[–-]\s*\d+/ });
