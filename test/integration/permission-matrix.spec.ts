@@ -308,6 +308,8 @@ const CASES: Record<string, MatrixCase> = {
   setMemberRole: { access: members, variables: async () => ({ input: { projectId: fixture.projectId, userId: await throwawayMember(), role: 'ANALYST' } }) },
   removeMember: { access: members, variables: async () => ({ projectId: fixture.projectId, userId: await throwawayMember() }) },
 
+  refreshStaleResults: { access: { project: Permission.ResultsRefresh }, variables: async () => ({ projectId: fixture.projectId }) },
+  setRefreshSettings: { access: { project: Permission.ProjectSettings }, variables: async () => ({ input: { projectId: fixture.projectId, automatic: false } }) },
   createRelease: { access: { project: Permission.ReleaseCreate }, variables: async () => ({ input: { projectId: fixture.projectId, note: unique('Matrix release') } }) },
   deleteAttachment: { access: stratigraphy, variables: async () => ({ id: await uploadAttachment() }) },
 };

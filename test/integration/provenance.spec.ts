@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseRangesCalBp } from '../../backend/src/provenance/result-tables';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { RunExecutor } from '../../backend/src/jobs/run-executor';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture } from '../support/fixtures';
@@ -22,6 +23,11 @@ const START_ANALYSIS = `mutation($i: StartRecurrenceAnalysisInput!) { startRecur
 const RUN = `query($id: ID!) { ageModelRun(id: $id) { id status stale staleReasons { message inputKind inputId inputName via } } }`;
 const RUN_EVENTS = `query($id: ID!) { ageModelRun(id: $id) { seed events { eventHorizon { id name } medianCalBp hpd68 { olderCalBp youngerCalBp } hpd95 { olderCalBp youngerCalBp } } } }`;
 const REGIONAL = `query($id: ID!) { hypothesis(id: $id) { version regionalEvents { members { id } combinedMedianCalBp combinedHpd95 { olderCalBp youngerCalBp } concordance } } }`;
+const REFRESH = `mutation($p: ID!) { refreshStaleResults(projectId: $p) { id status ageModelRuns { id } jointRuns { id } recurrenceAnalyses { id }
+  steps { id stage kind staleId label status freshId message dependsOn } skipped { kind id label reason } } }`;
+const PLAN = `query($id: ID!) { refreshPlan(id: $id) { id status ageModelRuns { id } recurrenceAnalyses { id seed stale inputs { ageModelRuns { id } hypothesisVersion } }
+  steps { id stage kind staleId label status freshId message dependsOn } } }`;
+const CANCEL_RUN = `mutation($id: ID!) { cancelAgeModelRun(id: $id) { id status } }`;
 const ANALYSIS = `query($id: ID!) { recurrenceAnalysis(id: $id) { id status stale
   staleReasons { message inputKind inputId inputName via }
   inputs { ageModelRuns { id } jointRun { id } hypothesis { id } hypothesisVersion recorded { kind id name revision } } } }`;
@@ -45,15 +51,20 @@ let hypothesisId: string;
 let firstTieId: string;
 const analyses = { segment: '', siteC: '' };
 
+/** Run a queued job in the test process, as a worker would. */
+async function executeRun(kind: typeof AgeModelJob | typeof RecurrenceJob, id: string): Promise<void> {
+  await server.app.get(RunExecutor).execute(server.app.get(kind), id);
+}
+
 async function runAgeModel(siteId: string): Promise<string> {
   const { startAgeModelRun } = await clients.RESEARCHER.ok(START_RUN, { i: { siteId, iterations: 1500, seed: 11 } });
-  await server.app.get(AgeModelJob).execute(startAgeModelRun.id);
+  await executeRun(AgeModelJob, startAgeModelRun.id);
   return startAgeModelRun.id;
 }
 
 async function runAnalysis(input: Record<string, unknown>): Promise<string> {
   const { startRecurrenceAnalysis } = await clients.ANALYST.ok(START_ANALYSIS, { i: { draws: 200, seed: 5, forecastStartYear: 2030, ...input } });
-  await server.app.get(RecurrenceJob).execute(startRecurrenceAnalysis.id);
+  await executeRun(RecurrenceJob, startRecurrenceAnalysis.id);
   return startRecurrenceAnalysis.id;
 }
 
@@ -265,5 +276,76 @@ describe('exports', () => {
     expect(bundle.recurrenceAnalyses[0].events.inputs).toContainEqual({ field: 'seed', value: 5 });
     expect(bundle.ageModelRuns.map((t: { inputs: { field: string; value: unknown }[] }) => t.inputs.find((i) => i.field === 'age model run id')?.value)).toEqual([site.C.run]);
     expect((await download(clients.OUTSIDER, `/api/releases/${createRelease.id}/bundle.json`)).status).toBe(404);
+  });
+});
+
+describe('refreshStaleResults', () => {
+  type Step = { id: string; stage: number; kind: string; staleId: string; label: string; status: string; freshId: string | null; message: string | null; dependsOn: string[] };
+  const planOf = async (id: string) => (await clients.VIEWER.ok(PLAN, { id })).refreshPlan;
+
+  it('is refused to viewers and hidden from outsiders', async () => {
+    expect((await clients.VIEWER.errorOf(REFRESH, { p: fixture.projectId })).code).toBe('FORBIDDEN');
+    expect((await clients.OUTSIDER.errorOf(REFRESH, { p: fixture.projectId })).code).toBe('NOT_FOUND');
+  });
+
+  it('queues nothing an analyst or correlator may not start, and says what it skipped and why', async () => {
+    const { refreshStaleResults: analyst } = await clients.ANALYST.ok(REFRESH, { p: fixture.projectId });
+    expect(analyst).toMatchObject({ status: 'FINISHED', steps: [], ageModelRuns: [], recurrenceAnalyses: [] });
+    expect(analyst.skipped).toEqual(expect.arrayContaining([
+      expect.objectContaining({ kind: 'ageModelRun', id: site.A.run, label: 'age model of Tarn Flat', reason: expect.stringContaining('cannot run age models') }),
+      expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.segment, reason: expect.stringContaining('not refreshed by you') }),
+    ]));
+    const { refreshStaleResults: correlator } = await clients.CORRELATOR.ok(REFRESH, { p: fixture.projectId });
+    expect(correlator.steps).toEqual([]);
+    expect(correlator.skipped.map((s: { id: string }) => s.id).sort()).toEqual([site.A.run, analyses.segment].sort());
+  });
+
+  it('re-runs exactly the stale results in dependency order, with their seeds; a failure stops only what depends on it', async () => {
+    // Site C changes too: now runs A and C, the segment analysis (A, B) and the site analysis of C are stale; B and its run are not.
+    const unitC = site.C.units[0];
+    await clients.RESEARCHER.ok(UPDATE_UNIT, { id: unitC.id, v: unitC.version, i: { notes: 'base re-measured' } });
+    unitC.version += 1;
+    const { refreshStaleResults: plan } = await clients.ADMIN.ok(REFRESH, { p: fixture.projectId });
+    const steps = plan.steps as Step[];
+    expect(steps.map((s) => `${s.kind}:${s.staleId}`).sort()).toEqual(
+      [`ageModelRun:${site.A.run}`, `ageModelRun:${site.C.run}`, `recurrenceAnalysis:${analyses.segment}`, `recurrenceAnalysis:${analyses.siteC}`].sort(),
+    );
+    const step = (staleId: string) => steps.find((s) => s.staleId === staleId)!;
+    expect(step(site.A.run)).toMatchObject({ stage: 1, status: 'QUEUED' });
+    expect(step(site.C.run)).toMatchObject({ stage: 1, status: 'QUEUED' });
+    expect(step(analyses.segment)).toMatchObject({ stage: 3, status: 'WAITING', freshId: null, dependsOn: [step(site.A.run).id] });
+    expect(step(analyses.siteC)).toMatchObject({ stage: 3, status: 'WAITING', dependsOn: [step(site.C.run).id] });
+    expect(plan.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([step(site.A.run).freshId, step(site.C.run).freshId].sort());
+    expect(plan.recurrenceAnalyses).toEqual([]);
+    expect(plan.skipped).toEqual([]);
+
+    // The fresh run of C is cancelled (a failure); the fresh run of A succeeds.
+    await clients.RESEARCHER.ok(CANCEL_RUN, { id: step(site.C.run).freshId });
+    await executeRun(AgeModelJob, step(site.A.run).freshId!);
+    let now = await planOf(plan.id);
+    const nowStep = (staleId: string) => (now.steps as Step[]).find((s) => s.staleId === staleId)!;
+    expect(nowStep(site.A.run).status).toBe('SUCCEEDED');
+    expect(nowStep(site.C.run).status).toBe('FAILED');
+    expect(nowStep(analyses.siteC)).toMatchObject({ status: 'BLOCKED', message: 'not started: age model of Sedge Bank failed' });
+    expect(nowStep(analyses.segment).status).toBe('QUEUED');
+    expect(now.status).toBe('ACTIVE');
+
+    await executeRun(RecurrenceJob, nowStep(analyses.segment).freshId!);
+    now = await planOf(plan.id);
+    expect(nowStep(analyses.segment).status).toBe('SUCCEEDED');
+    expect(now.status).toBe('FINISHED');
+    const [fresh] = now.recurrenceAnalyses;
+    expect(fresh.id).toBe(nowStep(analyses.segment).freshId);
+    expect(fresh).toMatchObject({ seed: 5, stale: false, inputs: { hypothesisVersion: 5 } });
+    expect(fresh.inputs.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([nowStep(site.A.run).freshId, site.B.run].sort());
+    // The fresh run kept the stale run's seed and settings.
+    const { ageModelRun } = await clients.VIEWER.ok(`query($id: ID!) { ageModelRun(id: $id) { seed settings stale } }`, { id: nowStep(site.A.run).freshId });
+    expect(ageModelRun).toMatchObject({ seed: 11, stale: false, settings: expect.objectContaining({ iterations: 1500 }) });
+  });
+
+  it('lets a researcher refresh the site run that is still stale, skipping the analysis it may not start', async () => {
+    const { refreshStaleResults: plan } = await clients.RESEARCHER.ok(REFRESH, { p: fixture.projectId });
+    expect((plan.steps as Step[]).map((s) => s.staleId)).toEqual([site.C.run]);
+    expect(plan.skipped).toEqual([expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.siteC, reason: expect.stringContaining('cannot run recurrence analyses') })]);
   });
 });

@@ -53,5 +53,9 @@ function describe(permission: Permission): string {
       return 'create releases';
     case Permission.AuditRead:
       return 'read the audit trail';
+    case Permission.ProjectSettings:
+      return 'change project settings';
+    case Permission.ResultsRefresh:
+      return 'refresh stale results';
   }
 }

@@ -22,15 +22,19 @@ export enum Permission {
   ReleaseCreate = 'release.create',
   /** Read the audit trail. */
   AuditRead = 'audit.read',
+  /** Project-wide settings, such as refreshing stale results automatically. */
+  ProjectSettings = 'project.settings',
+  /** Ask for stale results to be re-run (each kind still needs its own run permission). */
+  ResultsRefresh = 'results.refresh',
 }
 
 const READ = [Permission.ProjectRead, Permission.AuditRead];
 
 export const ROLE_PERMISSIONS: Record<Role, ReadonlySet<Permission>> = {
   ADMIN: new Set(Object.values(Permission)),
-  RESEARCHER: new Set([...READ, Permission.StratigraphyWrite, Permission.AgeModelRun]),
-  CORRELATOR: new Set([...READ, Permission.CorrelationWrite]),
-  ANALYST: new Set([...READ, Permission.RecurrenceRun]),
+  RESEARCHER: new Set([...READ, Permission.StratigraphyWrite, Permission.AgeModelRun, Permission.ResultsRefresh]),
+  CORRELATOR: new Set([...READ, Permission.CorrelationWrite, Permission.ResultsRefresh]),
+  ANALYST: new Set([...READ, Permission.RecurrenceRun, Permission.ResultsRefresh]),
   VIEWER: new Set(READ),
 };
 

@@ -6,13 +6,18 @@ import { ReleasesModule } from '../releases/releases.module';
 import { SitesModule } from '../sites/sites.module';
 import { ProvenanceModule } from './provenance.module';
 import { AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver } from './provenance.resolver';
+import { RefreshRepository } from './refresh.repository';
+import { ProjectRefreshResolver, RefreshResolver } from './refresh.resolver';
+import { RefreshService } from './refresh.service';
+import { RefreshTicker } from './refresh.ticker';
 import { ResultTablesController } from './result-tables.controller';
 import { ResultTablesService } from './result-tables.service';
 
-/** Stale flags and inputs on the API, and the downloadable result tables. */
+/** Stale flags and inputs on the API, the downloadable result tables, and the refresh of stale results. */
 @Module({
   imports: [ProvenanceModule, AgeModelsModule, SitesModule, CorrelationModule, RecurrenceModule, ReleasesModule],
   controllers: [ResultTablesController],
-  providers: [AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver, ResultTablesService],
+  providers: [AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver, ResultTablesService, RefreshRepository, RefreshService, RefreshResolver, ProjectRefreshResolver, RefreshTicker],
+  exports: [RefreshService],
 })
 export class ProvenanceApiModule {}

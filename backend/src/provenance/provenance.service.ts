@@ -99,6 +99,15 @@ export class ProvenanceService {
     return ((await this.staleness([result])).get(resultKey(result.kind, result.id)) ?? []).length > 0;
   }
 
+  /** The sites of age model runs. */
+  async runSites(runIds: readonly string[]): Promise<string[]> {
+    return [...new Set((await this.repository.runInputs(runIds)).map((r) => r.siteId))];
+  }
+
+  segmentName(segmentId: string): Promise<string | null> {
+    return this.repository.segmentName(segmentId);
+  }
+
   /** A per-request batch loader of stale reasons, keyed by `resultKey(kind, id)`. */
   loader(): DataLoader<ResultReference, readonly StaleReason[], string> {
     return new DataLoader(

@@ -617,12 +617,16 @@ export type Mutation = {
   /** Install or replace a calibration curve (e.g. SHCal20) from its published five-column file. Installed curves serve every project on the server: operators only (OPERATOR_EMAILS). */
   installCalibrationCurve: CalibrationCurveInfo;
   inviteMember: Invitation;
+  /** Queue fresh runs for every stale result the caller's role may start, in dependency order, with the same settings and seeds (RESEARCHER, CORRELATOR, ANALYST, ADMIN). */
+  refreshStaleResults: RefreshPlan;
   removeMember: Scalars['Boolean']['output'];
   removeTie: Scalars['Boolean']['output'];
   requestPasswordReset: Scalars['Boolean']['output'];
   resetPassword: Scalars['Boolean']['output'];
   setMemberRole: Membership;
   setPreferredHypothesis: Hypothesis;
+  /** Turn the automatic refresh after changes on or off (ADMIN). */
+  setRefreshSettings: RefreshSettings;
   /** Sign in with e-mail and password; returns a bearer token. */
   signIn: AuthPayload;
   startAgeModelRun: AgeModelRun;
@@ -753,6 +757,11 @@ export type MutationInviteMemberArgs = {
 };
 
 
+export type MutationRefreshStaleResultsArgs = {
+  projectId: Scalars['ID']['input'];
+};
+
+
 export type MutationRemoveMemberArgs = {
   projectId: Scalars['ID']['input'];
   userId: Scalars['ID']['input'];
@@ -781,6 +790,11 @@ export type MutationSetMemberRoleArgs = {
 
 export type MutationSetPreferredHypothesisArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type MutationSetRefreshSettingsArgs = {
+  input: SetRefreshSettingsInput;
 };
 
 
@@ -914,6 +928,9 @@ export type Project = {
   name: Scalars['String']['output'];
   preferredHypothesis?: Maybe<Hypothesis>;
   recurrenceAnalyses: Array<RecurrenceAnalysis>;
+  /** The project's latest refreshes, newest first (at most 10). */
+  refreshPlans: Array<RefreshPlan>;
+  refreshSettings: RefreshSettings;
   releases: Array<Release>;
   segments: Array<Segment>;
   sites: Array<Site>;
@@ -942,6 +959,7 @@ export type Query = {
   /** Projects the caller is a member of. */
   projects: Array<Project>;
   recurrenceAnalysis: RecurrenceAnalysis;
+  refreshPlan: RefreshPlan;
   release: Release;
   releaseDiff: ReleaseDiff;
   /** Posterior ranges of one renewal model's parameters and window probabilities for intervals known exactly (no project data; 4,000 parameter draws). */
@@ -1001,6 +1019,11 @@ export type QueryProjectArgs = {
 
 
 export type QueryRecurrenceAnalysisArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type QueryRefreshPlanArgs = {
   id: Scalars['ID']['input'];
 };
 
@@ -1119,6 +1142,61 @@ export type RecurrenceInputs = {
   jointRun?: Maybe<JointRunReference>;
   /** Every recorded input, with the revision or version read and its name. */
   recorded: Array<RecordedInput>;
+};
+
+/**
+ * One refresh of a project's stale results: the plan in dependency order and its progress. The
+ * result lists hold the fresh results queued so far; a step still waiting for the runs it needs
+ * adds its fresh result when it starts.
+ */
+export type RefreshPlan = {
+  __typename?: 'RefreshPlan';
+  /** Fresh site age model runs queued by this refresh. */
+  ageModelRuns: Array<AgeModelRun>;
+  /** True when the project's automatic refresh started it. */
+  automatic: Scalars['Boolean']['output'];
+  createdAt: Scalars['DateTime']['output'];
+  id: Scalars['ID']['output'];
+  /** Fresh joint age model runs queued by this refresh. */
+  jointRuns: Array<JointRunReference>;
+  /** Fresh recurrence analyses queued by this refresh. */
+  recurrenceAnalyses: Array<RecurrenceAnalysis>;
+  requestedBy?: Maybe<User>;
+  /** Stale results it did not re-run, and why. */
+  skipped: Array<SkippedRefresh>;
+  /** ACTIVE while a step waits or runs, then FINISHED. */
+  status: Scalars['String']['output'];
+  steps: Array<RefreshStep>;
+};
+
+/** Whether a project refreshes stale results by itself after each change. */
+export type RefreshSettings = {
+  __typename?: 'RefreshSettings';
+  automatic: Scalars['Boolean']['output'];
+  /** Seconds without a further change before the automatic refresh starts. */
+  debounceSeconds: Scalars['Int']['output'];
+};
+
+/** One stale result of a refresh and the fresh result queued for it. */
+export type RefreshStep = {
+  __typename?: 'RefreshStep';
+  /** Ids of the steps it waits for. */
+  dependsOn: Array<Scalars['ID']['output']>;
+  /** The fresh result, once queued. */
+  freshId?: Maybe<Scalars['ID']['output']>;
+  id: Scalars['ID']['output'];
+  /** ageModelRun, jointRun or recurrenceAnalysis. */
+  kind: Scalars['String']['output'];
+  /** What it refreshes, in words. */
+  label: Scalars['String']['output'];
+  /** Why it failed or was blocked. */
+  message?: Maybe<Scalars['String']['output']>;
+  /** 1 site age model runs, 2 joint runs, 3 recurrence analyses. */
+  stage: Scalars['Int']['output'];
+  /** The stale result re-run with its settings and seed. */
+  staleId: Scalars['ID']['output'];
+  /** WAITING (for the steps it needs), STARTING, QUEUED (fresh result queued or running), SUCCEEDED, FAILED, or BLOCKED (a step it needs failed). */
+  status: Scalars['String']['output'];
 };
 
 /** A connected group of tied events: one inferred earthquake. */
@@ -1427,6 +1505,13 @@ export type SetMemberRoleInput = {
   userId: Scalars['ID']['input'];
 };
 
+export type SetRefreshSettingsInput = {
+  automatic: Scalars['Boolean']['input'];
+  /** 10 to 3600 seconds (default 60). */
+  debounceSeconds?: InputMaybe<Scalars['Int']['input']>;
+  projectId: Scalars['ID']['input'];
+};
+
 /** A place with evidence: a trench, core, outcrop, marsh or lake site. */
 export type Site = {
   __typename?: 'Site';
@@ -1465,6 +1550,17 @@ export type SiteKind =
   | 'MARSH'
   | 'OUTCROP'
   | 'TRENCH';
+
+/** A stale result a refresh did not re-run, and why (the requester's role, or it waits for something else). */
+export type SkippedRefresh = {
+  __typename?: 'SkippedRefresh';
+  /** The stale result's id. */
+  id: Scalars['ID']['output'];
+  kind: Scalars['String']['output'];
+  /** What it is, in words. */
+  label: Scalars['String']['output'];
+  reason: Scalars['String']['output'];
+};
 
 /** One input that changed after a result was computed: the reason the result is stale. */
 export type StaleReason = {
