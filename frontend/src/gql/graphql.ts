@@ -225,11 +225,19 @@ export type CoreLogTrace = {
 };
 
 export type CreateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
   quality: Scalars['Int']['input'];
   siteId: Scalars['ID']['input'];
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId: Scalars['ID']['input'];
   unitBelowId: Scalars['ID']['input'];
 };
@@ -276,6 +284,8 @@ export type CreateSampleInput = {
 };
 
 export type CreateSegmentInput = {
+  /** Down-dip width, km (> 0, at most 1,000). */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm: Scalars['Float']['input'];
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
@@ -350,6 +360,12 @@ export type DensityPoint = {
 /** The contact at which an earthquake is interpreted: one site's event. */
 export type EventHorizon = {
   __typename?: 'EventHorizon';
+  /** Thickness of the event bed at a core site: the unit above the horizon (top to base depth), m; null elsewhere or without depths. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  /** 1-sigma error of displacementM, m. */
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic displacement (slip), m, e.g. in a trench. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
   evidence: Array<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   /** Posterior summary from the site's latest successful age model run, if any. */
@@ -359,6 +375,10 @@ export type EventHorizon = {
   /** 1 (certain) to 4 (possible). */
   quality: Scalars['Int']['output'];
   site: Site;
+  /** 1-sigma error of subsidenceM, m. */
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic subsidence, m (negative for uplift), e.g. from a marsh's microfossil transfer function. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
   /** The first post-event unit. */
   unitAbove: Unit;
   /** The unit holding pre-event deposits. */
@@ -537,6 +557,7 @@ export type LadderEvent = {
   medianCalBp?: Maybe<Scalars['Float']['output']>;
 };
 
+/** A moment magnitude from an empirical scaling relation, with the relation's sigma and name. */
 export type MagnitudeEstimate = {
   __typename?: 'MagnitudeEstimate';
   mw: Scalars['Float']['output'];
@@ -1216,9 +1237,21 @@ export type RegionalEvent = {
    */
   concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
+  /** Mw from the minimum rupture length (the site span), so a lower bound. */
   magnitude?: Maybe<MagnitudeEstimate>;
+  /**
+   * Mw from rupture area, the site span times the down-dip width of the member sites' segment(s)
+   * (the narrowest when they differ), by the Strasser, Arango & Bommer (2010) interface area
+   * relation; null when no member's segment has a width.
+   */
+  magnitudeFromArea?: Maybe<MagnitudeEstimate>;
+  /** Mw from the members' mean measured displacement by Wells & Coppersmith (1994), all slip types; null without displacements. */
+  magnitudeFromDisplacement?: Maybe<MagnitudeEstimate>;
   members: Array<EventHorizon>;
+  /** Along-strike span of the member sites, km: a minimum rupture length. */
   ruptureLengthKm?: Maybe<Scalars['Float']['output']>;
+  /** Each member's measured size (subsidence, displacement, bed thickness) along strike. */
+  sizeProfile: Array<SizeEvidencePoint>;
   warnings: Array<Scalars['String']['output']>;
 };
 
@@ -1489,6 +1522,8 @@ export type SamplePosterior = {
 /** A fault or subduction-zone segment with its along-strike extent. */
 export type Segment = {
   __typename?: 'Segment';
+  /** Down-dip width of the rupture plane, km: with it a regional event gets Mw from rupture area (length x width). */
+  downDipWidthKm?: Maybe<Scalars['Float']['output']>;
   endKm: Scalars['Float']['output'];
   id: Scalars['ID']['output'];
   name: Scalars['String']['output'];
@@ -1550,6 +1585,22 @@ export type SiteKind =
   | 'MARSH'
   | 'OUTCROP'
   | 'TRENCH';
+
+/** One site's measured size of a regional event, for the along-strike profile. */
+export type SizeEvidencePoint = {
+  __typename?: 'SizeEvidencePoint';
+  alongStrikeKm?: Maybe<Scalars['Float']['output']>;
+  /** Event-bed thickness at a core site, m. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Displacement, m, and its 1-sigma error. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
+  eventHorizon: EventHorizon;
+  site: Site;
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Subsidence, m, and its 1-sigma error. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
+};
 
 /** A stale result a refresh did not re-run, and why (the requester's role, or it waits for something else). */
 export type SkippedRefresh = {
@@ -1633,10 +1684,18 @@ export type Unit = {
 };
 
 export type UpdateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
   quality?: InputMaybe<Scalars['Int']['input']>;
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId?: InputMaybe<Scalars['ID']['input']>;
   unitBelowId?: InputMaybe<Scalars['ID']['input']>;
 };
@@ -1668,6 +1727,8 @@ export type UpdateSampleInput = {
 };
 
 export type UpdateSegmentInput = {
+  /** Down-dip width, km (> 0); null clears it. */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm?: InputMaybe<Scalars['Float']['input']>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
