@@ -154,3 +154,42 @@ describe('a run', () => {
     expect((await clients.VIEWER.errorOf(`mutation($id: ID!) { cancelAgeModelRun(id: $id) { id } }`, { id })).code).toBe('FORBIDDEN');
   });
 });
+
+describe('the sparsely dated column of issue 12, built through the API', () => {
+  it('keeps the oldest event between its dated levels: at most 3 % younger than 1600 cal BP, at most four 95.4 % ranges per event', async () => {
+    // Seven units, an event horizon on each contact, luminescence levels of 2000, 1500 and
+    // 1000 +- 40 years before 1950 in the oldest, middle and youngest unit. The exact continuous
+    // model puts about 1.1 % of the oldest event younger than 1600 cal BP
+    // (src/chronology/age-model/exact-prior.spec.ts); the grid prior with ties put 6.5 %.
+    const researcher = clients.RESEARCHER;
+    const { createSite } = await researcher.ok(CREATE_SITE, {
+      i: { projectId: fixture.projectId, name: 'Sparse', kind: 'TRENCH', latitude: 10, longitude: 20, alongStrikeKm: 6 },
+    });
+    const units: string[] = [];
+    for (let position = 1; position <= 7; position++) {
+      units.push((await researcher.ok(CREATE_UNIT, { i: { siteId: createSite.id, position, name: `S${position}`, topDepthM: 7 - position, baseDepthM: 8 - position, facies: 'SOIL' } })).createUnit.id);
+    }
+    for (let k = 0; k < 6; k++) {
+      await researcher.ok(CREATE_HORIZON, { i: { siteId: createSite.id, name: `SE${k + 1}`, unitBelowId: units[k], unitAboveId: units[k + 1], quality: 1 } });
+    }
+    for (const [unit, age] of [[0, 2000], [3, 1500], [6, 1000]]) {
+      await researcher.ok(CREATE_SAMPLE, {
+        i: { siteId: createSite.id, unitId: units[unit], labCode: `SPL-${age}`, method: 'LUMINESCENCE', material: 'OTHER', ageRelation: 'DATES_DEPOSIT', calendarAgeBp: age, calendarErrorYears: 40, measurementYear: 1950 },
+      });
+    }
+    const { startAgeModelRun } = await researcher.ok(START, { i: { siteId: createSite.id, iterations: 8000, seed: 12 } });
+    const run = await runInline(startAgeModelRun.id);
+    expect(run.status).toBe('SUCCEEDED');
+    expect(run.diagnostics.converged).toBe(true);
+    const { site } = await clients.VIEWER.ok(`query($id: ID!) { site(id: $id) { eventHorizons { name latestPosterior {
+      hpd95 { olderCalBp youngerCalBp probability } density { calBp probability } } } } }`, { id: createSite.id });
+    const horizons = site.eventHorizons as { name: string; latestPosterior: { hpd95: unknown[]; density: { calBp: number; probability: number }[] } }[];
+    expect(horizons).toHaveLength(6);
+    const oldest = horizons.find((h) => h.name === 'SE1')!.latestPosterior;
+    // Each point is one year's mass (year y holds [y - 0.5, y + 0.5)); the year 1600 is split.
+    const younger = oldest.density.reduce((sum, p) => sum + (p.calBp < 1600 ? p.probability : p.calBp === 1600 ? p.probability / 2 : 0), 0);
+    expect(younger).toBeLessThanOrEqual(0.03);
+    expect(younger).toBeGreaterThan(0.002);
+    for (const h of horizons) expect(h.latestPosterior.hpd95.length).toBeLessThanOrEqual(4);
+  });
+});

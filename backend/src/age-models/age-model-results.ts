@@ -4,7 +4,7 @@
  */
 import { AgeModelResult } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
-import { CalendarDensity, DensitySummary, trim } from '../chronology/common/density';
+import { CalendarDensity, DensitySummary, normalise, trim } from '../chronology/common/density';
 
 export interface StoredDensity {
   startCalBp: number;
@@ -39,8 +39,9 @@ export interface StoredAgeModelResults {
   eventDraws: { eventHorizonIds: string[]; drawCount: number; draws: number[] };
 }
 
+/** A density trimmed of its negligible tails (below 1e-6 of the mass per year) and renormalised to unit mass. */
 export function storeDensity(density: CalendarDensity): StoredDensity {
-  const trimmed = trim(density, 1e-6);
+  const trimmed = normalise(trim(density, 1e-6));
   return { startCalBp: trimmed.startCalBp, probabilities: Array.from(trimmed.probabilities, (p) => Number(p.toPrecision(6))) };
 }
 

@@ -60,6 +60,7 @@ export class AgeModelsService {
       iterations: input.iterations ?? DEFAULT_ITERATIONS,
       chains: input.chains ?? DEFAULT_AGE_MODEL_SETTINGS.chains,
       outlierPrior: input.outlierPrior ?? DEFAULT_AGE_MODEL_SETTINGS.outlierPrior,
+      outlierShiftScaleYears: input.outlierShiftScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.outlierShiftScaleYears,
       inheritanceScaleYears: input.inheritanceScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.inheritanceScaleYears,
       seed: input.seed ?? Math.floor(Math.random() * 2 ** 31),
     };

@@ -1593,8 +1593,17 @@ export type StartAgeModelRunInput = {
   inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   /** Iterations per chain after burn-in. */
   iterations?: InputMaybe<Scalars['Int']['input']>;
-  /** Prior probability that any one sample is an outlier (default 0.05). */
+  /**
+   * Prior probability that any one sample is an outlier (default 0.05): the few per cent of dates
+   * the trade expects to disagree with their context beyond their quoted errors.
+   */
   outlierPrior?: InputMaybe<Scalars['Float']['input']>;
+  /**
+   * Scale of an outlier's unknown shift, years (default 500, from 10 to 10,000): an outlying
+   * sample's age is read as its likelihood shifted by an amount with a two-sided exponential prior
+   * of this mean absolute size, so outlier probabilities depend on this stated scale only.
+   */
+  outlierShiftScaleYears?: InputMaybe<Scalars['Float']['input']>;
   seed?: InputMaybe<Scalars['Int']['input']>;
   siteId: Scalars['ID']['input'];
 };

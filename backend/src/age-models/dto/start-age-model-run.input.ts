@@ -29,6 +29,13 @@ export class StartAgeModelRunInput {
   @Max(0.5)
   outlierPrior?: number;
 
+  /** Mean absolute shift (years) of an outlying sample's unknown offset; default 500. */
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  @Min(10)
+  @Max(10_000)
+  outlierShiftScaleYears?: number;
+
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false })
   @Min(1)

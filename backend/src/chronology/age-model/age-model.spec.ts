@@ -13,6 +13,7 @@ import {
 import { AgeModelInput, ColumnProblemError, ColumnSample } from './column';
 import { eventOrderViolations, orderViolations } from './order-check';
 import { simulateColumn } from './simulated-column';
+import { boundaryWeight, mixtureOnWindow } from './fixtures/exact-continuous-model';
 
 const intcal20 = builtInCurve('INTCAL20');
 
@@ -32,51 +33,32 @@ function unit(id: string, position: number): AgeModelInput['units'][number] {
 const QUICK: Partial<AgeModelSettings> = { iterations: 6_000, burnIn: 600, thin: 3 };
 
 /**
- * The exact posterior of the same model by brute force on the 1-year grid, for one or two
- * deposits. The prior is the model's own: points uniform between boundaries, p ∝ (alpha - beta +
- * 1)^-m over the window, boundaries summed out exactly:
- *   g_m(lo, hi) = sum_{alpha = hi..old} sum_{beta = young..lo} (alpha - beta + 1)^-m,
- * computed from double tail sums T1(s) = sum_{j >= s} (j + 1)^-m and T2(s) = sum_{j >= s} T1(j).
- * The likelihood with the outlier mixture is L_q = (1 - q) L / sum(L) + q / W.
+ * The exact posterior of the continuous model for one or two deposits, summed over whole years
+ * (each likelihood is constant within its year; ages at year middles), with the boundaries
+ * integrated out exactly (fixtures/exact-continuous-model.ts, independent of the sampler).
  */
 class BruteForce {
   readonly young: number;
   readonly old: number;
   readonly width: number;
-  private readonly t2: Float64Array;
+  private readonly m: number;
 
   constructor(window: { youngCalBp: number; oldCalBp: number }, m: number) {
     this.young = window.youngCalBp;
     this.old = window.oldCalBp;
     this.width = this.old - this.young + 1;
-    const w = this.width;
-    const t1 = new Float64Array(w + 3);
-    for (let s = w - 1; s >= 0; s--) t1[s] = t1[s + 1] + (s + 1) ** -m;
-    this.t2 = new Float64Array(w + 3);
-    for (let s = w; s >= 0; s--) this.t2[s] = this.t2[s + 1] + t1[s];
+    this.m = m;
   }
 
-  private tail2(s: number): number {
-    return s >= this.t2.length ? 0 : this.t2[s];
-  }
-
-  /** g_m(lo, hi) for the youngest point lo and the oldest point hi. */
+  /** G_m(lo, hi) for the youngest point lo and the oldest point hi (years of the window). */
   boundaryWeight(lo: number, hi: number): number {
-    return (
-      this.tail2(hi - lo) - this.tail2(this.old - lo + 1) - (this.tail2(hi - this.young + 1) - this.tail2(this.old - this.young + 2))
-    );
+    // Two ages in one year lie on average a third of a year apart.
+    const spread = hi > lo ? 0 : 1 / 6;
+    return boundaryWeight(lo - spread, hi + spread, this.young - 0.5, this.old + 0.5, this.m);
   }
 
-  mixture(likelihood: CalendarDensity, q: number): Float64Array {
-    const out = new Float64Array(this.width);
-    let mass = 0;
-    for (const p of likelihood.probabilities) mass += p;
-    for (let i = 0; i < this.width; i++) {
-      const k = this.young + i - likelihood.startCalBp;
-      const p = k >= 0 && k < likelihood.probabilities.length ? likelihood.probabilities[k] / mass : 0;
-      out[i] = (1 - q) * p + q / this.width;
-    }
-    return out;
+  mixture(likelihood: CalendarDensity, q: number, scale = 500): Float64Array {
+    return mixtureOnWindow(likelihood, this.young, this.old, q, scale);
   }
 
   density(probabilities: Float64Array): CalendarDensity {
@@ -123,8 +105,8 @@ describe(runAgeModel.name, () => {
     const settings = { ...QUICK, outlierPrior: 0, seed: 11 };
     const result = runAgeModel(input, settings);
 
-    it('matches the exact posterior of its own model (brute force on the 1-year grid) within 2 years', () => {
-      // Source: brute-force summation of the model's joint posterior [analytic].
+    it('matches the exact posterior of the continuous model within 2 years', () => {
+      // Source: exact sum of the continuous model over whole years, boundaries integrated exactly [analytic].
       const brute = new BruteForce(result.window, 2);
       const la = brute.mixture(older, 0);
       const lb = brute.mixture(younger, 0);
@@ -146,46 +128,6 @@ describe(runAgeModel.name, () => {
         expect(Math.abs(model.meanCalBp - truth.meanCalBp)).toBeLessThan(2);
       }
     });
-
-    it('reproduces the plain calibrations up to the slight tilt of the boundary prior', () => {
-      // Source: the calibration engine's densities (IntCal20, Reimer et al. 2020) and a first-order
-      // expansion [analytic]. With two points the summed-out boundaries weigh a pair by
-      // g_2 ≈ ln((old - lo) / (hi - lo)) - ln(W / (hi - young)) (the integral form of g_2), a slow
-      // exponential-like tilt of each marginal with slope lambda = d ln g_2 / dt; a density tilted
-      // by e^(lambda t) moves its mean by lambda Var (the first cumulant term). Here that is about
-      // -7 years for the wide 2500 BP age (sd 70 on the plateau) and +2 for the 1200 BP age, so
-      // the tolerance is that prediction +- 1.5 years (Rao-Blackwellised sampling error is a
-      // fraction of a year); the total variation allowed is the tilt's own plus 0.01.
-      const { youngCalBp: young, oldCalBp: old } = result.window;
-      const width = old - young + 1;
-      const hi = summarise(older).meanCalBp;
-      const lo = summarise(younger).meanCalBp;
-      const g = Math.log((old - lo) / (hi - lo)) - Math.log(width / (hi - young));
-      const slopeAtOlder = (-1 / (hi - lo) + 1 / (hi - young)) / g;
-      const slopeAtYounger = (1 / (hi - lo) - 1 / (old - lo)) / g;
-      for (const [id, likelihood, slope] of [['a', older, slopeAtOlder], ['b', younger, slopeAtYounger]] as const) {
-        const model = sampleOf(result, id);
-        const plain = summarise(likelihood);
-        const predictedShift = slope * plain.sdYears ** 2;
-        expect(Math.abs(predictedShift)).toBeLessThan(8);
-        expect(Math.abs(model.summary.meanCalBp - plain.meanCalBp - predictedShift)).toBeLessThan(1.5);
-        let tv = 0;
-        const start = Math.min(model.density.startCalBp, likelihood.startCalBp);
-        const end = Math.max(
-          model.density.startCalBp + model.density.probabilities.length,
-          likelihood.startCalBp + likelihood.probabilities.length,
-        );
-        const at = (d: CalendarDensity, t: number): number => d.probabilities[t - d.startCalBp] ?? 0;
-        let meanAbsDeviation = 0;
-        for (let t = start; t < end; t++) {
-          tv += Math.abs(at(model.density, t) - at(likelihood, t)) / 2;
-          meanAbsDeviation += at(likelihood, t) * Math.abs(t - plain.meanCalBp);
-        }
-        // The tilt's own total variation is about |lambda| E|t - mean| / 2 (5 % or less here).
-        expect(tv).toBeLessThan((Math.abs(slope) * meanAbsDeviation) / 2 + 0.01);
-      }
-      expect(result.diagnostics.converged).toBe(true);
-    });
   });
 
   describe('two ordered samples with an event between', () => {
@@ -200,37 +142,47 @@ describe(runAgeModel.name, () => {
     };
 
     /**
-     * Exact marginals of the event and the two deposits: p(d1, d2) ∝ L1 L2 g_3(d2, d1) for
-     * d2 <= d1, the event uniform on the d1 - d2 + 1 years between them.
+     * Exact marginals of the event and the two deposits: p(d1, d2) ∝ L1 L2 G_3(d2, d1) (d1 - d2)
+     * for d2 <= d1 (the event's volume between them), the event uniform on [d2, d1]: with ages at
+     * year middles it takes a whole year strictly between and half of each end year.
      */
     function exactPosterior(result: AgeModelResult, q: number): { event: CalendarDensity; below: CalendarDensity; above: CalendarDensity; outlierBelow: number } {
       const brute = new BruteForce(result.window, 3);
       const l1 = brute.mixture(below, q);
       const l2 = brute.mixture(above, q);
+      const plain1 = brute.mixture(below, 0);
       const w = brute.width;
       const pe = new Float64Array(w);
       const p1 = new Float64Array(w);
       const p2 = new Float64Array(w);
       let outlier1 = 0;
       let total = 0;
-      const prefix = new Float64Array(w);
+      const eventAt = new Float64Array(w + 1);
       for (let i = 0; i < w; i++) {
-        // For d1 = year i: weights of d2 = k <= i, then the event at e in [k, i] collects the
-        // sum over k <= e of those weights.
-        let running = 0;
-        for (let k = 0; k <= i; k++) {
-          const weight = l1[i] * l2[k] * brute.boundaryWeight(brute.young + k, brute.young + i);
-          running += weight;
-          prefix[k] = running;
-          p2[k] += weight * (i - k + 1);
-        }
+        if (!(l1[i] > 0)) continue;
+        // For d1 = year i: each d2 = k < i weighs L1 L2 G (i - k); the event spreads that weight
+        // over [k, i], a year of density per whole year between and half at each end.
+        eventAt.fill(0);
         let mass = 0;
-        for (let e = 0; e <= i; e++) {
-          pe[e] += prefix[e];
-          mass += prefix[e];
+        for (let k = 0; k < i; k++) {
+          if (!(l2[k] > 0)) continue;
+          const weight = l1[i] * l2[k] * brute.boundaryWeight(brute.young + k, brute.young + i);
+          const volume = i - k;
+          p2[k] += weight * volume;
+          mass += weight * volume;
+          // Per year: weight (1 per year inside, 1/2 at the ends); difference form.
+          eventAt[k + 1] += weight;
+          eventAt[i] -= weight;
+          pe[k] += weight / 2;
+          pe[i] += weight / 2;
+        }
+        let running = 0;
+        for (let e = 0; e < i; e++) {
+          running += eventAt[e];
+          pe[e] += running;
         }
         p1[i] = mass;
-        outlier1 += (mass * (q / w)) / l1[i];
+        outlier1 += (mass * (l1[i] - (1 - q) * plain1[i])) / l1[i];
         total += mass;
       }
       return {
@@ -242,7 +194,7 @@ describe(runAgeModel.name, () => {
     }
 
     it('matches the exact posterior (no outliers) within 5 years: medians and 95.4 % ranges', () => {
-      // Source: brute-force summation on the 1-year grid with the model's own prior [analytic].
+      // Source: exact sum of the continuous model over whole years (fixtures/exact-continuous-model.ts) [analytic].
       // HPD limits sit where a fragment of mass meets the cut, so they need more draws than medians.
       const result = runAgeModel(input, { ...QUICK, iterations: 30_000, outlierPrior: 0, seed: 5 });
       const exact = exactPosterior(result, 0);
@@ -263,7 +215,7 @@ describe(runAgeModel.name, () => {
     });
 
     it('matches the exact posterior with the default outlier prior: medians, 95.4 % limits and outlier probability', () => {
-      // Source: the same brute force with L_q = 0.95 L + 0.05 / W [analytic].
+      // Source: the same exact sum with L_q = 0.95 L + 0.05 O, O the Laplace-shifted L [analytic].
       const result = runAgeModel(input, { ...QUICK, iterations: 30_000, seed: 6 });
       const exact = exactPosterior(result, 0.05);
       const model = eventOf(result, 'e1').summary;

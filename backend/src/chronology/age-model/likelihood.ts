@@ -139,115 +139,220 @@ export function modelWindow(
 }
 
 /**
- * Deposit likelihoods on one window with the general outlier mixture of Christen (1994, "Summarizing
- * a set of radiocarbon determinations: a robust approach", Applied Statistics 43(3):489-503
- * [memory for pages]): each sample is an outlier with prior probability q, and an outlier's
- * measurement says nothing about its deposit. Christen's outlier carries a shift of vague prior;
- * with a shift uniform over the window (width W years) its likelihood is flat at 1/W on the scale
- * of L. Integrating the indicator out gives
+ * The likelihood of a deposit age d if the sample is an outlier: its measurement is then read as if
+ * the material were offset by an unknown shift delta, so
  *
- *   L_q(d) = (1 - q) L(d) + q / W,
+ *   O(d) = sum_delta L(d + delta) f(delta),
+ *
+ * the deposit likelihood convolved with the shift's prior f. This is the outlier-as-offset form of
+ * Bronk Ramsey (2009, "Dealing with outliers and offsets in radiocarbon dating", Radiocarbon
+ * 51(3):1023-1045 [memory for pages]): the shift has a broad prior of stated scale, so the answer
+ * depends on that scale and not on how far the model's window happens to reach. Our shift prior is
+ * two-sided exponential (Laplace) with mean absolute shift `scaleYears`, binned exactly to whole
+ * years: P(delta = k) = (1 - r) / (1 + r) r^|k|, r = exp(-1 / scale). Its tails are heavier than
+ * any Gaussian measurement error, so a date off by any amount is explained better as an outlier
+ * than by dragging the column, and the convolution is exact in two passes (younger-going and
+ * older-going sums A(d) = L(d) + r A(d + 1), B(d) = L(d) + r B(d - 1); O = (1 - r)/(1 + r) (A + B - L)).
+ *
+ * Returned on the window's years; O sums to at most 1 over d, like L (mass shifted out of the
+ * window is lost, which only lowers O where it is tiny).
+ */
+export function outlierShiftLikelihood(
+  likelihood: DepositLikelihood,
+  window: CalendarWindow,
+  scaleYears: number,
+): Float64Array {
+  const width = window.oldCalBp - window.youngCalBp + 1;
+  const r = Math.exp(-1 / scaleYears);
+  // L on the window plus a margin of 40 scales either side, so mass just outside still shifts in.
+  const margin = Math.ceil(40 * scaleYears);
+  const start = window.youngCalBp - margin;
+  const n = width + 2 * margin;
+  const own = new Float64Array(n);
+  for (let i = 0; i < likelihood.values.length; i++) {
+    const k = likelihood.startCalBp + i - start;
+    if (k >= 0 && k < n) own[k] = likelihood.values[i];
+  }
+  const older = new Float64Array(n);
+  let running = 0;
+  for (let k = n - 1; k >= 0; k--) {
+    running = own[k] + r * running;
+    older[k] = running;
+  }
+  const out = new Float64Array(width);
+  const norm = (1 - r) / (1 + r);
+  running = 0;
+  for (let k = 0; k < n; k++) {
+    running = own[k] + r * running;
+    const i = k - margin;
+    if (i >= 0 && i < width) out[i] = norm * (running + older[k] - own[k]);
+  }
+  return out;
+}
+
+/** Which year bin a continuous age falls in: year y holds ages in [y - 0.5, y + 0.5). */
+export function yearOf(calBp: number): number {
+  return Math.floor(calBp + 0.5);
+}
+
+/**
+ * Deposit likelihoods on one window with the outlier mixture of Christen (1994, "Summarizing a
+ * set of radiocarbon determinations: a robust approach", Applied Statistics 43(3):489-503
+ * [memory for pages]): each sample is an outlier with prior probability q, and an outlier's
+ * measurement is read through the shifted likelihood O (see `outlierShiftLikelihood`). Summing
+ * the indicator out gives
+ *
+ *   L_q(d) = (1 - q) L(d) + q O(d),
  *
  * so the sampler works on deposit ages alone, and the posterior outlier probability given the
- * rest of the state is the flat term's share, averaged over draws (Rao-Blackwellised, Gelfand &
- * Smith 1990, JASA 85:398-409). A flat alternative lets a bad date drop out completely rather
- * than pull the events by a heavy-tailed amount; the cost is that an isolated sample keeps a
- * share q of its mass spread between its neighbours in the order.
+ * rest of the state is q O's share of L_q over the deposit's full conditional, averaged over
+ * draws (Rao-Blackwellised, Gelfand & Smith 1990, JASA 85:398-409).
  *
- * Cumulative sums of L are kept per sample so that the full conditional of a deposit age between
- * its neighbours can be sampled by bisection on F(x) = (1 - q) C(x) + q (x - young + 1) / W.
+ * Ages are continuous; a likelihood is constant within each whole year (year y holds
+ * [y - 0.5, y + 0.5)). `cumulativeAt(x)` integrates L_q from the window's young edge to x, which
+ * is what drawing from a conditional between two neighbours and Rao-Blackwellising need.
  */
 export class MixtureLikelihoods {
   readonly count: number;
   readonly youngCalBp: number;
   readonly oldCalBp: number;
+  /** Years in the window; also its length as a continuous interval. */
   readonly width: number;
+  /** Youngest and oldest continuous ages of the window. */
+  readonly youngEdge: number;
+  readonly oldEdge: number;
   readonly outlierPrior: number;
-  /** q / W, the flat outlier term. */
-  readonly flat: number;
-  private readonly starts: Int32Array;
-  private readonly lengths: Int32Array;
-  private readonly offsets: Int32Array;
-  private readonly values: Float64Array;
-  private readonly cumulative: Float64Array;
-  private readonly totals: Float64Array;
+  readonly shiftScaleYears: number;
+  private readonly plainValues: Float64Array[];
+  private readonly shiftedValues: Float64Array[];
+  /** L_q per year, and its cumulative sum to the end of each year. */
+  private readonly mixed: Float64Array[];
+  private readonly mixedCumulative: Float64Array[];
+  private readonly plainCumulative: Float64Array[];
+  private readonly shiftedCumulative: Float64Array[];
 
-  constructor(likelihoods: readonly DepositLikelihood[], window: CalendarWindow, outlierPrior: number) {
+  constructor(
+    likelihoods: readonly DepositLikelihood[],
+    window: CalendarWindow,
+    outlierPrior: number,
+    shiftScaleYears: number,
+  ) {
     this.count = likelihoods.length;
     this.youngCalBp = window.youngCalBp;
     this.oldCalBp = window.oldCalBp;
     this.width = window.oldCalBp - window.youngCalBp + 1;
+    this.youngEdge = window.youngCalBp - 0.5;
+    this.oldEdge = window.oldCalBp + 0.5;
     this.outlierPrior = outlierPrior;
-    this.flat = outlierPrior / this.width;
-    this.starts = new Int32Array(this.count);
-    this.lengths = new Int32Array(this.count);
-    this.offsets = new Int32Array(this.count + 1);
-    const clipped = likelihoods.map((likelihood) => {
-      const first = Math.max(likelihood.startCalBp, window.youngCalBp);
-      const last = Math.min(likelihood.startCalBp + likelihood.values.length - 1, window.oldCalBp);
-      return last < first
-        ? { start: first, values: new Float64Array(0) }
-        : {
-            start: first,
-            values: likelihood.values.subarray(first - likelihood.startCalBp, last - likelihood.startCalBp + 1),
-          };
-    });
-    clipped.forEach((c, j) => {
-      this.starts[j] = c.start;
-      this.lengths[j] = c.values.length;
-      this.offsets[j + 1] = this.offsets[j] + c.values.length;
-    });
-    this.values = new Float64Array(this.offsets[this.count]);
-    this.cumulative = new Float64Array(this.offsets[this.count]);
-    this.totals = new Float64Array(this.count);
-    clipped.forEach((c, j) => {
-      let running = 0;
-      const base = this.offsets[j];
-      for (let i = 0; i < c.values.length; i++) {
-        running += c.values[i];
-        this.values[base + i] = c.values[i];
-        this.cumulative[base + i] = running;
+    this.shiftScaleYears = shiftScaleYears;
+    const q = outlierPrior;
+    this.plainValues = likelihoods.map((likelihood) => {
+      const out = new Float64Array(this.width);
+      for (let i = 0; i < likelihood.values.length; i++) {
+        const k = likelihood.startCalBp + i - this.youngCalBp;
+        if (k >= 0 && k < this.width) out[k] = likelihood.values[i];
       }
-      this.totals[j] = running;
+      return out;
     });
+    this.shiftedValues = likelihoods.map((likelihood) =>
+      q > 0 ? outlierShiftLikelihood(likelihood, window, shiftScaleYears) : new Float64Array(this.width),
+    );
+    const cumulative = (values: Float64Array): Float64Array => {
+      const out = new Float64Array(values.length);
+      let running = 0;
+      for (let i = 0; i < values.length; i++) out[i] = running += values[i];
+      return out;
+    };
+    this.mixed = this.plainValues.map((plain, j) => {
+      const shifted = this.shiftedValues[j];
+      const out = new Float64Array(this.width);
+      for (let i = 0; i < this.width; i++) out[i] = (1 - q) * plain[i] + q * shifted[i];
+      return out;
+    });
+    this.mixedCumulative = this.mixed.map(cumulative);
+    this.plainCumulative = this.plainValues.map(cumulative);
+    this.shiftedCumulative = this.shiftedValues.map(cumulative);
   }
 
-  /** L(d) without the outlier term (0 outside the sample's years). */
-  plain(sample: number, calBp: number): number {
-    const i = calBp - this.starts[sample];
-    return i >= 0 && i < this.lengths[sample] ? this.values[this.offsets[sample] + i] : 0;
+  /** L(y) without the outlier term, for a whole year y (0 outside the window). */
+  plain(sample: number, year: number): number {
+    const i = year - this.youngCalBp;
+    return i >= 0 && i < this.width ? this.plainValues[sample][i] : 0;
   }
 
-  /** L_q(d) = (1 - q) L(d) + q / W. */
-  mixture(sample: number, calBp: number): number {
-    return (1 - this.outlierPrior) * this.plain(sample, calBp) + this.flat;
+  /** O(y), the outlier's shifted likelihood. */
+  shifted(sample: number, year: number): number {
+    const i = year - this.youngCalBp;
+    return i >= 0 && i < this.width ? this.shiftedValues[sample][i] : 0;
   }
 
-  /** C(x): the sum of L (without the outlier term) over the window's years up to and including x. */
-  plainCumulativeTo(sample: number, calBp: number): number {
-    const i = calBp - this.starts[sample];
-    return i < 0 ? 0 : i >= this.lengths[sample] ? this.totals[sample] : this.cumulative[this.offsets[sample] + i];
+  /** L_q(y) = (1 - q) L(y) + q O(y). */
+  mixture(sample: number, year: number): number {
+    const i = year - this.youngCalBp;
+    return i >= 0 && i < this.width ? this.mixed[sample][i] : 0;
   }
 
-  /** F(x): the sum of L_q over the window's years up to and including x. */
-  cumulativeTo(sample: number, calBp: number): number {
-    return (1 - this.outlierPrior) * this.plainCumulativeTo(sample, calBp) + this.flat * (calBp - this.youngCalBp + 1);
+  /** L_q per year of the window (index year - youngCalBp); a view, not a copy. */
+  mixtureValues(sample: number): Float64Array {
+    return this.mixed[sample];
   }
 
-  /** Mass of L_q over younger..older inclusive. */
-  massBetween(sample: number, youngerCalBp: number, olderCalBp: number): number {
-    return this.cumulativeTo(sample, olderCalBp) - this.cumulativeTo(sample, youngerCalBp - 1);
+  /** L_q at a continuous age. */
+  at(sample: number, calBp: number): number {
+    return this.mixture(sample, yearOf(calBp));
+  }
+
+  /** Sum of L_q over whole years up to and including `year`. */
+  cumulativeToYear(sample: number, year: number): number {
+    return yearSum(this.mixedCumulative[sample], year - this.youngCalBp);
+  }
+
+  /** Integral of L_q from the window's young edge to the continuous age x. */
+  cumulativeAt(sample: number, calBp: number): number {
+    return continuousSum(this.mixedCumulative[sample], this.mixed[sample], calBp - this.youngEdge);
+  }
+
+  /** Integral of L (no outlier term) from the young edge to x. */
+  plainCumulativeAt(sample: number, calBp: number): number {
+    return continuousSum(this.plainCumulative[sample], this.plainValues[sample], calBp - this.youngEdge);
+  }
+
+  /** Integral of q O (the outlier's share of L_q) from the young edge to x. */
+  outlierCumulativeAt(sample: number, calBp: number): number {
+    return this.outlierPrior * continuousSum(this.shiftedCumulative[sample], this.shiftedValues[sample], calBp - this.youngEdge);
   }
 
   /** Total mass of L_q over the window. */
   totalMass(sample: number): number {
-    return this.cumulativeTo(sample, this.oldCalBp);
+    return this.mixedCumulative[sample][this.width - 1];
+  }
+
+  /** Total mass of L over the window. */
+  plainTotalMass(sample: number): number {
+    return this.plainCumulative[sample][this.width - 1];
   }
 
   /** Youngest and oldest year where L (without the outlier term) is positive, or undefined. */
   support(sample: number): { youngCalBp: number; oldCalBp: number } | undefined {
-    const n = this.lengths[sample];
-    if (n === 0) return undefined;
-    return { youngCalBp: this.starts[sample], oldCalBp: this.starts[sample] + n - 1 };
+    const v = this.plainValues[sample];
+    let first = 0;
+    while (first < v.length && !(v[first] > 0)) first++;
+    if (first === v.length) return undefined;
+    let last = v.length - 1;
+    while (last > first && !(v[last] > 0)) last--;
+    return { youngCalBp: this.youngCalBp + first, oldCalBp: this.youngCalBp + last };
   }
+}
+
+/** Sum of values[0..i] from their running sums (0 before the start, the total after the end). */
+function yearSum(cumulative: Float64Array, i: number): number {
+  return i < 0 ? 0 : i >= cumulative.length ? cumulative[cumulative.length - 1] : cumulative[i];
+}
+
+/** Integral over [0, x] of the step function values[floor(t)], from its running sums. */
+function continuousSum(cumulative: Float64Array, values: Float64Array, x: number): number {
+  if (x <= 0) return 0;
+  if (x >= values.length) return cumulative[cumulative.length - 1];
+  const i = Math.floor(x);
+  return (i > 0 ? cumulative[i - 1] : 0) + (x - i) * values[i];
 }

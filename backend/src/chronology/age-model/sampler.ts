@@ -2,37 +2,45 @@
  * Metropolis-within-Gibbs sampler for the ordering model (Gelfand & Smith 1990, JASA 85:398-409;
  * for chronologies Buck, Litton & Smith 1992, J. Archaeol. Sci. 19:497-512 [memory for pages]).
  *
- * The state is one whole calendar year (cal BP) per node of the order graph: the end and start
- * boundaries beta <= ... <= alpha, every event and every modelled sample's deposit age. The
- * unnormalised posterior is
+ * The state is one continuous calendar age (cal BP) per node of the order graph: the end and start
+ * boundaries beta <= ... <= alpha, every event and every modelled sample's deposit age. Each
+ * likelihood is constant within a whole year (year y holds ages in [y - 0.5, y + 0.5)), so the
+ * 1-year grid only discretises the data, never the prior. The unnormalised posterior is
  *
- *   p(alpha, beta, theta) ∝ 1[order] (alpha - beta + 1)^-m  prod_j L_q,j(d_j)
+ *   p(alpha, beta, theta) ∝ 1[order] s^-m / (W - s)  prod_j L_q,j(d_j),   s = alpha - beta,
  *
- * over the window's years, with m the number of events and deposits: the uniform deposition
- * prior between two boundaries with a flat prior on the boundaries (Buck, Kenworthy, Litton &
- * Smith 1991, Antiquity 65:808-821; Bronk Ramsey 2009, Radiocarbon 51(1):337-360). Ties are
- * allowed: on a 1-year grid two things may share a year. (alpha - beta + 1)^-m is the continuous
- * normaliser of m ordered uniforms up to a constant; on the grid it is the model's definition.
+ * on the window of length W, with m the number of events and deposits. s^-m is the uniform
+ * deposition prior between two boundaries (Buck, Kenworthy, Litton & Smith 1991, Antiquity
+ * 65:808-821): given the boundaries, the ordered ages are uniform on the order's polytope, whose
+ * volume is proportional to s^m for any partial order. 1 / (W - s) is the span correction of
+ * Nicholls & Jones (2001, J. R. Stat. Soc. C 50(4):503-521 [memory for pages]): W - s is the
+ * measure of boundary pairs with span s in the window, so this factor makes the prior on the span
+ * flat instead of falling towards W.
  *
- * Moves, all leaving the posterior invariant and never leaving the order:
+ * Because ages are continuous, two ages share a year only as a short stretch of their joint
+ * volume; on a grid with ties every collapsed configuration counted as a whole cell and short
+ * spans gained up to m! times their mass (issue 12).
+ *
+ * Moves, all leaving this posterior invariant and never leaving the order:
  *  - Gibbs for each event and deposit from its full conditional between its neighbours in the
- *    order: uniform for an event, L_q restricted to [lo, hi] for a deposit (bisection on its
- *    cumulative sum), scanned young to old and old to young in turn;
- *  - independence Metropolis-Hastings for each boundary, proposing from the continuous
- *    (c + x)^-m density binned to years, which is almost the exact conditional;
+ *    order: uniform for an event, L_q restricted to [lo, hi] for a deposit (inverse of its
+ *    piecewise-linear cumulative integral), scanned young to old and old to young in turn;
+ *  - independence Metropolis-Hastings for each boundary, proposing exactly from (c + x)^-m and
+ *    accepting by the ratio of the span correction, (W - s) / (W - s');
  *  - random-walk Metropolis shifts of a block of consecutive stages (the whole sequence, the
- *    part above or below a level, or a run in the middle) by a symmetric integer step drawn at
- *    one of several scales, which moves tightly packed parts of the column together where
- *    single-site updates would crawl;
- *  - an exact joint Gibbs draw of every path of the order (a run of nodes each with one younger
- *    and one older neighbour, possibly ending in a boundary) given the nodes at its two ends, by
- *    forward filtering and backward sampling on the 1-year grid (Carter & Kohn 1994, Biometrika
- *    81(3):541-553; Frühwirth-Schnatter 1994, J. Time Series Anal. 15(2):183-202 [memory for
- *    pages]); see `pathGibbs`.
+ *    part above or below a level, or a run in the middle) by a symmetric Gaussian step at one of
+ *    several scales (a translation: Jacobian 1), which moves tightly packed parts of the column
+ *    together where single-site updates would crawl;
+ *  - an independence Metropolis-Hastings draw of every path of the order (a run of nodes each with
+ *    one younger and one older neighbour, possibly ending in the start boundary) given the nodes at
+ *    its two ends: years by forward filtering and backward sampling on the 1-year grid (Carter &
+ *    Kohn 1994, Biometrika 81(3):541-553; Frühwirth-Schnatter 1994, J. Time Series Anal.
+ *    15(2):183-202 [memory for pages]), then ages uniform and ordered within their years, and the
+ *    difference from the continuous target corrected by the acceptance ratio; see `pathUpdate`.
  */
 import { SeededRandom } from '../common/random';
 import { NodeKind, OrderGraph } from './column';
-import { MixtureLikelihoods } from './likelihood';
+import { MixtureLikelihoods, yearOf } from './likelihood';
 
 /** Step scales (years) of the block shift, chosen uniformly per proposal. */
 const SHIFT_SCALES = [1, 3, 10, 30, 100, 300];
@@ -41,10 +49,13 @@ const SHIFT_SCALES = [1, 3, 10, 30, 100, 300];
 const GLOBAL_SHIFT_SHARE = 0.25;
 
 /**
- * Below this share of a sample's total mass the cumulative sums lose too many digits to bisect;
+ * Below this share of a sample's total mass the cumulative sums lose too many digits to invert;
  * the conditional is then summed year by year (only reachable with an outlier prior of 0).
  */
 const BISECTION_FLOOR = 1e-9;
+
+/** Share of a year that initial ages keep clear of their bounds, so no two start tied. */
+const INITIAL_CLEARANCE = 1e-3;
 
 /**
  * The paths of two or more nodes in the order graph, young to old. Consecutive nodes u (younger)
@@ -83,14 +94,18 @@ export interface SamplerModel {
  * Rao-Blackwellised posterior densities (Gelfand & Smith 1990): at each kept draw, the full
  * conditional of every event (uniform between its neighbours) and every deposit (L_q between its
  * neighbours) is added instead of a single count, which gives smooth 1-year histograms from a few
- * thousand draws. Conditionals are added as range coefficients in difference arrays; a deposit's
- * density is L_q(d) times the summed coefficient at d.
+ * thousand draws and no Monte Carlo splinters in the HPD ranges. Whole years inside a conditional
+ * are added as range coefficients in difference arrays, the two partly covered end years
+ * directly; a deposit's density is L_q(y) times its summed coefficient at y.
  */
 export class PosteriorAccumulator {
   readonly youngCalBp: number;
   readonly width: number;
   readonly eventDifferences: Float64Array[];
   readonly depositDifferences: Float64Array[];
+  /** Partly covered end years, added directly. */
+  readonly eventDirect: Float64Array[];
+  readonly depositDirect: Float64Array[];
   /** Counts of open ranges in the same difference form: exactly zero where no range reached. */
   readonly eventOpen: Int32Array[];
   readonly depositOpen: Int32Array[];
@@ -103,9 +118,40 @@ export class PosteriorAccumulator {
     this.width = width;
     this.eventDifferences = Array.from({ length: eventCount }, () => new Float64Array(width + 1));
     this.depositDifferences = Array.from({ length: sampleCount }, () => new Float64Array(width + 1));
+    this.eventDirect = Array.from({ length: eventCount }, () => new Float64Array(width + 1));
+    this.depositDirect = Array.from({ length: sampleCount }, () => new Float64Array(width + 1));
     this.eventOpen = Array.from({ length: eventCount }, () => new Int32Array(width + 1));
     this.depositOpen = Array.from({ length: sampleCount }, () => new Int32Array(width + 1));
     this.outlierSums = new Float64Array(sampleCount);
+  }
+
+  /** Add a whole draw's mass at one age (an event whose neighbours meet). */
+  addPoint(direct: Float64Array, open: Int32Array, calBp: number): void {
+    const i = Math.min(yearOf(calBp), this.youngCalBp + this.width - 1) - this.youngCalBp;
+    open[i]++;
+    open[i + 1]--;
+    direct[i] += 1;
+  }
+
+  /**
+   * Add `coefficient` per unit length over the continuous interval [lo, hi] to one density:
+   * whole years through the difference array, the end years' covered shares directly.
+   */
+  addInterval(differences: Float64Array, direct: Float64Array, open: Int32Array, lo: number, hi: number, coefficient: number): void {
+    const first = yearOf(lo) - this.youngCalBp;
+    const last = Math.min(yearOf(hi), this.youngCalBp + this.width - 1) - this.youngCalBp;
+    open[first]++;
+    open[last + 1]--;
+    if (first === last) {
+      direct[first] += coefficient * (hi - lo);
+      return;
+    }
+    direct[first] += coefficient * (this.youngCalBp + first + 0.5 - lo);
+    direct[last] += coefficient * (hi - (this.youngCalBp + last - 0.5));
+    if (last > first + 1) {
+      differences[first + 1] += coefficient;
+      differences[last] -= coefficient;
+    }
   }
 }
 
@@ -121,12 +167,17 @@ function topologicalOrder(graph: OrderGraph): Int32Array {
   return Int32Array.from(nodes);
 }
 
+/** log of the prior's span factor s^-m / (W - s). */
+export function logSpanPrior(span: number, m: number, windowLength: number): number {
+  return -m * Math.log(span) - Math.log(windowLength - span);
+}
+
 /** One Markov chain over the ordering model. */
 export class OrderChain {
   private readonly graph: OrderGraph;
   private readonly likelihoods: MixtureLikelihoods;
   private readonly random: SeededRandom;
-  private readonly values: Int32Array;
+  private readonly values: Float64Array;
   private readonly youngToOld: Int32Array;
   private readonly firstDeposit: number;
   /** m: events plus deposits, the exponent of the uniform deposition prior. */
@@ -135,23 +186,31 @@ export class OrderChain {
   private readonly blockNodes: Int32Array;
   /** firstAtStage[s + 1]: index in youngToOld of the first node whose first stage is >= s. */
   private readonly firstAtStage: Int32Array;
+  /** Window years, and its continuous edges and length. */
   private readonly young: number;
   private readonly old: number;
+  private readonly youngEdge: number;
+  private readonly oldEdge: number;
+  private readonly windowLength: number;
   /** Events placed so far while initialising. */
   private readonly placedEvents = new Set<number>();
   private readonly paths: Int32Array[];
   /** Forward cumulative sums of the longest path, path length x window width. */
   private readonly forward: Float64Array;
+  /** Proposed path ages, and the years of the current ones. */
+  private readonly proposal: Float64Array;
   blockShiftProposed = 0;
   blockShiftAccepted = 0;
   boundaryProposed = 0;
   boundaryAccepted = 0;
+  pathProposed = 0;
+  pathAccepted = 0;
 
   constructor(model: SamplerModel, seed: number, startFromYoung: boolean) {
     this.graph = model.graph;
     this.likelihoods = model.likelihoods;
     this.random = new SeededRandom(seed);
-    this.values = new Int32Array(this.graph.nodeCount);
+    this.values = new Float64Array(this.graph.nodeCount);
     this.youngToOld = topologicalOrder(this.graph);
     this.firstDeposit = firstDepositNode(this.graph);
     this.uniformCount = this.graph.nodeCount - 2;
@@ -164,21 +223,25 @@ export class OrderChain {
     }
     this.young = this.likelihoods.youngCalBp;
     this.old = this.likelihoods.oldCalBp;
+    this.youngEdge = this.likelihoods.youngEdge;
+    this.oldEdge = this.likelihoods.oldEdge;
+    this.windowLength = this.oldEdge - this.youngEdge;
     this.paths = orderPaths(this.graph);
     const longest = this.paths.reduce((n, path) => Math.max(n, path.length), 0);
     this.forward = new Float64Array(longest * (this.old - this.young + 1));
+    this.proposal = new Float64Array(longest);
     this.initialise(startFromYoung);
   }
 
-  /** The current state (whole years cal BP per node); a view, not a copy. */
-  get state(): Int32Array {
+  /** The current state (continuous cal BP per node); a view, not a copy. */
+  get state(): Float64Array {
     return this.values;
   }
 
-  /** Youngest year a node may take given its younger neighbours. */
+  /** Youngest age a node may take given its younger neighbours. */
   private lowerBound(node: number): number {
     const g = this.graph;
-    let lo = this.young;
+    let lo = this.youngEdge;
     for (let k = g.youngerOffsets[node]; k < g.youngerOffsets[node + 1]; k++) {
       const v = this.values[g.youngerNeighbours[k]];
       if (v > lo) lo = v;
@@ -186,10 +249,10 @@ export class OrderChain {
     return lo;
   }
 
-  /** Oldest year a node may take given its older neighbours. */
+  /** Oldest age a node may take given its older neighbours. */
   private upperBound(node: number): number {
     const g = this.graph;
-    let hi = this.old;
+    let hi = this.oldEdge;
     for (let k = g.olderOffsets[node]; k < g.olderOffsets[node + 1]; k++) {
       const v = this.values[g.olderNeighbours[k]];
       if (v < hi) hi = v;
@@ -208,13 +271,13 @@ export class OrderChain {
     const g = this.graph;
     const order = fromYoung ? this.youngToOld : this.youngToOld.slice().reverse();
     // Bounds passed through events that are not placed yet.
-    const passLow = new Float64Array(g.nodeCount).fill(this.young);
-    const passHigh = new Float64Array(g.nodeCount).fill(this.old);
+    const passLow = new Float64Array(g.nodeCount).fill(this.youngEdge);
+    const passHigh = new Float64Array(g.nodeCount).fill(this.oldEdge);
     const isDeposit = (node: number): boolean => g.kind[node] === NodeKind.DEPOSIT;
     for (const node of order) {
       if (g.kind[node] === NodeKind.START || g.kind[node] === NodeKind.END) continue;
-      let lo = this.young;
-      let hi = this.old;
+      let lo = this.youngEdge;
+      let hi = this.oldEdge;
       if (fromYoung) {
         for (let k = g.youngerOffsets[node]; k < g.youngerOffsets[node + 1]; k++) {
           const b = g.youngerNeighbours[k];
@@ -232,8 +295,8 @@ export class OrderChain {
       }
       if (!isDeposit(node)) continue;
       const j = node - this.firstDeposit;
-      const own = this.drawPlain(j, this.young, this.old, fromYoung ? lo : hi);
-      this.values[node] = own >= lo && own <= hi ? own : this.drawPlain(j, lo, hi, fromYoung ? lo : hi);
+      const own = this.drawPlain(j, this.youngEdge, this.oldEdge, fromYoung ? lo : hi);
+      this.values[node] = own > lo && own < hi ? own : this.drawPlain(j, lo, hi, fromYoung ? lo : hi);
       if (fromYoung) passLow[node] = this.values[node];
       else passHigh[node] = this.values[node];
     }
@@ -242,9 +305,9 @@ export class OrderChain {
       if (g.kind[node] !== NodeKind.EVENT) continue;
       const lo = this.boundOver(node, false);
       const hi = this.boundOver(node, true);
-      const low = lo ?? Math.max(this.young, (hi ?? this.old) - 100);
-      const high = hi ?? Math.min(this.old, low + 100);
-      this.values[node] = low + this.random.integer(high - low + 1);
+      const low = lo ?? Math.max(this.youngEdge, (hi ?? this.oldEdge) - 100);
+      const high = hi ?? Math.min(this.oldEdge, low + 100);
+      this.values[node] = low + (high - low) * (INITIAL_CLEARANCE + (1 - 2 * INITIAL_CLEARANCE) * this.random.uniform());
       this.placedEvents.add(node);
     }
     let oldest = -Infinity;
@@ -253,8 +316,8 @@ export class OrderChain {
       oldest = Math.max(oldest, this.values[node]);
       youngest = Math.min(youngest, this.values[node]);
     }
-    this.values[1] = oldest + this.random.integer(Math.min(100, this.old - oldest) + 1);
-    this.values[0] = youngest - this.random.integer(Math.min(100, youngest - this.young) + 1);
+    this.values[1] = oldest + (this.oldEdge - oldest) * (INITIAL_CLEARANCE + Math.min(0.5, 100 / this.windowLength) * this.random.uniform());
+    this.values[0] = youngest - (youngest - this.youngEdge) * (INITIAL_CLEARANCE + Math.min(0.5, 100 / this.windowLength) * this.random.uniform());
   }
 
   /**
@@ -285,52 +348,69 @@ export class OrderChain {
   /** A draw from L (no outlier term) on [lo, hi]; `fallback` when L has no mass there. */
   private drawPlain(sample: number, lo: number, hi: number, fallback: number): number {
     const L = this.likelihoods;
-    const below = L.plainCumulativeTo(sample, lo - 1);
-    const mass = L.plainCumulativeTo(sample, hi) - below;
-    if (!(mass > BISECTION_FLOOR * L.plainCumulativeTo(sample, this.old))) return fallback;
-    const target = below + (1 - this.random.uniform()) * mass;
-    let a = lo;
-    let b = hi;
+    const below = L.plainCumulativeAt(sample, lo);
+    const mass = L.plainCumulativeAt(sample, hi) - below;
+    if (!(mass > BISECTION_FLOOR * L.plainTotalMass(sample))) return fallback;
+    const target = below + (INITIAL_CLEARANCE + (1 - 2 * INITIAL_CLEARANCE) * this.random.uniform()) * mass;
+    return this.invert((x) => L.plainCumulativeAt(sample, x), (y) => L.plain(sample, y), lo, hi, target);
+  }
+
+  /**
+   * The age x in [lo, hi] where a piecewise-linear cumulative integral (slope `valueOf(year)` in
+   * each year) reaches `target`: bisection over whole years, then linear within the year.
+   */
+  private invert(
+    cumulativeAt: (calBp: number) => number,
+    valueOf: (year: number) => number,
+    lo: number,
+    hi: number,
+    target: number,
+  ): number {
+    let a = yearOf(lo);
+    let b = Math.min(yearOf(hi), this.old);
+    // The first year whose end (capped at hi) reaches the target.
     while (a < b) {
       const mid = (a + b) >> 1;
-      if (L.plainCumulativeTo(sample, mid) >= target) b = mid;
+      if (cumulativeAt(Math.min(mid + 0.5, hi)) >= target) b = mid;
       else a = mid + 1;
     }
-    return a;
+    const from = Math.max(lo, a - 0.5);
+    const slope = valueOf(a);
+    const x = slope > 0 ? from + (target - cumulativeAt(from)) / slope : from;
+    return Math.min(hi, Math.max(lo, x));
   }
 
   /** Gibbs draw of a deposit from L_q on [lo, hi]. */
   private drawDeposit(sample: number, lo: number, hi: number, current: number): number {
     const L = this.likelihoods;
-    const below = L.cumulativeTo(sample, lo - 1);
-    const mass = L.cumulativeTo(sample, hi) - below;
+    const below = L.cumulativeAt(sample, lo);
+    const mass = L.cumulativeAt(sample, hi) - below;
     if (mass > BISECTION_FLOOR * L.totalMass(sample)) {
-      const target = below + (1 - this.random.uniform()) * mass;
-      let a = lo;
-      let b = hi;
-      while (a < b) {
-        const mid = (a + b) >> 1;
-        if (L.cumulativeTo(sample, mid) >= target) b = mid;
-        else a = mid + 1;
-      }
-      return a;
+      const target = below + this.random.uniform() * mass;
+      return this.invert((x) => L.cumulativeAt(sample, x), (y) => L.mixture(sample, y), lo, hi, target);
     }
+    // Too little mass for the cumulative sums' digits: weigh the years directly.
+    const first = yearOf(lo);
+    const last = Math.min(yearOf(hi), this.old);
     let sum = 0;
-    for (let x = lo; x <= hi; x++) sum += L.mixture(sample, x);
+    for (let y = first; y <= last; y++) sum += L.mixture(sample, y) * (Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5));
     if (!(sum > 0)) return current;
-    let target = (1 - this.random.uniform()) * sum;
-    for (let x = lo; x <= hi; x++) {
-      target -= L.mixture(sample, x);
-      if (target <= 0) return x;
+    let target = this.random.uniform() * sum;
+    for (let y = first; y <= last; y++) {
+      const from = Math.max(lo, y - 0.5);
+      const length = Math.min(hi, y + 0.5) - from;
+      const weight = L.mixture(sample, y) * length;
+      if (target <= weight && weight > 0) return from + (target / weight) * length;
+      target -= weight;
     }
     return hi;
   }
 
   /**
    * Independence MH update of a boundary. With the rest fixed, k = distance of the boundary
-   * beyond the extreme node has target (c + k)^-m on 0..K, c = span to the other boundary + 1.
-   * The proposal is the continuous density (c + x)^-m on [0, K + 1) binned to whole years, whose
-   * ratio to the target, w(k) = (c + k)^-m / int_k^k+1 (c + x)^-m dx, is near 1.
+   * beyond the extreme node has target (c + k)^-m / (W - c - k) on [0, K], c = distance from that
+   * node to the other boundary. The proposal is (c + x)^-m on [0, K] drawn exactly by inversion,
+   * so the acceptance ratio is the span correction's, (W - s) / (W - s').
    */
   private updateBoundary(isStart: boolean): void {
     const m = this.uniformCount;
@@ -338,91 +418,116 @@ export class OrderChain {
     const node = isStart ? 1 : 0;
     const other = this.values[isStart ? 0 : 1];
     const limit = isStart ? this.lowerBound(node) : this.upperBound(node);
-    const room = isStart ? this.old - limit : limit - this.young;
-    if (g.nodeCount <= 2 || room <= 0) {
+    const room = isStart ? this.oldEdge - limit : limit - this.youngEdge;
+    if (g.nodeCount <= 2 || !(room > 0)) {
       this.values[node] = limit;
       return;
     }
-    const c = isStart ? limit - other + 1 : other - limit + 1;
-    const logRatio = Math.log((c + room + 1) / c);
+    const c = isStart ? limit - other : other - limit;
+    if (!(c > 0)) return;
+    const logRatio = Math.log((c + room) / c);
     const u = this.random.uniform();
     let x: number;
     if (m === 1) {
       x = c * Math.exp(u * logRatio) - c;
     } else {
-      const tailShare = -Math.expm1((1 - m) * logRatio); // 1 - ((c + K + 1) / c)^(1 - m)
+      const tailShare = -Math.expm1((1 - m) * logRatio); // 1 - ((c + K) / c)^(1 - m)
       x = c * Math.exp(Math.log1p(-u * tailShare) / (1 - m)) - c;
     }
-    const proposed = Math.min(room, Math.max(0, Math.floor(x)));
+    const proposed = Math.min(room, Math.max(0, x));
     const current = isStart ? this.values[node] - limit : limit - this.values[node];
-    const logWeight = (k: number): number => {
-      const y = c + k;
-      const binned = m === 1 ? Math.log(Math.log1p(1 / y)) : Math.log(-Math.expm1((1 - m) * Math.log1p(1 / y)));
-      return -Math.log(y) - binned;
-    };
     this.boundaryProposed++;
-    if (Math.log(this.random.uniform()) < logWeight(proposed) - logWeight(current)) {
+    const W = this.windowLength;
+    const logAccept = Math.log(W - c - current) - Math.log(W - c - proposed);
+    if (!(W - c - proposed > 0)) return;
+    if (logAccept >= 0 || Math.log(this.random.uniform()) < logAccept) {
       this.values[node] = isStart ? limit + proposed : limit - proposed;
       this.boundaryAccepted++;
     }
   }
 
-  /** Whether the order graph has a path for `pathGibbs` to draw. */
+  /** Whether the order graph has a path for `pathUpdate` to draw. */
   get hasPaths(): boolean {
     return this.paths.length > 0;
   }
 
   /**
-   * Exact joint Gibbs draw of each path of the order given the rest. Along a path the full
-   * conditional is a chain: prod_k g_k(x_k) 1[lo <= x_1 <= ... <= x_n <= hi], with g = L_q for a
-   * deposit, 1 for an event and (alpha - beta + 1)^-m for the start boundary (beta is fixed), so
-   * forward cumulative sums C_k(x) = sum_{y <= x} g_k(y) C_{k-1}(y) and sampling back from the top
-   * (x_n from g_n C_{n-1}, then x_k from g_k C_{k-1} up to x_{k+1}) give an exact draw
-   * (Carter & Kohn 1994).
+   * Independence Metropolis-Hastings update of each path of the order given the rest. Along a
+   * path x_1 <= ... <= x_n in [lo, hi] the full conditional is prod_k g_k(x_k), with g = L_q for a
+   * deposit, 1 for an event and s^-m / (W - s) for the start boundary (beta is fixed).
+   *
+   * Proposal: years y_1 <= ... <= y_n are drawn exactly from prod_k w_k(y_k), w_k(y) = g^_k(y)
+   * l(y), where l(y) is the length of year y inside [lo, hi] and g^ is g (the start boundary's
+   * evaluated at the middle of its clipped year), by forward cumulative sums C_k(y) = sum_{z <= y}
+   * w_k(z) C_{k-1}(z) and sampling back from the top (Carter & Kohn 1994); then the ages of each
+   * run of r nodes sharing a year are r uniform points sorted, density r! / l^r. So the proposal
+   * density is q(x) = prod g^_k(y_k) prod_runs r! / Z, and with the target pi(x) ∝ prod g_k(x_k)
+   * the weight pi / q ∝ [g_start / g^_start] / prod_runs r! decides acceptance (Z cancels).
    *
    * Why: with outliers allowed, a column with one sample per unit has a second mode where the
-   * older samples are all outliers and the whole column shrinks to a short span, which the span
-   * prior (alpha - beta + 1)^-m rewards. Leaving or entering it means moving the start boundary and
-   * every age below it together; single-site Gibbs must pass states where either the span is long
-   * with nothing yet on its likelihood or a sample sits off it, and a block shift cannot change
-   * the span's length, so chains stayed in one mode for thousands of sweeps (split R-hat 1.16 on
-   * the inherited-gap test column). This draw crosses in one step with the right probability.
+   * older samples are all outliers and the column shrinks to a short span. Leaving or entering it
+   * means moving the start boundary and every age below it together, which single-site Gibbs and
+   * block shifts (which cannot change the span) do only slowly; this draw crosses in one step.
    */
-  pathGibbs(): void {
+  pathUpdate(): void {
     const L = this.likelihoods;
     const m = this.uniformCount;
     const f = this.forward;
     const r = this.random;
+    const W = this.windowLength;
+    const end = this.values[0];
     for (const path of this.paths) {
       const n = path.length;
       const topIsStart = path[n - 1] === 1;
       const lo = this.lowerBound(path[0]);
-      const hi = topIsStart ? this.old : this.upperBound(path[n - 1]);
-      const width = hi - lo + 1;
-      const end = this.values[0];
-      // The span weight relative to its largest value, ((x - beta + 1) / (lo - beta + 1))^-m <= 1.
-      const logShortest = Math.log(lo - end + 1);
+      const hi = topIsStart ? this.oldEdge : this.upperBound(path[n - 1]);
+      if (!(hi > lo)) continue;
+      const firstYear = yearOf(lo);
+      const lastYear = Math.min(yearOf(hi), this.old);
+      const width = lastYear - firstYear + 1;
+      const lengthOf = (y: number): number => Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5);
+      // The start boundary's weight at the middle of its clipped year, relative to its largest.
+      const logStartAt = (y: number): number => {
+        const middle = (Math.max(lo, y - 0.5) + Math.min(hi, y + 0.5)) / 2;
+        return logSpanPrior(middle - end, m, W);
+      };
+      const logStartTop = topIsStart ? logStartAt(firstYear) : 0;
+      const firstLength = lengthOf(firstYear);
+      const lastLength = lengthOf(lastYear);
+      const offset = firstYear - this.young;
       for (let k = 0; k < n; k++) {
         const node = path[k];
         const kind = this.graph.kind[node];
         const row = k * width;
-        const j = node - this.firstDeposit;
+        const previous = row - width;
         let running = 0;
-        for (let i = 0; i < width; i++) {
-          const x = lo + i;
-          const g =
-            kind === NodeKind.DEPOSIT
-              ? L.mixture(j, x)
-              : kind === NodeKind.START
-                ? Math.exp(-m * (Math.log(x - end + 1) - logShortest))
-                : 1;
-          running += k === 0 ? g : g * f[row - width + i];
-          f[row + i] = running;
+        if (kind === NodeKind.DEPOSIT) {
+          const values = L.mixtureValues(node - this.firstDeposit);
+          for (let i = 0; i < width; i++) {
+            const w = values[offset + i] * (i === 0 ? firstLength : i === width - 1 ? lastLength : 1);
+            running += k === 0 ? w : w * f[previous + i];
+            f[row + i] = running;
+          }
+        } else if (kind === NodeKind.START) {
+          for (let i = 0; i < width; i++) {
+            const length = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
+            const w = Math.exp(logStartAt(firstYear + i) - logStartTop) * length;
+            running += k === 0 ? w : w * f[previous + i];
+            f[row + i] = running;
+          }
+        } else {
+          for (let i = 0; i < width; i++) {
+            const w = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
+            running += k === 0 ? w : w * f[previous + i];
+            f[row + i] = running;
+          }
         }
         // Rescale each row to end at 1 so that long paths neither underflow nor overflow.
         if (!(running > 0)) return;
-        for (let i = 0; i < width; i++) f[row + i] /= running;
+        const scale = 1 / running;
+        for (let i = 0; i < width; i++) f[row + i] *= scale;
       }
+      const proposal = this.proposal;
       let upper = width - 1;
       for (let k = n - 1; k >= 0; k--) {
         const row = k * width;
@@ -434,8 +539,41 @@ export class OrderChain {
           if (f[row + mid] >= target) b = mid;
           else a = mid + 1;
         }
-        this.values[path[k]] = lo + a;
+        proposal[k] = firstYear + a;
         upper = a;
+      }
+      // Ages within years: each run sharing a year gets sorted uniform points in its clipped year.
+      let logWeightProposed = 0;
+      for (let k = 0; k < n; ) {
+        const y = proposal[k];
+        let e = k;
+        while (e + 1 < n && proposal[e + 1] === y) e++;
+        const from = Math.max(lo, y - 0.5);
+        const length = lengthOf(y);
+        for (let t = k; t <= e; t++) proposal[t] = from + length * r.uniform();
+        if (e > k) sortRange(proposal, k, e + 1);
+        logWeightProposed -= logFactorial(e - k + 1);
+        k = e + 1;
+      }
+      let logWeightCurrent = 0;
+      for (let k = 0; k < n; ) {
+        const y = yearOf(this.values[path[k]]);
+        let e = k;
+        while (e + 1 < n && yearOf(this.values[path[e + 1]]) === y) e++;
+        logWeightCurrent -= logFactorial(e - k + 1);
+        k = e + 1;
+      }
+      if (topIsStart) {
+        const proposedTop = proposal[n - 1];
+        const currentTop = this.values[1];
+        logWeightProposed += logSpanPrior(proposedTop - end, m, W) - logStartAt(yearOf(proposedTop));
+        logWeightCurrent += logSpanPrior(currentTop - end, m, W) - logStartAt(yearOf(currentTop));
+      }
+      this.pathProposed++;
+      const logAccept = logWeightProposed - logWeightCurrent;
+      if (logAccept >= 0 || Math.log(r.uniform()) < logAccept) {
+        for (let k = 0; k < n; k++) this.values[path[k]] = proposal[k];
+        this.pathAccepted++;
       }
     }
   }
@@ -453,14 +591,14 @@ export class OrderChain {
       else {
         const lo = this.lowerBound(node);
         const hi = this.upperBound(node);
-        if (kind === NodeKind.EVENT) this.values[node] = lo + this.random.integer(hi - lo + 1);
+        if (kind === NodeKind.EVENT) this.values[node] = lo + (hi - lo) * this.random.uniform();
         else this.values[node] = this.drawDeposit(node - this.firstDeposit, lo, hi, this.values[node]);
       }
     }
   }
 
   /**
-   * Metropolis shift of every node whose stages lie within a block by a symmetric integer step.
+   * Metropolis shift of every node whose stages lie within a block by a symmetric Gaussian step.
    * Shifting preserves the order inside the block; the edges leaving it are checked. The prior
    * changes only through the span when one boundary moves without the other.
    */
@@ -478,7 +616,7 @@ export class OrderChain {
       if (first > last) [first, last] = [last, first];
     }
     const scale = SHIFT_SCALES[r.integer(SHIFT_SCALES.length)];
-    const step = Math.round(scale * r.normal());
+    const step = scale * r.normal();
     if (step === 0) return;
     // Nodes are sorted by their first stage, so the block is a run of that order, filtered.
     const order = this.youngToOld;
@@ -503,8 +641,8 @@ export class OrderChain {
     const g = this.graph;
     const v = this.values;
     const inBlock = this.inBlock;
-    if (inBlock[1] && v[1] + step > this.old) return false;
-    if (inBlock[0] && v[0] + step < this.young) return false;
+    if (inBlock[1] && v[1] + step > this.oldEdge) return false;
+    if (inBlock[0] && v[0] + step < this.youngEdge) return false;
     const L = this.likelihoods;
     let ratio = 1;
     for (let k = 0; k < size; k++) {
@@ -523,16 +661,17 @@ export class OrderChain {
       }
       if (g.kind[node] === NodeKind.DEPOSIT) {
         const j = node - this.firstDeposit;
-        // With q > 0 each factor lies within about [q / W / max L, max L W / q], so the product of
-        // a few hundred stays far inside the double range.
-        ratio *= L.mixture(j, moved) / L.mixture(j, v[node]);
+        // With q > 0 each factor is bounded away from 0 and infinity where the chain can be, so
+        // the product of a few hundred stays inside the double range.
+        ratio *= L.at(j, moved) / L.at(j, v[node]);
         if (!(ratio > 0)) return false;
       }
     }
     if (inBlock[0] !== inBlock[1]) {
-      const span = v[1] - v[0] + 1;
+      const span = v[1] - v[0];
       const movedSpan = span + (inBlock[1] ? step : -step);
-      ratio *= Math.pow(span / movedSpan, this.uniformCount);
+      if (!(movedSpan > 0 && movedSpan < this.windowLength)) return false;
+      ratio *= Math.exp(logSpanPrior(movedSpan, this.uniformCount, this.windowLength) - logSpanPrior(span, this.uniformCount, this.windowLength));
     }
     return ratio >= 1 || this.random.uniform() < ratio;
   }
@@ -541,30 +680,21 @@ export class OrderChain {
   accumulate(into: PosteriorAccumulator): void {
     const g = this.graph;
     const L = this.likelihoods;
-    const young = into.youngCalBp;
     for (let k = 0; k < g.events.length; k++) {
       const node = 2 + k;
       const lo = this.lowerBound(node);
       const hi = this.upperBound(node);
-      const d = into.eventDifferences[k];
-      const weight = 1 / (hi - lo + 1);
-      d[lo - young] += weight;
-      d[hi - young + 1] -= weight;
-      into.eventOpen[k][lo - young]++;
-      into.eventOpen[k][hi - young + 1]--;
+      if (hi > lo) into.addInterval(into.eventDifferences[k], into.eventDirect[k], into.eventOpen[k], lo, hi, 1 / (hi - lo));
+      else into.addPoint(into.eventDirect[k], into.eventOpen[k], lo);
     }
     for (let j = 0; j < g.samples.length; j++) {
       const node = this.firstDeposit + j;
       const lo = this.lowerBound(node);
       const hi = this.upperBound(node);
-      const mass = L.massBetween(j, lo, hi);
+      const mass = L.cumulativeAt(j, hi) - L.cumulativeAt(j, lo);
       if (!(mass > 0)) continue;
-      const d = into.depositDifferences[j];
-      d[lo - young] += 1 / mass;
-      d[hi - young + 1] -= 1 / mass;
-      into.depositOpen[j][lo - young]++;
-      into.depositOpen[j][hi - young + 1]--;
-      into.outlierSums[j] += (L.flat * (hi - lo + 1)) / mass;
+      into.addInterval(into.depositDifferences[j], into.depositDirect[j], into.depositOpen[j], lo, hi, 1 / mass);
+      into.outlierSums[j] += (L.outlierCumulativeAt(j, hi) - L.outlierCumulativeAt(j, lo)) / mass;
     }
     into.draws++;
   }
@@ -573,8 +703,29 @@ export class OrderChain {
   impossibleDeposits(): number[] {
     const out: number[] = [];
     for (let j = 0; j < this.graph.samples.length; j++) {
-      if (!(this.likelihoods.mixture(j, this.values[this.firstDeposit + j]) > 0)) out.push(j);
+      if (!(this.likelihoods.at(j, this.values[this.firstDeposit + j]) > 0)) out.push(j);
     }
     return out;
+  }
+}
+
+const LOG_FACTORIALS = [0, 0];
+
+/** ln r! (exact sums, cached). */
+function logFactorial(r: number): number {
+  while (LOG_FACTORIALS.length <= r) LOG_FACTORIALS.push(LOG_FACTORIALS[LOG_FACTORIALS.length - 1] + Math.log(LOG_FACTORIALS.length));
+  return LOG_FACTORIALS[r];
+}
+
+/** Sort values[from, to) in place (insertion sort: runs within a year are short). */
+function sortRange(values: Float64Array, from: number, to: number): void {
+  for (let i = from + 1; i < to; i++) {
+    const v = values[i];
+    let k = i - 1;
+    while (k >= from && values[k] > v) {
+      values[k + 1] = values[k];
+      k--;
+    }
+    values[k + 1] = v;
   }
 }
