@@ -38,6 +38,21 @@ export type AddTieInput = {
   note?: InputMaybe<Scalars['String']['input']>;
 };
 
+/** A point of a core's age-depth curve: the posterior of the age of the sediment at one depth. */
+export type AgeDepthPoint = {
+  __typename?: 'AgeDepthPoint';
+  /** True depth below the core top, m. */
+  depthM: Scalars['Float']['output'];
+  /** Event-free depth (m): the depth with every event bed's thickness above it removed. */
+  eventFreeDepthM: Scalars['Float']['output'];
+  /** Old end of the central 95 % interval (97.5 % quantile), cal BP. */
+  high95CalBp: Scalars['Float']['output'];
+  /** Young end of the central 95 % interval (2.5 % quantile), cal BP. */
+  low95CalBp: Scalars['Float']['output'];
+  /** Posterior median age, cal BP. */
+  medianCalBp: Scalars['Float']['output'];
+};
+
 export type AgeModelDiagnostics = {
   __typename?: 'AgeModelDiagnostics';
   converged: Scalars['Boolean']['output'];
@@ -49,7 +64,11 @@ export type AgeModelDiagnostics = {
 /** One computation of a site's chronology from its column. */
 export type AgeModelRun = {
   __typename?: 'AgeModelRun';
+  /** HEMIPELAGIC_RATE runs: the age-depth curve at every contact and every 5 cm of true depth, top down; empty for ORDER_ONLY. */
+  ageDepth: Array<AgeDepthPoint>;
   createdAt: Scalars['DateTime']['output'];
+  /** The depth model the run used. */
+  depthModel: DepthModel;
   diagnostics?: Maybe<AgeModelDiagnostics>;
   events: Array<EventPosterior>;
   finishedAt?: Maybe<Scalars['DateTime']['output']>;
@@ -301,6 +320,8 @@ export type CreateSiteInput = {
 };
 
 export type CreateUnitInput = {
+  /** Estimated thickness (m) of mud the unit's base eroded; at least 0. */
+  basalErosionM?: InputMaybe<Scalars['Float']['input']>;
   baseDepthM: Scalars['Float']['input'];
   facies: Facies;
   name: Scalars['String']['input'];
@@ -350,6 +371,18 @@ export type DensityPoint = {
   calBp: Scalars['Int']['output'];
   probability: Scalars['Float']['output'];
 };
+
+/** How a run relates the ages of a column to depth. */
+export type DepthModel =
+  /**
+   * For cores of event beds in hemipelagic mud: ages follow event-free depth (the beds' thickness
+   * removed, each bed deposited at once) through mud accumulating at rates with a gamma prior and
+   * autoregressive memory between neighbouring depth sections (after Blaauw & Christen 2011,
+   * Bayesian Analysis 6(3):457-474); mud eroded under a bed lengthens its interval.
+   */
+  | 'HEMIPELAGIC_RATE'
+  /** Stratigraphic order only: events and samples lie in the order of their units, depth says nothing more (trenches, marshes, outcrops). */
+  | 'ORDER_ONLY';
 
 /** The contact at which an earthquake is interpreted: one site's event. */
 export type EventHorizon = {
@@ -1589,6 +1622,13 @@ export type StaleReason = {
 
 export type StartAgeModelRunInput = {
   chains?: InputMaybe<Scalars['Int']['input']>;
+  /** How ages relate to depth (default ORDER_ONLY). HEMIPELAGIC_RATE needs hemipelagic mud units and sample depths. */
+  depthModel?: InputMaybe<DepthModel>;
+  /**
+   * HEMIPELAGIC_RATE only: the prior mean hemipelagic accumulation rate, cm per thousand years. When
+   * left out it is measured from the dated levels (their median ages over their event-free depths).
+   */
+  hemipelagicRateCmPerKyr?: InputMaybe<Scalars['Float']['input']>;
   /** Scale of the exponential prior on inherited age offsets, years (default 100). */
   inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   /** Iterations per chain after burn-in. */
@@ -1640,6 +1680,8 @@ export type Tie = {
 /** A stratigraphic unit in a site's column. */
 export type Unit = {
   __typename?: 'Unit';
+  /** Estimated thickness (m) of mud the unit's base eroded from the unit below, e.g. a turbidite's scour; null when not estimated. */
+  basalErosionM?: Maybe<Scalars['Float']['output']>;
   baseDepthM: Scalars['Float']['output'];
   facies: Facies;
   id: Scalars['ID']['output'];
@@ -1707,6 +1749,8 @@ export type UpdateSiteInput = {
 };
 
 export type UpdateUnitInput = {
+  /** Estimated thickness (m) of mud the unit's base eroded; at least 0; null clears it. */
+  basalErosionM?: InputMaybe<Scalars['Float']['input']>;
   baseDepthM?: InputMaybe<Scalars['Float']['input']>;
   facies?: InputMaybe<Facies>;
   name?: InputMaybe<Scalars['String']['input']>;
@@ -2043,7 +2087,7 @@ export type SiteQueryVariables = Exact<{
 }>;
 
 
-export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
 
 export type CreateUnitMutationVariables = Exact<{
   input: CreateUnitInput;
@@ -3086,6 +3130,7 @@ export const SiteDocument = new TypedDocumentString(`
       topDepthM
       baseDepthM
       facies
+      basalErosionM
       notes
     }
     eventHorizons {
