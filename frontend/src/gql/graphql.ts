@@ -1012,6 +1012,8 @@ export type Query = {
   sample: Sample;
   segment: Segment;
   site: Site;
+  /** Proposed ties between two cores' turbidites, top down, in order down both cores (any member). */
+  tieSuggestions: Array<TieSuggestion>;
 };
 
 
@@ -1105,6 +1107,11 @@ export type QuerySegmentArgs = {
 
 export type QuerySiteArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type QueryTieSuggestionsArgs = {
+  input: TieSuggestionsInput;
 };
 
 /** A median with its 2.5-97.5 % Monte Carlo range. */
@@ -1675,6 +1682,33 @@ export type Tie = {
   evidence: Array<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   note?: Maybe<Scalars['String']['output']>;
+};
+
+/**
+ * A proposed tie between two cores' turbidites, from their logs' shared channels and the order of
+ * their beds: each bed's log signature is compared by dynamic time warping (Sakoe & Chiba 1978)
+ * and the pairs are chosen by an order-keeping alignment (Needleman & Wunsch 1970). Nothing is
+ * tied until a correlator accepts it (addTie with evidence "log match").
+ */
+export type TieSuggestion = {
+  __typename?: 'TieSuggestion';
+  /** The log channels compared. */
+  channels: Array<Scalars['String']['output']>;
+  /** The event at the base of the bed in the first core. */
+  eventA: EventHorizon;
+  /** The event at the base of the bed in the second core. */
+  eventB: EventHorizon;
+  /** Similarity of the two beds' log signatures, 0-1 (pairs below 0.5 are not proposed). */
+  score: Scalars['Float']['output'];
+  /** True when the hypothesis already ties this pair (it anchored the alignment). */
+  tied: Scalars['Boolean']['output'];
+};
+
+export type TieSuggestionsInput = {
+  hypothesisId: Scalars['ID']['input'];
+  /** Two different cores of the hypothesis's project, each with a core log; their logs must share a channel name. */
+  siteAId: Scalars['ID']['input'];
+  siteBId: Scalars['ID']['input'];
 };
 
 /** A stratigraphic unit in a site's column. */
