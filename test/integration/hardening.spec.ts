@@ -204,6 +204,24 @@ describe('bounds on uncertainties, sheets and bundles (issue 17, item 2)', () =>
   });
 });
 
+// Runs before the describes below that start more API instances in this process: passport's
+// strategy is process-wide, so a closed instance's would answer for this one's tokens.
+describe('the low items (issue 17, item 5)', () => {
+  const TRAIL = `query($i: AuditTrailInput!) { auditTrail(input: $i) { edges { node { objectType action before after } } } }`;
+
+  it("hides a pending invitation's address and role from a viewer's audit trail, not from an admin's", async () => {
+    await sql(`insert into audit_records (project_id, action, object_type, object_id, after) values ($1, 'invite', 'invitation', $2, $3)`, [
+      fixture.projectId, NO_SUCH_SITE, JSON.stringify({ email: 'pending@invited.test', role: 'ANALYST' }),
+    ]);
+    const admin = await new GraphqlClient(server.url).signIn(fixture.emails.ADMIN, PASSWORD);
+    const viewer = await new GraphqlClient(server.url).signIn(fixture.emails.VIEWER, PASSWORD);
+    const invitationOf = async (client: GraphqlClient) =>
+      (await client.ok(TRAIL, { i: { projectId: fixture.projectId, objectType: 'invitation' } })).auditTrail.edges[0].node;
+    expect(await invitationOf(viewer)).toEqual({ objectType: 'invitation', action: 'invite', before: null, after: null });
+    expect((await invitationOf(admin)).after).toEqual({ email: 'pending@invited.test', role: 'ANALYST' });
+  });
+});
+
 describe('sign-in throttling instead of lockout (issue 17, item 3)', () => {
   const SIGN_IN = 'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }';
   let proxied: TestServer;

@@ -70,7 +70,7 @@ export const BENCHMARKS: Benchmark[] = [
   {
     name: 'API under load',
     run: async () => {
-      const { ladder, ladderGrid, ladderUncached, import: sheet } = await benchApi();
+      const { ladder, ladderGrid, ladderUncached, import: sheet, probes } = await benchApi();
       const mib = (value: number | null) => (value === null ? 'n/a' : round(value, 0));
       const ladderRows = (r: LadderLoadBench, shape: string, targeted: boolean): BenchRow[] => [
         {
@@ -100,6 +100,11 @@ export const BENCHMARKS: Benchmark[] = [
         },
         { figure: '  same, validate only (s)', value: round(sheet.validateSeconds), target: '(no target)', met: true },
         { figure: '  API peak RSS after the import (MiB)', value: mib(sheet.peakRssMiB), target: '(no target)', met: true },
+        // Issue 17's probes: each refused or bounded quickly, with a small answer.
+        ...probes.flatMap((p): BenchRow[] => [
+          { figure: `probe: ${p.probe} (ms)`, value: round(p.ms, 0), target: '< 1500 ms', met: p.ms < 1500, note: p.outcome },
+          { figure: '  same, answer size (kB)', value: round(p.bytes / 1024, 1), target: '< 1024 kB', met: p.bytes < 1024 * 1024 },
+        ]),
       ];
     },
   },
