@@ -131,7 +131,11 @@ export type AuditRecord = {
   before?: Maybe<Scalars['JSON']['output']>;
   id: Scalars['ID']['output'];
   objectId: Scalars['ID']['output'];
+  /** The changed object's name (a site's name, a sample's lab code, ...); null when it has none. */
+  objectName?: Maybe<Scalars['String']['output']>;
   objectType: Scalars['String']['output'];
+  /** Names of the objects whose ids appear in before/after (the object itself, its site, unit, segment, ...). */
+  referencedNames: Array<NamedId>;
 };
 
 export type AuditTrailInput = {
@@ -890,6 +894,13 @@ export type MutationUpdateUnitArgs = {
 
 export type MutationUploadCoreLogArgs = {
   input: UploadCoreLogInput;
+};
+
+/** An id in an audit record's before/after images, with the name of what it identifies. */
+export type NamedId = {
+  __typename?: 'NamedId';
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
 };
 
 /**
@@ -1875,7 +1886,7 @@ export type AuditTrailQueryVariables = Exact<{
 }>;
 
 
-export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
+export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, objectName?: string | null, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null, referencedNames: Array<{ __typename?: 'NamedId', id: string, name: string }> } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
 
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
@@ -2438,6 +2449,11 @@ export const AuditTrailDocument = new TypedDocumentString(`
         action
         objectType
         objectId
+        objectName
+        referencedNames {
+          id
+          name
+        }
         before
         after
       }
