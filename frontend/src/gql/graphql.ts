@@ -131,7 +131,11 @@ export type AuditRecord = {
   before?: Maybe<Scalars['JSON']['output']>;
   id: Scalars['ID']['output'];
   objectId: Scalars['ID']['output'];
+  /** The changed object's name (a site's name, a sample's lab code, ...); null when it has none. */
+  objectName?: Maybe<Scalars['String']['output']>;
   objectType: Scalars['String']['output'];
+  /** Names of the objects whose ids appear in before/after (the object itself, its site, unit, segment, ...). */
+  referencedNames: Array<NamedId>;
 };
 
 export type AuditTrailInput = {
@@ -911,6 +915,13 @@ export type MutationUpdateUnitArgs = {
 
 export type MutationUploadCoreLogArgs = {
   input: UploadCoreLogInput;
+};
+
+/** An id in an audit record's before/after images, with the name of what it identifies. */
+export type NamedId = {
+  __typename?: 'NamedId';
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
 };
 
 /**
@@ -1936,7 +1947,7 @@ export type AuditTrailQueryVariables = Exact<{
 }>;
 
 
-export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
+export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, objectName?: string | null, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null, referencedNames: Array<{ __typename?: 'NamedId', id: string, name: string }> } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
 
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
@@ -1978,6 +1989,27 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+
+export type SiteCoreLogsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, topDepthM: number, baseDepthM: number, facies: Facies }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+
+export type UploadCoreLogMutationVariables = Exact<{
+  input: UploadCoreLogInput;
+}>;
+
+
+export type UploadCoreLogMutation = { __typename?: 'Mutation', uploadCoreLog: { __typename?: 'CoreLog', id: string, channels: Array<string> } };
+
+export type DeleteCoreLogMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteCoreLogMutation = { __typename?: 'Mutation', deleteCoreLog: boolean };
 
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
@@ -2478,6 +2510,11 @@ export const AuditTrailDocument = new TypedDocumentString(`
         action
         objectType
         objectId
+        objectName
+        referencedNames {
+          id
+          name
+        }
         before
         after
       }
@@ -2604,6 +2641,47 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+export const SiteCoreLogsDocument = new TypedDocumentString(`
+    query SiteCoreLogs($id: ID!) {
+  site(id: $id) {
+    id
+    units {
+      id
+      topDepthM
+      baseDepthM
+      facies
+    }
+    coreLogs {
+      id
+      name
+      channels
+      units
+      topDepthM
+      baseDepthM
+      rowCount
+      traces(maxPoints: 300) {
+        channel
+        unit
+        depthsM
+        values
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteCoreLogsQuery, SiteCoreLogsQueryVariables>;
+export const UploadCoreLogDocument = new TypedDocumentString(`
+    mutation UploadCoreLog($input: UploadCoreLogInput!) {
+  uploadCoreLog(input: $input) {
+    id
+    channels
+  }
+}
+    `) as unknown as TypedDocumentString<UploadCoreLogMutation, UploadCoreLogMutationVariables>;
+export const DeleteCoreLogDocument = new TypedDocumentString(`
+    mutation DeleteCoreLog($id: ID!) {
+  deleteCoreLog(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteCoreLogMutation, DeleteCoreLogMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
