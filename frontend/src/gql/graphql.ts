@@ -1929,6 +1929,27 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
 
+export type SiteCoreLogsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, topDepthM: number, baseDepthM: number, facies: Facies }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+
+export type UploadCoreLogMutationVariables = Exact<{
+  input: UploadCoreLogInput;
+}>;
+
+
+export type UploadCoreLogMutation = { __typename?: 'Mutation', uploadCoreLog: { __typename?: 'CoreLog', id: string, channels: Array<string> } };
+
+export type DeleteCoreLogMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteCoreLogMutation = { __typename?: 'Mutation', deleteCoreLog: boolean };
+
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -2573,6 +2594,47 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+export const SiteCoreLogsDocument = new TypedDocumentString(`
+    query SiteCoreLogs($id: ID!) {
+  site(id: $id) {
+    id
+    units {
+      id
+      topDepthM
+      baseDepthM
+      facies
+    }
+    coreLogs {
+      id
+      name
+      channels
+      units
+      topDepthM
+      baseDepthM
+      rowCount
+      traces(maxPoints: 300) {
+        channel
+        unit
+        depthsM
+        values
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteCoreLogsQuery, SiteCoreLogsQueryVariables>;
+export const UploadCoreLogDocument = new TypedDocumentString(`
+    mutation UploadCoreLog($input: UploadCoreLogInput!) {
+  uploadCoreLog(input: $input) {
+    id
+    channels
+  }
+}
+    `) as unknown as TypedDocumentString<UploadCoreLogMutation, UploadCoreLogMutationVariables>;
+export const DeleteCoreLogDocument = new TypedDocumentString(`
+    mutation DeleteCoreLog($id: ID!) {
+  deleteCoreLog(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteCoreLogMutation, DeleteCoreLogMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
