@@ -2130,7 +2130,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, stale: boolean, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, staleReasons: Array<{ __typename?: 'StaleReason', message: string, via: Array<string> }>, inputs: { __typename?: 'RecurrenceInputs', hypothesisVersion?: number | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string, name: string } }> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -2145,6 +2145,20 @@ export type CancelRecurrenceAnalysisMutationVariables = Exact<{
 
 
 export type CancelRecurrenceAnalysisMutation = { __typename?: 'Mutation', cancelRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
+
+export type RefreshStaleResultsMutationVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type RefreshStaleResultsMutation = { __typename?: 'Mutation', refreshStaleResults: { __typename?: 'RefreshPlan', id: string } };
+
+export type LatestRefreshQueryVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, label: string, status: string, message?: string | null }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, label: string, reason: string }> }> } };
 
 export type ProjectReleasesQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -3015,6 +3029,21 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
     createdAt
     finishedAt
     hypothesisVersion
+    stale
+    staleReasons {
+      message
+      via
+    }
+    inputs {
+      ageModelRuns {
+        id
+        site {
+          id
+          name
+        }
+      }
+      hypothesisVersion
+    }
     segment {
       id
       name
@@ -3149,6 +3178,37 @@ export const CancelRecurrenceAnalysisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelRecurrenceAnalysisMutation, CancelRecurrenceAnalysisMutationVariables>;
+export const RefreshStaleResultsDocument = new TypedDocumentString(`
+    mutation RefreshStaleResults($projectId: ID!) {
+  refreshStaleResults(projectId: $projectId) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<RefreshStaleResultsMutation, RefreshStaleResultsMutationVariables>;
+export const LatestRefreshDocument = new TypedDocumentString(`
+    query LatestRefresh($projectId: ID!) {
+  project(id: $projectId) {
+    id
+    refreshPlans {
+      id
+      status
+      createdAt
+      steps {
+        id
+        stage
+        label
+        status
+        message
+      }
+      skipped {
+        id
+        label
+        reason
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<LatestRefreshQuery, LatestRefreshQueryVariables>;
 export const ProjectReleasesDocument = new TypedDocumentString(`
     query ProjectReleases($id: ID!) {
   project(id: $id) {
