@@ -203,6 +203,8 @@ async function main() {
     PUBLIC_URL: publicUrl,
     FRONTEND_DIST: setting('FRONTEND_DIST', join(ROOT, 'frontend', 'dist')),
     DEMO_ACCOUNTS_FILE: demoAccountsFile,
+    // The captured-mail page (/dev/mail, loopback only) is for this local development instance.
+    DEV_MAIL_PAGE: setting('DEV_MAIL_PAGE', setting('NODE_ENV', 'development') === 'production' ? 'false' : 'true'),
   };
 
   process.on('SIGINT', () => supervisor.shutdown(0));

@@ -27,7 +27,8 @@ export async function createApp(config: AppConfig): Promise<NestExpressApplicati
   });
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();
-  app.set('trust proxy', 'loopback');
+  // Only the proxies the operator names (TRUST_PROXY) may say who the client is.
+  app.set('trust proxy', config.trustProxy.length > 0 ? [...config.trustProxy] : false);
   app.useBodyParser('json', { limit: '25mb' });
   // Security headers; the UI is served from this origin only and loads nothing from elsewhere.
   app.use(

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestServer, TestServer } from '../support/app';
-import { createProjectFixture, PASSWORD, ProjectFixture } from '../support/fixtures';
+import { createProjectFixture, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
 
 let server: TestServer;
@@ -35,6 +35,7 @@ function firstError(text: string): { message: string; extensions: { code?: strin
   return (JSON.parse(text) as { errors: { message: string; extensions: { code?: string; field?: string } }[] }).errors[0];
 }
 
+const runTag = Date.now().toString(36);
 const NO_SUCH_SITE = '00000000-0000-4000-8000-000000000000';
 
 describe('ids, NUL bytes and coercion (issue 17, item 4)', () => {
@@ -200,5 +201,127 @@ describe('bounds on uncertainties, sheets and bundles (issue 17, item 2)', () =>
     const wide = await send(JSON.stringify(bundle));
     expect(wide.status).toBe(400);
     expect(await wide.text()).toMatch(/calendarErrorYears must be at most 20000/);
+  });
+});
+
+// Runs before the describes below that start more API instances in this process: passport's
+// strategy is process-wide, so a closed instance's would answer for this one's tokens.
+describe('the low items (issue 17, item 5)', () => {
+  const TRAIL = `query($i: AuditTrailInput!) { auditTrail(input: $i) { edges { node { objectType action before after } } } }`;
+
+  it("hides a pending invitation's address and role from a viewer's audit trail, not from an admin's", async () => {
+    await sql(`insert into audit_records (project_id, action, object_type, object_id, after) values ($1, 'invite', 'invitation', $2, $3)`, [
+      fixture.projectId, NO_SUCH_SITE, JSON.stringify({ email: 'pending@invited.test', role: 'ANALYST' }),
+    ]);
+    const admin = await new GraphqlClient(server.url).signIn(fixture.emails.ADMIN, PASSWORD);
+    const viewer = await new GraphqlClient(server.url).signIn(fixture.emails.VIEWER, PASSWORD);
+    const invitationOf = async (client: GraphqlClient) =>
+      (await client.ok(TRAIL, { i: { projectId: fixture.projectId, objectType: 'invitation' } })).auditTrail.edges[0].node;
+    expect(await invitationOf(viewer)).toEqual({ objectType: 'invitation', action: 'invite', before: null, after: null });
+    expect((await invitationOf(admin)).after).toEqual({ email: 'pending@invited.test', role: 'ANALYST' });
+  });
+});
+
+describe('sign-in throttling instead of lockout (issue 17, item 3)', () => {
+  const SIGN_IN = 'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }';
+  let proxied: TestServer;
+
+  beforeAll(async () => {
+    // Behind a proxy on loopback whose X-Forwarded-For is believed: each test client names its address.
+    proxied = await startTestServer({ TRUST_PROXY: 'loopback' });
+  });
+
+  afterAll(async () => {
+    await proxied?.close();
+  });
+
+  async function signInFrom(base: string, client: string | undefined, email: string, password: string) {
+    const response = await fetch(`${base}/graphql`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', ...(client ? { 'x-forwarded-for': client } : {}) },
+      body: JSON.stringify({ query: SIGN_IN, variables: { e: email, p: password } }),
+    });
+    const body = (await response.json()) as { data?: { signIn: { token: string } }; errors?: { extensions: { code: string } }[] };
+    return body.errors?.[0]?.extensions.code ?? 'OK';
+  }
+
+  it('after twelve wrong passwords for unknown addresses from one client, a real account signs in from it', async () => {
+    const codes: string[] = [];
+    for (let i = 0; i < 12; i++) codes.push(await signInFrom(proxied.url, '203.0.113.7', `nobody-${i % 3}-${runTag}@unknown.test`, 'wrong-password'));
+    expect(codes.filter((code) => code === 'UNAUTHENTICATED').length).toBeGreaterThanOrEqual(12 - 3 * 2);
+    expect(await signInFrom(proxied.url, '203.0.113.7', fixture.emails.CORRELATOR, PASSWORD)).toBe('OK');
+  });
+
+  it("never refuses the right password for someone else's failures (another client)", async () => {
+    const email = fixture.emails.ADMIN;
+    for (let i = 0; i < 8; i++) await signInFrom(proxied.url, '198.51.100.9', email, 'stranger-guess');
+    expect(await signInFrom(proxied.url, '198.51.100.9', email, PASSWORD)).toBe('TOO_MANY_REQUESTS');
+    expect(await signInFrom(proxied.url, '192.0.2.44', email, PASSWORD)).toBe('OK');
+  });
+
+  it('keeps counts in PostgreSQL (shared by replicas) with hashed addresses, and a second server sees them', async () => {
+    const email = fixture.emails.RESEARCHER;
+    for (let i = 0; i < 5; i++) expect(await signInFrom(proxied.url, '198.51.100.20', email, 'guess')).toBe('UNAUTHENTICATED');
+    const replica = await startTestServer({ TRUST_PROXY: 'loopback' });
+    try {
+      expect(await signInFrom(replica.url, '198.51.100.20', email, PASSWORD)).toBe('TOO_MANY_REQUESTS');
+    } finally {
+      await replica.close();
+    }
+    const rows = await sql<{ key: string }>("select key from rate_limits where key like 'signin-%'");
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.some((row) => row.key.includes('@'))).toBe(false);
+  });
+
+  it('grows the delay: one second after the fifth failure, two after the sixth', async () => {
+    const email = `grow-${Date.now()}@unknown.test`;
+    for (let i = 0; i < 5; i++) expect(await signInFrom(proxied.url, '198.51.100.30', email, 'x')).toBe('UNAUTHENTICATED');
+    expect(await signInFrom(proxied.url, '198.51.100.30', email, 'x')).toBe('TOO_MANY_REQUESTS');
+    await new Promise((resolve) => setTimeout(resolve, 1100));
+    expect(await signInFrom(proxied.url, '198.51.100.30', email, 'x')).toBe('UNAUTHENTICATED');
+    await new Promise((resolve) => setTimeout(resolve, 1100));
+    expect(await signInFrom(proxied.url, '198.51.100.30', email, 'x')).toBe('TOO_MANY_REQUESTS');
+  });
+
+  it('ignores X-Forwarded-For unless TRUST_PROXY names the proxy', async () => {
+    const email = `spoof-${Date.now()}@unknown.test`;
+    for (let i = 0; i < 5; i++) await signInFrom(server.url, `10.0.0.${i}`, email, 'x');
+    // Every attempt counted against the one real client address, whatever the header said.
+    expect(await signInFrom(server.url, '10.0.0.99', email, 'x')).toBe('TOO_MANY_REQUESTS');
+  });
+
+  it('refuses an over-long password or e-mail before hashing (probe: a 10 MB password cost 0.7 s)', async () => {
+    const response = await post({ query: SIGN_IN, variables: { e: 'a@b.test', p: 'x'.repeat(10_000) } });
+    expect(response.status).toBe(200);
+    expect(firstError(response.text).extensions).toMatchObject({ code: 'BAD_USER_INPUT', field: 'password' });
+    const reset = await post({ query: 'mutation($e: String!) { requestPasswordReset(email: $e) }', variables: { e: `${'x'.repeat(400)}@b.test` } });
+    expect(firstError(reset.text).extensions).toMatchObject({ code: 'BAD_USER_INPUT', field: 'email' });
+  });
+});
+
+describe('/dev/mail (issue 17, item 5)', () => {
+  it('is not served without DEV_MAIL_PAGE=true', async () => {
+    expect((await fetch(`${server.url}/dev/mail`)).status).toBe(404);
+  });
+
+  it('with the flag, is served to loopback only, never through a proxy', async () => {
+    const dev = await startTestServer({ DEV_MAIL_PAGE: 'true', MAIL_FAKE_URL: 'http://127.0.0.1:9' });
+    try {
+      expect((await fetch(`${dev.url}/dev/mail`)).status).toBe(200);
+      expect((await fetch(`${dev.url}/dev/mail`, { headers: { 'x-forwarded-for': '203.0.113.5' } })).status).toBe(404);
+    } finally {
+      await dev.close();
+    }
+    const { isLocalRequest } = await import('../../backend/src/mail/dev-mail.controller');
+    expect(isLocalRequest({ headers: {}, socket: { remoteAddress: '192.168.1.20' } })).toBe(false);
+    expect(isLocalRequest({ headers: {}, socket: { remoteAddress: '::ffff:127.0.0.1' } })).toBe(true);
+  });
+
+  it('refuses DEV_MAIL_PAGE and lists bad TRUST_PROXY entries at boot', async () => {
+    const { loadConfig } = await import('../../backend/src/config/config');
+    const base = { DATABASE_URL: 'postgres://x', JWT_SECRET: 'x'.repeat(40) };
+    expect(() => loadConfig({ ...base, NODE_ENV: 'production', DEV_MAIL_PAGE: 'true' })).toThrow(/DEV_MAIL_PAGE must not be true in production/);
+    expect(() => loadConfig({ ...base, TRUST_PROXY: '10.0.0.1,not-an-address' })).toThrow(/TRUST_PROXY .* got "not-an-address"/);
+    expect(loadConfig({ ...base, TRUST_PROXY: '10.0.0.0/8, loopback' }).trustProxy).toEqual(['10.0.0.0/8', 'loopback']);
   });
 });

@@ -4,6 +4,7 @@
  */
 import { AgeModelResult } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
+import { AgeDepthPoint, HemipelagicSummary } from '../chronology/age-model/hemipelagic/hemipelagic-model';
 import { CalendarDensity, DensitySummary, normalise, trim } from '../chronology/common/density';
 
 export interface StoredDensity {
@@ -37,6 +38,9 @@ export interface StoredAgeModelResults {
   events: StoredEventPosterior[];
   samples: StoredSamplePosterior[];
   eventDraws: { eventHorizonIds: string[]; drawCount: number; draws: number[] };
+  /** HEMIPELAGIC_RATE runs only. */
+  ageDepth?: AgeDepthPoint[];
+  hemipelagic?: HemipelagicSummary;
 }
 
 /** A density trimmed of its negligible tails (below 1e-6 of the mass per year) and renormalised to unit mass. */
@@ -62,8 +66,17 @@ export function loadInput(stored: StoredAgeModelInput): AgeModelInput {
   return { ...stored, samples: stored.samples.map((s) => ({ ...s, likelihood: loadDensity(s.likelihood) })) };
 }
 
-export function storeResults(result: AgeModelResult): StoredAgeModelResults {
+export function storeResults(result: AgeModelResult & { ageDepth?: AgeDepthPoint[]; hemipelagic?: HemipelagicSummary }): StoredAgeModelResults {
+  const year = (v: number) => Math.round(v * 10) / 10;
   return {
+    ...(result.ageDepth
+      ? {
+          ageDepth: result.ageDepth.map((p) => ({
+            depthM: p.depthM, eventFreeDepthM: p.eventFreeDepthM, medianCalBp: year(p.medianCalBp), low95CalBp: year(p.low95CalBp), high95CalBp: year(p.high95CalBp),
+          })),
+        }
+      : {}),
+    ...(result.hemipelagic ? { hemipelagic: result.hemipelagic } : {}),
     events: result.events.map((e) => ({
       eventHorizonId: e.eventHorizonId,
       summary: e.summary,

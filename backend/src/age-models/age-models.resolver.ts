@@ -61,6 +61,16 @@ export class AgeModelsResolver {
       .map((e) => ({ ...e.summary, eventHorizon: horizons.get(e.eventHorizonId), rhat: e.rhat, ess: e.ess, density: densityPoints(e.density) }));
   }
 
+  @ResolveField('depthModel')
+  depthModel(@Parent() run: AgeModelRunRow): string {
+    return (run.settings as { depthModel?: string }).depthModel ?? 'ORDER_ONLY';
+  }
+
+  @ResolveField('ageDepth')
+  ageDepth(@Parent() run: AgeModelRunRow) {
+    return (run.results as StoredAgeModelResults | null)?.ageDepth ?? [];
+  }
+
   @ResolveField('samples')
   async samplesOf(@Parent() run: AgeModelRunRow) {
     const results = run.results as StoredAgeModelResults | null;

@@ -5,7 +5,9 @@ import { AuditService } from '../audit/audit.service';
 import { CalibrationService } from '../calibration/calibration.service';
 import { AuthUser } from '../auth/auth-user';
 import { DEFAULT_AGE_MODEL_SETTINGS } from '../chronology/age-model/age-model';
+import { DEFAULT_HEMIPELAGIC_RUN_SETTINGS, DEFAULT_HEMIPELAGIC_SETTINGS } from '../chronology/age-model/hemipelagic/hemipelagic-model';
 import { AgeModelInput, validateColumn } from '../chronology/age-model/column';
+import { hemipelagicProblems } from '../chronology/age-model/hemipelagic/core-depth';
 import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
@@ -21,6 +23,16 @@ import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
 /** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
 export const DEFAULT_ITERATIONS = 20_000;
+
+/** The hemipelagic model's chain settings (its steps are cheap and many) and its own settings. */
+function hemipelagicRunSettings(input: Omit<StartAgeModelRunInput, 'siteId'>) {
+  return {
+    iterations: input.iterations ?? DEFAULT_HEMIPELAGIC_RUN_SETTINGS.iterations,
+    burnIn: DEFAULT_HEMIPELAGIC_RUN_SETTINGS.burnIn,
+    thin: DEFAULT_HEMIPELAGIC_RUN_SETTINGS.thin,
+    hemipelagic: { ...DEFAULT_HEMIPELAGIC_SETTINGS, rateMeanCmPerKyr: input.hemipelagicRateCmPerKyr ?? null },
+  };
+}
 
 @Injectable()
 export class AgeModelsService {
@@ -49,7 +61,13 @@ export class AgeModelsService {
     // The revision is read before the column: a change in between makes the run look stale, never fresh.
     const columnRevision = (await this.sites.findById(site.id))?.columnRevision ?? site.columnRevision;
     const { model, fingerprint } = await this.columnOf(site);
-    const problems = validateColumn(model);
+    const depthModel = input.depthModel ?? 'ORDER_ONLY';
+    if (depthModel === 'HEMIPELAGIC_RATE') {
+      const unfit = hemipelagicProblems(model);
+      if (unfit.length > 0) throw badInput('depthModel', unfit.join('; '), { problems: unfit });
+    }
+    // The hemipelagic model dates an event from the mud's rate, so it needs no dated level below it.
+    const problems = validateColumn(model).filter((p) => depthModel === 'ORDER_ONLY' || p.code !== 'EVENT_NOT_DATED_BELOW');
     if (problems.length > 0) {
       throw badInput('siteId', `the column cannot be modelled: ${problems.map((p) => p.message).join('; ')}`, {
         problems: problems.map((p) => p.message),
@@ -63,6 +81,8 @@ export class AgeModelsService {
       outlierShiftScaleYears: input.outlierShiftScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.outlierShiftScaleYears,
       inheritanceScaleYears: input.inheritanceScaleYears ?? DEFAULT_AGE_MODEL_SETTINGS.inheritanceScaleYears,
       seed: input.seed ?? Math.floor(Math.random() * 2 ** 31),
+      depthModel,
+      ...(depthModel === 'HEMIPELAGIC_RATE' ? hemipelagicRunSettings(input) : {}),
     };
     const run = await this.database.transaction(async (tx) => {
       const row = await this.runs.insert(
@@ -113,7 +133,9 @@ export class AgeModelsService {
     ]);
     const fingerprint = fingerprints.get(site.id)!;
     const model: AgeModelInput = {
-      units: units.map((u) => ({ id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM })),
+      units: units.map((u) => ({
+        id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM, facies: u.facies, basalErosionM: u.basalErosionM,
+      })),
       eventHorizons: eventHorizons.map((h) => ({ id: h.id, name: h.name, unitBelowId: h.unitBelowId, unitAboveId: h.unitAboveId })),
       samples: await Promise.all(
         samples

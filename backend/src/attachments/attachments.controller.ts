@@ -60,7 +60,9 @@ export class AttachmentsController {
   @Get(':id')
   async download(@CurrentUser() user: AuthUser, @Param('id') id: string): Promise<StreamableFile> {
     const { attachment, bytes } = await this.attachments.download(user, id);
-    const inline = isImage(attachment.contentType) || attachment.contentType === 'application/pdf';
+    // Images show in the page; everything else, PDFs included (they can run scripts in a viewer on
+    // this origin), is a download.
+    const inline = isImage(attachment.contentType);
     const type = attachment.contentType.startsWith('text/') ? `${attachment.contentType}; charset=utf-8` : attachment.contentType;
     return new StreamableFile(Buffer.from(bytes), {
       type,

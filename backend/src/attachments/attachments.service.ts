@@ -7,7 +7,7 @@ import { AuthUser } from '../auth/auth-user';
 import { badInput, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { JobQueueService } from '../jobs/job-queue.service';
-import { ALLOWED_CONTENT_TYPES, isImage, sniffContentType } from './content-type';
+import { ALLOWED_CONTENT_TYPES, isImage, safeFileName, sniffContentType } from './content-type';
 import { AttachmentOwner, AttachmentRow, AttachmentsRepository } from './attachments.repository';
 import { ObjectStorageService } from './object-storage.service';
 import { thumbnailKeyOf, ThumbnailJob } from './thumbnail.job';
@@ -72,7 +72,7 @@ export class AttachmentsService {
     await this.access.requireAccess({ user, permission: Permission.StratigraphyWrite, projectId, objectName });
     if (bytes.length === 0) throw badInput('file', 'the file is empty');
     if (bytes.length > MAX_ATTACHMENT_BYTES) throw badInput('file', `the file is larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
-    const name = fileName.trim().replace(/[\\/]+/g, '_');
+    const name = safeFileName(fileName);
     const contentType = sniffContentType(bytes, name);
     if (!contentType) {
       throw badInput('file', `the file's content is not an allowed type (PNG, JPEG, PDF, CSV or plain UTF-8 text); allowed: ${ALLOWED_CONTENT_TYPES.join(', ')}`);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isUtf8Text, sniffContentType } from './content-type';
+import { isUtf8Text, safeFileName, sniffContentType } from './content-type';
 
 // A 1x1 PNG laid out per the PNG specification (RFC 2083 section 3): signature, IHDR (13 bytes),
 // IDAT, IEND [published layout]. Only the layout matters for sniffing; its IDAT's zlib check
@@ -56,5 +56,20 @@ describe(isUtf8Text.name, () => {
 
   it('accepts multi-byte text', () => {
     expect(isUtf8Text(Buffer.from('€ 14C ±30 — ü', 'utf8'))).toBe(true);
+  });
+});
+
+describe('safeFileName', () => {
+  it('strips bidi overrides and control characters (issue 17)', () => {
+    expect(safeFileName('report\u202Efdp.exe')).toBe('reportfdp.exe');
+    expect(safeFileName('a\u2066b\u2069c\u200F\u061C.pdf')).toBe('abc.pdf');
+    expect(safeFileName('line\nbreak\u0000\u0085.txt')).toBe('linebreak.txt');
+  });
+
+  it('replaces path separators, keeps other letters, and never answers empty', () => {
+    expect(safeFileName('../../etc\\passwd')).toBe('.._.._etc_passwd');
+    expect(safeFileName('Tarn core é 2.png')).toBe('Tarn core é 2.png');
+    expect(safeFileName('\u202E ')).toBe('file');
+    expect(safeFileName('x'.repeat(300))).toHaveLength(255);
   });
 });

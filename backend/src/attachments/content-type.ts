@@ -47,3 +47,19 @@ export function sniffContentType(bytes: Uint8Array, fileName: string): Attachmen
 export function isImage(contentType: string): boolean {
   return contentType === 'image/png' || contentType === 'image/jpeg';
 }
+
+/**
+ * Characters a stored file name may not keep: control characters (C0, DEL, C1) and the Unicode
+ * bidirectional formatting characters (Unicode Standard Annex #9: LRM, RLM, ALM, LRE..RLO,
+ * LRI..PDI), which can make `report\u202Efdp.exe` read as `reportexe.pdf`.
+ */
+const UNSAFE_NAME_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
+
+/** Longest stored file name, characters. */
+export const MAX_FILE_NAME_LENGTH = 255;
+
+/** A file name as stored and sent back: no path separators, controls or bidi overrides; never empty. */
+export function safeFileName(fileName: string): string {
+  const cleaned = fileName.replace(UNSAFE_NAME_CHARACTERS, '').replace(/[\\/]+/g, '_').trim().slice(0, MAX_FILE_NAME_LENGTH);
+  return cleaned === '' ? 'file' : cleaned;
+}

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { AccessService } from '../access/access.service';
-import { Permission } from '../access/permissions';
+import { Permission, roleAllows } from '../access/permissions';
 import { AuthUser } from '../auth/auth-user';
 import { badInput } from '../common/errors/domain-error';
 import { users } from '../database/schema';
@@ -24,7 +24,19 @@ export interface AuditConnection {
   pageInfo: { endCursor: string | null; hasNextPage: boolean };
 }
 
-/** The project's audit trail, newest first, filtered and paginated by cursor. */
+/**
+ * Object types whose audit images only readers with a permission may see, as the API's own
+ * fields show them: pending invitations (addresses, roles) to those who manage members.
+ */
+const REDACTED_IMAGES: Readonly<Record<string, Permission>> = {
+  invitation: Permission.MembersManage,
+};
+
+/**
+ * The project's audit trail, newest first, filtered and paginated by cursor. Records of objects
+ * the reader's role may not see keep who, when, what action and which object, without their
+ * before and after images.
+ */
 @Injectable()
 export class AuditTrailService {
   constructor(
@@ -33,7 +45,8 @@ export class AuditTrailService {
   ) {}
 
   async trail(user: AuthUser, input: AuditTrailInput): Promise<AuditConnection> {
-    await this.access.requireAccess({ user, permission: Permission.AuditRead, projectId: input.projectId });
+    const role = await this.access.requireAccess({ user, permission: Permission.AuditRead, projectId: input.projectId });
+    const hidden = (objectType: string) => Object.hasOwn(REDACTED_IMAGES, objectType) && !roleAllows(role, REDACTED_IMAGES[objectType]);
     const first = input.first ?? AUDIT_PAGE_DEFAULT;
     const beforeSeq = input.after === undefined ? undefined : decodeAuditCursor(input.after);
     if (input.after !== undefined && beforeSeq === undefined) throw badInput('after', 'this cursor is not from the audit trail');
@@ -59,8 +72,8 @@ export class AuditTrailService {
         action: record.action,
         objectType: record.objectType,
         objectId: record.objectId,
-        before: record.before,
-        after: record.after,
+        before: hidden(record.objectType) ? null : record.before,
+        after: hidden(record.objectType) ? null : record.after,
       },
     }));
     return { edges, pageInfo: { endCursor: edges.at(-1)?.cursor ?? null, hasNextPage: rows.length > first } };

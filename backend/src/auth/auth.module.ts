@@ -4,7 +4,9 @@ import { PassportModule } from '@nestjs/passport';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { UsersModule } from '../users/users.module';
 import { AuthResolver } from './auth.resolver';
+import { AttemptThrottle } from './attempt-throttle';
 import { AuthService } from './auth.service';
+import { RateLimitsRepository } from './rate-limits.repository';
 import { jwtKey } from './jwt-key';
 import { JwtStrategy } from './jwt.strategy';
 
@@ -18,7 +20,7 @@ import { JwtStrategy } from './jwt.strategy';
       useFactory: (config: AppConfig) => ({ secret: jwtKey(config.jwtSecret), signOptions: { algorithm: 'HS256' } }),
     }),
   ],
-  providers: [AuthService, AuthResolver, JwtStrategy],
-  exports: [AuthService, JwtModule],
+  providers: [AuthService, AuthResolver, JwtStrategy, AttemptThrottle, RateLimitsRepository],
+  exports: [AuthService, AttemptThrottle, JwtModule],
 })
 export class AuthModule {}

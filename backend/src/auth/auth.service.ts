@@ -1,8 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { APP_CONFIG, AppConfig } from '../config/config';
-import { DomainError, unauthenticated } from '../common/errors/domain-error';
-import { AttemptLimiter } from './attempt-limiter';
+import { unauthenticated } from '../common/errors/domain-error';
+import { requireBoundedCredentials } from './account-rules';
+import { AttemptThrottle } from './attempt-throttle';
 import { UserRow, UsersRepository } from '../users/users.repository';
 import { DUMMY_HASH, verifyPassword } from './passwords';
 import { TokenClaims } from './token-claims';
@@ -14,26 +15,28 @@ export interface AuthPayload {
 
 @Injectable()
 export class AuthService {
-  private readonly limiter = new AttemptLimiter();
-
   constructor(
+    private readonly throttle: AttemptThrottle,
     private readonly users: UsersRepository,
     private readonly jwt: JwtService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
-  /** Check e-mail and password; the same error for an unknown e-mail and a wrong password. */
+  /**
+   * Check e-mail and password; the same error for an unknown e-mail and a wrong password.
+   * Failures are throttled per (e-mail, client) and per client (AttemptThrottle), never locked
+   * per address, so nobody's failures refuse someone else's right password.
+   */
   async signIn(email: string, password: string, clientAddress: string): Promise<AuthPayload> {
-    const keys = [`email:${email.trim().toLowerCase()}`, `ip:${clientAddress}`];
-    const wait = this.limiter.retryAfterSeconds(keys);
-    if (wait > 0) throw new DomainError('TOO_MANY_REQUESTS', `too many failed sign-ins; try again in ${Math.ceil(wait / 60)} minutes`);
+    requireBoundedCredentials(email, password);
+    await this.throttle.checkSignIn(email, clientAddress);
     const user = await this.users.findByEmail(email.trim());
     const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !user.passwordHash || !ok) {
-      this.limiter.record(keys);
+      await this.throttle.recordSignInFailure(email, clientAddress);
       throw unauthenticated('e-mail or password is wrong');
     }
-    this.limiter.recordSuccess(keys);
+    await this.throttle.recordSignInSuccess(email, clientAddress);
     return this.issue(user);
   }
 

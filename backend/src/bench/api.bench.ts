@@ -43,6 +43,15 @@ export interface ImportBench {
   peakRssMiB: number | null;
 }
 
+/** One of issue 17's probes, replayed: how long the API took and how much it answered. */
+export interface ProbeBench {
+  probe: string;
+  ms: number;
+  bytes: number;
+  /** The first error code, or 'OK'. */
+  outcome: string;
+}
+
 export interface ApiBench {
   /** The ladder query with its densities as points (the page itself now asks for densityGrid). */
   ladder: LadderLoadBench;
@@ -51,6 +60,8 @@ export interface ApiBench {
   /** The page query with the answer cache off (`LADDER_CACHE_MIB=0`): every request executed. */
   ladderUncached: LadderLoadBench;
   import: ImportBench;
+  /** Issue 17's probes with their time and answer size (refused or bounded). */
+  probes: ProbeBench[];
 }
 
 /** What this file uses of autocannon (which ships no types). */
@@ -326,6 +337,30 @@ async function benchImport(url: string, token: string, pool: Pool, projectId: st
   return { rows: outcome.rowCount, validateSeconds, commitSeconds, committed: outcome.committed, errors: outcome.errors.length, peakRssMiB: peakRssMiB(pid) };
 }
 
+/** Replay issue 17's probes once each (bounded: a handful of requests to the local API). */
+async function benchProbes(url: string, token: string, pool: Pool, projectId: string, email: string): Promise<ProbeBench[]> {
+  const site = await pool.query<{ id: string }>(`select id from sites where project_id = $1 and name = 'Bench import trench'`, [projectId]);
+  const aliases = (n: number, field: (i: number) => string) => Array.from({ length: n }, (_, i) => field(i)).join(' ');
+  const duplicates = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve', ...Array.from({ length: 2000 }, () => 'DUP-1,1,2.5,RADIOCARBON,DETRITAL_CHARCOAL,2450,30,INTCAL20')].join('\n');
+  const probes: [string, string | undefined, string, Record<string, unknown>][] = [
+    ['20 aliased calibrate, c14Error 1,000,000', token, `{ ${aliases(20, (i) => `c${i}: calibrate(input: { c14Age: 3000, c14Error: 1000000, curve: INTCAL20 }) { density { calBp probability } }`)} }`, {}],
+    ['one calibrate at the widest allowed error (20,000)', token, '{ calibrate(input: { c14Age: 3000, c14Error: 20000, curve: INTCAL20 }) { density { calBp probability } } }', {}],
+    ['calibrateLuminescence, errorYears 1,000,000', token, '{ calibrateLuminescence(input: { ageYears: 5000, errorYears: 1000000, measurementYear: 2020 }) { medianCalBp } }', {}],
+    ['100 aliased hypothesis { regionalEvents }', token, `{ ${aliases(100, (i) => `h${i}: hypothesis(id: "00000000-0000-4000-8000-000000000000") { regionalEvents { id } }`)} }`, {}],
+    ['20 aliased signIn with the right password', undefined, `mutation { ${aliases(20, (i) => `s${i}: signIn(email: "${email}", password: "${PASSWORD}") { token }`)} }`, {}],
+    ['2,000-row lab sheet of one duplicated lab code', token, IMPORT_MUTATION, { i: { siteId: site.rows[0]?.id, csv: duplicates, commit: false } }],
+    ['site(id: "42")', token, '{ site(id: "42") { id } }', {}],
+  ];
+  const results: ProbeBench[] = [];
+  for (const [probe, bearer, query, variables] of probes) {
+    const started = performance.now();
+    const answer = await graphql<unknown>(url, bearer, query, variables);
+    const code = (answer.errors?.[0] as { extensions?: { code?: string } } | undefined)?.extensions?.code;
+    results.push({ probe, ms: performance.now() - started, bytes: answer.bytes, outcome: answer.errors?.length ? (code ?? 'ERROR') : 'OK' });
+  }
+  return results;
+}
+
 /** Seed, start the API, load the ladder, import a sheet; the bench database is dropped afterwards. */
 export async function benchApi(): Promise<ApiBench> {
   const config = loadConfig();
@@ -353,7 +388,8 @@ export async function benchApi(): Promise<ApiBench> {
     const ladderUncached = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_GRID_QUERY);
     await waitUntilQuiet(pool);
     const imported = await benchImport(api.url, token, pool, projectId, api.child.pid);
-    return { ladder, ladderGrid, ladderUncached, import: imported };
+    const probes = await benchProbes(api.url, token, pool, projectId, email);
+    return { ladder, ladderGrid, ladderUncached, import: imported, probes };
   } finally {
     api?.child.kill('SIGKILL');
     await pool.end();

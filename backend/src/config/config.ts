@@ -2,6 +2,7 @@
  * The one typed configuration object, read once at boot. This is the only module that reads
  * `process.env`; a bad or missing variable fails the start with every problem listed at once.
  */
+import { isIP } from 'node:net';
 
 export interface AppConfig {
   readonly nodeEnv: 'development' | 'test' | 'production';
@@ -40,6 +41,14 @@ export interface AppConfig {
   readonly operatorEmails: readonly string[];
   /** Memory for serialised event-ladder answers per API process, MiB; 0 turns the cache off. */
   readonly ladderCacheMiB: number;
+  /**
+   * Reverse proxies whose `X-Forwarded-For` is believed (TRUST_PROXY: comma-separated addresses,
+   * CIDR ranges or Express's names loopback, linklocal, uniquelocal); empty believes none, so the
+   * client address (which sign-in throttling keys on) is the connection's own.
+   */
+  readonly trustProxy: readonly string[];
+  /** Serve `/dev/mail` (captured mail) to loopback clients: DEV_MAIL_PAGE=true, never in production. */
+  readonly devMailPage: boolean;
 }
 
 export class ConfigError extends Error {
@@ -80,6 +89,17 @@ export function loadConfig(env: Env = process.env): AppConfig {
     if (!/^[^\s@]+@[^\s@]+$/.test(email)) problems.push(`OPERATOR_EMAILS must be comma-separated e-mail addresses, got "${email}"`);
   }
   if (seedDemo && nodeEnv === 'production') problems.push('SEED_DEMO must not be true in production');
+  const trustProxy = (env.TRUST_PROXY ?? '').split(',').map((entry) => entry.trim()).filter((entry) => entry !== '');
+  for (const entry of trustProxy) {
+    const [address, bits, extra] = entry.split('/');
+    const namedRange = ['loopback', 'linklocal', 'uniquelocal'].includes(entry);
+    const validBits = bits === undefined || (/^\d{1,3}$/.test(bits) && Number(bits) <= (isIP(address) === 6 ? 128 : 32));
+    if (!namedRange && (extra !== undefined || isIP(address) === 0 || !validBits)) {
+      problems.push(`TRUST_PROXY must list addresses, CIDR ranges or loopback/linklocal/uniquelocal, got "${entry}"`);
+    }
+  }
+  const devMailPage = env.DEV_MAIL_PAGE === 'true';
+  if (devMailPage && nodeEnv === 'production') problems.push('DEV_MAIL_PAGE must not be true in production');
   const config: AppConfig = {
     nodeEnv,
     host: env.HOST ?? '127.0.0.1',
@@ -112,6 +132,8 @@ export function loadConfig(env: Env = process.env): AppConfig {
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
     operatorEmails,
     ladderCacheMiB: integer('LADDER_CACHE_MIB', 64, 0, 16_384),
+    trustProxy,
+    devMailPage,
   };
   if (problems.length > 0) throw new ConfigError(problems);
   return config;

@@ -6,6 +6,11 @@ import { AgeModelsModule } from '../age-models/age-models.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { SitesModule } from '../sites/sites.module';
 import { UsersModule } from '../users/users.module';
+import { CoreLogsModule } from '../core-logs/core-logs.module';
+import { EventHorizonsModule } from '../event-horizons/event-horizons.module';
+import { UnitsModule } from '../units/units.module';
+import { TieSuggestionsResolver } from './tie-suggestions.resolver';
+import { TieSuggestionsService } from './tie-suggestions.service';
 import { CorrelationDataService } from './correlation-data.service';
 import { EventLadderService } from './event-ladder.service';
 import { HypothesesRepository } from './hypotheses.repository';
@@ -14,7 +19,7 @@ import { HypothesesService } from './hypotheses.service';
 
 /** Correlation hypotheses, their ties and checks, and the event ladder. */
 @Module({
-  imports: [ProjectsModule, SitesModule, UsersModule, AgeModelsModule],
+  imports: [ProjectsModule, SitesModule, UsersModule, AgeModelsModule, CoreLogsModule, UnitsModule, EventHorizonsModule],
   providers: [
     EventLadderCache,
     LadderRevisionRepository,
@@ -26,6 +31,8 @@ import { HypothesesService } from './hypotheses.service';
     ProjectHypothesesResolver,
     EventLadderResolver,
     LadderEventResolver,
+    TieSuggestionsService,
+    TieSuggestionsResolver,
   ],
   exports: [HypothesesService, CorrelationDataService, EventLadderCache],
 })

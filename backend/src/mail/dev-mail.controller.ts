@@ -1,4 +1,5 @@
-import { Controller, Get, Header, Inject, NotFoundException } from '@nestjs/common';
+import { Controller, Get, Header, Inject, NotFoundException, Req } from '@nestjs/common';
+import type { Request } from 'express';
 import { Public } from '../common/decorators/public.decorator';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import type { CapturedMessage } from '../fakes/smtp-fake';
@@ -31,7 +32,22 @@ export function renderMailPage(messages: CapturedMessage[] | undefined, problem?
   );
 }
 
-/** `GET /dev/mail`: the mail the local SMTP fake captured. Answers 404 in production. */
+const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|::ffff:127\.\d+\.\d+\.\d+)$/;
+
+/**
+ * Whether a request may read captured mail: straight from a loopback connection, not relayed by a
+ * proxy (a proxy on this machine would make every visitor look local).
+ */
+export function isLocalRequest(request: Pick<Request, 'headers'> & { socket: { remoteAddress?: string } }): boolean {
+  const relayed = request.headers['x-forwarded-for'] !== undefined || request.headers.forwarded !== undefined;
+  return !relayed && LOOPBACK.test(request.socket.remoteAddress ?? '');
+}
+
+/**
+ * `GET /dev/mail`: the mail the local SMTP fake captured (reset and invitation links). Only with
+ * DEV_MAIL_PAGE=true (npm start sets it; never in production) and only to loopback clients;
+ * 404 otherwise, as if there were no such page.
+ */
 @Controller('dev')
 export class DevMailController {
   constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {}
@@ -40,9 +56,9 @@ export class DevMailController {
   @Get('mail')
   @Header('content-type', 'text/html; charset=utf-8')
   @Header('cache-control', 'no-store')
-  async mail(): Promise<string> {
+  async mail(@Req() request: Request): Promise<string> {
     const listingUrl = this.config.mailFakeUrl;
-    if (this.config.nodeEnv === 'production' || !listingUrl) throw new NotFoundException();
+    if (!this.config.devMailPage || this.config.nodeEnv === 'production' || !listingUrl || !isLocalRequest(request)) throw new NotFoundException();
     try {
       const response = await fetch(`${listingUrl}/messages`, { signal: AbortSignal.timeout(5000) });
       if (!response.ok) return renderMailPage(undefined, `the SMTP fake at ${listingUrl} answered ${response.status}`);

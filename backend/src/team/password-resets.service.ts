@@ -1,9 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { AuditService } from '../audit/audit.service';
-import { AttemptLimiter } from '../auth/attempt-limiter';
-import { normaliseEmail, requirePasswordLength } from '../auth/account-rules';
+import { normaliseEmail, requireBoundedCredentials, requirePasswordLength } from '../auth/account-rules';
+import { AttemptThrottle } from '../auth/attempt-throttle';
 import { hashPassword } from '../auth/passwords';
-import { badInput, DomainError } from '../common/errors/domain-error';
+import { badInput } from '../common/errors/domain-error';
 import { hashToken, issueToken, PASSWORD_RESET_LIFETIME_MS, TokenRefusal, tokenRefusal } from '../common/one-time-token';
 import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
@@ -19,18 +19,10 @@ const REFUSALS: Record<TokenRefusal | 'unknown', string> = {
   expired: 'this reset link has expired; ask for a new one',
 };
 
-/** Reset e-mails per address and requests per client address in an hour [common practice]. */
-const RESETS_PER_EMAIL = 5;
-const RESETS_PER_CLIENT = 30;
-const RESET_WINDOW_MS = 60 * 60_000;
-
 @Injectable()
 export class PasswordResetsService {
-  // Every request counts, whether or not the address has an account, so the limit reveals nothing.
-  private readonly perEmail = new AttemptLimiter(RESETS_PER_EMAIL, RESET_WINDOW_MS);
-  private readonly perClient = new AttemptLimiter(RESETS_PER_CLIENT, RESET_WINDOW_MS);
-
   constructor(
+    private readonly throttle: AttemptThrottle,
     private readonly database: DatabaseService,
     private readonly resets: PasswordResetsRepository,
     private readonly users: UsersRepository,
@@ -45,13 +37,9 @@ export class PasswordResetsService {
    * Requests are limited per address and per client, so nobody can flood an inbox.
    */
   async requestReset(emailInput: string, clientAddress: string): Promise<true> {
+    requireBoundedCredentials(emailInput);
     const email = normaliseEmail(emailInput);
-    const emailKey = [`email:${email}`];
-    const clientKey = [`ip:${clientAddress}`];
-    const wait = Math.max(this.perEmail.retryAfterSeconds(emailKey), this.perClient.retryAfterSeconds(clientKey));
-    if (wait > 0) throw new DomainError('TOO_MANY_REQUESTS', `too many password-reset requests; try again in ${Math.ceil(wait / 60)} minutes`);
-    this.perEmail.record(emailKey);
-    this.perClient.record(clientKey);
+    await this.throttle.takeResetRequest(email, clientAddress);
     const user = await this.users.findByEmail(email);
     if (!user) {
       await this.mail.checkReachable();
@@ -72,9 +60,12 @@ export class PasswordResetsService {
     return true;
   }
 
-  /** Set a new password with a reset token; single-use, and any other open reset ends too. */
-  resetPassword(input: ResetPasswordInput): Promise<true> {
-    return this.database.transaction(async (tx) => {
+  /**
+   * Set a new password with a reset token; single-use, and any other open reset ends too. The
+   * address's sign-in failures are forgotten, from every client.
+   */
+  async resetPassword(input: ResetPasswordInput): Promise<true> {
+    const userId = await this.database.transaction(async (tx) => {
       const now = new Date();
       const reset = await this.resets.findByTokenHashForUpdate(hashToken(input.token.trim()), tx);
       if (!reset) throw badInput('token', REFUSALS.unknown);
@@ -88,7 +79,10 @@ export class PasswordResetsService {
         actor: null, projectId: null, action: 'reset', objectType: 'user', objectId: reset.userId,
         after: { passwordResetId: reset.id },
       });
-      return true as const;
+      return reset.userId;
     });
+    const user = await this.users.findById(userId);
+    if (user) await this.throttle.clearSignIns(user.email);
+    return true;
   }
 }

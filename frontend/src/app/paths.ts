@@ -19,7 +19,7 @@ export const routePatterns = {
 } as const;
 
 /** Tabs of the site page, kept in the `tab` search parameter so each can be linked to. */
-export type SiteTab = 'column' | 'samples' | 'calibration' | 'files';
+export type SiteTab = 'column' | 'samples' | 'calibration' | 'logs' | 'files';
 
 export const paths = {
   signIn: ({ next }: { next?: string } = {}) =>

@@ -38,6 +38,21 @@ export type AddTieInput = {
   note?: InputMaybe<Scalars['String']['input']>;
 };
 
+/** A point of a core's age-depth curve: the posterior of the age of the sediment at one depth. */
+export type AgeDepthPoint = {
+  __typename?: 'AgeDepthPoint';
+  /** True depth below the core top, m. */
+  depthM: Scalars['Float']['output'];
+  /** Event-free depth (m): the depth with every event bed's thickness above it removed. */
+  eventFreeDepthM: Scalars['Float']['output'];
+  /** Old end of the central 95 % interval (97.5 % quantile), cal BP. */
+  high95CalBp: Scalars['Float']['output'];
+  /** Young end of the central 95 % interval (2.5 % quantile), cal BP. */
+  low95CalBp: Scalars['Float']['output'];
+  /** Posterior median age, cal BP. */
+  medianCalBp: Scalars['Float']['output'];
+};
+
 export type AgeModelDiagnostics = {
   __typename?: 'AgeModelDiagnostics';
   converged: Scalars['Boolean']['output'];
@@ -49,7 +64,11 @@ export type AgeModelDiagnostics = {
 /** One computation of a site's chronology from its column. */
 export type AgeModelRun = {
   __typename?: 'AgeModelRun';
+  /** HEMIPELAGIC_RATE runs: the age-depth curve at every contact and every 5 cm of true depth, top down; empty for ORDER_ONLY. */
+  ageDepth: Array<AgeDepthPoint>;
   createdAt: Scalars['DateTime']['output'];
+  /** The depth model the run used. */
+  depthModel: DepthModel;
   diagnostics?: Maybe<AgeModelDiagnostics>;
   events: Array<EventPosterior>;
   finishedAt?: Maybe<Scalars['DateTime']['output']>;
@@ -112,7 +131,11 @@ export type AuditRecord = {
   before?: Maybe<Scalars['JSON']['output']>;
   id: Scalars['ID']['output'];
   objectId: Scalars['ID']['output'];
+  /** The changed object's name (a site's name, a sample's lab code, ...); null when it has none. */
+  objectName?: Maybe<Scalars['String']['output']>;
   objectType: Scalars['String']['output'];
+  /** Names of the objects whose ids appear in before/after (the object itself, its site, unit, segment, ...). */
+  referencedNames: Array<NamedId>;
 };
 
 export type AuditTrailInput = {
@@ -225,11 +248,19 @@ export type CoreLogTrace = {
 };
 
 export type CreateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
   quality: Scalars['Int']['input'];
   siteId: Scalars['ID']['input'];
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId: Scalars['ID']['input'];
   unitBelowId: Scalars['ID']['input'];
 };
@@ -276,6 +307,8 @@ export type CreateSampleInput = {
 };
 
 export type CreateSegmentInput = {
+  /** Down-dip width, km (> 0, at most 1,000). */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm: Scalars['Float']['input'];
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
@@ -297,6 +330,8 @@ export type CreateSiteInput = {
 };
 
 export type CreateUnitInput = {
+  /** Estimated thickness (m) of mud the unit's base eroded; at least 0. */
+  basalErosionM?: InputMaybe<Scalars['Float']['input']>;
   baseDepthM: Scalars['Float']['input'];
   facies: Facies;
   name: Scalars['String']['input'];
@@ -347,9 +382,27 @@ export type DensityPoint = {
   probability: Scalars['Float']['output'];
 };
 
+/** How a run relates the ages of a column to depth. */
+export type DepthModel =
+  /**
+   * For cores of event beds in hemipelagic mud: ages follow event-free depth (the beds' thickness
+   * removed, each bed deposited at once) through mud accumulating at rates with a gamma prior and
+   * autoregressive memory between neighbouring depth sections (after Blaauw & Christen 2011,
+   * Bayesian Analysis 6(3):457-474); mud eroded under a bed lengthens its interval.
+   */
+  | 'HEMIPELAGIC_RATE'
+  /** Stratigraphic order only: events and samples lie in the order of their units, depth says nothing more (trenches, marshes, outcrops). */
+  | 'ORDER_ONLY';
+
 /** The contact at which an earthquake is interpreted: one site's event. */
 export type EventHorizon = {
   __typename?: 'EventHorizon';
+  /** Thickness of the event bed at a core site: the unit above the horizon (top to base depth), m; null elsewhere or without depths. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  /** 1-sigma error of displacementM, m. */
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic displacement (slip), m, e.g. in a trench. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
   evidence: Array<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   /** Posterior summary from the site's latest successful age model run, if any. */
@@ -359,6 +412,10 @@ export type EventHorizon = {
   /** 1 (certain) to 4 (possible). */
   quality: Scalars['Int']['output'];
   site: Site;
+  /** 1-sigma error of subsidenceM, m. */
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic subsidence, m (negative for uplift), e.g. from a marsh's microfossil transfer function. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
   /** The first post-event unit. */
   unitAbove: Unit;
   /** The unit holding pre-event deposits. */
@@ -557,6 +614,7 @@ export type LadderEvent = {
   medianCalBp?: Maybe<Scalars['Float']['output']>;
 };
 
+/** A moment magnitude from an empirical scaling relation, with the relation's sigma and name. */
 export type MagnitudeEstimate = {
   __typename?: 'MagnitudeEstimate';
   mw: Scalars['Float']['output'];
@@ -879,6 +937,13 @@ export type MutationUploadCoreLogArgs = {
   input: UploadCoreLogInput;
 };
 
+/** An id in an audit record's before/after images, with the name of what it identifies. */
+export type NamedId = {
+  __typename?: 'NamedId';
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+};
+
 /**
  * A minimal cycle of the hypothesis's order graph (each regional event one node, each site's column
  * ordering its members): ties that cannot all hold, because together they put an event before
@@ -990,6 +1055,8 @@ export type Query = {
   sample: Sample;
   segment: Segment;
   site: Site;
+  /** Proposed ties between two cores' turbidites, top down, in order down both cores (any member). */
+  tieSuggestions: Array<TieSuggestion>;
 };
 
 
@@ -1088,6 +1155,11 @@ export type QuerySegmentArgs = {
 
 export type QuerySiteArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type QueryTieSuggestionsArgs = {
+  input: TieSuggestionsInput;
 };
 
 /** A median with its 2.5-97.5 % Monte Carlo range. */
@@ -1243,9 +1315,21 @@ export type RegionalEvent = {
    */
   concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
+  /** Mw from the minimum rupture length (the site span), so a lower bound. */
   magnitude?: Maybe<MagnitudeEstimate>;
+  /**
+   * Mw from rupture area, the site span times the down-dip width of the member sites' segment(s)
+   * (the narrowest when they differ), by the Strasser, Arango & Bommer (2010) interface area
+   * relation; null when no member's segment has a width.
+   */
+  magnitudeFromArea?: Maybe<MagnitudeEstimate>;
+  /** Mw from the members' mean measured displacement by Wells & Coppersmith (1994), all slip types; null without displacements. */
+  magnitudeFromDisplacement?: Maybe<MagnitudeEstimate>;
   members: Array<EventHorizon>;
+  /** Along-strike span of the member sites, km: a minimum rupture length. */
   ruptureLengthKm?: Maybe<Scalars['Float']['output']>;
+  /** Each member's measured size (subsidence, displacement, bed thickness) along strike. */
+  sizeProfile: Array<SizeEvidencePoint>;
   warnings: Array<Scalars['String']['output']>;
 };
 
@@ -1516,6 +1600,8 @@ export type SamplePosterior = {
 /** A fault or subduction-zone segment with its along-strike extent. */
 export type Segment = {
   __typename?: 'Segment';
+  /** Down-dip width of the rupture plane, km: with it a regional event gets Mw from rupture area (length x width). */
+  downDipWidthKm?: Maybe<Scalars['Float']['output']>;
   endKm: Scalars['Float']['output'];
   id: Scalars['ID']['output'];
   name: Scalars['String']['output'];
@@ -1578,6 +1664,22 @@ export type SiteKind =
   | 'OUTCROP'
   | 'TRENCH';
 
+/** One site's measured size of a regional event, for the along-strike profile. */
+export type SizeEvidencePoint = {
+  __typename?: 'SizeEvidencePoint';
+  alongStrikeKm?: Maybe<Scalars['Float']['output']>;
+  /** Event-bed thickness at a core site, m. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Displacement, m, and its 1-sigma error. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
+  eventHorizon: EventHorizon;
+  site: Site;
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Subsidence, m, and its 1-sigma error. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
+};
+
 /** A stale result a refresh did not re-run, and why (the requester's role, or it waits for something else). */
 export type SkippedRefresh = {
   __typename?: 'SkippedRefresh';
@@ -1605,6 +1707,13 @@ export type StaleReason = {
 
 export type StartAgeModelRunInput = {
   chains?: InputMaybe<Scalars['Int']['input']>;
+  /** How ages relate to depth (default ORDER_ONLY). HEMIPELAGIC_RATE needs hemipelagic mud units and sample depths. */
+  depthModel?: InputMaybe<DepthModel>;
+  /**
+   * HEMIPELAGIC_RATE only: the prior mean hemipelagic accumulation rate, cm per thousand years. When
+   * left out it is measured from the dated levels (their median ages over their event-free depths).
+   */
+  hemipelagicRateCmPerKyr?: InputMaybe<Scalars['Float']['input']>;
   /** Scale of the exponential prior on inherited age offsets, years (default 100). */
   inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   /** Iterations per chain after burn-in. */
@@ -1653,9 +1762,38 @@ export type Tie = {
   note?: Maybe<Scalars['String']['output']>;
 };
 
+/**
+ * A proposed tie between two cores' turbidites, from their logs' shared channels and the order of
+ * their beds: each bed's log signature is compared by dynamic time warping (Sakoe & Chiba 1978)
+ * and the pairs are chosen by an order-keeping alignment (Needleman & Wunsch 1970). Nothing is
+ * tied until a correlator accepts it (addTie with evidence "log match").
+ */
+export type TieSuggestion = {
+  __typename?: 'TieSuggestion';
+  /** The log channels compared. */
+  channels: Array<Scalars['String']['output']>;
+  /** The event at the base of the bed in the first core. */
+  eventA: EventHorizon;
+  /** The event at the base of the bed in the second core. */
+  eventB: EventHorizon;
+  /** Similarity of the two beds' log signatures, 0-1 (pairs below 0.5 are not proposed). */
+  score: Scalars['Float']['output'];
+  /** True when the hypothesis already ties this pair (it anchored the alignment). */
+  tied: Scalars['Boolean']['output'];
+};
+
+export type TieSuggestionsInput = {
+  hypothesisId: Scalars['ID']['input'];
+  /** Two different cores of the hypothesis's project, each with a core log; their logs must share a channel name. */
+  siteAId: Scalars['ID']['input'];
+  siteBId: Scalars['ID']['input'];
+};
+
 /** A stratigraphic unit in a site's column. */
 export type Unit = {
   __typename?: 'Unit';
+  /** Estimated thickness (m) of mud the unit's base eroded from the unit below, e.g. a turbidite's scour; null when not estimated. */
+  basalErosionM?: Maybe<Scalars['Float']['output']>;
   baseDepthM: Scalars['Float']['output'];
   facies: Facies;
   id: Scalars['ID']['output'];
@@ -1669,10 +1807,18 @@ export type Unit = {
 };
 
 export type UpdateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
   quality?: InputMaybe<Scalars['Int']['input']>;
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId?: InputMaybe<Scalars['ID']['input']>;
   unitBelowId?: InputMaybe<Scalars['ID']['input']>;
 };
@@ -1704,6 +1850,8 @@ export type UpdateSampleInput = {
 };
 
 export type UpdateSegmentInput = {
+  /** Down-dip width, km (> 0); null clears it. */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm?: InputMaybe<Scalars['Float']['input']>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
@@ -1723,6 +1871,8 @@ export type UpdateSiteInput = {
 };
 
 export type UpdateUnitInput = {
+  /** Estimated thickness (m) of mud the unit's base eroded; at least 0; null clears it. */
+  basalErosionM?: InputMaybe<Scalars['Float']['input']>;
   baseDepthM?: InputMaybe<Scalars['Float']['input']>;
   facies?: InputMaybe<Facies>;
   name?: InputMaybe<Scalars['String']['input']>;
@@ -1824,7 +1974,7 @@ export type AuditTrailQueryVariables = Exact<{
 }>;
 
 
-export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
+export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, objectName?: string | null, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null, referencedNames: Array<{ __typename?: 'NamedId', id: string, name: string }> } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
 
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
@@ -1866,6 +2016,27 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+
+export type SiteCoreLogsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, topDepthM: number, baseDepthM: number, facies: Facies }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+
+export type UploadCoreLogMutationVariables = Exact<{
+  input: UploadCoreLogInput;
+}>;
+
+
+export type UploadCoreLogMutation = { __typename?: 'Mutation', uploadCoreLog: { __typename?: 'CoreLog', id: string, channels: Array<string> } };
+
+export type DeleteCoreLogMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteCoreLogMutation = { __typename?: 'Mutation', deleteCoreLog: boolean };
 
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
@@ -1986,7 +2157,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, stale: boolean, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, staleReasons: Array<{ __typename?: 'StaleReason', message: string, via: Array<string> }>, inputs: { __typename?: 'RecurrenceInputs', hypothesisVersion?: number | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string, name: string } }> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -2001,6 +2172,20 @@ export type CancelRecurrenceAnalysisMutationVariables = Exact<{
 
 
 export type CancelRecurrenceAnalysisMutation = { __typename?: 'Mutation', cancelRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
+
+export type RefreshStaleResultsMutationVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type RefreshStaleResultsMutation = { __typename?: 'Mutation', refreshStaleResults: { __typename?: 'RefreshPlan', id: string } };
+
+export type LatestRefreshQueryVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, label: string, status: string, message?: string | null }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, label: string, reason: string }> }> } };
 
 export type ProjectReleasesQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2059,7 +2244,7 @@ export type SiteQueryVariables = Exact<{
 }>;
 
 
-export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
 
 export type CreateUnitMutationVariables = Exact<{
   input: CreateUnitInput;
@@ -2373,6 +2558,11 @@ export const AuditTrailDocument = new TypedDocumentString(`
         action
         objectType
         objectId
+        objectName
+        referencedNames {
+          id
+          name
+        }
         before
         after
       }
@@ -2499,6 +2689,47 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+export const SiteCoreLogsDocument = new TypedDocumentString(`
+    query SiteCoreLogs($id: ID!) {
+  site(id: $id) {
+    id
+    units {
+      id
+      topDepthM
+      baseDepthM
+      facies
+    }
+    coreLogs {
+      id
+      name
+      channels
+      units
+      topDepthM
+      baseDepthM
+      rowCount
+      traces(maxPoints: 300) {
+        channel
+        unit
+        depthsM
+        values
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteCoreLogsQuery, SiteCoreLogsQueryVariables>;
+export const UploadCoreLogDocument = new TypedDocumentString(`
+    mutation UploadCoreLog($input: UploadCoreLogInput!) {
+  uploadCoreLog(input: $input) {
+    id
+    channels
+  }
+}
+    `) as unknown as TypedDocumentString<UploadCoreLogMutation, UploadCoreLogMutationVariables>;
+export const DeleteCoreLogDocument = new TypedDocumentString(`
+    mutation DeleteCoreLog($id: ID!) {
+  deleteCoreLog(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteCoreLogMutation, DeleteCoreLogMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2832,6 +3063,21 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
     createdAt
     finishedAt
     hypothesisVersion
+    stale
+    staleReasons {
+      message
+      via
+    }
+    inputs {
+      ageModelRuns {
+        id
+        site {
+          id
+          name
+        }
+      }
+      hypothesisVersion
+    }
     segment {
       id
       name
@@ -2966,6 +3212,37 @@ export const CancelRecurrenceAnalysisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelRecurrenceAnalysisMutation, CancelRecurrenceAnalysisMutationVariables>;
+export const RefreshStaleResultsDocument = new TypedDocumentString(`
+    mutation RefreshStaleResults($projectId: ID!) {
+  refreshStaleResults(projectId: $projectId) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<RefreshStaleResultsMutation, RefreshStaleResultsMutationVariables>;
+export const LatestRefreshDocument = new TypedDocumentString(`
+    query LatestRefresh($projectId: ID!) {
+  project(id: $projectId) {
+    id
+    refreshPlans {
+      id
+      status
+      createdAt
+      steps {
+        id
+        stage
+        label
+        status
+        message
+      }
+      skipped {
+        id
+        label
+        reason
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<LatestRefreshQuery, LatestRefreshQueryVariables>;
 export const ProjectReleasesDocument = new TypedDocumentString(`
     query ProjectReleases($id: ID!) {
   project(id: $id) {
@@ -3104,6 +3381,7 @@ export const SiteDocument = new TypedDocumentString(`
       topDepthM
       baseDepthM
       facies
+      basalErosionM
       notes
     }
     eventHorizons {

@@ -1,4 +1,7 @@
-import { IsInt, IsNumber, IsOptional, IsUUID, Max, Min } from 'class-validator';
+import { IsIn, IsInt, IsNumber, IsOptional, IsUUID, Max, Min } from 'class-validator';
+
+export const DEPTH_MODELS = ['ORDER_ONLY', 'HEMIPELAGIC_RATE'] as const;
+export type DepthModel = (typeof DEPTH_MODELS)[number];
 
 export class StartAgeModelRunInput {
   @IsUUID()
@@ -41,4 +44,15 @@ export class StartAgeModelRunInput {
   @Min(1)
   @Max(5000)
   inheritanceScaleYears?: number;
+
+  @IsOptional()
+  @IsIn(DEPTH_MODELS)
+  depthModel?: DepthModel;
+
+  /** Prior mean hemipelagic accumulation rate (cm per thousand years); measured from the dated levels when absent. */
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  @Min(0.1)
+  @Max(1000)
+  hemipelagicRateCmPerKyr?: number;
 }

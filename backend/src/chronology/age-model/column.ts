@@ -22,6 +22,10 @@ export interface ColumnUnit {
   readonly position: number;
   readonly topDepthM: number | null;
   readonly baseDepthM: number | null;
+  /** Facies as stored (`TURBIDITE`, `HEMIPELAGIC_MUD`, ...); used by the hemipelagic depth model only. */
+  readonly facies?: string;
+  /** Estimated thickness of mud (m) the unit's base eroded; used by the hemipelagic depth model only. */
+  readonly basalErosionM?: number | null;
 }
 
 export interface ColumnEventHorizon {

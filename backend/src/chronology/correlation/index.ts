@@ -5,3 +5,4 @@ export * from './hypothesis';
 export * from './order-conflicts';
 export * from './regional-events';
 export * from './rupture-scaling';
+export * from './tie-suggestions';

@@ -9,6 +9,7 @@ const CONSTRAINT_ERRORS: Record<string, () => DomainError> = {
   samples_project_lab_code_unique: () => badInput('labCode', 'this lab code is already used in the project'),
   units_site_position_unique: () => badInput('position', 'another unit of this site already has this position'),
   units_depths_ordered: () => badInput('baseDepthM', 'the base of a unit must be deeper than its top'),
+  units_basal_erosion_not_negative: () => badInput('basalErosionM', 'basalErosionM must be at least 0 (a thickness of eroded mud, m)'),
   segments_extent_ordered: () => badInput('endKm', 'endKm must be greater than startKm'),
   samples_c14_error_positive: () => badInput('c14Error', 'the 14C error must be greater than 0'),
   samples_c14_age_not_negative: () => badInput('c14Age', 'a conventional 14C age cannot be negative'),

@@ -31,7 +31,7 @@ const COVERED: Readonly<Record<string, ReadonlySet<string>>> = Object.fromEntrie
     // because their calibrations also depend on installed curves.
     Site: ['id', 'version', 'name', 'kind', 'latitude', 'longitude', 'alongStrikeKm', 'elevationM', 'waterDepthM', 'notes', 'segment', 'units', 'eventHorizons', 'latestAgeModelRun', 'ageModelRuns'],
     Segment: ['id', 'version', 'name', 'startKm', 'endKm', 'notes'],
-    Unit: ['id', 'version', 'position', 'name', 'topDepthM', 'baseDepthM', 'facies', 'notes'],
+    Unit: ['id', 'version', 'position', 'name', 'topDepthM', 'baseDepthM', 'facies', 'basalErosionM', 'notes'],
     EventHorizon: ['id', 'version', 'name', 'unitBelow', 'unitAbove', 'quality', 'evidence', 'notes', 'latestPosterior'],
     AgeModelRun: ['id', 'status', 'progress', 'message', 'seed', 'settings', 'stale', 'createdAt', 'finishedAt', 'diagnostics'],
     AgeModelDiagnostics: ['converged', 'maxRhat', 'minEss', 'message'],

@@ -18,3 +18,4 @@ export * from './invitations';
 export * from './attachments';
 export * from './provenance';
 export * from './core-logs';
+export * from './rate-limits';

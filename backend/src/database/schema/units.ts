@@ -15,6 +15,11 @@ export const units = pgTable(
     topDepthM: doublePrecision('top_depth_m').notNull(),
     baseDepthM: doublePrecision('base_depth_m').notNull(),
     facies: faciesEnum('facies').notNull(),
+    /**
+     * Estimated thickness of mud (m) the unit's base eroded from the unit below (a turbidite's
+     * scour); null when not estimated.
+     */
+    basalErosionM: doublePrecision('basal_erosion_m'),
     notes: text('notes'),
     version: version(),
     ...timestamps,
@@ -24,5 +29,6 @@ export const units = pgTable(
     check('units_depths_ordered', sql`${t.baseDepthM} > ${t.topDepthM}`),
     check('units_top_not_negative', sql`${t.topDepthM} >= 0`),
     check('units_position_positive', sql`${t.position} >= 1`),
+    check('units_basal_erosion_not_negative', sql`${t.basalErosionM} >= 0`),
   ],
 );

@@ -34,6 +34,13 @@ export class CreateUnitInput {
   @IsIn(FACIES)
   facies: Facies;
 
+  /** Estimated thickness of mud the unit's base eroded (m); null clears it. */
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(0, { message: 'basalErosionM must be at least 0 (a thickness of eroded mud, m)' })
+  @Max(100)
+  basalErosionM?: number | null;
+
   @IsOptional()
   @IsString()
   @Length(0, 5000)

@@ -1,6 +1,8 @@
-import { Button, Callout, HTMLTable, Intent, ProgressBar, Tag } from '@blueprintjs/core';
+import { Button, Callout, Classes, HTMLTable, Intent, ProgressBar, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useMemo, useRef, useState } from 'react';
+import { Link, useParams } from 'react-router';
+import { paths } from '@/app/paths';
 import type { RecurrenceAnalysisQuery } from '@/gql/graphql';
 import { AgeValue } from '@/modules/ages/components/AgeValues';
 import { useSession } from '@/modules/auth/hooks/useSession';
@@ -117,11 +119,44 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
     );
   };
 
+  const projectId = useParams().projectId ?? '';
+  const handleEvents = () => {
+    setExportError(null);
+    downloadWithToken(`/api/recurrence-analyses/${encodeURIComponent(analysis.id)}/events.csv`, `analysis events ${label}.csv`, session?.token).catch((error: unknown) =>
+      setExportError(error instanceof Error ? error.message : 'the export failed'),
+    );
+  };
+
   return (
     <div className="sc-recurrence-results">
       <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title="Research result, not a hazard assessment" className="sc-caution">
         {analysis.caution}
       </Callout>
+      {analysis.stale && (
+        <Callout intent={Intent.DANGER} icon={IconNames.OUTDATED} title="Out of date: its inputs changed after it was computed">
+          <ul className="sc-stale-reasons">
+            {analysis.staleReasons.map((reason) => (
+              <li key={`${reason.message}|${reason.via.join('|')}`}>
+                {reason.message}
+                {reason.via.length > 0 && <span className={Classes.TEXT_MUTED}> (through the {reason.via.join(', then ')})</span>}
+              </li>
+            ))}
+          </ul>
+          Refresh stale results to re-run it with the same settings and seed.
+        </Callout>
+      )}
+      {analysis.inputs.ageModelRuns.length > 0 && (
+        <p className={Classes.TEXT_MUTED}>
+          Computed from the age models of{' '}
+          {analysis.inputs.ageModelRuns.map((run, i) => (
+            <span key={run.id}>
+              {i > 0 && ', '}
+              <Link to={paths.ageModel(projectId, run.site.id)}>{run.site.name}</Link>
+            </span>
+          ))}
+          {analysis.inputs.hypothesisVersion !== null && <> under hypothesis version <span className="num">{analysis.inputs.hypothesisVersion}</span></>}.
+        </p>
+      )}
       <div className="sc-run-status-line">
         <Tag minimal>{analysis.status.toLowerCase()}</Tag>
         <span>{label}</span>
@@ -139,6 +174,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
           <>
             <Button size="small" icon={IconNames.DOWNLOAD} text="CSV" onClick={handleExport('csv')} />
             <Button size="small" icon={IconNames.DOWNLOAD} text="JSON" onClick={handleExport('json')} />
+            <Button size="small" icon={IconNames.DOWNLOAD} text="Events CSV" onClick={handleEvents} />
           </>
         )}
       </div>

@@ -7,6 +7,7 @@ import { formErrorOf } from '@/modules/api/utils/apiError';
 import { roleAllows } from '@/modules/auth/utils/permissions';
 import { analysisLabel, RecurrenceResults } from '@/modules/recurrence/components/RecurrenceResults';
 import { RecurrenceSetupForm } from '@/modules/recurrence/components/RecurrenceSetupForm';
+import { RefreshPanel } from '@/modules/recurrence/components/RefreshPanel';
 import { CancelRecurrenceAnalysisDocument, StartRecurrenceAnalysisDocument } from '@/modules/recurrence/graphql/recurrence';
 import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
 import { isJobActive, sharedRecurrenceAxes, type SharedRecurrenceAxes } from '@/modules/recurrence/utils/recurrenceCharts';
@@ -80,6 +81,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
       <header className="sc-page-header">
         <H2 className="sc-page-title">Recurrence · {project.name}</H2>
       </header>
+      {project.myRole !== 'VIEWER' && <RefreshPanel projectId={projectId} />}
       {canRun && (
         <section className="sc-panel">
           <h3>New analysis</h3>

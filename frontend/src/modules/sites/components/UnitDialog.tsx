@@ -82,6 +82,16 @@ export function UnitDialog({ projectId, siteId, units, unit, onClose }: UnitDial
         <NumberField name="baseDepthM" label="Base" unit="m" value={values.baseDepthM} onValueChange={set('baseDepthM')} error={errorOf('baseDepthM')} />
         <SelectField name="facies" label="Facies" value={values.facies} options={FACIES_OPTIONS} onValueChange={handleFaciesChange} error={errorOf('facies')} />
       </div>
+      <NumberField
+        name="basalErosionM"
+        label="Eroded below base"
+        unit="m"
+        helperText="Estimated thickness of mud this unit's base removed (a turbidite's scour); blank if none"
+        value={values.basalErosionM}
+        onValueChange={set('basalErosionM')}
+        error={errorOf('basalErosionM')}
+        className="sc-field-narrow"
+      />
       <TextAreaField name="notes" label="Notes" value={values.notes} onValueChange={set('notes')} error={errorOf('notes')} />
     </FormDialog>
   );

@@ -30,6 +30,7 @@ export const SiteDocument = graphql(`
         topDepthM
         baseDepthM
         facies
+        basalErosionM
         notes
       }
       eventHorizons {

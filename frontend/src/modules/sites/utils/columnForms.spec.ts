@@ -20,12 +20,21 @@ describe(emptyUnitForm.name, () => {
 
 describe(readUnitForm.name, () => {
   it('builds the unit input', () => {
-    const result = readUnitForm({ position: '3', name: ' soil ', topDepthM: '0', baseDepthM: '0.4', facies: 'SOIL', notes: '' });
-    expect(result).toEqual({ ok: true, input: { position: 3, name: 'soil', topDepthM: 0, baseDepthM: 0.4, facies: 'SOIL', notes: null } });
+    const result = readUnitForm({ position: '3', name: ' soil ', topDepthM: '0', baseDepthM: '0.4', facies: 'SOIL', basalErosionM: '', notes: '' });
+    expect(result).toEqual({
+      ok: true,
+      input: { position: 3, name: 'soil', topDepthM: 0, baseDepthM: 0.4, facies: 'SOIL', basalErosionM: null, notes: null },
+    });
+  });
+
+  it('reads an eroded thickness under a bed, from 0 m', () => {
+    const bed = { position: '3', name: 'T1', topDepthM: '0.2', baseDepthM: '0.35', facies: 'TURBIDITE' as const, notes: '' };
+    expect(readUnitForm({ ...bed, basalErosionM: '0.02' })).toMatchObject({ ok: true, input: { basalErosionM: 0.02 } });
+    expect(readUnitForm({ ...bed, basalErosionM: '-0.01' })).toEqual({ ok: false, errors: { basalErosionM: 'must be at least 0' } });
   });
 
   it('asks for the base below the top and a whole position from 1', () => {
-    const result = readUnitForm({ position: '0', name: 'x', topDepthM: '1', baseDepthM: '1', facies: 'SOIL', notes: '' });
+    const result = readUnitForm({ position: '0', name: 'x', topDepthM: '1', baseDepthM: '1', facies: 'SOIL', basalErosionM: '', notes: '' });
     expect(result).toEqual({ ok: false, errors: { position: 'must be at least 1', baseDepthM: 'the base must be deeper than the top' } });
   });
 });

@@ -7,14 +7,23 @@ export type UnitFormValues = {
   topDepthM: string;
   baseDepthM: string;
   facies: Facies;
+  basalErosionM: string;
   notes: string;
 };
 
 export type UnitFormField = keyof UnitFormValues;
 
-export const UNIT_FORM_FIELDS: readonly UnitFormField[] = ['position', 'name', 'topDepthM', 'baseDepthM', 'facies', 'notes'];
+export const UNIT_FORM_FIELDS: readonly UnitFormField[] = ['position', 'name', 'topDepthM', 'baseDepthM', 'facies', 'basalErosionM', 'notes'];
 
-type StoredUnit = { position: number; name: string; topDepthM: number; baseDepthM: number; facies: Facies; notes?: string | null };
+type StoredUnit = {
+  position: number;
+  name: string;
+  topDepthM: number;
+  baseDepthM: number;
+  facies: Facies;
+  basalErosionM?: number | null;
+  notes?: string | null;
+};
 
 /**
  * A new unit's form: the next position up, its base at the top of the youngest unit, since a
@@ -28,6 +37,7 @@ export function emptyUnitForm(existing: readonly StoredUnit[]): UnitFormValues {
     topDepthM: '',
     baseDepthM: top ? numberText(top.topDepthM) : '',
     facies: 'OTHER',
+    basalErosionM: '',
     notes: '',
   };
 }
@@ -39,17 +49,22 @@ export function unitFormFrom(unit: StoredUnit): UnitFormValues {
     topDepthM: numberText(unit.topDepthM),
     baseDepthM: numberText(unit.baseDepthM),
     facies: unit.facies,
+    basalErosionM: unit.basalErosionM === null || unit.basalErosionM === undefined ? '' : numberText(unit.basalErosionM),
     notes: unit.notes ?? '',
   };
 }
 
-/** Check a unit form: a whole position from 1, depths in metres with the base below the top. */
+/**
+ * Check a unit form: a whole position from 1, depths in metres with the base below the top, and an
+ * optional eroded thickness under the unit's base (m, from 0; blank for none recorded).
+ */
 export function readUnitForm(values: UnitFormValues): FormResult<Omit<CreateUnitInput, 'siteId'>, UnitFormField> {
   const reader = new FieldReader<UnitFormField>();
   const position = reader.number('position', values.position, { required: true, integer: true, min: 1 });
   const name = reader.text('name', values.name, { required: true });
   const topDepthM = reader.number('topDepthM', values.topDepthM, { required: true, min: 0 });
   const baseDepthM = reader.number('baseDepthM', values.baseDepthM, { required: true, min: 0 });
+  const basalErosionM = reader.number('basalErosionM', values.basalErosionM, { min: 0 });
   if (topDepthM !== null && baseDepthM !== null && !(baseDepthM > topDepthM)) {
     reader.fail('baseDepthM', 'the base must be deeper than the top');
   }
@@ -59,6 +74,7 @@ export function readUnitForm(values: UnitFormValues): FormResult<Omit<CreateUnit
     topDepthM: topDepthM ?? 0,
     baseDepthM: baseDepthM ?? 0,
     facies: values.facies,
+    basalErosionM,
     notes: optionalText(values.notes),
   });
 }

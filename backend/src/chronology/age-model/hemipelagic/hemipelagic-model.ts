@@ -1,0 +1,677 @@
+/**
+ * The hemipelagic depth model of a turbidite core (issue 12, item 7).
+ *
+ * Ages follow event-free depth z (true depth with every event bed above removed; `core-depth.ts`).
+ * Event-free depth is cut into sections of thickness D; section i accumulated at x_i years per
+ * metre. Following the autoregressive gamma model of Blaauw & Christen (2011, "Flexible
+ * paleoclimate age-depth models using an autoregressive gamma process", Bayesian Analysis
+ * 6(3):457-474):
+ *
+ *   x_1 = a_1,   x_i = w x_(i-1) + (1 - w) a_i,   a_i ~ Gamma(shape k, mean m),   w = r^(D / 1 m),
+ *
+ * so each section's rate remembers its neighbour's with weight w, and r is the memory across one
+ * metre with a Beta prior. The age at event-free depth z is
+ *
+ *   age(z) = top + sum_i x_i |section i within [0, z]| + sum_(contacts c above z) E_c x_(c),
+ *
+ * where E_c is the thickness of mud eroded at contact c (the base of a bed), x_(c) the rate of the
+ * section holding the contact: eroded mud lengthens its interval at the local rate. E_c has a gamma
+ * prior with mean the researcher's estimate. Each bed's base is an event: its age is the age just
+ * above the contact (the bed is instantaneous). Dated levels enter as likelihoods of the age at
+ * their depth (`levels.ts`), with the outlier-and-offset mixture.
+ *
+ * The prior mean m of the rates is measured from the dated levels (the Theil-Sen slope of their
+ * median ages on restored event-free depth; Sen 1968, JASA 63:1379-1389) unless the researcher
+ * gives one: hemipelagic rates on active margins vary roughly 5-40 cm per thousand years
+ * [common practice], too widely to assume.
+ *
+ * The sampler works on (top, log a_1..K, logit r, log E_c) by adaptive Metropolis
+ * (`adaptive-metropolis.ts`), several seeded chains from dispersed starts; convergence is the
+ * split R-hat and bulk ESS of the ordering model (`../convergence.ts`).
+ */
+import { CalendarDensity, normalise, summarise } from '../../common/density';
+import { SeededRandom } from '../../common/random';
+import {
+  AgeModelCancelled,
+  AgeModelDiagnostics,
+  AgeModelHooks,
+  AgeModelResult,
+  AgeModelSettings,
+  AgeModelSettingsError,
+  BoundaryPosterior,
+  DEFAULT_AGE_MODEL_SETTINGS,
+  ESS_MINIMUM,
+  EventPosterior,
+  RHAT_LIMIT,
+  SamplePosterior,
+} from '../age-model';
+import { AgeModelInput, ColumnEventHorizon, ColumnProblemError, isModelled } from '../column';
+import { chainDiagnostics } from '../convergence';
+import { LATEST_CAL_BP } from '../likelihood';
+import { AdaptiveMetropolis } from './adaptive-metropolis';
+import { coreDepthScale, CoreDepthScale, hemipelagicProblems } from './core-depth';
+import { GridLevelLikelihoods, LevelLikelihoods } from './levels';
+
+export interface HemipelagicSettings {
+  /** Thickness (m) of the event-free depth sections that each carry one accumulation rate. */
+  readonly sectionThicknessM: number;
+  /** Most sections: a longer core gets thicker sections, which bounds the cost of a run. */
+  readonly maxSections: number;
+  /** Prior mean accumulation rate (cm per thousand years); null measures it from the dated levels. */
+  readonly rateMeanCmPerKyr: number | null;
+  /** Shape k of the gamma prior on each section's rate innovation. */
+  readonly rateShape: number;
+  /** Beta(a, b) prior on the memory r across one metre of event-free depth. */
+  readonly memoryPriorA: number;
+  readonly memoryPriorB: number;
+  /** Shape of the gamma prior on each eroded thickness, whose mean is the researcher's estimate. */
+  readonly erosionShape: number;
+  /** Scale (sd, years) of an outlying level's unknown age offset. */
+  readonly outlierOffsetScaleYears: number;
+  /** Spacing (m of true depth) of the age-depth curve's points (contacts are added). */
+  readonly ageDepthStepM: number;
+}
+
+/**
+ * Our defaults, with why:
+ * - sections of 5 cm: the age-depth curve is reported every 5 cm, and 5 cm of mud is roughly
+ *   100-1,000 years at 5-40 cm/kyr, finer than any core's dating; at most 120 sections bound the cost;
+ * - rate shape 2: a gamma of shape 2 puts 90 % of an innovation between 0.18 and 2.4 times its
+ *   mean, covering a factor of eight (the 5-40 cm/kyr spread of active margins) about the measured
+ *   mean while keeping rates away from zero;
+ * - memory Beta(2, 2) per metre: centred on 0.5, excluding the degenerate ends (no memory, or
+ *   rates fixed down the core), weak enough for the dates to decide;
+ * - erosion shape 4: a coefficient of variation of 0.5 about the estimate, as a logged scour
+ *   depth is a judgement good to about a factor of two;
+ * - outlier offsets of sd 1,000 years: broad against the few hundred years of a 14C age's
+ *   spread, so an outlier's pull is small, yet proper, so the outlier probability does not depend
+ *   on an arbitrary window.
+ */
+export const DEFAULT_HEMIPELAGIC_SETTINGS: HemipelagicSettings = {
+  sectionThicknessM: 0.05,
+  maxSections: 120,
+  rateMeanCmPerKyr: null,
+  rateShape: 2,
+  memoryPriorA: 2,
+  memoryPriorB: 2,
+  erosionShape: 4,
+  outlierOffsetScaleYears: 1000,
+  ageDepthStepM: 0.05,
+};
+
+/** Run settings of a hemipelagic run: the shared chain settings plus the depth model's own. */
+export interface HemipelagicRunSettings extends AgeModelSettings {
+  readonly hemipelagic: HemipelagicSettings;
+}
+
+/** Chain settings that suit the hemipelagic sampler (many cheap steps). */
+export const DEFAULT_HEMIPELAGIC_RUN_SETTINGS: HemipelagicRunSettings = {
+  ...DEFAULT_AGE_MODEL_SETTINGS,
+  iterations: 60_000,
+  burnIn: 20_000,
+  thin: 20,
+  hemipelagic: DEFAULT_HEMIPELAGIC_SETTINGS,
+};
+
+/** A point of the age-depth curve. */
+export interface AgeDepthPoint {
+  readonly depthM: number;
+  readonly eventFreeDepthM: number;
+  readonly medianCalBp: number;
+  /** 2.5 % quantile (young end), cal BP. */
+  readonly low95CalBp: number;
+  /** 97.5 % quantile (old end), cal BP. */
+  readonly high95CalBp: number;
+}
+
+export interface HemipelagicSummary {
+  /** The prior mean rate used (cm per thousand years) and where it came from. */
+  readonly rateMeanCmPerKyr: number;
+  readonly rateMeanSource: 'MEASURED' | 'GIVEN';
+  readonly sectionThicknessM: number;
+  readonly sections: number;
+  /** Posterior median of the memory across one metre. */
+  readonly memoryMedian: number;
+  /** Posterior median of each eroded thickness, by the id of the unit whose base eroded. */
+  readonly erosion: readonly { unitId: string; estimateM: number; medianM: number }[];
+}
+
+export interface HemipelagicResult extends AgeModelResult {
+  readonly ageDepth: AgeDepthPoint[];
+  readonly hemipelagic: HemipelagicSummary;
+}
+
+/** Sweeps between polls of `shouldCancel` and progress reports. */
+const POLL_STEPS = 2000;
+
+/** A depth the model reports or fits: where it sits in the sections and below which gaps. */
+interface Probe {
+  /** Section index holding it (0-based) and the thickness within that section above it. */
+  readonly section: number;
+  readonly within: number;
+  /** Number of erosion gaps above it (gaps are sorted top down). */
+  readonly gapsAbove: number;
+}
+
+interface Structure {
+  readonly scale: CoreDepthScale;
+  readonly sectionM: number;
+  readonly sections: number;
+  /** Gap contacts top down: section index and the estimate. */
+  readonly gaps: readonly { section: number; estimateM: number; unitId: string }[];
+  readonly events: readonly ColumnEventHorizon[];
+  readonly eventProbes: readonly Probe[];
+  readonly levelProbes: readonly Probe[];
+  readonly curve: readonly { depthM: number; eventFreeDepthM: number; probe: Probe }[];
+}
+
+function probeAt(eventFreeDepthM: number, gapsAbove: number, sectionM: number, sections: number): Probe {
+  const section = Math.min(sections - 1, Math.max(0, Math.floor(eventFreeDepthM / sectionM)));
+  return { section, within: Math.max(0, eventFreeDepthM - section * sectionM), gapsAbove };
+}
+
+function buildStructure(input: AgeModelInput, settings: HemipelagicSettings): Structure {
+  const scale = coreDepthScale(input.units);
+  const length = Math.max(scale.eventFreeLengthM, 1e-3);
+  const sectionM = Math.max(settings.sectionThicknessM, length / settings.maxSections);
+  const sections = Math.max(1, Math.ceil(length / sectionM - 1e-9));
+  const unitsById = new Map(input.units.map((u) => [u.id, u]));
+  const gapContacts = scale.contacts.filter((c) => c.erosionEstimateM > 0);
+  const gaps = gapContacts.map((c) => ({
+    section: probeAt(c.eventFreeDepthM, 0, sectionM, sections).section,
+    estimateM: c.erosionEstimateM,
+    unitId: c.unitAboveId,
+  }));
+  /** Gaps above a point of true depth d in the unit at `position` (contacts at d count when the point is below them). */
+  const gapsAbove = (depthM: number, position: number): number =>
+    gapContacts.filter((c) => c.depthM < depthM || (c.depthM === depthM && position <= c.unitBelowPosition)).length;
+
+  const events = [...input.eventHorizons].sort(
+    (a, b) => (unitsById.get(a.unitBelowId)?.position ?? 0) - (unitsById.get(b.unitBelowId)?.position ?? 0),
+  );
+  const eventProbes = events.map((h) => {
+    const above = unitsById.get(h.unitAboveId)!;
+    const contactDepth = above.baseDepthM!;
+    // The event is the surface the bed buried: the young side of any erosion gap at its base.
+    return probeAt(scale.eventFreeDepth(contactDepth), gapsAbove(contactDepth, above.position), sectionM, sections);
+  });
+  const levelProbes = input.samples.filter(isModelled).map((s) => {
+    const unit = unitsById.get(s.unitId)!;
+    return probeAt(scale.eventFreeDepth(s.depthM!), gapsAbove(s.depthM!, unit.position), sectionM, sections);
+  });
+
+  const curve: { depthM: number; eventFreeDepthM: number; probe: Probe }[] = [];
+  const step = settings.ageDepthStepM;
+  const depths = new Set<number>();
+  for (let k = 0; scale.topDepthM + k * step <= scale.baseDepthM + 1e-9; k++) depths.add(round(scale.topDepthM + k * step));
+  depths.add(round(scale.baseDepthM));
+  for (const c of scale.contacts) depths.add(round(c.depthM));
+  const gapCountAt = (d: number, below: boolean) => gapContacts.filter((c) => c.depthM < d || (below && c.depthM === d)).length;
+  for (const d of [...depths].sort((a, b) => a - b)) {
+    const z = scale.eventFreeDepth(d);
+    const young = gapCountAt(d, false);
+    curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, young, sectionM, sections) });
+    const old = gapCountAt(d, true);
+    if (old !== young) curve.push({ depthM: d, eventFreeDepthM: round(z), probe: probeAt(z, old, sectionM, sections) });
+  }
+  return { scale, sectionM, sections, gaps, events, eventProbes, levelProbes, curve };
+}
+
+function round(m: number): number {
+  return Math.round(m * 1e6) / 1e6;
+}
+
+/**
+ * The prior mean rate in years per metre: the Theil-Sen slope of the levels' median ages on their
+ * restored event-free depth (event-free depth plus the estimated erosion above). Undefined when
+ * fewer than two levels sit at different depths or the slope is not positive.
+ */
+export function measuredYearsPerMetre(
+  levels: LevelLikelihoods,
+  structure: Pick<Structure, 'levelProbes' | 'gaps' | 'sectionM'>,
+): number | undefined {
+  const restored = structure.levelProbes.map((p) => {
+    let depth = p.section * structure.sectionM + p.within;
+    for (let g = 0; g < p.gapsAbove; g++) depth += structure.gaps[g].estimateM;
+    return depth;
+  });
+  const slopes: number[] = [];
+  for (let i = 0; i < restored.length; i++) {
+    for (let j = i + 1; j < restored.length; j++) {
+      const dz = restored[j] - restored[i];
+      if (Math.abs(dz) > 1e-6) slopes.push((levels.centreCalBp(j) - levels.centreCalBp(i)) / dz);
+    }
+  }
+  if (slopes.length === 0) return undefined;
+  slopes.sort((a, b) => a - b);
+  const mid = slopes.length / 2;
+  const median = slopes.length % 2 === 1 ? slopes[Math.floor(mid)] : (slopes[mid - 1] + slopes[mid]) / 2;
+  return median > 0 ? median : undefined;
+}
+
+/** cm per thousand years to years per metre: 100 cm/m x 1000 yr/kyr / rate. */
+function yearsPerMetre(cmPerKyr: number): number {
+  return 100_000 / cmPerKyr;
+}
+
+/** Log of the gamma density with shape k and mean m at x > 0, without its constant. */
+function logGammaKernel(x: number, shape: number, mean: number): number {
+  return (shape - 1) * Math.log(x) - (shape / mean) * x;
+}
+
+/** The unnormalised log posterior and the ages it implies, on the sampler's coordinates. */
+class HemipelagicPosterior {
+  readonly dimension: number;
+  readonly rates: Float64Array;
+  readonly cumulative: Float64Array;
+  readonly gapYears: Float64Array;
+  private readonly memoryIndex: number;
+  private readonly gapIndex: number;
+
+  constructor(
+    readonly structure: Structure,
+    readonly levels: LevelLikelihoods,
+    readonly meanYearsPerMetre: number,
+    readonly settings: HemipelagicSettings,
+  ) {
+    this.memoryIndex = 1 + structure.sections;
+    this.gapIndex = this.memoryIndex + 1;
+    this.dimension = this.gapIndex + structure.gaps.length;
+    this.rates = new Float64Array(structure.sections);
+    this.cumulative = new Float64Array(structure.sections + 1);
+    this.gapYears = new Float64Array(structure.gaps.length + 1);
+  }
+
+  memory(x: Float64Array): number {
+    return 1 / (1 + Math.exp(-x[this.memoryIndex]));
+  }
+
+  erosion(x: Float64Array, g: number): number {
+    return Math.exp(x[this.gapIndex + g]);
+  }
+
+  /** Fill rates, cumulative section ages and cumulative gap years from a state. */
+  expand(x: Float64Array): void {
+    const { sections, sectionM, gaps } = this.structure;
+    const w = Math.pow(this.memory(x), sectionM);
+    let rate = 0;
+    this.cumulative[0] = x[0];
+    for (let i = 0; i < sections; i++) {
+      const innovation = Math.exp(x[1 + i]);
+      rate = i === 0 ? innovation : w * rate + (1 - w) * innovation;
+      this.rates[i] = rate;
+      this.cumulative[i + 1] = this.cumulative[i] + rate * sectionM;
+    }
+    this.gapYears[0] = 0;
+    for (let g = 0; g < gaps.length; g++) this.gapYears[g + 1] = this.gapYears[g] + this.erosion(x, g) * this.rates[gaps[g].section];
+  }
+
+  /** Age at a probe after `expand`. */
+  ageAt(probe: Probe): number {
+    return this.cumulative[probe.section] + probe.within * this.rates[probe.section] + this.gapYears[probe.gapsAbove];
+  }
+
+  logDensity = (x: Float64Array): number => {
+    const top = x[0];
+    if (!(top >= LATEST_CAL_BP)) return -Infinity;
+    const { sections, gaps, levelProbes } = this.structure;
+    const s = this.settings;
+    let lp = 0;
+    // Gamma innovations on the log scale: density times the Jacobian a.
+    for (let i = 1; i <= sections; i++) {
+      const a = Math.exp(x[i]);
+      lp += logGammaKernel(a, s.rateShape, this.meanYearsPerMetre) + x[i];
+    }
+    // Beta memory on the logit scale: density times the Jacobian r (1 - r).
+    const r = this.memory(x);
+    if (!(r > 0 && r < 1)) return -Infinity;
+    lp += s.memoryPriorA * Math.log(r) + s.memoryPriorB * Math.log(1 - r);
+    for (let g = 0; g < gaps.length; g++) {
+      const e = this.erosion(x, g);
+      lp += logGammaKernel(e, s.erosionShape, gaps[g].estimateM) + x[this.gapIndex + g];
+    }
+    this.expand(x);
+    for (let j = 0; j < levelProbes.length; j++) lp += this.levels.logLikelihood(j, this.ageAt(levelProbes[j]));
+    return lp;
+  };
+}
+
+function checkHemipelagicSettings(settings: HemipelagicRunSettings): void {
+  const h = settings.hemipelagic;
+  const positive = (field: keyof HemipelagicSettings, value: number) => {
+    if (!(value > 0) || !Number.isFinite(value)) {
+      throw new AgeModelSettingsError('iterations', `The hemipelagic setting ${field} must be a positive number; got ${String(value)}.`);
+    }
+  };
+  positive('sectionThicknessM', h.sectionThicknessM);
+  positive('rateShape', h.rateShape);
+  positive('memoryPriorA', h.memoryPriorA);
+  positive('memoryPriorB', h.memoryPriorB);
+  positive('erosionShape', h.erosionShape);
+  positive('outlierOffsetScaleYears', h.outlierOffsetScaleYears);
+  positive('ageDepthStepM', h.ageDepthStepM);
+  if (h.rateMeanCmPerKyr !== null) positive('rateMeanCmPerKyr', h.rateMeanCmPerKyr);
+  if (!Number.isInteger(h.maxSections) || h.maxSections < 1 || h.maxSections > 500) {
+    throw new AgeModelSettingsError('iterations', `maxSections must be a whole number from 1 to 500; got ${String(h.maxSections)}.`);
+  }
+  if (!Number.isInteger(settings.chains) || settings.chains < 4) {
+    throw new AgeModelSettingsError('chains', `The number of chains must be a whole number of at least 4; got ${String(settings.chains)}.`);
+  }
+  if (!Number.isInteger(settings.thin) || settings.thin < 1) {
+    throw new AgeModelSettingsError('thin', `The thinning interval must be a whole number of at least 1; got ${String(settings.thin)}.`);
+  }
+  if (!Number.isInteger(settings.iterations) || settings.iterations < 8 * settings.thin || settings.iterations > 2_000_000) {
+    throw new AgeModelSettingsError('iterations', `The iterations must be a whole number from ${8 * settings.thin} to 2,000,000; got ${String(settings.iterations)}.`);
+  }
+  if (!Number.isInteger(settings.burnIn) || settings.burnIn < 0 || settings.burnIn > 2_000_000) {
+    throw new AgeModelSettingsError('burnIn', `The burn-in must be a whole number from 0 to 2,000,000; got ${String(settings.burnIn)}.`);
+  }
+  if (!(settings.outlierPrior >= 0 && settings.outlierPrior < 1)) {
+    throw new AgeModelSettingsError('outlierPrior', `The outlier prior must be from 0 up to (not including) 1; got ${String(settings.outlierPrior)}.`);
+  }
+}
+
+/** Bandwidth of the Gaussian kernel density: Silverman's rule of thumb (1986, Density Estimation, eq. 3.31). */
+function silvermanBandwidth(sorted: Float64Array, sd: number): number {
+  const n = sorted.length;
+  const iqr = sorted[Math.floor(0.75 * (n - 1))] - sorted[Math.floor(0.25 * (n - 1))];
+  const spread = Math.min(sd, iqr / 1.34) || sd || 1;
+  return Math.max(1, 0.9 * spread * Math.pow(n, -0.2));
+}
+
+/**
+ * A smooth density on the 1-year grid from continuous draws: linear binning onto whole years, then
+ * a Gaussian kernel of Silverman's bandwidth (binned kernel density estimation, Wand & Jones 1995,
+ * Kernel Smoothing, section 2.4 [memory]). Smoothing keeps Monte Carlo noise from splitting HPD
+ * ranges into splinters.
+ */
+export function kernelDensity(draws: Float64Array): CalendarDensity {
+  const sorted = Float64Array.from(draws).sort();
+  const n = sorted.length;
+  let mean = 0;
+  for (const v of sorted) mean += v / n;
+  let variance = 0;
+  for (const v of sorted) variance += (v - mean) ** 2 / Math.max(1, n - 1);
+  const h = silvermanBandwidth(sorted, Math.sqrt(variance));
+  const reach = Math.ceil(4 * h);
+  const young = Math.floor(sorted[0]) - reach;
+  const old = Math.ceil(sorted[n - 1]) + reach;
+  const bins = new Float64Array(old - young + 1);
+  for (const v of sorted) {
+    const x = v - young;
+    const i = Math.floor(x);
+    const f = x - i;
+    bins[i] += 1 - f;
+    if (i + 1 < bins.length) bins[i + 1] += f;
+  }
+  const kernel = new Float64Array(2 * reach + 1);
+  for (let k = -reach; k <= reach; k++) kernel[k + reach] = Math.exp(-0.5 * (k / h) ** 2);
+  const probabilities = new Float64Array(bins.length);
+  for (let i = 0; i < bins.length; i++) {
+    if (bins[i] === 0) continue;
+    const lo = Math.max(0, i - reach);
+    const hi = Math.min(bins.length - 1, i + reach);
+    for (let j = lo; j <= hi; j++) probabilities[j] += bins[i] * kernel[j - i + reach];
+  }
+  return normalise({ startCalBp: young, probabilities });
+}
+
+function sortedQuantile(sorted: Float64Array, q: number): number {
+  const position = q * (sorted.length - 1);
+  const i = Math.floor(position);
+  const f = position - i;
+  return i + 1 < sorted.length ? sorted[i] * (1 - f) + sorted[i + 1] * f : sorted[i];
+}
+
+/**
+ * Run the hemipelagic depth model of a core. Throws ColumnProblemError when the column cannot take
+ * it (no hemipelagic mud, missing depths, no measurable rate and none given), AgeModelSettingsError
+ * for unusable settings, AgeModelCancelled when cancelled through `hooks`.
+ */
+export function runHemipelagicModel(
+  input: AgeModelInput,
+  partial: Partial<Omit<HemipelagicRunSettings, 'hemipelagic'>> & { hemipelagic?: Partial<HemipelagicSettings> } = {},
+  hooks: AgeModelHooks = {},
+  makeLevels?: (samples: AgeModelInput['samples'], settings: HemipelagicRunSettings) => LevelLikelihoods,
+): HemipelagicResult {
+  const settings: HemipelagicRunSettings = {
+    ...DEFAULT_HEMIPELAGIC_RUN_SETTINGS,
+    ...partial,
+    hemipelagic: { ...DEFAULT_HEMIPELAGIC_SETTINGS, ...partial.hemipelagic },
+  };
+  checkHemipelagicSettings(settings);
+  const problems = hemipelagicProblems(input);
+  if (problems.length > 0) {
+    throw new ColumnProblemError(problems.map((message) => ({ code: 'NO_DATED_SAMPLE', message, subjectIds: [] })));
+  }
+  const modelled = input.samples.filter(isModelled);
+  if (modelled.length === 0) {
+    throw new ColumnProblemError([{ code: 'NO_DATED_SAMPLE', message: 'The core has no modelled dated level.', subjectIds: [] }]);
+  }
+  const h = settings.hemipelagic;
+  const structure = buildStructure(input, h);
+  const levels =
+    makeLevels?.(modelled, settings) ??
+    new GridLevelLikelihoods(modelled, settings.inheritanceScaleYears, {
+      prior: settings.outlierPrior,
+      offsetScaleYears: h.outlierOffsetScaleYears,
+    });
+
+  const measured = measuredYearsPerMetre(levels, structure);
+  let meanYearsPerMetre: number;
+  let rateMeanSource: HemipelagicSummary['rateMeanSource'];
+  if (h.rateMeanCmPerKyr !== null) {
+    meanYearsPerMetre = yearsPerMetre(h.rateMeanCmPerKyr);
+    rateMeanSource = 'GIVEN';
+  } else if (measured !== undefined) {
+    meanYearsPerMetre = measured;
+    rateMeanSource = 'MEASURED';
+  } else {
+    throw new ColumnProblemError([
+      {
+        code: 'NO_DATED_SAMPLE',
+        message:
+          'The accumulation rate cannot be measured: it needs two dated levels at different depths whose ages increase ' +
+          'with depth. Give the prior mean rate (cm per thousand years) or date another level.',
+        subjectIds: [],
+      },
+    ]);
+  }
+  const posterior = new HemipelagicPosterior(structure, levels, meanYearsPerMetre, h);
+  const d = posterior.dimension;
+  const keptPerChain = Math.floor(settings.iterations / settings.thin);
+  const E = structure.eventProbes.length;
+  const S = structure.levelProbes.length;
+  const P = structure.curve.length;
+  const quantities = E + S + P + 2; // events, levels, curve, top and base ages
+  const series: Float64Array[] = Array.from({ length: settings.chains }, () => new Float64Array(keptPerChain * quantities));
+  const outlierSums = new Float64Array(S);
+  const memoryDraws = new Float64Array(keptPerChain * settings.chains);
+  const erosionDraws = structure.gaps.map(() => new Float64Array(keptPerChain * settings.chains));
+
+  const seeds = new SeededRandom(settings.seed);
+  const chainSeeds = Array.from({ length: settings.chains }, () => Math.floor(seeds.uniform() * 2 ** 31));
+  const totalSteps = settings.chains * (settings.burnIn + settings.iterations);
+  let lastReported = -1;
+  let accepted = 0;
+  let proposed = 0;
+  const basePoint = probeAt(structure.scale.eventFreeLengthM, structure.gaps.length, structure.sectionM, structure.sections);
+
+  // Starting values: the levels' youngest centre extrapolated to the top at the mean rate.
+  let topGuess = Infinity;
+  for (let j = 0; j < S; j++) {
+    const p = structure.levelProbes[j];
+    topGuess = Math.min(topGuess, levels.centreCalBp(j) - (p.section * structure.sectionM + p.within) * meanYearsPerMetre);
+  }
+  topGuess = Math.max(LATEST_CAL_BP + 1, topGuess);
+
+  for (let c = 0; c < settings.chains; c++) {
+    const random = new SeededRandom(chainSeeds[c]);
+    const start = new Float64Array(d);
+    const scales = new Float64Array(d);
+    start[0] = Math.max(LATEST_CAL_BP + 1, topGuess + 100 * random.normal());
+    scales[0] = 50;
+    for (let i = 1; i <= structure.sections; i++) {
+      start[i] = Math.log(meanYearsPerMetre) + 0.2 * random.normal();
+      scales[i] = 0.3;
+    }
+    start[1 + structure.sections] = 0.5 * random.normal();
+    scales[1 + structure.sections] = 1;
+    structure.gaps.forEach((g, k) => {
+      start[2 + structure.sections + k] = Math.log(g.estimateM) + 0.2 * random.normal();
+      scales[2 + structure.sections + k] = 0.3;
+    });
+    const chain = new AdaptiveMetropolis(posterior.logDensity, start, scales, random);
+    const out = series[c];
+    let kept = 0;
+    const steps = settings.burnIn + settings.iterations;
+    for (let step = 0; step < steps; step++) {
+      if (step % POLL_STEPS === 0) {
+        if (hooks.shouldCancel?.()) throw new AgeModelCancelled();
+        const fraction = (c * steps + step) / totalSteps;
+        if (hooks.onProgress && fraction - lastReported >= 0.01) {
+          hooks.onProgress(fraction);
+          lastReported = fraction;
+        }
+      }
+      const burning = step < settings.burnIn;
+      chain.step(burning);
+      const after = step - settings.burnIn + 1;
+      if (!burning && after % settings.thin === 0 && kept < keptPerChain) {
+        posterior.expand(chain.state);
+        const row = kept * quantities;
+        for (let k = 0; k < E; k++) out[row + k] = posterior.ageAt(structure.eventProbes[k]);
+        for (let j = 0; j < S; j++) {
+          const age = posterior.ageAt(structure.levelProbes[j]);
+          out[row + E + j] = age;
+          outlierSums[j] += levels.outlierShare(j, age);
+        }
+        for (let p = 0; p < P; p++) out[row + E + S + p] = posterior.ageAt(structure.curve[p].probe);
+        out[row + E + S + P] = chain.state[0];
+        out[row + E + S + P + 1] = posterior.ageAt(basePoint);
+        memoryDraws[c * keptPerChain + kept] = posterior.memory(chain.state);
+        erosionDraws.forEach((draws, g) => (draws[c * keptPerChain + kept] = posterior.erosion(chain.state, g)));
+        kept++;
+      }
+    }
+    accepted += chain.accepted;
+    proposed += chain.proposed;
+  }
+  hooks.onProgress?.(1);
+
+  const perChain = (q: number): Float64Array[] =>
+    series.map((values) => {
+      const s = new Float64Array(keptPerChain);
+      for (let k = 0; k < keptPerChain; k++) s[k] = values[k * quantities + q];
+      return s;
+    });
+  const pooled = (q: number): Float64Array => {
+    const all = new Float64Array(keptPerChain * settings.chains);
+    perChain(q).forEach((s, c) => all.set(s, c * keptPerChain));
+    return all;
+  };
+  const totalDraws = keptPerChain * settings.chains;
+
+  const events: EventPosterior[] = structure.events.map((horizon, k) => {
+    const density = kernelDensity(pooled(k));
+    return { eventHorizonId: horizon.id, density, summary: summarise(density), ...chainDiagnostics(perChain(k)) };
+  });
+  const samples: SamplePosterior[] = modelled.map((sample, j) => {
+    const density = kernelDensity(pooled(E + j));
+    const summary = summarise(density);
+    return {
+      sampleId: sample.id,
+      ageRelation: sample.ageRelation,
+      outlierProbability: outlierSums[j] / totalDraws,
+      density,
+      medianCalBp: summary.medianCalBp,
+      summary,
+      ...chainDiagnostics(perChain(E + j)),
+    };
+  });
+  const boundary = (q: number): BoundaryPosterior => {
+    const density = kernelDensity(pooled(q));
+    return { density, summary: summarise(density), ...chainDiagnostics(perChain(q)) };
+  };
+  const ageDepth: AgeDepthPoint[] = structure.curve.map((point, p) => {
+    const sorted = pooled(E + S + p).sort();
+    return {
+      depthM: point.depthM,
+      eventFreeDepthM: point.eventFreeDepthM,
+      medianCalBp: sortedQuantile(sorted, 0.5),
+      low95CalBp: sortedQuantile(sorted, 0.025),
+      high95CalBp: sortedQuantile(sorted, 0.975),
+    };
+  });
+
+  const stored = Math.min(settings.maxStoredDraws, totalDraws);
+  const eventDraws = new Float64Array(stored * E);
+  for (let i = 0; i < stored; i++) {
+    const index = Math.floor((i * totalDraws) / stored);
+    const c = Math.floor(index / keptPerChain);
+    const k = index % keptPerChain;
+    for (let e = 0; e < E; e++) eventDraws[i * E + e] = series[c][k * quantities + e];
+  }
+  let young = Infinity;
+  let old = -Infinity;
+  for (const e of [...events, ...samples]) {
+    young = Math.min(young, e.density.startCalBp);
+    old = Math.max(old, e.density.startCalBp + e.density.probabilities.length - 1);
+  }
+  const median = (draws: Float64Array) => sortedQuantile(Float64Array.from(draws).sort(), 0.5);
+
+  return {
+    events,
+    samples,
+    boundaries: { start: boundary(E + S + P + 1), end: boundary(E + S + P) },
+    diagnostics: diagnose(structure.events, events, modelled, samples, { accepted, proposed }, keptPerChain),
+    eventDraws: { eventHorizonIds: structure.events.map((e) => e.id), drawCount: stored, draws: eventDraws },
+    window: { youngCalBp: young, oldCalBp: old },
+    settings,
+    ageDepth,
+    hemipelagic: {
+      rateMeanCmPerKyr: 100_000 / meanYearsPerMetre,
+      rateMeanSource,
+      sectionThicknessM: structure.sectionM,
+      sections: structure.sections,
+      memoryMedian: median(memoryDraws),
+      erosion: structure.gaps.map((g, k) => ({ unitId: g.unitId, estimateM: g.estimateM, medianM: median(erosionDraws[k]) })),
+    },
+  };
+}
+
+function labelOf(thing: { id: string; name?: string }): string {
+  return thing.name !== undefined && thing.name.trim() !== '' ? `"${thing.name}"` : `"${thing.id}"`;
+}
+
+function diagnose(
+  horizons: readonly ColumnEventHorizon[],
+  events: readonly EventPosterior[],
+  modelled: readonly { id: string; name?: string }[],
+  samples: readonly SamplePosterior[],
+  moves: { accepted: number; proposed: number },
+  keptDrawsPerChain: number,
+): AgeModelDiagnostics {
+  const judged =
+    events.length > 0
+      ? events.map((e, k) => ({ label: `event ${labelOf(horizons[k])}`, rhat: e.rhat, ess: e.ess }))
+      : samples.map((s, j) => ({ label: `sample ${labelOf(modelled[j])}`, rhat: s.rhat, ess: s.ess }));
+  const worstRhat = judged.reduce((a, b) => (b.rhat > a.rhat ? b : a));
+  const worstEss = judged.reduce((a, b) => (b.ess < a.ess ? b : a));
+  const converged = judged.every((q) => q.rhat <= RHAT_LIMIT && q.ess >= ESS_MINIMUM);
+  const message = converged
+    ? `Converged: the worst split R-hat is ${worstRhat.rhat.toFixed(3)} and the smallest effective sample size ` +
+      `${Math.round(worstEss.ess)} (hemipelagic depth model).`
+    : `Not converged: worst split R-hat ${worstRhat.rhat.toFixed(3)} (${worstRhat.label}, limit ${RHAT_LIMIT}), smallest ` +
+      `effective sample size ${Math.round(worstEss.ess)} (${worstEss.label}, at least ${ESS_MINIMUM} needed). Run the ` +
+      'model again with more iterations before using these ages.';
+  const rate = moves.proposed > 0 ? moves.accepted / moves.proposed : 0;
+  return {
+    converged,
+    maxRhat: worstRhat.rhat,
+    minEss: worstEss.ess,
+    message,
+    acceptance: { blockShift: rate, boundaries: rate, paths: rate },
+    keptDrawsPerChain,
+  };
+}

@@ -1,0 +1,12 @@
+import { IsUUID } from 'class-validator';
+
+export class TieSuggestionsInput {
+  @IsUUID()
+  hypothesisId: string;
+
+  @IsUUID()
+  siteAId: string;
+
+  @IsUUID()
+  siteBId: string;
+}
