@@ -32,6 +32,7 @@ import { EventLadderCache } from './correlation/ladder-cache/event-ladder-cache'
 import { ProjectsModule } from './projects/projects.module';
 import { ProvenanceApiModule } from './provenance/provenance-api.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
+import { SizeEvidenceModule } from './size-evidence/size-evidence.module';
 import { SampleImportModule } from './sample-import/sample-import.module';
 import { SamplesModule } from './samples/samples.module';
 import { SegmentsModule } from './segments/segments.module';
@@ -85,6 +86,7 @@ import { ReleasesModule } from './releases/releases.module';
     JobsModule,
     AgeModelsModule,
     RecurrenceModule,
+    SizeEvidenceModule,
     CorrelationModule,
     CoreLogsModule,
     AttachmentsModule,

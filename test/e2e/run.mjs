@@ -1,9 +1,13 @@
 // Browser journeys: the app started as `npm start` starts it (fakes, server, one worker) against
 // a throwaway `stratochron_e2e` database, driven by playwright-core through Debian's Chromium.
 //
-// They run with `npm test` (E2E=0 skips them), or alone (DATABASE_URL names any database on the server to use;
-// the report goes to STRATOCHRON_TEST_RESULTS_FILE, default .data/e2e/results.json):
-//   DATABASE_URL=postgres://postgres@127.0.0.1:54349/postgres node test/e2e/run.mjs
+// They run with `npm test` (E2E=0 skips them), or alone. DATABASE_URL names a database on the
+// server to use: the journeys recreate `<that name>_e2e` beside it (`stratochron_e2e` when it
+// names `postgres`), so people sharing one server do not wipe each other's. The report goes to
+// STRATOCHRON_TEST_RESULTS_FILE, default .data/e2e/results.json:
+//   DATABASE_URL=postgres://postgres@127.0.0.1:54349/stratochron_me node test/e2e/run.mjs
+// Every journey runs at each width of E2E_WIDTHS (default 1440,1024 px); E2E_ONLY=<regexp> runs
+// only the journeys whose title matches.
 // Screenshots land in .data/e2e/screenshots/, process logs in .data/e2e/logs/. Exits non-zero
 // when a journey fails; a journey fails on any browser console error or page error.
 import { execFileSync, spawn } from 'node:child_process';
@@ -23,10 +27,18 @@ const SHOTS_DIR = join(E2E_DIR, 'screenshots');
 const LOGS_DIR = join(E2E_DIR, 'logs');
 const RESULTS_FILE = process.env.STRATOCHRON_TEST_RESULTS_FILE || join(E2E_DIR, 'results.json');
 const CHROMIUM = '/usr/bin/chromium';
-const DATABASE = 'stratochron_e2e';
+/** The throwaway database: named after DATABASE_URL's, so engineers sharing a server keep apart. */
+function e2eDatabaseName() {
+  const named = process.env.DATABASE_URL ? decodeURIComponent(new URL(process.env.DATABASE_URL).pathname.slice(1)) : '';
+  const base = !named || named === 'postgres' ? 'stratochron' : named.replace(/[^a-z0-9_]/gi, '_').slice(0, 50);
+  return `${base}_e2e`;
+}
+const DATABASE = e2eDatabaseName();
+const WIDTHS = (process.env.E2E_WIDTHS || '1440,1024').split(',').map(Number).filter((width) => width >= 320);
 const PASSWORD = 'stratochron-demo';
 const HEALTH_TIMEOUT_MS = 120_000;
-const DEMO_JOBS_TIMEOUT_MS = 480_000;
+// The demo's age model runs share the machine's cores with whatever else runs there; E2E_DEMO_TIMEOUT_S raises the wait.
+const DEMO_JOBS_TIMEOUT_MS = Number(process.env.E2E_DEMO_TIMEOUT_S || 900) * 1000;
 const JOURNEY_TIMEOUT_MS = 120_000;
 const STEP_TIMEOUT_MS = 20_000;
 
@@ -43,18 +55,15 @@ function ensureChromium() {
 
 /**
  * `npm run build -w <workspace>` when its sources changed (scripts/lib/build.mjs, as `npm start`
- * does). Run in a child because that helper exits on failure; a failed build with a previous
- * dist left in place still runs the journeys against that dist, with a warning, since a
- * half-saved source of someone else's must not stop them (the build itself is checked elsewhere).
+ * does), in a child because that helper exits on failure. A failed build stops the journeys: run
+ * against an earlier dist they would pass or fail on code that is not the code under test.
  */
 function ensureBuilt(workspace) {
   const script = `import('./scripts/lib/build.mjs').then((build) => build.ensureBuilt(${JSON.stringify(workspace)}))`;
   try {
     execFileSync(process.execPath, ['--input-type=module', '-e', script], { cwd: ROOT, stdio: 'inherit' });
   } catch (error) {
-    const entry = workspace === 'backend' ? join(ROOT, 'backend', 'dist', 'main.js') : join(ROOT, 'frontend', 'dist', 'index.html');
-    if (!existsSync(entry)) throw new Error(`the ${workspace} build failed and there is no earlier build: ${error.message}`);
-    log(`WARNING: the ${workspace} build failed; using the earlier build in ${workspace}/dist`);
+    throw new Error(`the ${workspace} build failed, so the journeys do not run (an earlier build would test other code): ${error.message}`);
   }
 }
 
@@ -196,6 +205,39 @@ function check(condition, message) {
   if (!condition) throw new Error(message);
 }
 
+/**
+ * Wait until `locator` matches a number of elements `accept` takes (rows appear one render at a
+ * time, so counting right after the first appears reads a partial table), then return the count.
+ */
+async function waitForCount(locator, accept, what, timeoutMs = STEP_TIMEOUT_MS) {
+  const deadline = Date.now() + timeoutMs;
+  let count = await locator.count();
+  while (!accept(count)) {
+    if (Date.now() > deadline) throw new Error(`${what}: found ${count} after ${timeoutMs / 1000} s`);
+    await sleep(200);
+    count = await locator.count();
+  }
+  return count;
+}
+
+/**
+ * Editing controls a viewer must not see. The researcher journey asserts each is present by the
+ * same name, so renaming a control fails that journey instead of making the viewer's absence
+ * check pass vacuously.
+ */
+const EDIT_CONTROLS = {
+  project: ['Add site', 'Add segment'],
+  site: ['Add unit', 'Add event horizon', 'Edit site'],
+  ageModel: ['Start run'],
+};
+
+async function checkControls(page, names, present, who) {
+  for (const name of names) {
+    const count = await page.getByRole('button', { name, exact: true }).count();
+    check(present ? count > 0 : count === 0, `${who} ${present ? 'does not see' : 'sees'} "${name}"`);
+  }
+}
+
 // ---------------------------------------------------------------- journeys
 
 async function signIn(page, baseUrl, email) {
@@ -218,14 +260,17 @@ function firstSiteLink(page) {
 
 const LAB_SHEET_HEADER = 'labCode,unit,depthM,method,material,c14Age,c14Error,curve';
 
-async function researcherBuildsSite(page, { baseUrl, shot }) {
+async function researcherBuildsSite(page, { baseUrl, shot, width }) {
+  const siteName = `E2E Marsh ${width}`;
   await signIn(page, baseUrl, 'researcher@demo.test');
   await openProject(page);
+  await firstSiteLink(page).waitFor();
+  await checkControls(page, EDIT_CONTROLS.project, true, 'the researcher');
   await shot('project');
 
   await page.getByRole('button', { name: 'Add site' }).click();
   const siteDialog = page.getByRole('dialog');
-  await siteDialog.locator('#name').fill('E2E Marsh');
+  await siteDialog.locator('#name').fill(siteName);
   await siteDialog.locator('#latitude').fill('-38.5');
   await siteDialog.locator('#longitude').fill('176.2');
   await siteDialog.locator('#alongStrikeKm').fill('312');
@@ -233,7 +278,7 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
   await shot('site-dialog');
   await siteDialog.getByRole('button', { name: 'Add site' }).click();
   await siteDialog.waitFor({ state: 'detached' });
-  await page.getByRole('link', { name: 'E2E Marsh', exact: true }).click();
+  await page.getByRole('link', { name: siteName, exact: true }).click();
   await page.getByRole('button', { name: 'Add unit' }).waitFor();
 
   for (const [name, top, base] of [
@@ -249,9 +294,18 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
     await dialog.waitFor({ state: 'detached' });
     await page.getByRole('cell', { name, exact: true }).waitFor();
   }
+  // Every site control is offered once the column has two units (a horizon lies between two).
+  await checkControls(page, EDIT_CONTROLS.site, true, 'the researcher');
   await page.getByRole('button', { name: 'Add event horizon' }).click();
   const horizonDialog = page.getByRole('dialog');
   await horizonDialog.locator('#name').fill('E1');
+  // Typed evidence tags: Enter adds each one and leaves the dialog open for the next.
+  for (const tag of ['sand sheet', 'buried soil']) {
+    await horizonDialog.locator('#evidence').fill(tag);
+    await horizonDialog.locator('#evidence').press('Enter');
+  }
+  const typedTags = horizonDialog.locator('.bp6-tag-input .bp6-tag');
+  check((await horizonDialog.count()) === 1 && (await waitForCount(typedTags, (count) => count >= 2, 'typed evidence tags')) === 2, 'Enter in the evidence field did not keep the dialog open for a second tag');
   await shot('horizon-dialog');
   await horizonDialog.getByRole('button', { name: 'Add event horizon' }).click();
   await horizonDialog.waitFor({ state: 'detached' });
@@ -261,8 +315,10 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
   await page.getByRole('tab', { name: /Samples/ }).click();
   await page.getByRole('button', { name: 'Import CSV' }).click();
   const importDialog = page.getByRole('dialog');
+  // Lab codes are unique in a project: each width's round imports its own.
+  const [firstCode, secondCode] = [`E2E-${width}-101`, `E2E-${width}-102`];
   const sheet = (secondError) =>
-    [LAB_SHEET_HEADER, 'E2E-101,tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20', `E2E-102,peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
+    [LAB_SHEET_HEADER, `${firstCode},tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20`, `${secondCode},peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
   await importDialog.locator('#import-csv').fill(sheet(0));
   await importDialog.getByRole('button', { name: 'Check sheet' }).click();
   const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
@@ -280,12 +336,11 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
   await importDialog.waitFor({ state: 'detached' });
 
   // The calibrated 95.4 % ranges sit in the samples grid beside each lab code.
-  for (const labCode of ['E2E-101', 'E2E-102']) {
+  for (const labCode of [firstCode, secondCode]) {
     await page.getByText(labCode, { exact: true }).first().waitFor();
   }
   const rangeCells = page.locator('.bp6-table-cell, .bp5-table-cell').filter({ hasText: /\d+\s*[–-]\s*\d+/ });
-  await rangeCells.first().waitFor();
-  check((await rangeCells.count()) >= 2, `expected calibrated ranges for both samples, found ${await rangeCells.count()} range cells`);
+  await waitForCount(rangeCells, (count) => count >= 2, 'calibrated range cells for both samples');
   await shot('samples');
 
   // A core photo: stored, then shown by the thumbnail a worker makes.
@@ -299,26 +354,34 @@ async function researcherBuildsSite(page, { baseUrl, shot }) {
   await shot('files');
 }
 
-async function researcherRunsAgeModel(page, { baseUrl, shot }) {
+async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
+  // A seed of its own per width: the page must show this run, not the one of an earlier round.
+  const seed = String(7 + round);
   await signIn(page, baseUrl, 'researcher@demo.test');
   await openProject(page);
   await firstSiteLink(page).click();
+  // The run lists one row per event horizon of the column: count them on the site page first.
+  const horizonRows = page.locator('.sc-section', { hasText: 'Event horizons' }).locator('tbody tr');
+  await horizonRows.first().waitFor();
+  const expected = await horizonRows.count();
   await page.getByRole('link', { name: /age model/i }).first().click();
   await page.getByRole('button', { name: 'Start run' }).waitFor();
+  await checkControls(page, EDIT_CONTROLS.ageModel, true, 'the researcher');
   await page.locator('#iterations').fill('2000');
-  await page.locator('#seed').fill('7');
+  await page.locator('#seed').fill(seed);
   await shot('settings');
   const before = await page.locator('tr').count();
   await page.getByRole('button', { name: 'Start run' }).click();
   // The demo's own run (another seed) already shows as succeeded: wait for this run, by its seed.
-  await page.locator('.sc-run-status-line').filter({ hasText: /succeeded\s*seed\s*7\b/ }).waitFor({ timeout: 90_000 });
+  await page.locator('.sc-run-status-line').filter({ hasText: new RegExp(`succeeded\\s*seed\\s*${seed}\\b`) }).waitFor({ timeout: 90_000 });
   const eventTable = page.locator('table', { has: page.locator('th', { hasText: '95.4 % range' }) }).first();
   await eventTable.waitFor();
   const rows = eventTable.locator('tbody tr');
-  await rows.first().waitFor();
-  check((await rows.count()) > 0, 'the finished run lists no event');
+  await waitForCount(rows, (count) => count === expected, `${expected} event rows of the finished run`);
   const firstRange = await rows.first().locator('td').nth(3).innerText();
   check(/\d/.test(firstRange), `the first event has no 95.4 % range: "${firstRange}"`);
+  // A single-year sliver of probability is not listed as a range ("490–490 cal BP").
+  check(!/\b(\d+)–\1 cal BP/.test(firstRange), `the first event lists a zero-width range: "${firstRange}"`);
   log(`age model: ${await rows.count()} events (table rows before ${before}), first range ${firstRange.replace(/\s+/g, ' ')}`);
   await shot('run-finished');
 }
@@ -399,15 +462,17 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   // The regional event now holds both events, with its concordance, chi-square, rupture and Mw checks.
   const card = page.locator('.sc-regional-card').filter({ hasText: labelA }).filter({ hasText: labelB }).first();
   await card.waitFor();
-  for (const label of ['Concordance', 'χ² test', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
-  const chiSquare = (await card.locator('dt:has-text("χ² test") + dd').innerText()).trim();
-  check(/T = /.test(chiSquare), `the regional event has no chi-square test: "${chiSquare}"`);
+  for (const label of ['Concordance', 'Same age?', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
+  // The same-age test in words: the spread, the 5 % limit and what it means.
+  const chiSquare = (await card.locator('dt:has-text("Same age?") + dd').innerText()).trim();
+  check(/spread by [\d.]+, (under|over) [\d.]+.*1 time in 20/.test(chiSquare), `the regional event's same-age test does not say spread, limit and meaning: "${chiSquare}"`);
   await card.scrollIntoViewIfNeeded();
   log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');
 }
 
-async function analystRunsRecurrence(page, { baseUrl, shot }) {
+async function analystRunsRecurrence(page, { baseUrl, shot, round }) {
+  const seed = String(11 + round);
   await signIn(page, baseUrl, 'analyst@demo.test');
   await openProject(page);
   await page.getByRole('link', { name: 'Recurrence' }).click();
@@ -416,11 +481,11 @@ async function analystRunsRecurrence(page, { baseUrl, shot }) {
   const centralValue = await segment.locator('option', { hasText: /Central/ }).first().getAttribute('value');
   await segment.selectOption(centralValue);
   await page.locator('#draws').fill('500');
-  await page.locator('#seed').fill('11');
+  await page.locator('#seed').fill(seed);
   await shot('setup');
   await page.getByRole('button', { name: 'Start analysis' }).click();
-  // The page may still show the demo analysis; wait until the new one (seed 11) is the one shown.
-  await page.getByText(/seed\s*11\s*·\s*500\s*draws/).first().waitFor();
+  // The page may still show an earlier analysis; wait until the new one (by its seed) is the one shown.
+  await page.getByText(new RegExp(`seed\\s*${seed}\\s*·\\s*500\\s*draws`)).first().waitFor();
   const heading = page.getByRole('heading', { name: 'Conditional probability of the next event' });
   await heading.waitFor({ timeout: 90_000 });
   const table = page.locator('table', { has: page.locator('th', { hasText: 'Model' }) }).first();
@@ -444,20 +509,26 @@ async function viewerCannotChange(page, { baseUrl, shot }) {
   await signIn(page, baseUrl, 'viewer@demo.test');
   await openProject(page);
   await firstSiteLink(page).waitFor();
-  check((await page.getByRole('button', { name: 'Add site' }).count()) === 0, 'the viewer sees Add site');
-  check((await page.getByRole('button', { name: 'Add segment' }).count()) === 0, 'the viewer sees Add segment');
+  await checkControls(page, EDIT_CONTROLS.project, false, 'the viewer');
   await shot('project');
   await firstSiteLink(page).click();
   await page.getByRole('tab', { name: /Column/ }).waitFor();
   await page.getByText('Units').first().waitFor();
-  check((await page.getByRole('button', { name: 'Add unit' }).count()) === 0, 'the viewer sees Add unit');
-  check((await page.getByRole('button', { name: 'Add event horizon' }).count()) === 0, 'the viewer sees Add event horizon');
-  check((await page.getByRole('button', { name: 'Edit site' }).count()) === 0, 'the viewer sees Edit site');
+  await checkControls(page, EDIT_CONTROLS.site, false, 'the viewer');
   await shot('site');
   await page.getByRole('link', { name: /age model/i }).first().click();
   await page.getByRole('heading', { name: /Age model/ }).waitFor();
-  check((await page.getByRole('button', { name: 'Start run' }).count()) === 0, 'the viewer sees Start run');
+  await checkControls(page, EDIT_CONTROLS.ageModel, false, 'the viewer');
   await shot('age-model');
+
+  // An address naming no project: not found at once, in words, never a server statement.
+  const askedAt = Date.now();
+  await page.goto(`${baseUrl}/projects/does-not-exist`);
+  await page.getByText('Not found', { exact: true }).waitFor({ timeout: 3000 });
+  const notFoundText = await page.locator('body').innerText();
+  check(!/\bselect\b|\$\d|\bfrom\b.*\bwhere\b/i.test(notFoundText), `the not-found page quotes a statement: ${notFoundText.slice(0, 200)}`);
+  log(`/projects/does-not-exist: not found after ${Date.now() - askedAt} ms`);
+  await shot('not-found');
 
   const signedIn = await graphql(baseUrl, 'mutation ($email: String!, $password: String!) { signIn(email: $email, password: $password) { token } }', {
     email: 'viewer@demo.test',
@@ -510,9 +581,9 @@ const JOURNEYS = [
   ['admin freezes a release, sees it listed at once and opens it read only', adminFreezesRelease],
 ];
 
-async function runJourney(browser, baseUrl, index, title, journey) {
-  const slug = `${index + 1}-${title.split(' ')[0]}`;
-  const context = await browser.newContext({ viewport: { width: 1440, height: 960 }, acceptDownloads: true });
+async function runJourney(browser, baseUrl, index, title, journey, width) {
+  const slug = `${width}-${index + 1}-${title.split(' ')[0]}`;
+  const context = await browser.newContext({ viewport: { width, height: 960 }, acceptDownloads: true });
   context.setDefaultTimeout(STEP_TIMEOUT_MS);
   const page = await context.newPage();
   const browserErrors = [];
@@ -529,7 +600,7 @@ async function runJourney(browser, baseUrl, index, title, journey) {
   const failureMessages = [];
   try {
     await Promise.race([
-      journey(page, { baseUrl, shot }),
+      journey(page, { baseUrl, shot, width, round: WIDTHS.indexOf(width) }),
       sleep(JOURNEY_TIMEOUT_MS).then(() => {
         throw new Error(`the journey took over ${JOURNEY_TIMEOUT_MS / 1000} s`);
       }),
@@ -541,8 +612,9 @@ async function runJourney(browser, baseUrl, index, title, journey) {
   if (browserErrors.length > 0) failureMessages.push(...browserErrors);
   await context.close();
   const status = failureMessages.length === 0 ? 'passed' : 'failed';
-  log(`${status}: ${title} (${((Date.now() - started) / 1000).toFixed(1)} s)${status === 'failed' ? `\n  ${failureMessages.join('\n  ')}` : ''}`);
-  return { title, status, failureMessages };
+  const fullTitle = `${title} (${width} px)`;
+  log(`${status}: ${fullTitle} (${((Date.now() - started) / 1000).toFixed(1)} s)${status === 'failed' ? `\n  ${failureMessages.join('\n  ')}` : ''}`);
+  return { title: fullTitle, status, failureMessages };
 }
 
 function writeReport(assertionResults, setupError) {
@@ -583,8 +655,12 @@ async function main() {
       headless: true,
       args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
     });
-    for (const [index, [title, journey]] of JOURNEYS.entries()) {
-      assertionResults.push(await runJourney(browser, baseUrl, index, title, journey));
+    const only = process.env.E2E_ONLY ? new RegExp(process.env.E2E_ONLY, 'i') : null;
+    for (const width of WIDTHS) {
+      for (const [index, [title, journey]] of JOURNEYS.entries()) {
+        if (only && !only.test(title)) continue;
+        assertionResults.push(await runJourney(browser, baseUrl, index, title, journey, width));
+      }
     }
   } catch (error) {
     setupError = error;

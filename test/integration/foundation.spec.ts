@@ -163,6 +163,18 @@ describe('validation', () => {
     expect(await clients.RESEARCHER.errorOf(CREATE_SAMPLE, { i: input })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'labCode' });
   });
 
+  it('refuses a site whose along-strike position lies outside its segment, on create and on update, writing nothing', async () => {
+    const { createSegment } = await clients.RESEARCHER.ok(CREATE_SEGMENT, { i: { projectId: fixture.projectId, name: 'Extent check', startKm: 100, endKm: 200 } });
+    const outside = { ...siteInput('Beyond the segment'), segmentId: createSegment.id, alongStrikeKm: 250 };
+    expect(await clients.RESEARCHER.errorOf(CREATE_SITE, { i: outside })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'alongStrikeKm' });
+    expect(await sql('select id from sites where name = $1', ['Beyond the segment'])).toHaveLength(0);
+    const { createSite } = await clients.RESEARCHER.ok(CREATE_SITE, { i: { ...outside, name: 'Inside the segment', alongStrikeKm: 200 } });
+    const moved = await clients.RESEARCHER.errorOf(UPDATE_SITE, { id: createSite.id, v: createSite.version, i: { alongStrikeKm: 99 } });
+    expect(moved).toMatchObject({ code: 'BAD_USER_INPUT', field: 'alongStrikeKm' });
+    const [kept] = await sql<{ along_strike_km: number }>('select along_strike_km from sites where id = $1', [createSite.id]);
+    expect(kept.along_strike_km).toBe(200);
+  });
+
   it('refuses overlapping units and a horizon between non-adjacent units', async () => {
     const overlap = await clients.RESEARCHER.errorOf(CREATE_UNIT, { i: { siteId, position: 4, name: 'x', topDepthM: 0.5, baseDepthM: 0.8, facies: 'SOIL' } });
     expect(overlap).toMatchObject({ code: 'BAD_USER_INPUT', field: 'topDepthM' });

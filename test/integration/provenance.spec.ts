@@ -349,3 +349,17 @@ describe('refreshStaleResults', () => {
     expect(plan.skipped).toEqual([expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.siteC, reason: expect.stringContaining('cannot run recurrence analyses') })]);
   });
 });
+
+describe('audit trail names', () => {
+  it('names the changed object and every id in its before/after images, ids kept', async () => {
+    const { auditTrail } = await clients.VIEWER.ok(
+      `query($i: AuditTrailInput!) { auditTrail(input: $i) { edges { node { objectId objectName before after referencedNames { id name } } } } }`,
+      { i: { projectId: fixture.projectId, objectType: 'unit', objectId: site.A.units[3].id, first: 5 } },
+    );
+    const update = auditTrail.edges.map((e: { node: Record<string, unknown> }) => e.node).find((n: { before: unknown }) => n.before !== null);
+    expect(update.objectId).toBe(site.A.units[3].id);
+    expect(update.objectName).toBe('U4');
+    expect(update.before).not.toEqual(update.after);
+    expect(update.referencedNames).toEqual(expect.arrayContaining([{ id: site.A.id, name: 'Tarn Flat' }, { id: site.A.units[3].id, name: 'Tarn Flat: U4' }]));
+  });
+});

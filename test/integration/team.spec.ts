@@ -12,7 +12,7 @@ const REQUEST_RESET = `mutation($e: String!) { requestPasswordReset(email: $e) }
 const RESET = `mutation($i: ResetPasswordInput!) { resetPassword(input: $i) }`;
 const SET_ROLE = `mutation($i: SetMemberRoleInput!) { setMemberRole(input: $i) { id role user { id email } project { id } } }`;
 const REMOVE = `mutation($p: ID!, $u: ID!) { removeMember(projectId: $p, userId: $u) }`;
-const PROJECT = `query($id: ID!) { project(id: $id) { id myRole invitations { id email role acceptedAt } members { role user { id email } } } }`;
+const PROJECT = `query($id: ID!) { project(id: $id) { id name myRole invitations { id email role acceptedAt } members { role user { id email } } } }`;
 const TRAIL = `query($i: AuditTrailInput!) { auditTrail(input: $i) {
   edges { cursor node { id at actor { email } action objectType objectId before after } }
   pageInfo { endCursor hasNextPage } } }`;
@@ -86,8 +86,15 @@ describe('invitations', () => {
     expect(stored.token_hash).toBe(createHash('sha256').update(token).digest('hex'));
     expect(JSON.stringify(await sql('select * from invitations where id = $1', [inviteMember.id]))).not.toContain(token);
 
+    const LINK = `query($t: String!) { invitationLink(token: $t) { status projectName } }`;
+    const { project: invitedTo } = await clients.ADMIN.ok(PROJECT, { id: fixture.projectId });
+    expect((await anonymous.ok(LINK, { t: token })).invitationLink).toEqual({ status: 'OPEN', projectName: invitedTo.name });
+    expect((await anonymous.ok(LINK, { t: `${token}x` })).invitationLink).toEqual({ status: 'UNKNOWN', projectName: null });
+
     const { acceptInvitation } = await anonymous.ok(ACCEPT, { i: { token, password: 'a-new-password-9', displayName: 'Rangi Newcomer' } });
     expect(acceptInvitation.user).toMatchObject({ email, displayName: 'Rangi Newcomer' });
+    // Opened again, the link says it was used (the page then offers sign-in, not the form).
+    expect((await anonymous.ok(LINK, { t: token })).invitationLink.status).toBe('USED');
     const viaAccept = new GraphqlClient(server.url, acceptInvitation.token);
     expect((await viaAccept.ok(PROJECT, { id: fixture.projectId })).project.myRole).toBe('CORRELATOR');
 

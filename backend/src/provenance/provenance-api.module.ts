@@ -5,6 +5,7 @@ import { RecurrenceModule } from '../recurrence/recurrence.module';
 import { ReleasesModule } from '../releases/releases.module';
 import { SitesModule } from '../sites/sites.module';
 import { ProvenanceModule } from './provenance.module';
+import { AuditNamesResolver } from './audit-names.resolver';
 import { AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver } from './provenance.resolver';
 import { RefreshRepository } from './refresh.repository';
 import { ProjectRefreshResolver, RefreshResolver } from './refresh.resolver';
@@ -17,7 +18,7 @@ import { ResultTablesService } from './result-tables.service';
 @Module({
   imports: [ProvenanceModule, AgeModelsModule, SitesModule, CorrelationModule, RecurrenceModule, ReleasesModule],
   controllers: [ResultTablesController],
-  providers: [AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver, ResultTablesService, RefreshRepository, RefreshService, RefreshResolver, ProjectRefreshResolver, RefreshTicker],
+  providers: [AuditNamesResolver, AgeModelRunProvenanceResolver, RecurrenceProvenanceResolver, ResultTablesService, RefreshRepository, RefreshService, RefreshResolver, ProjectRefreshResolver, RefreshTicker],
   exports: [RefreshService],
 })
 export class ProvenanceApiModule {}

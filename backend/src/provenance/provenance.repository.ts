@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
-import { ageModelRuns, eventHorizons, hypotheses, projects, recurrenceAnalyses, resultInputs, segments, sites, ties } from '../database/schema';
+import { ageModelRuns, eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, resultInputs, samples, segments, sites, ties, units, users } from '../database/schema';
 import type { InputKind, ResultKind } from './staleness';
 
 export type ResultInputRow = typeof resultInputs.$inferSelect;
@@ -93,5 +93,34 @@ export class ProvenanceRepository {
   segmentName(id: string | null, executor: Executor = this.database.db): Promise<string | null> {
     if (!id) return Promise.resolve(null);
     return executor.select({ name: segments.name }).from(segments).where(eq(segments.id, id)).then((rows) => rows[0]?.name ?? null);
+  }
+
+  /**
+   * A person's name for each id that is a site, unit, event horizon, sample, segment, hypothesis,
+   * release, member, age model run or recurrence analysis (runs and analyses by what they are of).
+   */
+  async namesOf(ids: readonly string[], executor: Executor = this.database.db): Promise<Map<string, string>> {
+    const names = new Map<string, string>();
+    if (ids.length === 0) return names;
+    const list = [...ids];
+    const add = (rows: { id: string; name: string | null }[]) => rows.forEach((r) => r.name && names.set(r.id, r.name));
+    add(await executor.select({ id: sites.id, name: sites.name }).from(sites).where(inArray(sites.id, list)));
+    add(await executor.select({ id: units.id, name: sql<string>`${sites.name} || ': ' || ${units.name}` }).from(units).innerJoin(sites, eq(sites.id, units.siteId)).where(inArray(units.id, list)));
+    add(await executor.select({ id: eventHorizons.id, name: sql<string>`${sites.name} || ': ' || ${eventHorizons.name}` }).from(eventHorizons).innerJoin(sites, eq(sites.id, eventHorizons.siteId)).where(inArray(eventHorizons.id, list)));
+    add(await executor.select({ id: samples.id, name: samples.labCode }).from(samples).where(inArray(samples.id, list)));
+    add(await executor.select({ id: segments.id, name: segments.name }).from(segments).where(inArray(segments.id, list)));
+    add(await executor.select({ id: hypotheses.id, name: hypotheses.name }).from(hypotheses).where(inArray(hypotheses.id, list)));
+    add(await executor.select({ id: releases.id, name: sql<string>`'release ' || ${releases.number}` }).from(releases).where(inArray(releases.id, list)));
+    add(await executor.select({ id: users.id, name: users.displayName }).from(users).where(inArray(users.id, list)));
+    add(await executor.select({ id: ageModelRuns.id, name: sql<string>`'age model run of ' || ${sites.name}` }).from(ageModelRuns).innerJoin(sites, eq(sites.id, ageModelRuns.siteId)).where(inArray(ageModelRuns.id, list)));
+    add(
+      await executor
+        .select({ id: recurrenceAnalyses.id, name: sql<string>`'recurrence analysis of ' || coalesce(${segments.name}, ${sites.name}, 'a deleted subject')` })
+        .from(recurrenceAnalyses)
+        .leftJoin(segments, eq(segments.id, recurrenceAnalyses.segmentId))
+        .leftJoin(sites, eq(sites.id, recurrenceAnalyses.siteId))
+        .where(inArray(recurrenceAnalyses.id, list)),
+    );
+    return names;
   }
 }

@@ -43,7 +43,7 @@ export class SitesService {
 
   async create(user: AuthUser, input: CreateSiteInput): Promise<SiteRow> {
     await this.access.requireAccess({ user, permission: Permission.StratigraphyWrite, projectId: input.projectId });
-    await this.checkSegment(input.projectId, input.segmentId);
+    await this.checkSegment(input.projectId, input.segmentId, input.alongStrikeKm);
     return withConstraintErrors(() =>
       this.database.transaction(async (tx) => {
         const site = await this.sites.insert(input, tx);
@@ -57,7 +57,12 @@ export class SitesService {
 
   async update(user: AuthUser, id: string, version: number, input: UpdateSiteInput): Promise<SiteRow> {
     const before = await this.get(user, id, Permission.StratigraphyWrite);
-    await this.checkSegment(before.projectId, input.segmentId);
+    // The position is checked against the segment the site will have, with what the update leaves as it was.
+    await this.checkSegment(
+      before.projectId,
+      input.segmentId === undefined ? before.segmentId : input.segmentId,
+      input.alongStrikeKm ?? before.alongStrikeKm,
+    );
     return withConstraintErrors(() =>
       this.database.transaction(async (tx) => {
         const after = await requireVersionedUpdate(
@@ -86,10 +91,20 @@ export class SitesService {
     return true;
   }
 
-  /** A site's segment must belong to the same project. */
-  private async checkSegment(projectId: string, segmentId: string | null | undefined): Promise<void> {
+  /**
+   * A site's segment must belong to the same project, and the site's along-strike position must
+   * lie within the segment's extent (ends included): a segment is known by its km extent, so a
+   * site outside it would be counted in that segment's recurrence while drawn beyond it.
+   */
+  private async checkSegment(projectId: string, segmentId: string | null | undefined, alongStrikeKm: number): Promise<void> {
     if (!segmentId) return;
     const segment = await this.segments.findById(segmentId);
     if (!segment || segment.projectId !== projectId) throw badInput('segmentId', 'no such segment in this project');
+    if (alongStrikeKm < segment.startKm || alongStrikeKm > segment.endKm) {
+      throw badInput(
+        'alongStrikeKm',
+        `${alongStrikeKm} km lies outside segment ${segment.name} (${segment.startKm}–${segment.endKm} km along strike); choose a position inside it or another segment`,
+      );
+    }
   }
 }

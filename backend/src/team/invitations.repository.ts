@@ -20,6 +20,12 @@ export class InvitationsRepository {
     return row;
   }
 
+  /** The invitation with this token hash, read without a lock (to tell its holder what it can do). */
+  async findByTokenHash(tokenHash: string, executor: Executor = this.database.db): Promise<InvitationRow | undefined> {
+    const [row] = await executor.select().from(invitations).where(eq(invitations.tokenHash, tokenHash)).limit(1);
+    return row;
+  }
+
   listForProject(projectId: string, executor: Executor = this.database.db): Promise<InvitationRow[]> {
     return executor.select().from(invitations).where(eq(invitations.projectId, projectId)).orderBy(desc(invitations.createdAt));
   }

@@ -1,4 +1,4 @@
-import { Args, Mutation, Parent, ResolveField, Resolver } from '@nestjs/graphql';
+import { Args, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
 import { AuthUser } from '../auth/auth-user';
 import { AuthPayload } from '../auth/auth.service';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -15,6 +15,12 @@ export class InvitationsResolver {
   @Mutation('inviteMember')
   invite(@CurrentUser() user: AuthUser, @Args('input') input: InviteMemberInput): Promise<InvitationRow> {
     return this.invitations.invite(user, input);
+  }
+
+  @Public()
+  @Query('invitationLink')
+  linkState(@Args('token') token: string): ReturnType<InvitationsService['linkState']> {
+    return this.invitations.linkState(token);
   }
 
   @Public()

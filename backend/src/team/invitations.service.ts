@@ -83,6 +83,20 @@ export class InvitationsService {
    * account with the given password; an existing account must give its own password, so a
    * forwarded link cannot attach someone else's account.
    */
+  /**
+   * What an invitation link can still do, for the page that opens it: a used link says so
+   * instead of showing a form that can only fail. The project is named for a known token only.
+   */
+  async linkState(token: string): Promise<{ status: 'OPEN' | 'USED' | 'EXPIRED' | 'UNKNOWN'; projectName: string | null }> {
+    // Issued tokens are short; a long string names none and is not hashed.
+    const invitation = token.trim() === '' || token.length > 256 ? undefined : await this.invitations.findByTokenHash(hashToken(token.trim()));
+    if (!invitation) return { status: 'UNKNOWN', projectName: null };
+    const project = await this.projects.findById(invitation.projectId);
+    const refusal = tokenRefusal({ expiresAt: invitation.expiresAt, usedAt: invitation.acceptedAt });
+    const status = refusal === 'used' ? 'USED' : refusal === 'expired' ? 'EXPIRED' : 'OPEN';
+    return { status, projectName: project?.name ?? null };
+  }
+
   acceptInvitation(input: AcceptInvitationInput): Promise<AuthPayload> {
     return this.database.transaction(async (tx) => {
       const now = new Date();

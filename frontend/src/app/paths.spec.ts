@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { afterSignInPath, paths } from './paths';
+import { afterSignInPath, paths, routeIdsWellFormed } from './paths';
 
 describe('paths', () => {
   it('builds links from ids, escaping them', () => {
@@ -20,5 +20,15 @@ describe(afterSignInPath.name, () => {
     expect(afterSignInPath('//elsewhere.example')).toBe('/projects');
     expect(afterSignInPath('https://elsewhere.example')).toBe('/projects');
     expect(afterSignInPath(null)).toBe('/projects');
+  });
+});
+
+describe(routeIdsWellFormed.name, () => {
+  it('accepts record ids and refuses any other id parameter', () => {
+    const id = '0b6f2f5e-7d1a-4c1e-9a55-2f4b8d7e9c10';
+    expect(routeIdsWellFormed({ projectId: id, siteId: id.toUpperCase() })).toBe(true);
+    expect(routeIdsWellFormed({ projectId: 'does-not-exist' })).toBe(false);
+    expect(routeIdsWellFormed({ projectId: id, siteId: `${id}x` })).toBe(false);
+    expect(routeIdsWellFormed({ tab: 'samples' })).toBe(true);
   });
 });

@@ -19,7 +19,7 @@ export const routePatterns = {
 } as const;
 
 /** Tabs of the site page, kept in the `tab` search parameter so each can be linked to. */
-export type SiteTab = 'column' | 'samples' | 'calibration' | 'files';
+export type SiteTab = 'column' | 'samples' | 'calibration' | 'logs' | 'files';
 
 export const paths = {
   signIn: ({ next }: { next?: string } = {}) =>
@@ -39,4 +39,18 @@ export const paths = {
 /** Where to go after sign-in: a path inside the app from `?next=`, else the project list. */
 export function afterSignInPath(next: string | null): string {
   return next && next.startsWith('/') && !next.startsWith('//') ? next : paths.projects();
+}
+
+/** Record ids are UUIDs made by PostgreSQL (backend `database/schema/columns.ts`). */
+const RECORD_ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Whether every id parameter of a route (`projectId`, `siteId`, ...) is shaped like a record id.
+ * Anything else names no record, so the route is not found at once instead of after a request
+ * and its retries.
+ */
+export function routeIdsWellFormed(params: Readonly<Record<string, string | undefined>>): boolean {
+  return Object.entries(params)
+    .filter(([name]) => name.endsWith('Id'))
+    .every(([, value]) => value !== undefined && RECORD_ID.test(value));
 }

@@ -1,7 +1,7 @@
 import type { FetchQueryOptions, QueryKey } from '@tanstack/react-query';
-import { createBrowserRouter, redirect, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
 import { queryClient } from '@/app/queryClient';
-import { routePatterns } from '@/app/paths';
+import { routeIdsWellFormed, routePatterns } from '@/app/paths';
 import { sessionStore } from '@/modules/auth/utils/sessionStore';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
 import { calibrationQueries } from '@/modules/calibration/hooks/calibrationQueries';
@@ -36,6 +36,17 @@ function prefetch<TData, TKey extends QueryKey>(options: FetchQueryOptions<TData
   return null;
 }
 
+/**
+ * A loader that first refuses ids no record can have (`/projects/does-not-exist`) as not found,
+ * at once, without asking the server.
+ */
+function withIds(load: (params: LoaderFunctionArgs['params']) => null) {
+  return ({ params }: LoaderFunctionArgs) => {
+    if (!routeIdsWellFormed(params)) throw new Response('Not Found', { status: 404 });
+    return load(params);
+  };
+}
+
 const errorElement = <RouteErrorPage />;
 
 /**
@@ -58,37 +69,37 @@ const routes: RouteObject[] = [
         path: routePatterns.project,
         element: <ProjectOverviewPage />,
         errorElement,
-        loader: ({ params }) => prefetch(projectQueries.overview(params.projectId ?? '')),
+        loader: withIds((params) => prefetch(projectQueries.overview(params.projectId ?? ''))),
       },
       {
         path: routePatterns.site,
         element: <SitePage />,
         errorElement,
-        loader: ({ params }) => prefetch(siteQueries.column(params.projectId ?? '', params.siteId ?? '')),
+        loader: withIds((params) => prefetch(siteQueries.column(params.projectId ?? '', params.siteId ?? ''))),
       },
       {
         path: routePatterns.ageModel,
         element: <AgeModelPage />,
         errorElement,
-        loader: ({ params }) => prefetch(ageModelQueries.site(params.projectId ?? '', params.siteId ?? '')),
+        loader: withIds((params) => prefetch(ageModelQueries.site(params.projectId ?? '', params.siteId ?? ''))),
       },
       {
         path: routePatterns.ladder,
         element: <LadderPage />,
         errorElement,
-        loader: ({ params }) => prefetch(ladderQueries.ladder(params.projectId ?? '')),
+        loader: withIds((params) => prefetch(ladderQueries.ladder(params.projectId ?? ''))),
       },
       {
         path: routePatterns.recurrence,
         element: <RecurrencePage />,
         errorElement,
-        loader: ({ params }) => prefetch(recurrenceQueries.setup(params.projectId ?? '')),
+        loader: withIds((params) => prefetch(recurrenceQueries.setup(params.projectId ?? ''))),
       },
       {
         path: routePatterns.projectAdmin,
         element: <ProjectAdminPage />,
         errorElement,
-        loader: ({ params }) => prefetch(teamQueries.team(params.projectId ?? '')),
+        loader: withIds((params) => prefetch(teamQueries.team(params.projectId ?? ''))),
       },
       { path: routePatterns.calibrate, element: <CalibrationPage />, errorElement, loader: () => prefetch(calibrationQueries.curves()) },
       { path: '*', element: <NotFoundPage />, errorElement },

@@ -131,7 +131,11 @@ export type AuditRecord = {
   before?: Maybe<Scalars['JSON']['output']>;
   id: Scalars['ID']['output'];
   objectId: Scalars['ID']['output'];
+  /** The changed object's name (a site's name, a sample's lab code, ...); null when it has none. */
+  objectName?: Maybe<Scalars['String']['output']>;
   objectType: Scalars['String']['output'];
+  /** Names of the objects whose ids appear in before/after (the object itself, its site, unit, segment, ...). */
+  referencedNames: Array<NamedId>;
 };
 
 export type AuditTrailInput = {
@@ -244,11 +248,19 @@ export type CoreLogTrace = {
 };
 
 export type CreateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
   quality: Scalars['Int']['input'];
   siteId: Scalars['ID']['input'];
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId: Scalars['ID']['input'];
   unitBelowId: Scalars['ID']['input'];
 };
@@ -295,6 +307,8 @@ export type CreateSampleInput = {
 };
 
 export type CreateSegmentInput = {
+  /** Down-dip width, km (> 0, at most 1,000). */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm: Scalars['Float']['input'];
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
@@ -383,6 +397,12 @@ export type DepthModel =
 /** The contact at which an earthquake is interpreted: one site's event. */
 export type EventHorizon = {
   __typename?: 'EventHorizon';
+  /** Thickness of the event bed at a core site: the unit above the horizon (top to base depth), m; null elsewhere or without depths. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  /** 1-sigma error of displacementM, m. */
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic displacement (slip), m, e.g. in a trench. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
   evidence: Array<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
   /** Posterior summary from the site's latest successful age model run, if any. */
@@ -392,6 +412,10 @@ export type EventHorizon = {
   /** 1 (certain) to 4 (possible). */
   quality: Scalars['Int']['output'];
   site: Site;
+  /** 1-sigma error of subsidenceM, m. */
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Measured coseismic subsidence, m (negative for uplift), e.g. from a marsh's microfossil transfer function. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
   /** The first post-event unit. */
   unitAbove: Unit;
   /** The unit holding pre-event deposits. */
@@ -532,6 +556,26 @@ export type Invitation = {
   role: Role;
 };
 
+/** An invitation link's state, as its holder may see it. */
+export type InvitationLink = {
+  __typename?: 'InvitationLink';
+  /** The project the link invites to; null for an unknown token. */
+  projectName?: Maybe<Scalars['String']['output']>;
+  /** Whether the link can still be used. */
+  status: InvitationLinkStatus;
+};
+
+/** Whether an invitation link can still be used. */
+export type InvitationLinkStatus =
+  /** Past its expiry; a project admin can send a new one. */
+  | 'EXPIRED'
+  /** Not used and not expired: the form can be filled in. */
+  | 'OPEN'
+  /** No invitation has this token (mistyped or cut short). */
+  | 'UNKNOWN'
+  /** Already used to join the project; the holder signs in instead. */
+  | 'USED';
+
 export type InviteMemberInput = {
   email: Scalars['String']['input'];
   projectId: Scalars['ID']['input'];
@@ -570,6 +614,7 @@ export type LadderEvent = {
   medianCalBp?: Maybe<Scalars['Float']['output']>;
 };
 
+/** A moment magnitude from an empirical scaling relation, with the relation's sigma and name. */
 export type MagnitudeEstimate = {
   __typename?: 'MagnitudeEstimate';
   mw: Scalars['Float']['output'];
@@ -892,6 +937,13 @@ export type MutationUploadCoreLogArgs = {
   input: UploadCoreLogInput;
 };
 
+/** An id in an audit record's before/after images, with the name of what it identifies. */
+export type NamedId = {
+  __typename?: 'NamedId';
+  id: Scalars['ID']['output'];
+  name: Scalars['String']['output'];
+};
+
 /**
  * A minimal cycle of the hypothesis's order graph (each regional event one node, each site's column
  * ordering its members): ties that cannot all hold, because together they put an event before
@@ -986,6 +1038,8 @@ export type Query = {
   eventLadder: EventLadder;
   fitRenewal: RenewalFit;
   hypothesis: Hypothesis;
+  /** What an invitation link can still do, asked before its form is shown (public: the token is the key). */
+  invitationLink: InvitationLink;
   /** The signed-in user. */
   me: User;
   project: Project;
@@ -1045,6 +1099,11 @@ export type QueryFitRenewalArgs = {
 
 export type QueryHypothesisArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type QueryInvitationLinkArgs = {
+  token: Scalars['String']['input'];
 };
 
 
@@ -1256,9 +1315,21 @@ export type RegionalEvent = {
    */
   concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
+  /** Mw from the minimum rupture length (the site span), so a lower bound. */
   magnitude?: Maybe<MagnitudeEstimate>;
+  /**
+   * Mw from rupture area, the site span times the down-dip width of the member sites' segment(s)
+   * (the narrowest when they differ), by the Strasser, Arango & Bommer (2010) interface area
+   * relation; null when no member's segment has a width.
+   */
+  magnitudeFromArea?: Maybe<MagnitudeEstimate>;
+  /** Mw from the members' mean measured displacement by Wells & Coppersmith (1994), all slip types; null without displacements. */
+  magnitudeFromDisplacement?: Maybe<MagnitudeEstimate>;
   members: Array<EventHorizon>;
+  /** Along-strike span of the member sites, km: a minimum rupture length. */
   ruptureLengthKm?: Maybe<Scalars['Float']['output']>;
+  /** Each member's measured size (subsidence, displacement, bed thickness) along strike. */
+  sizeProfile: Array<SizeEvidencePoint>;
   warnings: Array<Scalars['String']['output']>;
 };
 
@@ -1529,6 +1600,8 @@ export type SamplePosterior = {
 /** A fault or subduction-zone segment with its along-strike extent. */
 export type Segment = {
   __typename?: 'Segment';
+  /** Down-dip width of the rupture plane, km: with it a regional event gets Mw from rupture area (length x width). */
+  downDipWidthKm?: Maybe<Scalars['Float']['output']>;
   endKm: Scalars['Float']['output'];
   id: Scalars['ID']['output'];
   name: Scalars['String']['output'];
@@ -1590,6 +1663,22 @@ export type SiteKind =
   | 'MARSH'
   | 'OUTCROP'
   | 'TRENCH';
+
+/** One site's measured size of a regional event, for the along-strike profile. */
+export type SizeEvidencePoint = {
+  __typename?: 'SizeEvidencePoint';
+  alongStrikeKm?: Maybe<Scalars['Float']['output']>;
+  /** Event-bed thickness at a core site, m. */
+  bedThicknessM?: Maybe<Scalars['Float']['output']>;
+  displacementErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Displacement, m, and its 1-sigma error. */
+  displacementM?: Maybe<Scalars['Float']['output']>;
+  eventHorizon: EventHorizon;
+  site: Site;
+  subsidenceErrorM?: Maybe<Scalars['Float']['output']>;
+  /** Subsidence, m, and its 1-sigma error. */
+  subsidenceM?: Maybe<Scalars['Float']['output']>;
+};
 
 /** A stale result a refresh did not re-run, and why (the requester's role, or it waits for something else). */
 export type SkippedRefresh = {
@@ -1718,10 +1807,18 @@ export type Unit = {
 };
 
 export type UpdateEventHorizonInput = {
+  /** 1-sigma error of displacementM, m (> 0). */
+  displacementErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic displacement, m (>= 0); null clears it. */
+  displacementM?: InputMaybe<Scalars['Float']['input']>;
   evidence?: InputMaybe<Array<Scalars['String']['input']>>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
   quality?: InputMaybe<Scalars['Int']['input']>;
+  /** 1-sigma error of subsidenceM, m (> 0). */
+  subsidenceErrorM?: InputMaybe<Scalars['Float']['input']>;
+  /** Coseismic subsidence, m; null clears it. */
+  subsidenceM?: InputMaybe<Scalars['Float']['input']>;
   unitAboveId?: InputMaybe<Scalars['ID']['input']>;
   unitBelowId?: InputMaybe<Scalars['ID']['input']>;
 };
@@ -1753,6 +1850,8 @@ export type UpdateSampleInput = {
 };
 
 export type UpdateSegmentInput = {
+  /** Down-dip width, km (> 0); null clears it. */
+  downDipWidthKm?: InputMaybe<Scalars['Float']['input']>;
   endKm?: InputMaybe<Scalars['Float']['input']>;
   name?: InputMaybe<Scalars['String']['input']>;
   notes?: InputMaybe<Scalars['String']['input']>;
@@ -1875,7 +1974,7 @@ export type AuditTrailQueryVariables = Exact<{
 }>;
 
 
-export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
+export type AuditTrailQuery = { __typename?: 'Query', auditTrail: { __typename?: 'AuditConnection', edges: Array<{ __typename?: 'AuditEdge', cursor: string, node: { __typename?: 'AuditRecord', id: string, at: string, action: string, objectType: string, objectId: string, objectName?: string | null, before?: unknown | null, after?: unknown | null, actor?: { __typename?: 'User', id: string, email: string, displayName: string } | null, referencedNames: Array<{ __typename?: 'NamedId', id: string, name: string }> } }>, pageInfo: { __typename?: 'PageInfo', endCursor?: string | null, hasNextPage: boolean } } };
 
 export type SignInMutationVariables = Exact<{
   email: Scalars['String']['input'];
@@ -1917,6 +2016,27 @@ export type SiteCalibrationsQueryVariables = Exact<{
 
 
 export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+
+export type SiteCoreLogsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, topDepthM: number, baseDepthM: number, facies: Facies }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+
+export type UploadCoreLogMutationVariables = Exact<{
+  input: UploadCoreLogInput;
+}>;
+
+
+export type UploadCoreLogMutation = { __typename?: 'Mutation', uploadCoreLog: { __typename?: 'CoreLog', id: string, channels: Array<string> } };
+
+export type DeleteCoreLogMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type DeleteCoreLogMutation = { __typename?: 'Mutation', deleteCoreLog: boolean };
 
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
@@ -2037,7 +2157,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, stale: boolean, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, staleReasons: Array<{ __typename?: 'StaleReason', message: string, via: Array<string> }>, inputs: { __typename?: 'RecurrenceInputs', hypothesisVersion?: number | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string, name: string } }> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -2052,6 +2172,20 @@ export type CancelRecurrenceAnalysisMutationVariables = Exact<{
 
 
 export type CancelRecurrenceAnalysisMutation = { __typename?: 'Mutation', cancelRecurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus } };
+
+export type RefreshStaleResultsMutationVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type RefreshStaleResultsMutation = { __typename?: 'Mutation', refreshStaleResults: { __typename?: 'RefreshPlan', id: string } };
+
+export type LatestRefreshQueryVariables = Exact<{
+  projectId: Scalars['ID']['input'];
+}>;
+
+
+export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, label: string, status: string, message?: string | null }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, label: string, reason: string }> }> } };
 
 export type ProjectReleasesQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2207,6 +2341,13 @@ export type RemoveMemberMutationVariables = Exact<{
 
 
 export type RemoveMemberMutation = { __typename?: 'Mutation', removeMember: boolean };
+
+export type InvitationLinkQueryVariables = Exact<{
+  token: Scalars['String']['input'];
+}>;
+
+
+export type InvitationLinkQuery = { __typename?: 'Query', invitationLink: { __typename?: 'InvitationLink', status: InvitationLinkStatus, projectName?: string | null } };
 
 export class TypedDocumentString<TResult, TVariables>
   extends String
@@ -2417,6 +2558,11 @@ export const AuditTrailDocument = new TypedDocumentString(`
         action
         objectType
         objectId
+        objectName
+        referencedNames {
+          id
+          name
+        }
         before
         after
       }
@@ -2543,6 +2689,47 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
   youngerCalBp
   probability
 }`) as unknown as TypedDocumentString<SiteCalibrationsQuery, SiteCalibrationsQueryVariables>;
+export const SiteCoreLogsDocument = new TypedDocumentString(`
+    query SiteCoreLogs($id: ID!) {
+  site(id: $id) {
+    id
+    units {
+      id
+      topDepthM
+      baseDepthM
+      facies
+    }
+    coreLogs {
+      id
+      name
+      channels
+      units
+      topDepthM
+      baseDepthM
+      rowCount
+      traces(maxPoints: 300) {
+        channel
+        unit
+        depthsM
+        values
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<SiteCoreLogsQuery, SiteCoreLogsQueryVariables>;
+export const UploadCoreLogDocument = new TypedDocumentString(`
+    mutation UploadCoreLog($input: UploadCoreLogInput!) {
+  uploadCoreLog(input: $input) {
+    id
+    channels
+  }
+}
+    `) as unknown as TypedDocumentString<UploadCoreLogMutation, UploadCoreLogMutationVariables>;
+export const DeleteCoreLogDocument = new TypedDocumentString(`
+    mutation DeleteCoreLog($id: ID!) {
+  deleteCoreLog(id: $id)
+}
+    `) as unknown as TypedDocumentString<DeleteCoreLogMutation, DeleteCoreLogMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -2876,6 +3063,21 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
     createdAt
     finishedAt
     hypothesisVersion
+    stale
+    staleReasons {
+      message
+      via
+    }
+    inputs {
+      ageModelRuns {
+        id
+        site {
+          id
+          name
+        }
+      }
+      hypothesisVersion
+    }
     segment {
       id
       name
@@ -3010,6 +3212,37 @@ export const CancelRecurrenceAnalysisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelRecurrenceAnalysisMutation, CancelRecurrenceAnalysisMutationVariables>;
+export const RefreshStaleResultsDocument = new TypedDocumentString(`
+    mutation RefreshStaleResults($projectId: ID!) {
+  refreshStaleResults(projectId: $projectId) {
+    id
+  }
+}
+    `) as unknown as TypedDocumentString<RefreshStaleResultsMutation, RefreshStaleResultsMutationVariables>;
+export const LatestRefreshDocument = new TypedDocumentString(`
+    query LatestRefresh($projectId: ID!) {
+  project(id: $projectId) {
+    id
+    refreshPlans {
+      id
+      status
+      createdAt
+      steps {
+        id
+        stage
+        label
+        status
+        message
+      }
+      skipped {
+        id
+        label
+        reason
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<LatestRefreshQuery, LatestRefreshQueryVariables>;
 export const ProjectReleasesDocument = new TypedDocumentString(`
     query ProjectReleases($id: ID!) {
   project(id: $id) {
@@ -3320,3 +3553,11 @@ export const RemoveMemberDocument = new TypedDocumentString(`
   removeMember(projectId: $projectId, userId: $userId)
 }
     `) as unknown as TypedDocumentString<RemoveMemberMutation, RemoveMemberMutationVariables>;
+export const InvitationLinkDocument = new TypedDocumentString(`
+    query InvitationLink($token: String!) {
+  invitationLink(token: $token) {
+    status
+    projectName
+  }
+}
+    `) as unknown as TypedDocumentString<InvitationLinkQuery, InvitationLinkQueryVariables>;

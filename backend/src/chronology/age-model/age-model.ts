@@ -8,8 +8,13 @@
  * and convergence is judged by rank-normalised split R-hat and bulk effective sample size
  * (Vehtari et al. 2021, Bayesian Analysis 16(2):667-718). See `sampler.ts` and `likelihood.ts`
  * for the model's exact form.
+ *
+ * Posterior densities are Rao-Blackwellised (each kept state adds the full conditional of every
+ * event and deposit, not a count), so they carry no Monte Carlo splinters; their HPD ranges are
+ * quoted by `readableHpdRanges` (pieces closer than 10 years merged, at most four ranges, each
+ * with its probability).
  */
-import { CalendarDensity, DensitySummary, normalise, summarise, trim } from '../common/density';
+import { CalendarDensity, DensitySummary, normalise, summariseReadable, trim } from '../common/density';
 import { SeededRandom } from '../common/random';
 import { AgeModelInput, AgeRelation, buildOrderGraph, OrderGraph } from './column';
 import { chainDiagnostics } from './convergence';
@@ -345,7 +350,7 @@ export function runAgeModel(
       window.youngCalBp,
     );
     const { rhat, ess } = chainDiagnostics(series(2 + k));
-    return { eventHorizonId: horizon.id, density, summary: summarise(density), rhat, ess };
+    return { eventHorizonId: horizon.id, density, summary: summariseReadable(density), rhat, ess };
   });
   const firstDeposit = firstDepositNode(graph);
   const samples: SamplePosterior[] = graph.samples.map((sample, j) => {
@@ -356,7 +361,7 @@ export function runAgeModel(
       window.youngCalBp,
       (calBp) => likelihoods.mixture(j, calBp),
     );
-    const summary = summarise(density);
+    const summary = summariseReadable(density);
     const { rhat, ess } = chainDiagnostics(series(firstDeposit + j));
     return {
       sampleId: sample.id,
@@ -371,7 +376,7 @@ export function runAgeModel(
   });
   const boundary = (node: number): BoundaryPosterior => {
     const density = histogram(pooled(node));
-    return { density, summary: summarise(density), ...chainDiagnostics(series(node)) };
+    return { density, summary: summariseReadable(density), ...chainDiagnostics(series(node)) };
   };
 
   const diagnostics = convergence(graph, events, samples, acceptance, keptPerChain);

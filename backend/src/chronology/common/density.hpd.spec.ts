@@ -1,5 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { CalendarDensity, HPD_LEVEL_ROUNDING, HpdRange, hpdRanges, normalDensity, totalMass, uniformDensity } from './density';
+import {
+  CalendarDensity,
+  HPD95_LEVEL,
+  HPD_LEVEL_ROUNDING,
+  HpdRange,
+  hpdRanges,
+  normalDensity,
+  normalise,
+  readableHpdRanges,
+  totalMass,
+  uniformDensity,
+} from './density';
 import { SeededRandom } from './random';
 
 /**
@@ -85,5 +96,49 @@ describe(hpdRanges.name, () => {
     expect(all).toHaveLength(1);
     expect(all[0].youngerCalBp).toBe(density.startCalBp);
     expect(all[0].olderCalBp).toBe(density.startCalBp + density.probabilities.length - 1);
+  });
+});
+
+describe(readableHpdRanges.name, () => {
+  const mixture = (parts: { mean: number; sd: number; weight: number }[], start: number, end: number): CalendarDensity => {
+    const probabilities = new Float64Array(end - start + 1);
+    for (let i = 0; i < probabilities.length; i++) {
+      for (const { mean, sd, weight } of parts) probabilities[i] += (weight * Math.exp(-0.5 * ((start + i - mean) / sd) ** 2)) / sd;
+    }
+    return normalise({ startCalBp: start, probabilities });
+  };
+
+  it('keeps two well separated modes as two ranges with their probabilities [analytic]', () => {
+    // Equal normals 600 years apart: each 95.4 % piece holds about half the 95.4 % mass, and each
+    // mode's own mass over its range is about 0.477 (+-2 sd of half the mass) [analytic].
+    const d = mixture([{ mean: 1000, sd: 30, weight: 1 }, { mean: 1600, sd: 30, weight: 1 }], 700, 1900);
+    const ranges = readableHpdRanges(d, HPD95_LEVEL);
+    expect(ranges).toHaveLength(2);
+    expect(ranges[0].olderCalBp).toBeGreaterThan(ranges[1].olderCalBp);
+    for (const r of ranges) expect(r.probability).toBeCloseTo(0.477, 2);
+  });
+
+  it('merges pieces fewer than 10 years apart into one range holding the mass between them', () => {
+    // A flat density with a 3-year notch: the exact HPD set is split by the notch; the readable
+    // range spans it and reports the full mass inside [analytic].
+    const probabilities = new Float64Array(200).fill(1);
+    for (let i = 100; i < 103; i++) probabilities[i] = 0.01;
+    const d = normalise({ startCalBp: 0, probabilities });
+    expect(hpdRanges(d, 0.9).length).toBe(2);
+    const ranges = readableHpdRanges(d, 0.9);
+    expect(ranges).toHaveLength(1);
+    let inside = 0;
+    for (let y = ranges[0].youngerCalBp; y <= ranges[0].olderCalBp; y++) inside += d.probabilities[y];
+    expect(ranges[0].probability).toBeCloseTo(inside, 12);
+  });
+
+  it('quotes at most four ranges, merging the closest first', () => {
+    const parts = [0, 1, 2, 3, 4, 5].map((k) => ({ mean: 1000 + k * 200 + (k === 2 ? -60 : 0), sd: 10, weight: 1 }));
+    const d = mixture(parts, 800, 2300);
+    expect(hpdRanges(d, HPD95_LEVEL)).toHaveLength(6);
+    const ranges = readableHpdRanges(d, HPD95_LEVEL);
+    expect(ranges).toHaveLength(4);
+    // Modes at 1200 and 1340 are the closest pair (140 years apart against 200 or more): merged first.
+    expect(ranges.some((r) => r.youngerCalBp < 1200 && r.olderCalBp > 1340)).toBe(true);
   });
 });

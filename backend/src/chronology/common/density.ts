@@ -275,3 +275,60 @@ export function formatCeBce(yearAstronomical: number): string {
   const y = Math.round(yearAstronomical);
   return y > 0 ? `${y} CE` : `${1 - y} BCE`;
 }
+
+/**
+ * Gap (years) below which two HPD ranges are quoted as one: ranges are read to a resolution of
+ * about a decade when ages carry errors of tens of years [common practice]. The merged range
+ * reports the whole mass inside it, gap included.
+ */
+export const HPD_MERGE_GAP_YEARS = 10;
+
+/** Most ranges quoted per level; beyond it the closest ranges are merged [common practice]. */
+export const HPD_MAX_RANGES = 4;
+
+/**
+ * HPD ranges a person can read: the exact HPD set of `hpdRanges`, then ranges separated by
+ * fewer than `gapYears` merged, then, while more than `maxRanges` remain, the two separated by the
+ * smallest gap merged. Each range reports the density's mass over its whole span (so the masses
+ * may sum to a little more than the level), oldest first. A multimodal density keeps its modes
+ * as separate ranges with their probabilities as long as they are further apart than the gap.
+ */
+export function readableHpdRanges(
+  density: CalendarDensity,
+  level: number,
+  gapYears = HPD_MERGE_GAP_YEARS,
+  maxRanges = HPD_MAX_RANGES,
+): HpdRange[] {
+  const young = hpdRanges(density, level).reverse(); // youngest first
+  if (young.length <= 1) return young.reverse();
+  const spans: { younger: number; older: number }[] = [];
+  for (const r of young) {
+    const last = spans[spans.length - 1];
+    if (last && r.youngerCalBp - last.older - 1 < gapYears) last.older = r.olderCalBp;
+    else spans.push({ younger: r.youngerCalBp, older: r.olderCalBp });
+  }
+  while (spans.length > maxRanges) {
+    let best = 1;
+    for (let i = 2; i < spans.length; i++) {
+      if (spans[i].younger - spans[i - 1].older < spans[best].younger - spans[best - 1].older) best = i;
+    }
+    spans[best - 1].older = spans[best].older;
+    spans.splice(best, 1);
+  }
+  const mass = totalMass(density);
+  const p = density.probabilities;
+  return spans
+    .map((s) => {
+      let inside = 0;
+      for (let y = s.younger; y <= s.older; y++) inside += p[y - density.startCalBp] ?? 0;
+      return { youngerCalBp: s.younger, olderCalBp: s.older, probability: inside / mass };
+    })
+    .reverse();
+}
+
+/** `summarise` with readable HPD ranges (`readableHpdRanges`) in place of the exact HPD sets. */
+export function summariseReadable(density: CalendarDensity): DensitySummary {
+  const d = normalise(density);
+  const exact = summariseNormalised(d);
+  return { ...exact, hpd68: readableHpdRanges(d, HPD68_LEVEL), hpd95: readableHpdRanges(d, HPD95_LEVEL) };
+}

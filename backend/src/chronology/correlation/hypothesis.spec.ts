@@ -61,7 +61,7 @@ describe(checkHypothesis.name, () => {
   it('gives a rupture length and an interface magnitude from the span of the sites', () => {
     const young = result.regionalEvents[1];
     expect(young.ruptureLengthKm).toBe(210);
-    expect(young.magnitude?.relation).toBe('Strasser et al. (2010) interface, Mw from length');
+    expect(young.magnitude?.relation).toBe('Strasser et al. (2010) interface, Mw from the minimum rupture length (site span)');
     expect(young.magnitude?.mw).toBeCloseTo(4.868 + 1.392 * Math.log10(210), 10);
     expect(young.magnitude?.sigma).toBe(0.277);
   });

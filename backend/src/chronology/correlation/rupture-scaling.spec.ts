@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import {
   alongStrikeSpanKm,
   defaultScalingRelation,
+  magnitudeFromArea,
+  magnitudeFromDisplacement,
   magnitudeFromLength,
   SCALING_RELATIONS,
 } from './rupture-scaling';
@@ -14,7 +16,7 @@ describe(magnitudeFromLength.name, () => {
     const estimate = magnitudeFromLength(100, 'STRASSER_2010_INTERFACE_LENGTH');
     expect(estimate.mw).toBeCloseTo(7.652, 10);
     expect(estimate.sigma).toBe(0.277);
-    expect(estimate.relation).toBe('Strasser et al. (2010) interface, Mw from length');
+    expect(estimate.relation).toBe('Strasser et al. (2010) interface, Mw from the minimum rupture length (site span)');
   });
 
   it('gives Mw above 9 for a 1000 km interface rupture [common practice]', () => {
@@ -48,5 +50,25 @@ describe(alongStrikeSpanKm.name, () => {
   it('is the distance between the outermost sites', () => {
     expect(alongStrikeSpanKm([120, -30, 45])).toBe(150);
     expect(alongStrikeSpanKm([60])).toBe(0);
+  });
+});
+
+describe('magnitude from area and from displacement', () => {
+  it('gives Mw = 4.441 + 0.846 log10(A) for a 100 km span x 50 km width [published, secondary: CHECKS.md]', () => {
+    const estimate = magnitudeFromArea(100, 50);
+    expect(estimate.mw).toBeCloseTo(4.441 + 0.846 * Math.log10(5000), 12);
+    // 4.441 + 0.846 x 3.69897 = 7.57033 [hand arithmetic].
+    expect(estimate.mw).toBeCloseTo(7.5703, 4);
+    expect(estimate.sigma).toBe(0.286);
+    expect(estimate.relation).toMatch(/secondary transcription/);
+    expect(() => magnitudeFromArea(100, 0)).toThrow(RangeError);
+  });
+
+  it('gives Mw = 6.93 + 0.82 log10(AD) from average displacement, marked as recalled [memory]', () => {
+    // AD = 1 m gives the intercept; 10 m adds the slope.
+    expect(magnitudeFromDisplacement(1).mw).toBeCloseTo(6.93, 12);
+    expect(magnitudeFromDisplacement(10).mw).toBeCloseTo(7.75, 12);
+    expect(magnitudeFromDisplacement(2).relation).toMatch(/recalled/);
+    expect(() => magnitudeFromDisplacement(0)).toThrow(RangeError);
   });
 });

@@ -33,21 +33,21 @@ export interface ScalingRelation {
 export const SCALING_RELATIONS: Readonly<Record<ScalingRelationCode, ScalingRelation>> = {
   STRASSER_2010_INTERFACE_LENGTH: {
     code: 'STRASSER_2010_INTERFACE_LENGTH',
-    relation: 'Strasser et al. (2010) interface, Mw from length',
+    relation: 'Strasser et al. (2010) interface, Mw from the minimum rupture length (site span)',
     intercept: 4.868,
     slope: 1.392,
     sigma: 0.277,
   },
   WELLS_COPPERSMITH_1994_ALL_SRL: {
     code: 'WELLS_COPPERSMITH_1994_ALL_SRL',
-    relation: 'Wells & Coppersmith (1994) all slip types, Mw from surface rupture length',
+    relation: 'Wells & Coppersmith (1994) all slip types, Mw from the minimum rupture length (site span)',
     intercept: 5.08,
     slope: 1.16,
     sigma: 0.28,
   },
   WELLS_COPPERSMITH_1994_REVERSE_SRL: {
     code: 'WELLS_COPPERSMITH_1994_REVERSE_SRL',
-    relation: 'Wells & Coppersmith (1994) reverse, Mw from surface rupture length',
+    relation: 'Wells & Coppersmith (1994) reverse, Mw from the minimum rupture length (site span)',
     intercept: 5.0,
     slope: 1.22,
     sigma: 0.28,
@@ -85,4 +85,55 @@ export function alongStrikeSpanKm(positionsKm: readonly number[]): number {
     max = Math.max(max, x);
   }
   return max - min;
+}
+
+/**
+ * Mw from rupture area A (km^2) for subduction interface events, Mw = 4.441 + 0.846 log10 A,
+ * sigma 0.286 (Strasser, Arango & Bommer 2010, SRL 81(6):941-950). The coefficients are CHECKS.md's
+ * secondary transcription [published, secondary]; the paper's table was not at hand to confirm
+ * them. The area here is the member sites' span times the segment's down-dip width, so like the
+ * length it is a minimum and the magnitude a lower bound.
+ */
+export const STRASSER_2010_INTERFACE_AREA = {
+  relation: 'Strasser et al. (2010) interface, Mw from area (site span x down-dip width; secondary transcription)',
+  intercept: 4.441,
+  slope: 0.846,
+  sigma: 0.286,
+} as const;
+
+/**
+ * Mw from average displacement AD (m), all slip types: Mw = 6.93 + 0.82 log10 AD, sigma 0.39
+ * (Wells & Coppersmith 1994, BSSA 84(4):974-1002, table 2B [memory: coefficients recalled, not
+ * checked against the table]). A mean of point measurements at a few sites is not the rupture's
+ * average displacement; it is shown as evidence beside the length and area figures.
+ */
+export const WELLS_COPPERSMITH_1994_ALL_AD = {
+  relation: 'Wells & Coppersmith (1994) all slip types, Mw from average displacement [recalled coefficients]',
+  intercept: 6.93,
+  slope: 0.82,
+  sigma: 0.39,
+} as const;
+
+/** A magnitude without a length-relation code (area and displacement relations). */
+export interface SizeMagnitude {
+  readonly mw: number;
+  readonly sigma: number;
+  readonly relation: string;
+}
+
+/** Mw from rupture area (km^2) = length (km) x down-dip width (km). Throws RangeError unless both are positive. */
+export function magnitudeFromArea(lengthKm: number, widthKm: number): SizeMagnitude {
+  if (!(lengthKm > 0) || !Number.isFinite(lengthKm)) throw new RangeError(`rupture length must be positive and finite, got ${lengthKm} km`);
+  if (!(widthKm > 0) || !Number.isFinite(widthKm)) throw new RangeError(`down-dip width must be positive and finite, got ${widthKm} km`);
+  const { intercept, slope, sigma, relation } = STRASSER_2010_INTERFACE_AREA;
+  return { mw: intercept + slope * Math.log10(lengthKm * widthKm), sigma, relation };
+}
+
+/** Mw from an average displacement (m). Throws RangeError unless it is positive. */
+export function magnitudeFromDisplacement(averageDisplacementM: number): SizeMagnitude {
+  if (!(averageDisplacementM > 0) || !Number.isFinite(averageDisplacementM)) {
+    throw new RangeError(`average displacement must be positive and finite, got ${averageDisplacementM} m`);
+  }
+  const { intercept, slope, sigma, relation } = WELLS_COPPERSMITH_1994_ALL_AD;
+  return { mw: intercept + slope * Math.log10(averageDisplacementM), sigma, relation };
 }

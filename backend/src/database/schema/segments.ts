@@ -12,11 +12,14 @@ export const segments = pgTable(
     startKm: doublePrecision('start_km').notNull(),
     endKm: doublePrecision('end_km').notNull(),
     notes: text('notes'),
+    /** Down-dip width of the rupture plane (km), for magnitude from rupture area; null when unknown. */
+    downDipWidthKm: doublePrecision('down_dip_width_km'),
     version: version(),
     ...timestamps,
   },
   (t) => [
     index('segments_project_idx').on(t.projectId),
     check('segments_extent_ordered', sql`${t.endKm} > ${t.startKm}`),
+    check('segments_width_positive', sql`${t.downDipWidthKm} is null or ${t.downDipWidthKm} > 0`),
   ],
 );

@@ -1,5 +1,7 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
-import { ArrayMaxSize, IsArray, IsInt, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsInt, IsNumber, IsOptional, IsPositive, IsString, IsUUID, Length, Max, Min } from 'class-validator';
+
+const FINITE = { allowNaN: false, allowInfinity: false };
 
 export class CreateEventHorizonInput {
   @IsUUID()
@@ -32,6 +34,34 @@ export class CreateEventHorizonInput {
   @IsString()
   @Length(0, 5000)
   notes?: string | null;
+
+  /** Measured coseismic subsidence, m (negative for uplift); null clears it. */
+  @IsOptional()
+  @IsNumber(FINITE)
+  @Min(-100)
+  @Max(100)
+  subsidenceM?: number | null;
+
+  /** 1-sigma error of the subsidence, m; must be > 0. */
+  @IsOptional()
+  @IsNumber(FINITE)
+  @IsPositive({ message: 'subsidenceErrorM must be greater than 0' })
+  @Max(100)
+  subsidenceErrorM?: number | null;
+
+  /** Measured coseismic displacement (slip), m; null clears it. */
+  @IsOptional()
+  @IsNumber(FINITE)
+  @Min(0, { message: 'displacementM must be zero or more metres' })
+  @Max(200)
+  displacementM?: number | null;
+
+  /** 1-sigma error of the displacement, m; must be > 0. */
+  @IsOptional()
+  @IsNumber(FINITE)
+  @IsPositive({ message: 'displacementErrorM must be greater than 0' })
+  @Max(200)
+  displacementErrorM?: number | null;
 }
 
 export class UpdateEventHorizonInput extends PartialType(OmitType(CreateEventHorizonInput, ['siteId'] as const)) {}

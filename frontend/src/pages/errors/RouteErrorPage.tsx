@@ -38,7 +38,14 @@ export function RouteErrorPage() {
       />
     );
   }
-  const message = error instanceof Error ? error.message : isRouteErrorResponse(error) ? error.statusText : 'Unexpected error';
+  // A server fault's own text is for its log, not for the page (it may quote a statement).
+  const message = isApiError(error, 'INTERNAL_SERVER_ERROR')
+    ? 'The server could not answer this request. Try again; if it keeps failing, tell whoever runs this server.'
+    : error instanceof Error
+      ? error.message
+      : isRouteErrorResponse(error)
+        ? error.statusText
+        : 'Unexpected error';
   return (
     <NonIdealState
       className="sc-error-page"

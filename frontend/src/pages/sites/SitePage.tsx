@@ -5,7 +5,7 @@ import { SiteWorkspace } from '@/modules/sites/components/SiteWorkspace';
 import { siteQueries } from '@/modules/sites/hooks/siteQueries';
 import { PageBreadcrumbs } from '@/modules/ui/components/PageBreadcrumbs';
 
-const TABS: readonly SiteTab[] = ['column', 'samples', 'calibration', 'files'];
+const TABS: readonly SiteTab[] = ['column', 'samples', 'calibration', 'logs', 'files'];
 
 export function SitePage() {
   const { projectId = '', siteId = '' } = useParams();

@@ -7,12 +7,11 @@ import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
 import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
-import { bracketingSamples, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { roleAllows } from '@/modules/auth/utils/permissions';
-import { calendarWindow } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
@@ -140,10 +139,6 @@ type RunResultsProps = {
 };
 
 function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResultsProps) {
-  const window = useMemo(() => {
-    const found = calendarWindow(events.flatMap(({ posterior, likelihoods }) => [posterior.density, ...likelihoods.map((likelihood) => likelihood.density)]));
-    return found ? ([found.youngerCalBp, found.olderCalBp] as const) : ([0, 1000] as const);
-  }, [events]);
   const compactEvents = useMemo(
     () =>
       events.map(({ posterior }) => ({
@@ -183,7 +178,12 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                 <h4>
                   {posterior.eventHorizon.name} <AgeValue calBp={posterior.medianCalBp} />
                 </h4>
-                <EventPosteriorChart eventName={posterior.eventHorizon.name} posterior={posterior.density} likelihoods={likelihoods} window={window} />
+                <EventPosteriorChart
+                  eventName={posterior.eventHorizon.name}
+                  posterior={posterior.density}
+                  likelihoods={likelihoods}
+                  window={eventChartWindow(posterior.density, likelihoods.map((likelihood) => likelihood.density))}
+                />
               </div>
             ))}
             <HTMLTable compact striped className="sc-table">
@@ -223,8 +223,8 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
             <h3>Samples</h3>
             {flaggedCount > 0 && (
               <Callout intent={Intent.WARNING} icon={IconNames.FLAG}>
-                {flaggedCount} sample{flaggedCount === 1 ? '' : 's'} with an outlier probability above{' '}
-                <span className="num">{OUTLIER_FLAG_PROBABILITY}</span>: check the material and its position.
+                {flaggedCount} sample{flaggedCount === 1 ? '' : 's'} the run finds more than <span className="num">{Math.round(OUTLIER_FLAG_PROBABILITY * 100)} %</span>{' '}
+                likely to be misplaced: check the material and where it was taken.
               </Callout>
             )}
             <HTMLTable compact striped className="sc-table">
@@ -233,7 +233,7 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                   <th>Lab code</th>
                   <th>Median</th>
                   <th>95.4 % range</th>
-                  <th>Outlier p</th>
+                  <th title="After the run: how likely the sample is misplaced (reworked, intruded, mislabelled), given the column's order">Misplaced?</th>
                 </tr>
               </thead>
               <tbody>
@@ -247,10 +247,10 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                       <AgeRangesValue ranges={entry.hpd95} />
                     </td>
                     <td>
-                      <span className="num">{entry.outlierProbability.toFixed(2)}</span>{' '}
+                      <span className="num">{Math.round(entry.outlierProbability * 100)} %</span>{' '}
                       {isFlaggedOutlier(entry.outlierProbability) && (
                         <Tag intent={Intent.WARNING} minimal icon={IconNames.FLAG}>
-                          outlier?
+                          check
                         </Tag>
                       )}
                     </td>

@@ -1,6 +1,7 @@
 import { area, scaleLinear } from 'd3';
 import { useMemo } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { verticalTicks } from '@/modules/ages/utils/ageAxis';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { createTimeScale, ladderTimeWindow } from '@/modules/correlation/utils/ladderLayout';
@@ -22,7 +23,7 @@ export type CompactSiteLadderProps = { events: readonly CompactLadderEvent[] };
  */
 export function CompactSiteLadder({ events }: CompactSiteLadderProps) {
   const { ref, width } = useParentSize();
-  const { tick } = useAgeScale();
+  const { tick, axisTicks } = useAgeScale();
   const densities = useMemo(() => events.map((event) => event.density), [events]);
   const time = useMemo(() => createTimeScale(ladderTimeWindow(densities), MARGIN.top, HEIGHT - MARGIN.bottom), [densities]);
   const shapes = useMemo(() => {
@@ -42,7 +43,7 @@ export function CompactSiteLadder({ events }: CompactSiteLadderProps) {
     <div ref={ref} className="sc-chart-frame">
       {width > 0 && (
         <svg width={width} height={HEIGHT} role="img" aria-label="Events of this site down its column">
-          {time.ticks(8).map((value) => (
+          {verticalTicks(time, axisTicks, 8).map((value) => (
             <g key={value} transform={`translate(0,${time(value)})`}>
               <line x1={MARGIN.left - 4} x2={width - MARGIN.right} stroke={CHART_COLOURS.grid} />
               <text x={MARGIN.left - 8} dy="0.32em" textAnchor="end" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">

@@ -1,12 +1,13 @@
-import { area, line, scaleLinear } from 'd3';
+import { area, line, scaleLinear, ticks as niceTicks } from 'd3';
 import { useMemo } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { ageAxisTitle, horizontalAgeTicks } from '@/modules/ages/utils/formatAge';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
-const HEIGHT = 132;
-const MARGIN = { top: 8, right: 12, bottom: 24, left: 12 };
+const HEIGHT = 146;
+const MARGIN = { top: 8, right: 12, bottom: 38, left: 12 };
 
 const calBpOf = (point: DensityPoint) => point.calBp;
 const probabilityOf = (point: DensityPoint) => point.probability;
@@ -18,7 +19,7 @@ export type EventPosteriorChartProps = {
   eventName: string;
   posterior: readonly DensityPoint[];
   likelihoods: readonly LikelihoodOutline[];
-  /** The calendar window shared by every event chart of the run, [younger, older] cal BP. */
+  /** The event's own calendar window, [younger, older] cal BP (eventChartWindow). */
   window: readonly [number, number];
 };
 
@@ -30,7 +31,7 @@ export type EventPosteriorChartProps = {
  */
 export function EventPosteriorChart({ eventName, posterior, likelihoods, window }: EventPosteriorChartProps) {
   const { ref, width } = useParentSize();
-  const { tick, range } = useAgeScale();
+  const { scale, range } = useAgeScale();
   const innerWidth = Math.max(width - MARGIN.left - MARGIN.right, 0);
   const innerHeight = HEIGHT - MARGIN.top - MARGIN.bottom;
 
@@ -54,7 +55,7 @@ export function EventPosteriorChart({ eventName, posterior, likelihoods, window 
     };
   }, [posterior, likelihoods, time, innerHeight]);
 
-  const ticks = time.ticks(Math.max(Math.floor(innerWidth / 90), 2));
+  const ticks = horizontalAgeTicks([window[1], window[0]], scale, Math.max(Math.floor(innerWidth / 90), 2), niceTicks, time, [0, width]);
 
   return (
     <div ref={ref} className="sc-chart-frame">
@@ -75,14 +76,17 @@ export function EventPosteriorChart({ eventName, posterior, likelihoods, window 
             ))}
           <path d={shapes.posterior} fill={CHART_COLOURS.posteriorFill} fillOpacity={0.7} stroke={CHART_COLOURS.posterior} strokeWidth={1} />
           <line x1={MARGIN.left} x2={MARGIN.left + innerWidth} y1={MARGIN.top + innerHeight} y2={MARGIN.top + innerHeight} stroke={CHART_COLOURS.axis} />
-          {ticks.map((value) => (
-            <g key={value} transform={`translate(${time(value)},${MARGIN.top + innerHeight})`}>
+          {ticks.map(({ calBp, label, anchor }) => (
+            <g key={calBp} transform={`translate(${time(calBp)},${MARGIN.top + innerHeight})`}>
               <line y2={4} stroke={CHART_COLOURS.axis} />
-              <text y={16} textAnchor="middle" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
-                {tick(value)}
+              <text y={16} textAnchor={anchor} fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
+                {label}
               </text>
             </g>
           ))}
+          <text x={MARGIN.left + innerWidth / 2} y={HEIGHT - 4} textAnchor="middle" fontSize={10} fill={CHART_COLOURS.mutedText}>
+            {ageAxisTitle(scale)} (older left)
+          </text>
         </svg>
       )}
     </div>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bracketingSamples, DEFAULT_RUN_SETTINGS, isFlaggedOutlier, progressPercent, readRunSettings } from './ageModelView';
+import { bracketingSamples, DEFAULT_RUN_SETTINGS, eventChartWindow, isFlaggedOutlier, progressPercent, readRunSettings } from './ageModelView';
 
 const sample = (id: string, position: number, options: { excluded?: boolean; calibrated?: boolean } = {}) => ({
   id,
@@ -46,5 +46,21 @@ describe(progressPercent.name, () => {
   it('clamps to 0-100', () => {
     expect(progressPercent(0.456)).toBe(46);
     expect(progressPercent(1.2)).toBe(100);
+  });
+});
+
+describe(eventChartWindow.name, () => {
+  /** A normal-shaped density on a 1-year grid over 0-7000 cal BP, with its far tails as tiny values. */
+  const bump = (mean: number, sd: number) =>
+    Array.from({ length: 7001 }, (_, calBp) => ({ calBp, probability: Math.exp(-0.5 * ((calBp - mean) / sd) ** 2) + 1e-9 }));
+
+  it('fits each event to its own posterior and bracketing samples, not the whole site span', () => {
+    const young = eventChartWindow(bump(800, 30), [bump(760, 40), bump(850, 40)]);
+    const old = eventChartWindow(bump(5200, 40), [bump(5300, 50)]);
+    expect(young[1] - young[0]).toBeLessThan(600);
+    expect(young[0]).toBeLessThanOrEqual(760 - 2 * 40);
+    expect(young[1]).toBeGreaterThanOrEqual(850 + 2 * 40);
+    expect(old[0]).toBeGreaterThan(young[1]);
+    expect(old[0]).toBeLessThanOrEqual(5200 - 2 * 40);
   });
 });

@@ -2,7 +2,7 @@
  * Pure pieces of the age model view: which samples bracket an event, the run settings form,
  * outlier flags and whether a run is still working.
  */
-import type { DensityPoint } from '@/modules/calibration/utils/calibrationChart';
+import { calendarWindow, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { FieldReader, type FormResult } from '@/modules/ui/utils/formFields';
 
 /**
@@ -66,7 +66,12 @@ export type RunSettingsInput = {
   inheritanceScaleYears: number | null;
 };
 
-/** The form's starting values: the server's documented defaults, and a blank seed (random). */
+/**
+ * The form's starting values: the server's documented defaults, and a blank seed (random). The
+ * chance a sample is misplaced starts at 0.05: one sample in twenty reworked, intruded or
+ * mislabelled, the prior most often used for outlier models of radiocarbon sequences
+ * (Bronk Ramsey 2009, Radiocarbon 51(3):1023-1045) [common practice].
+ */
 export const DEFAULT_RUN_SETTINGS: RunSettingsForm = {
   seed: '',
   iterations: '20000',
@@ -101,4 +106,20 @@ export function isRunActive(status: string): boolean {
 /** A run's progress (0-1) as a whole percentage for the progress bar label. */
 export function progressPercent(progress: number): number {
   return Math.round(Math.min(Math.max(progress, 0), 1) * 100);
+}
+
+/** The points of a density above `share` of its own peak: what a drawing of it shows. */
+export function visibleBody(density: readonly DensityPoint[], share = 0.01): DensityPoint[] {
+  const floor = densityPeak(density) * share;
+  return density.filter((point) => point.probability > floor);
+}
+
+/**
+ * One event's own chart window, [younger, older] cal BP: its posterior and the likelihoods of the
+ * samples around it where they are visible (far tails left out), padded and rounded. Each event
+ * gets its own, so a young event is not drawn as a sliver on the whole site's time span.
+ */
+export function eventChartWindow(posterior: readonly DensityPoint[], likelihoods: readonly (readonly DensityPoint[])[]): readonly [number, number] {
+  const found = calendarWindow([visibleBody(posterior), ...likelihoods.map((density) => visibleBody(density))], { padding: 0.1, minSpanYears: 200 });
+  return found ? [found.youngerCalBp, found.olderCalBp] : [0, 1000];
 }

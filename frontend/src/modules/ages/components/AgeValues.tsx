@@ -1,4 +1,5 @@
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { listedRanges } from '@/modules/calibration/utils/calibrationChart';
 
 export type AgeValueProps = { calBp: number | null | undefined };
 
@@ -16,11 +17,14 @@ export type AgeRangesValueProps = {
   withProbability?: boolean;
 };
 
-/** Highest-density ranges in the chosen scale, oldest first, one per line when there are several. */
+/**
+ * Highest-density ranges in the chosen scale, oldest first, one per line when there are several.
+ * Single-year slivers are not listed as if they were dates; with probabilities, their share is.
+ */
 export function AgeRangesValue({ ranges, withProbability = false }: AgeRangesValueProps) {
   const { range } = useAgeScale();
-  if (ranges.length === 0) return <span className="num">–</span>;
-  const ordered = [...ranges].sort((a, b) => b.olderCalBp - a.olderCalBp);
+  const { ranges: ordered, sliverShare } = listedRanges(ranges);
+  if (ordered.length === 0) return <span className="num">–</span>;
   return (
     <span className="num sc-ranges">
       {ordered.map((hpd) => (
@@ -29,6 +33,7 @@ export function AgeRangesValue({ ranges, withProbability = false }: AgeRangesVal
           {withProbability && <span className="sc-range-probability"> ({(hpd.probability * 100).toFixed(1)} %)</span>}
         </span>
       ))}
+      {withProbability && sliverShare > 0 && <span className="sc-range-probability">+ {(sliverShare * 100).toFixed(1)} % in single-year slivers</span>}
     </span>
   );
 }

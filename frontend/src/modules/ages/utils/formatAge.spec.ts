@@ -8,6 +8,8 @@ import {
   formatAgeRanges,
   formatAgeTick,
   formatCalendarYear,
+  horizontalAgeTicks,
+  tickLabelWidth,
 } from './formatAge';
 
 // The conversion follows from the definition of BP (years before AD 1950; Stuiver & Polach 1977)
@@ -109,5 +111,29 @@ describe(ageAxisTicks.name, () => {
     // 3500 cal BP is 1551 BCE and 1000 cal BP is 950 CE [analytic].
     const positions = ageAxisTicks([3500, 1000], 'CE_BCE', 5, ticks);
     expect(positions.map((calBp) => formatAgeTick(calBp, 'CE_BCE'))).toEqual(['1500 BCE', '1000 BCE', '500 BCE', '1 CE', '500 CE']);
+  });
+});
+
+describe(horizontalAgeTicks.name, () => {
+  // 3000-0 cal BP drawn left (old) to right (young) over 0-300 px.
+  const position = (calBp: number) => (3000 - calBp) / 10;
+
+  it('labels round CE/BCE years with their whole era and anchors the end labels inside the axis', () => {
+    const found = horizontalAgeTicks([3000, 0], 'CE_BCE', 6, ticks, position, [0, 300]);
+    // 3000 cal BP = 1051 BCE, 0 cal BP = 1950 CE [analytic]; round years only, never 1051 BCE or 950 CE.
+    expect(found.map((tick) => tick.label)).toEqual(['1000 BCE', '500 BCE', '1 CE', '500 CE', '1000 CE', '1500 CE']);
+    for (const tick of found) {
+      const x = position(tick.calBp);
+      const width = tickLabelWidth(tick.label);
+      const [from, to] = tick.anchor === 'start' ? [x, x + width] : tick.anchor === 'end' ? [x - width, x] : [x - width / 2, x + width / 2];
+      expect(from).toBeGreaterThanOrEqual(0);
+      expect(to).toBeLessThanOrEqual(300);
+    }
+  });
+
+  it('anchors a label at the very end of the axis to that end', () => {
+    const found = horizontalAgeTicks([1000, 0], 'CAL_BP', 2, ticks, (calBp) => (1000 - calBp) / 4, [0, 250]);
+    expect(found[0]).toEqual({ calBp: 0, label: '0', anchor: 'end' });
+    expect(found.at(-1)).toEqual({ calBp: 1000, label: '1000', anchor: 'start' });
   });
 });

@@ -113,3 +113,43 @@ export function ageAxisTicks(
     return BP_ZERO_YEAR_CE - astronomical;
   });
 }
+
+/** The title of a calendar axis in the chosen scale (its unit). */
+export function ageAxisTitle(scale: AgeScale): string {
+  return scale === 'CAL_BP' ? 'age, cal BP' : 'calendar year, CE/BCE';
+}
+
+/** A labelled tick of a calendar axis: where (cal BP), what it reads, and how its text is anchored. */
+export type AgeAxisTick = { calBp: number; label: string; anchor: 'start' | 'middle' | 'end' };
+
+/** Rough width of a tick label in px at the 10 px chart font (digits and capitals ~6 px). */
+export function tickLabelWidth(label: string): number {
+  return label.length * 6.2;
+}
+
+/**
+ * Labelled ticks for a horizontal calendar axis drawn from `left` to `right` px: round values of
+ * the chosen scale (ageAxisTicks) inside the domain, each label centred on its tick unless that
+ * would run past an end of the axis, where it is anchored to the end instead, so no label is cut
+ * ("1950 C", "051 BCE") by the chart's edge.
+ */
+export function horizontalAgeTicks(
+  domain: [number, number],
+  scale: AgeScale,
+  count: number,
+  niceTicks: (start: number, stop: number, count: number) => number[],
+  position: (calBp: number) => number,
+  [left, right]: [number, number],
+): AgeAxisTick[] {
+  const older = Math.max(domain[0], domain[1]);
+  const younger = Math.min(domain[0], domain[1]);
+  return ageAxisTicks([older, younger], scale, count, niceTicks)
+    .filter((calBp) => calBp <= older + 1e-9 && calBp >= younger - 1e-9)
+    .map((calBp) => {
+      const label = formatAgeTick(calBp, scale);
+      const half = tickLabelWidth(label) / 2;
+      const x = position(calBp);
+      const anchor = x - half < left ? 'start' : x + half > right ? 'end' : 'middle';
+      return { calBp, label, anchor };
+    });
+}

@@ -17,11 +17,17 @@ export function AuditRecordDialog({ record, onClose }: AuditRecordDialogProps) {
   const changes = useMemo(() => (record ? auditFieldChanges(record.before, record.after) : []), [record]);
   // A create or a delete changes every field: marking them all would say nothing.
   const isUpdate = record !== null && record.before != null && record.after != null;
+  const names = useMemo(() => new Map((record?.referencedNames ?? []).map((n) => [n.id, n.name])), [record]);
+  /** A cell's text, with the name of what an id identifies beside it. */
+  const cellText = (value: unknown) => {
+    const text = jsonCellText(value);
+    return typeof value === 'string' && names.has(value.toLowerCase()) ? `${names.get(value.toLowerCase())} (${text})` : text;
+  };
   return (
     <Dialog
       isOpen={record !== null}
       onClose={onClose}
-      title={record ? `${record.action} ${record.objectType}` : ''}
+      title={record ? `${record.action} ${record.objectType}${record.objectName ? `: ${record.objectName}` : ''}` : ''}
       icon={IconNames.HISTORY}
       style={{ width: 820 }}
     >
@@ -45,8 +51,8 @@ export function AuditRecordDialog({ record, onClose }: AuditRecordDialogProps) {
                   <td className="num">
                     {change.field} {isUpdate && change.changed && <Tag minimal>changed</Tag>}
                   </td>
-                  <td className="num sc-audit-value">{jsonCellText(change.before)}</td>
-                  <td className="num sc-audit-value">{jsonCellText(change.after)}</td>
+                  <td className="num sc-audit-value">{cellText(change.before)}</td>
+                  <td className="num sc-audit-value">{cellText(change.after)}</td>
                 </tr>
               ))}
             </tbody>

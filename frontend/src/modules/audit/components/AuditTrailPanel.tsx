@@ -98,6 +98,7 @@ export function AuditTrailPanel({ projectId, people }: AuditTrailPanelProps) {
               <th>Who</th>
               <th>Action</th>
               <th>Object type</th>
+              <th>Object</th>
               <th>Object id</th>
             </tr>
           </thead>
@@ -108,7 +109,8 @@ export function AuditTrailPanel({ projectId, people }: AuditTrailPanelProps) {
                 <td>{node.actor ? node.actor.displayName : <span className={Classes.TEXT_MUTED}>system</span>}</td>
                 <td>{node.action}</td>
                 <td className="num">{node.objectType}</td>
-                <td className="num">{node.objectId}</td>
+                <td>{node.objectName ?? <span className={Classes.TEXT_MUTED}>—</span>}</td>
+                <td className="num sc-audit-id">{node.objectId}</td>
               </tr>
             ))}
           </tbody>

@@ -16,6 +16,11 @@ export const AuditTrailDocument = graphql(`
           action
           objectType
           objectId
+          objectName
+          referencedNames {
+            id
+            name
+          }
           before
           after
         }

@@ -49,8 +49,9 @@ export function CalibrationFigure({ series, curves, note }: CalibrationFigurePro
     <>
       <CalibrationChart series={series} bands={bands} window={window} />
       <p className={`${Classes.TEXT_MUTED} sc-chart-caption`}>
-        Left of the curve: each measured age as a normal density, its ± 1σ shaded across the curve. Below: each calendar-age
-        density with its median (dashed), 68.3 % (thick bars) and 95.4 % (thin bars) highest-density ranges.
+        Each row is a sample's calendar age: the whole density outlined, the part inside its 95.4 % ranges shaded, the part
+        inside its 68.3 % ranges shaded darker, the median marked beneath. The panel below is the curve on the same calendar
+        axis, with each measured age as a dashed level band; point anywhere to read both at one age.
         {note && ` ${note}`}
       </p>
     </>

@@ -1,6 +1,7 @@
 import { Callout, Classes, HTMLTable, Intent } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { listedRanges } from '@/modules/calibration/utils/calibrationChart';
 import type { HpdRange } from './CalibrationChart';
 
 export type CalibrationSummary = {
@@ -18,23 +19,34 @@ export type CalibrationRangesProps = {
   summaries: readonly CalibrationSummary[];
 };
 
-/** Ranges oldest first, each with its share of the probability. */
-function RangeList({ ranges }: { ranges: readonly HpdRange[] }) {
+/**
+ * Where the probability lies: each range oldest first with a bar as long as its share, and any
+ * single-year slivers summed on one line instead of listed as if they were dates.
+ */
+function ShareList({ ranges, colour }: { ranges: readonly HpdRange[]; colour: string }) {
   const { range } = useAgeScale();
+  const { ranges: listed, sliverShare } = listedRanges(ranges);
   return (
-    <ul className="sc-range-list">
-      {[...ranges]
-        .sort((a, b) => b.olderCalBp - a.olderCalBp)
-        .map((hpd) => (
-          <li key={`${hpd.olderCalBp}-${hpd.youngerCalBp}`} className="num">
-            {range(hpd.olderCalBp, hpd.youngerCalBp)} <span className={Classes.TEXT_MUTED}>{(hpd.probability * 100).toFixed(1)} %</span>
-          </li>
-        ))}
+    <ul className="sc-share-list">
+      {listed.map((hpd) => (
+        <li key={`${hpd.olderCalBp}-${hpd.youngerCalBp}`}>
+          <span className="num">{range(hpd.olderCalBp, hpd.youngerCalBp)}</span>
+          <span className="sc-share-bar" aria-hidden>
+            <span style={{ width: `${Math.round(hpd.probability * 100)}%`, background: colour }} />
+          </span>
+          <span className="num sc-share-value">{(hpd.probability * 100).toFixed(1)} %</span>
+        </li>
+      ))}
+      {sliverShare > 0 && (
+        <li className={Classes.TEXT_MUTED}>
+          and <span className="num">{(sliverShare * 100).toFixed(1)} %</span> in single-year slivers
+        </li>
+      )}
     </ul>
   );
 }
 
-/** The calibrated ages as numbers: median, mean and spread, and the 68.3 % and 95.4 % ranges. */
+/** The calibrated ages as numbers: median, mean and spread, and where the 68.3 % and 95.4 % of the probability lie. */
 export function CalibrationRanges({ summaries }: CalibrationRangesProps) {
   const { age } = useAgeScale();
   return (
@@ -42,11 +54,11 @@ export function CalibrationRanges({ summaries }: CalibrationRangesProps) {
       <HTMLTable compact className="sc-table sc-table-fill">
         <thead>
           <tr>
-            <th>Age</th>
+            <th>Sample</th>
             <th className="sc-numeric">Median</th>
             <th className="sc-numeric">Mean ± sd</th>
-            <th>68.3 % ranges</th>
-            <th>95.4 % ranges</th>
+            <th>Most likely 68.3 %</th>
+            <th>Most likely 95.4 %</th>
           </tr>
         </thead>
         <tbody>
@@ -61,10 +73,10 @@ export function CalibrationRanges({ summaries }: CalibrationRangesProps) {
                 {summary.meanCalBp !== undefined && summary.sdYears !== undefined ? `${age(summary.meanCalBp)} ± ${Math.round(summary.sdYears)}` : '–'}
               </td>
               <td>
-                <RangeList ranges={summary.hpd68} />
+                <ShareList ranges={summary.hpd68} colour={summary.colour} />
               </td>
               <td>
-                <RangeList ranges={summary.hpd95} />
+                <ShareList ranges={summary.hpd95} colour={summary.colour} />
               </td>
             </tr>
           ))}

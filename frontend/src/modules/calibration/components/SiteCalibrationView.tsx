@@ -5,7 +5,7 @@ import { useMemo, useState } from 'react';
 import type { CurveCode, SiteCalibrationsQuery } from '@/gql/graphql';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { ageOnCurveAxis } from '@/modules/calibration/utils/calibrationChart';
-import { seriesColour } from '@/modules/calibration/utils/calibrationPalette';
+import { SERIES_COLOURS, seriesColour } from '@/modules/calibration/utils/calibrationPalette';
 import { siteQueries } from '@/modules/sites/hooks/siteQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
 import type { CalibrationSeries } from './CalibrationChart';
@@ -43,8 +43,11 @@ export function SiteCalibrationView({ projectId, siteId }: SiteCalibrationViewPr
     () => picked ?? new Set(candidates.filter((sample) => !sample.excluded).slice(0, DEFAULT_OVERLAY).map((sample) => sample.id)),
     [picked, candidates],
   );
-  const colours = useMemo(() => new Map(candidates.map((sample, index) => [sample.id, seriesColour(index)])), [candidates]);
-  const selected = useMemo(() => candidates.filter((sample) => selectedIds.has(sample.id)), [candidates, selectedIds]);
+  // Colours go to the samples shown, in order, and at most as many are shown as there are
+  // colours: no two overlaid samples share one (each row is also labelled by its lab code).
+  const selected = useMemo(() => candidates.filter((sample) => selectedIds.has(sample.id)).slice(0, SERIES_COLOURS.length), [candidates, selectedIds]);
+  const colours = useMemo(() => new Map(selected.map((sample, index) => [sample.id, seriesColour(index)])), [selected]);
+  const full = selected.length >= SERIES_COLOURS.length;
   const series = useMemo<CalibrationSeries[]>(
     () =>
       selected.map((sample) => ({
@@ -73,7 +76,7 @@ export function SiteCalibrationView({ projectId, siteId }: SiteCalibrationViewPr
   }
 
   const handleToggle = (sampleId: string) => {
-    const next = new Set(selectedIds);
+    const next = new Set(selected.map((sample) => sample.id));
     if (next.has(sampleId)) next.delete(sampleId);
     else next.add(sampleId);
     setPicked(next);
@@ -85,18 +88,29 @@ export function SiteCalibrationView({ projectId, siteId }: SiteCalibrationViewPr
       <Section title="Samples" compact className="sc-sample-picker">
         <SectionCard>
           <div className="sc-picker-actions">
-            <Button size="small" variant="minimal" text="All" onClick={() => setPicked(new Set(candidates.map((sample) => sample.id)))} />
+            <Button
+              size="small"
+              variant="minimal"
+              text={candidates.length > SERIES_COLOURS.length ? `First ${SERIES_COLOURS.length}` : 'All'}
+              onClick={() => setPicked(new Set(candidates.slice(0, SERIES_COLOURS.length).map((sample) => sample.id)))}
+            />
             <Button size="small" variant="minimal" text="None" onClick={() => setPicked(new Set())} />
           </div>
+          {full && (
+            <p className={`${Classes.TEXT_MUTED} sc-form-note`}>
+              {SERIES_COLOURS.length} at once, each in its own colour: clear one to show another.
+            </p>
+          )}
           {candidates.map((sample) => (
             <Checkbox
               key={sample.id}
-              checked={selectedIds.has(sample.id)}
+              checked={colours.has(sample.id)}
+              disabled={full && !colours.has(sample.id)}
               onChange={() => handleToggle(sample.id)}
               className="sc-picker-item"
               labelElement={
                 <span>
-                  <span className="sc-swatch" style={{ background: colours.get(sample.id) }} />
+                  <span className="sc-swatch" style={{ background: colours.get(sample.id) ?? 'transparent' }} />
                   <span className="num">{sample.labCode}</span>{' '}
                   <span className={Classes.TEXT_MUTED}>
                     {sample.unit.name}

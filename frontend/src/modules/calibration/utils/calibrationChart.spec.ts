@@ -6,8 +6,7 @@ import {
   densityPeak,
   normalDensityPoints,
   normalPdf,
-  radiocarbonWindow,
-} from './calibrationChart';
+  radiocarbonWindow, listedRanges } from './calibrationChart';
 
 describe(ageOnCurveAxis.name, () => {
   it('leaves a terrestrial age as measured', () => {
@@ -109,5 +108,17 @@ describe(closeDensity.name, () => {
       { calBp: 11, probability: 0.4 },
       { calBp: 12, probability: 0 },
     ]);
+  });
+});
+
+describe(listedRanges.name, () => {
+  it('leaves out single-year slivers and reports their share, listing the rest oldest first', () => {
+    const { ranges, sliverShare } = listedRanges([
+      { olderCalBp: 2480, youngerCalBp: 2350, probability: 0.62 },
+      { olderCalBp: 2507, youngerCalBp: 2507, probability: 0.003 },
+      { olderCalBp: 2720, youngerCalBp: 2620, probability: 0.327 },
+    ]);
+    expect(ranges.map((range) => range.olderCalBp)).toEqual([2720, 2480]);
+    expect(sliverShare).toBeCloseTo(0.003, 9);
   });
 });

@@ -137,3 +137,23 @@ export function closeDensity(density: readonly DensityPoint[]): DensityPoint[] {
     { calBp: sorted[sorted.length - 1]!.calBp + 1, probability: 0 },
   ];
 }
+
+/** A highest-density range with its share of the probability. */
+export type ShareRange = { olderCalBp: number; youngerCalBp: number; probability: number };
+
+/**
+ * The ranges worth listing, oldest first, and the probability left in slivers: on the 1-year
+ * grid a density that dips under the cut-off and back can leave a "range" of a single year
+ * ("2507–2507 cal BP, 0.3 %"), which reads as a precise date. Such slivers (under one year
+ * wide) are not listed; their summed share is reported instead.
+ */
+export function listedRanges(ranges: readonly ShareRange[]): { ranges: ShareRange[]; sliverShare: number } {
+  const listed: ShareRange[] = [];
+  let sliverShare = 0;
+  for (const range of ranges) {
+    if (Math.abs(range.olderCalBp - range.youngerCalBp) < 1) sliverShare += range.probability;
+    else listed.push(range);
+  }
+  listed.sort((a, b) => Math.max(b.olderCalBp, b.youngerCalBp) - Math.max(a.olderCalBp, a.youngerCalBp));
+  return { ranges: listed, sliverShare };
+}

@@ -2,6 +2,8 @@ import { area, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform
 import { useEffect, useId, useMemo, useRef, useState, type RefObject } from 'react';
 import type { HypothesisQuery } from '@/gql/graphql';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
+import { verticalTicks } from '@/modules/ages/utils/ageAxis';
+import { ageAxisTitle } from '@/modules/ages/utils/formatAge';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { conflictingTieIds, eventAnchors } from '@/modules/correlation/utils/ladderData';
@@ -46,7 +48,7 @@ type Hover = { x: number; y: number; siteName: string; event: LadderColumn['even
  */
 export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSelectEvent, figure }: EventLadderChartProps) {
   const { ref, width, height } = useParentSize();
-  const { tick, age, range } = useAgeScale();
+  const { tick, age, range, axisTicks, scale } = useAgeScale();
   const clipId = useId().replace(/:/g, '');
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
   const [hover, setHover] = useState<Hover | null>(null);
@@ -142,7 +144,7 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
             );
           })}
           <g clipPath={`url(#${clipId})`}>
-            {time.ticks(10).map((value) => (
+            {verticalTicks(time, axisTicks, 10).map((value) => (
               <g key={value} transform={`translate(0,${time(value)})`}>
                 <line x1={MARGIN.left - 4} x2={width - MARGIN.right} stroke={CHART_COLOURS.grid} />
                 <text x={MARGIN.left - 8} dy="0.32em" textAnchor="end" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
@@ -190,7 +192,7 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
             ))}
           </g>
           <text x={8} y={MARGIN.top - 6} fontSize={10} fill={CHART_COLOURS.mutedText}>
-            younger ↑
+            {ageAxisTitle(scale)} · younger ↑
           </text>
         </svg>
       )}

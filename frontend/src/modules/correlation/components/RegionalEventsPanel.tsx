@@ -2,6 +2,7 @@ import { Callout, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
+import { sameAgeVerdict } from '@/modules/correlation/utils/sameAge';
 
 export type RegionalEventsPanelProps = {
   hypothesis: LadderHypothesis;
@@ -11,7 +12,7 @@ export type RegionalEventsPanelProps = {
 
 /**
  * The regional events of a hypothesis, youngest first: combined age, concordance, the
- * Ward & Wilson chi-square test, rupture length and magnitude; order conflicts on top.
+ * Ward & Wilson (1978) same-age test in words, rupture length and magnitude; order conflicts on top.
  */
 export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
   const regionalEvents = [...hypothesis.regionalEvents].sort(
@@ -53,17 +54,20 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
                   </Tag>
                 )}
               </dd>
-              <dt>χ² test</dt>
+              <dt title="Ward & Wilson (1978) chi-square test">Same age?</dt>
               <dd>
                 {regional.chiSquare ? (
-                  <>
-                    <span className="num">
-                      T = {regional.chiSquare.t.toFixed(2)}, df {regional.chiSquare.df}, χ²₀.₀₅ = {regional.chiSquare.critical5.toFixed(2)}
-                    </span>{' '}
-                    <Tag minimal intent={regional.chiSquare.passes ? Intent.SUCCESS : Intent.DANGER}>
-                      {regional.chiSquare.passes ? 'passes' : 'fails'}
-                    </Tag>
-                  </>
+                  (() => {
+                    const verdict = sameAgeVerdict(regional.chiSquare);
+                    return (
+                      <>
+                        <Tag minimal intent={verdict.passes ? Intent.SUCCESS : Intent.DANGER} icon={verdict.passes ? IconNames.TICK : IconNames.CROSS}>
+                          {verdict.heading}
+                        </Tag>
+                        <div className="sc-chart-legend">{verdict.sentence}</div>
+                      </>
+                    );
+                  })()
                 ) : (
                   '–'
                 )}

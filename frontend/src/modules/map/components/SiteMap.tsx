@@ -7,8 +7,8 @@ import { useNavigate } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import type { SiteKind } from '@/gql/graphql';
 import { mapQueries } from '@/modules/map/hooks/mapQueries';
-import { fitMapProjection, segmentTrackLine, siteTrack, smoothTrack, type LonLat } from '@/modules/map/utils/mapGeometry';
-import { layoutMarkers, placeBandLabel } from '@/modules/map/utils/markerLayout';
+import { fitMapProjection, nearAndFarSites, positionAtKm, segmentTrackLine, siteTrack, smoothTrack, type LonLat } from '@/modules/map/utils/mapGeometry';
+import { keepLabelInFrame, layoutMarkers, placeBandLabel } from '@/modules/map/utils/markerLayout';
 import { isMarineSite, SEGMENT_TONES, SITE_KIND_ORDER, SITE_SYMBOLS, siteFill, siteSymbolPath } from '@/modules/map/utils/siteSymbols';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 import './map.css';
@@ -60,12 +60,21 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
   const [hovered, setHovered] = useState<{ site: MapSiteRow; x: number; y: number } | null>(null);
   const land = useQuery(mapQueries.land());
+  const [showFar, setShowFar] = useState(false);
 
-  const projection = useMemo(() => fitMapProjection(sites, Math.max(width, 1), height, FRAME_MARGIN), [sites, width, height]);
+  // A far-away site (or a mistyped position) would shrink the rest into a cluster: the first view
+  // fits the near ones and the segment bands along their track, and says what it left out.
+  const { near, far } = useMemo(() => nearAndFarSites(sites), [sites]);
+  const fitted = showFar ? sites : near;
+  const track = useMemo(() => smoothTrack(siteTrack(fitted)), [fitted]);
+  const bandEnds = useMemo(
+    () => segments.flatMap((segment) => [positionAtKm(track, segment.startKm), positionAtKm(track, segment.endKm)]).filter((end): end is LonLat => end !== null),
+    [segments, track],
+  );
+  const projection = useMemo(() => fitMapProjection(fitted, Math.max(width, 1), height, FRAME_MARGIN, bandEnds), [fitted, width, height, bandEnds]);
   const basePath = useMemo(() => geoPath(projection), [projection]);
   const landPath = useMemo(() => (land.data ? (basePath(land.data) ?? '') : ''), [basePath, land.data]);
   const graticulePath = useMemo(() => basePath(geoGraticule10()) ?? '', [basePath]);
-  const track = useMemo(() => smoothTrack(siteTrack(sites)), [sites]);
 
   const toScreen = useMemo(
     () =>
@@ -100,11 +109,14 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
           const first = points[0];
           const last = points[points.length - 1];
           const middle = first && last ? ([(first[0] + last[0]) / 2, (first[1] + last[1]) / 2] as const) : null;
-          const label = middle && first && last ? placeBandLabel(middle, first, last, markers, LABEL_OFFSET) : null;
+          const placed = middle && first && last ? placeBandLabel(middle, first, last, markers, LABEL_OFFSET) : null;
+          const kmText = `${segment.startKm}–${segment.endKm} km`;
+          const textWidth = Math.max(segment.name.length * 6.6, kmText.length * 6.2);
+          const label = placed ? keepLabelInFrame(placed, textWidth, 2, width, height, 4) : null;
           return { segment, tone: SEGMENT_TONES[index % SEGMENT_TONES.length] ?? SEGMENT_TONES[0], path: points.length > 1 ? (pathOfLine(points) ?? '') : '', label };
         })
         .filter((band) => band.path !== ''),
-    [segments, track, toScreen, markers],
+    [segments, track, toScreen, markers, width, height],
   );
 
   // d3-zoom only listens to the pointer and reports a transform; React draws with it.
@@ -199,6 +211,16 @@ export function SiteMap({ projectId, sites, segments, height = 380 }: SiteMapPro
         </div>
       )}
       <div className="sc-map-controls">
+        {far.length > 0 && (
+          <Button
+            size="small"
+            variant="outlined"
+            icon={showFar ? IconNames.ZOOM_IN : IconNames.ZOOM_OUT}
+            text={showFar ? 'Fit the near sites' : `${far.length} far site${far.length === 1 ? '' : 's'} out of view: show all`}
+            title={far.map((site) => site.name).join(', ')}
+            onClick={() => setShowFar((previous) => !previous)}
+          />
+        )}
         <Button icon={IconNames.ZOOM_TO_FIT} size="small" variant="outlined" aria-label="Fit the sites" title="Fit the sites" onClick={handleReset} />
       </div>
       <div className="sc-map-legend" aria-label="Legend">

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitMapProjection, MIN_SPAN_DEGREES, positionAtKm, segmentTrackLine, siteBounds, siteTrack, smoothTrack, type MapSite } from './mapGeometry';
+import { fitMapProjection, MIN_SPAN_DEGREES, nearAndFarSites, positionAtKm, segmentTrackLine, siteBounds, siteTrack, smoothTrack, type MapSite } from './mapGeometry';
 
 // An invented margin: four sites along a coast running roughly north-south.
 const SITES: MapSite[] = [
@@ -149,5 +149,40 @@ describe(smoothTrack.name, () => {
       { km: 10, position: [3, 4] as const },
     ];
     expect(smoothTrack(two)).toEqual(two);
+  });
+});
+
+describe(nearAndFarSites.name, () => {
+  const margin: MapSite[] = Array.from({ length: 8 }, (_, index) => ({ id: `s${index}`, longitude: 176 + index * 0.3, latitude: -39 + index * 0.4, alongStrikeKm: index * 40 }));
+
+  it('leaves a site half a world away out of the fit, so the margin keeps its spread', () => {
+    const distant = { id: 'far', longitude: 10, latitude: 50, alongStrikeKm: 400 };
+    const { near, far } = nearAndFarSites([...margin, distant]);
+    expect(far.map((site) => site.id)).toEqual(['far']);
+    expect(near).toHaveLength(8);
+    // Fitted to the near sites, the margin spans most of a 600 px frame, not a few pixels.
+    const projection = fitMapProjection(near, 600, 400, 24);
+    const xs = near.map((site) => projection([site.longitude, site.latitude])?.[0] ?? NaN);
+    expect(Math.max(...xs) - Math.min(...xs)).toBeGreaterThan(150);
+  });
+
+  it('keeps every site of a compact project', () => {
+    expect(nearAndFarSites(margin).far).toEqual([]);
+  });
+});
+
+describe('fitMapProjection with band ends', () => {
+  it('keeps points beyond the outermost sites (segment band ends) inside the margin', () => {
+    const sites: MapSite[] = [
+      { id: 'a', longitude: 176, latitude: -39, alongStrikeKm: 100 },
+      { id: 'b', longitude: 177, latitude: -38, alongStrikeKm: 200 },
+    ];
+    const bandEnd = [178.5, -36.5] as const;
+    const projection = fitMapProjection(sites, 500, 300, 24, [bandEnd]);
+    const [x, y] = projection([bandEnd[0], bandEnd[1]]) ?? [NaN, NaN];
+    expect(x).toBeGreaterThanOrEqual(24);
+    expect(x).toBeLessThanOrEqual(500 - 24);
+    expect(y).toBeGreaterThanOrEqual(24);
+    expect(y).toBeLessThanOrEqual(300 - 24);
   });
 });

@@ -61,15 +61,52 @@ function boundsOutline({ west, south, east, north }: LonLatBounds): GeoJSON.Mult
 
 /**
  * A Mercator projection (conformal, so the sites' track keeps its shape at the regional scale of
- * a margin) fitted to the padded bounds of the sites inside a `width` x `height` frame less
- * `margin` pixels on each side.
+ * a margin) fitted inside a `width` x `height` frame less `margin` pixels on each side to the
+ * padded bounds of the sites and of any further points (`alsoShow`: the ends of segment bands,
+ * which can reach past the outermost sites).
  */
-export function fitMapProjection(sites: readonly MapSite[], width: number, height: number, margin = 24): GeoProjection {
+export function fitMapProjection(
+  sites: readonly MapSite[],
+  width: number,
+  height: number,
+  margin = 24,
+  alsoShow: readonly LonLat[] = [],
+): GeoProjection {
   const inner: [[number, number], [number, number]] = [
     [margin, margin],
     [Math.max(margin + 1, width - margin), Math.max(margin + 1, height - margin)],
   ];
-  return geoMercator().fitExtent(inner, boundsOutline(siteBounds(sites)));
+  const points = [...sites, ...alsoShow.map(([longitude, latitude]) => ({ longitude, latitude }))];
+  return geoMercator().fitExtent(inner, boundsOutline(siteBounds(points)));
+}
+
+/** How far (degrees) beyond the typical spread a site may lie and still be fitted into view. */
+export const FAR_SITE_FACTOR = 6;
+/** Sites within this many degrees of the project's centre always count as near. */
+export const NEAR_DEGREES = 3;
+
+/**
+ * The sites the map fits, and the far ones it leaves out of the first view: a site farther from
+ * the sites' median position than FAR_SITE_FACTOR times their median distance from it (and more
+ * than NEAR_DEGREES) is far. One mistyped or distant site then does not shrink a margin's sites
+ * into a cluster; the map says how many are out of view and can fit them all.
+ */
+export function nearAndFarSites<T extends { longitude: number; latitude: number }>(sites: readonly T[]): { near: T[]; far: T[] } {
+  if (sites.length < 3) return { near: [...sites], far: [] };
+  const median = (values: number[]) => {
+    const sorted = [...values].sort((a, b) => a - b);
+    const middle = Math.floor(sorted.length / 2);
+    return sorted.length % 2 === 1 ? (sorted[middle] ?? 0) : ((sorted[middle - 1] ?? 0) + (sorted[middle] ?? 0)) / 2;
+  };
+  const centreLon = median(sites.map((site) => site.longitude));
+  const centreLat = median(sites.map((site) => site.latitude));
+  const shrink = Math.cos((centreLat * Math.PI) / 180);
+  const distanceOf = (site: T) => Math.hypot((site.longitude - centreLon) * shrink, site.latitude - centreLat);
+  const limit = Math.max(FAR_SITE_FACTOR * median(sites.map(distanceOf)), NEAR_DEGREES);
+  const near: T[] = [];
+  const far: T[] = [];
+  for (const site of sites) (distanceOf(site) <= limit ? near : far).push(site);
+  return { near, far };
 }
 
 /** A site's place on the track: its along-strike position and its WGS84 position. */

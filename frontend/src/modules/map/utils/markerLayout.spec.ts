@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { layoutMarkers, placeBandLabel } from './markerLayout';
+import { keepLabelInFrame, layoutMarkers, placeBandLabel } from './markerLayout';
 
 function distance(a: { drawX: number; drawY: number }, b: { drawX: number; drawY: number }): number {
   return Math.hypot(a.drawX - b.drawX, a.drawY - b.drawY);
@@ -90,5 +90,20 @@ describe(placeBandLabel.name, () => {
 
   it('takes the right side when nothing is near', () => {
     expect(placeBandLabel([100, 100], from, to, [], 20).textAnchor).toBe('start');
+  });
+});
+
+describe(keepLabelInFrame.name, () => {
+  it('turns a label running off the right edge to run left, inside the frame', () => {
+    const kept = keepLabelInFrame({ x: 580, y: 100, textAnchor: 'start' }, 120, 2, 600, 400, 8);
+    expect(kept.textAnchor).toBe('end');
+    expect(kept.x - 120).toBeGreaterThanOrEqual(8);
+    expect(kept.x).toBeLessThanOrEqual(592);
+  });
+
+  it('moves a label below the frame up so both lines show', () => {
+    const kept = keepLabelInFrame({ x: 100, y: 399, textAnchor: 'start' }, 80, 2, 600, 400, 8);
+    expect(kept.y + 13).toBeLessThanOrEqual(392);
+    expect(kept.x).toBe(100);
   });
 });

@@ -81,3 +81,31 @@ export function placeBandLabel(
   const best = !left || (right && right.clearance >= left.clearance) ? right : left;
   return best ? { x: best.x, y: best.y, textAnchor: best.textAnchor } : { x: anchor[0], y: anchor[1], textAnchor: 'start' };
 }
+
+/**
+ * A label kept inside a `width` x `height` frame less `margin`: its anchor point moved in so a
+ * text of `textWidth` x `lineCount` lines (about 13 px each) running the anchor's way is not cut
+ * by the frame's edge; when it would still run out it turns to run the other way.
+ */
+export function keepLabelInFrame(
+  label: { x: number; y: number; textAnchor: 'start' | 'end' },
+  textWidth: number,
+  lineCount: number,
+  width: number,
+  height: number,
+  margin: number,
+): { x: number; y: number; textAnchor: 'start' | 'end' } {
+  let { x, textAnchor } = label;
+  if (textAnchor === 'start' && x + textWidth > width - margin) {
+    textAnchor = 'end';
+    x = Math.min(x, width - margin);
+  } else if (textAnchor === 'end' && x - textWidth < margin) {
+    textAnchor = 'start';
+    x = Math.max(x, margin);
+  }
+  if (textAnchor === 'start') x = Math.max(margin, Math.min(x, width - margin - textWidth));
+  else x = Math.min(width - margin, Math.max(x, margin + textWidth));
+  const lineHeight = 13;
+  const y = Math.max(margin + lineHeight, Math.min(label.y, height - margin - lineHeight * (lineCount - 1)));
+  return { x, y, textAnchor };
+}

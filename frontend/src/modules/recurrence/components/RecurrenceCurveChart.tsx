@@ -2,7 +2,7 @@ import { line, scaleLinear } from 'd3';
 import { useMemo, type RefObject } from 'react';
 import type { RenewalModel } from '@/gql/graphql';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
-import { valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/modules/recurrence/utils/recurrenceCharts';
+import { MODEL_LABELS, valuePeak, yearsExtent, type CurvePointLike, type DensityBin } from '@/modules/recurrence/utils/recurrenceCharts';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const HEIGHT = 260;
@@ -31,20 +31,22 @@ export type RecurrenceCurveChartProps = {
   yLabel: string;
   /** Upper end of the vertical axis; the data's peak when not given. */
   yMax?: number;
+  /** Far end of the years axis (shared by both sides of a comparison); the data's when not given. */
+  yearsMax?: number;
   figure: RefObject<SVGSVGElement | null>;
 };
 
 /** Renewal-model curves over years, with optional histogram bars and a marker; a legend on top. */
-export function RecurrenceCurveChart({ curves, bars = [], marker, xLabel, yLabel, yMax, figure }: RecurrenceCurveChartProps) {
+export function RecurrenceCurveChart({ curves, bars = [], marker, xLabel, yLabel, yMax, yearsMax, figure }: RecurrenceCurveChartProps) {
   const { ref, width } = useParentSize();
   const innerRight = width - MARGIN.right;
   const innerBottom = HEIGHT - MARGIN.bottom;
   const x = useMemo(
     () =>
       scaleLinear()
-        .domain(yearsExtent(curves.map((curve) => curve.points), bars.map((bar) => ({ ...bar, count: 0 })), [marker?.years]))
+        .domain(yearsMax !== undefined ? [0, yearsMax] : yearsExtent(curves.map((curve) => curve.points), bars.map((bar) => ({ ...bar, count: 0 })), [marker?.years]))
         .range([MARGIN.left, innerRight]),
-    [curves, bars, marker, innerRight],
+    [curves, bars, marker, innerRight, yearsMax],
   );
   const y = useMemo(
     () =>
@@ -110,7 +112,7 @@ export function RecurrenceCurveChart({ curves, bars = [], marker, xLabel, yLabel
             <g key={curve.model} transform={`translate(${MARGIN.left + index * 92},12)`}>
               <line x2={16} stroke={modelColour(curve.model)} strokeWidth={2} />
               <text x={20} dy="0.32em" fontSize={10} fill={CHART_COLOURS.text}>
-                {curve.model.toLowerCase()}
+                {MODEL_LABELS[curve.model]}
               </text>
             </g>
           ))}

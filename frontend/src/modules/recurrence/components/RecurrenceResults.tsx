@@ -1,6 +1,8 @@
-import { Button, Callout, HTMLTable, Intent, ProgressBar, Tag } from '@blueprintjs/core';
+import { Button, Callout, Classes, HTMLTable, Intent, ProgressBar, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useMemo, useRef, useState } from 'react';
+import { Link, useParams } from 'react-router';
+import { paths } from '@/app/paths';
 import type { RecurrenceAnalysisQuery } from '@/gql/graphql';
 import { AgeValue } from '@/modules/ages/components/AgeValues';
 import { useSession } from '@/modules/auth/hooks/useSession';
@@ -8,7 +10,15 @@ import { FigureExportButtons } from '@/modules/correlation/components/FigureExpo
 import { downloadWithToken } from '@/modules/correlation/utils/figureDownload';
 import { figureFileName } from '@/modules/correlation/utils/figureExport';
 import { MODEL_ORDER, RecurrenceCurveChart, type ModelCurve } from '@/modules/recurrence/components/RecurrenceCurveChart';
-import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, isJobActive, modelLabel, recurrenceExportUrl } from '@/modules/recurrence/utils/recurrenceCharts';
+import {
+  elapsedSinceLastEvent,
+  formatProbability,
+  histogramAsDensity,
+  isJobActive,
+  modelLabel,
+  recurrenceExportUrl,
+  type SharedRecurrenceAxes,
+} from '@/modules/recurrence/utils/recurrenceCharts';
 
 export type RecurrenceAnalysisData = RecurrenceAnalysisQuery['recurrenceAnalysis'];
 
@@ -17,6 +27,8 @@ export type RecurrenceResultsProps = {
   canCancel: boolean;
   cancelling: boolean;
   onCancel: () => void;
+  /** Axes shared with the other side of a comparison; each figure fits its own data without them. */
+  sharedAxes?: SharedRecurrenceAxes;
 };
 
 type Range = { median: number; low95: number; high95: number } | null | undefined;
@@ -82,7 +94,7 @@ export function analysisLabel(analysis: { segment?: { name: string } | null; sit
  * One recurrence analysis: the caution first, then progress or the figures, probabilities,
  * model comparison and statistics, with exports of the numbers and the figures.
  */
-export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }: RecurrenceResultsProps) {
+export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, sharedAxes }: RecurrenceResultsProps) {
   const session = useSession();
   const [exportError, setExportError] = useState<string | null>(null);
   const histogramFigure = useRef<SVGSVGElement | null>(null);
@@ -107,11 +119,44 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
     );
   };
 
+  const projectId = useParams().projectId ?? '';
+  const handleEvents = () => {
+    setExportError(null);
+    downloadWithToken(`/api/recurrence-analyses/${encodeURIComponent(analysis.id)}/events.csv`, `analysis events ${label}.csv`, session?.token).catch((error: unknown) =>
+      setExportError(error instanceof Error ? error.message : 'the export failed'),
+    );
+  };
+
   return (
     <div className="sc-recurrence-results">
       <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title="Research result, not a hazard assessment" className="sc-caution">
         {analysis.caution}
       </Callout>
+      {analysis.stale && (
+        <Callout intent={Intent.DANGER} icon={IconNames.OUTDATED} title="Out of date: its inputs changed after it was computed">
+          <ul className="sc-stale-reasons">
+            {analysis.staleReasons.map((reason) => (
+              <li key={`${reason.message}|${reason.via.join('|')}`}>
+                {reason.message}
+                {reason.via.length > 0 && <span className={Classes.TEXT_MUTED}> (through the {reason.via.join(', then ')})</span>}
+              </li>
+            ))}
+          </ul>
+          Refresh stale results to re-run it with the same settings and seed.
+        </Callout>
+      )}
+      {analysis.inputs.ageModelRuns.length > 0 && (
+        <p className={Classes.TEXT_MUTED}>
+          Computed from the age models of{' '}
+          {analysis.inputs.ageModelRuns.map((run, i) => (
+            <span key={run.id}>
+              {i > 0 && ', '}
+              <Link to={paths.ageModel(projectId, run.site.id)}>{run.site.name}</Link>
+            </span>
+          ))}
+          {analysis.inputs.hypothesisVersion !== null && <> under hypothesis version <span className="num">{analysis.inputs.hypothesisVersion}</span></>}.
+        </p>
+      )}
       <div className="sc-run-status-line">
         <Tag minimal>{analysis.status.toLowerCase()}</Tag>
         <span>{label}</span>
@@ -129,6 +174,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
           <>
             <Button size="small" icon={IconNames.DOWNLOAD} text="CSV" onClick={handleExport('csv')} />
             <Button size="small" icon={IconNames.DOWNLOAD} text="JSON" onClick={handleExport('json')} />
+            <Button size="small" icon={IconNames.DOWNLOAD} text="Events CSV" onClick={handleEvents} />
           </>
         )}
       </div>
@@ -150,21 +196,45 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 <strong>Inter-event times and fitted densities</strong>
                 <FigureExportButtons figure={histogramFigure} title={`Intervals ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={densityCurves} bars={bars} xLabel="inter-event time, years" yLabel="density per year" figure={histogramFigure} />
+              <RecurrenceCurveChart
+                curves={densityCurves}
+                bars={bars}
+                xLabel="inter-event time, years"
+                yLabel="density per year"
+                yMax={sharedAxes?.densityMax}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={histogramFigure}
+              />
             </section>
             <section>
               <div className="sc-figure-head">
                 <strong>Hazard rate</strong>
                 <FigureExportButtons figure={hazardFigure} title={`Hazard ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={hazardCurves} marker={marker} xLabel="years since an event" yLabel="hazard per year" figure={hazardFigure} />
+              <RecurrenceCurveChart
+                curves={hazardCurves}
+                marker={marker}
+                xLabel="years since an event"
+                yLabel="hazard per year"
+                yMax={sharedAxes?.hazardMax}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={hazardFigure}
+              />
             </section>
             <section>
               <div className="sc-figure-head">
                 <strong>Survival</strong>
                 <FigureExportButtons figure={survivalFigure} title={`Survival ${label}`} />
               </div>
-              <RecurrenceCurveChart curves={survivalCurves} marker={marker} xLabel="years since an event" yLabel="probability of no event" yMax={1} figure={survivalFigure} />
+              <RecurrenceCurveChart
+                curves={survivalCurves}
+                marker={marker}
+                xLabel="years since an event"
+                yLabel="probability of no event"
+                yMax={1}
+                yearsMax={sharedAxes?.yearsMax}
+                figure={survivalFigure}
+              />
             </section>
           </div>
 
@@ -267,9 +337,18 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 ))}
             </tbody>
           </HTMLTable>
+          <p className="sc-chart-legend">
+            Mean recurrence here is each model's fitted mean μ: its maximum-likelihood fit, with the time since the last event as
+            an interval still open, refitted in every draw (median and 95 % range; "dating only" holds the parameters fixed). It
+            differs from the interval statistics below, which average the closed intervals of each draw without any model.
+          </p>
           {analysis.modelComparisonNote && <p className="sc-chart-legend">{analysis.modelComparisonNote}</p>}
 
           <h3>Interval statistics</h3>
+          <p className="sc-chart-legend">
+            Each figure is the median over the Monte Carlo draws of the event ages, with its 95 % range in brackets. The Poisson
+            row of the probability table uses this mean recurrence draw by draw.
+          </p>
           <HTMLTable compact className="sc-table">
             <tbody>
               <tr>
@@ -287,7 +366,10 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel }:
                 <RangeCell range={analysis.openInterval} />
               </tr>
               <tr>
-                <th>Mean recurrence, yr</th>
+                <th>
+                  Mean recurrence, yr
+                  <div className="sc-chart-legend">mean of the closed intervals in each draw of the event ages</div>
+                </th>
                 <RangeCell range={analysis.meanRecurrence} />
               </tr>
               <tr>

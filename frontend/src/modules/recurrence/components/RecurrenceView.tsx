@@ -1,23 +1,25 @@
 import { Callout, H2, HTMLSelect, Intent, NonIdealState, Switch } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery } from '@tanstack/react-query';
-import { useState, type ChangeEvent } from 'react';
+import { useMemo, useState, type ChangeEvent } from 'react';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { roleAllows } from '@/modules/auth/utils/permissions';
 import { analysisLabel, RecurrenceResults } from '@/modules/recurrence/components/RecurrenceResults';
 import { RecurrenceSetupForm } from '@/modules/recurrence/components/RecurrenceSetupForm';
+import { RefreshPanel } from '@/modules/recurrence/components/RefreshPanel';
 import { CancelRecurrenceAnalysisDocument, StartRecurrenceAnalysisDocument } from '@/modules/recurrence/graphql/recurrence';
 import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
+import { isJobActive, sharedRecurrenceAxes, type SharedRecurrenceAxes } from '@/modules/recurrence/utils/recurrenceCharts';
 import type { RecurrenceSettingsInput } from '@/modules/recurrence/utils/recurrenceForm';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
 import '@/modules/correlation/components/charts.css';
 
 export type RecurrenceViewProps = { projectId: string };
 
-type AnalysisPanelProps = { projectId: string; analysisId: string; canRun: boolean };
+type AnalysisPanelProps = { projectId: string; analysisId: string; canRun: boolean; sharedAxes?: SharedRecurrenceAxes };
 
-function AnalysisPanel({ projectId, analysisId, canRun }: AnalysisPanelProps) {
+function AnalysisPanel({ projectId, analysisId, canRun, sharedAxes }: AnalysisPanelProps) {
   const analysisQuery = useQuery(recurrenceQueries.analysis(projectId, analysisId));
   const cancel = useGraphqlMutation(CancelRecurrenceAnalysisDocument, { invalidates: [recurrenceQueries.all(projectId)] });
   if (analysisQuery.isPending) return <LoadingState label="Loading the analysis" />;
@@ -29,7 +31,7 @@ function AnalysisPanel({ projectId, analysisId, canRun }: AnalysisPanelProps) {
     );
   }
   const handleCancel = () => cancel.mutate({ id: analysisId });
-  return <RecurrenceResults analysis={analysisQuery.data} canCancel={canRun} cancelling={cancel.isPending} onCancel={handleCancel} />;
+  return <RecurrenceResults analysis={analysisQuery.data} canCancel={canRun} cancelling={cancel.isPending} onCancel={handleCancel} sharedAxes={sharedAxes} />;
 }
 
 /**
@@ -37,11 +39,26 @@ function AnalysisPanel({ projectId, analysisId, canRun }: AnalysisPanelProps) {
  * read its figures; or put two analyses side by side.
  */
 export function RecurrenceView({ projectId }: RecurrenceViewProps) {
-  const setupQuery = useQuery(recurrenceQueries.setup(projectId));
+  // The picker lists each analysis with its status: while one is queued or running, the list is
+  // asked again, so a finished analysis is not still called "queued".
+  const setupQuery = useQuery({
+    ...recurrenceQueries.setup(projectId),
+    refetchInterval: (query) => (query.state.data?.recurrenceAnalyses.some((entry) => isJobActive(entry.status)) ? 3000 : false),
+  });
   const start = useGraphqlMutation(StartRecurrenceAnalysisDocument, { invalidates: [recurrenceQueries.all(projectId)] });
   const [chosenId, setChosenId] = useState<string | null>(null);
   const [compareId, setCompareId] = useState<string | null>(null);
   const [comparing, setComparing] = useState(false);
+  const analysesInOrder = [...(setupQuery.data?.recurrenceAnalyses ?? [])].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
+  const shownId = chosenId ?? analysesInOrder[0]?.id ?? null;
+  const comparedId = comparing ? (compareId ?? analysesInOrder.find((entry) => entry.id !== shownId)?.id ?? null) : null;
+  // Side by side, both analyses share their axes so equal heights mean equal values.
+  const first = useQuery({ ...recurrenceQueries.analysis(projectId, shownId ?? ''), enabled: comparedId !== null && shownId !== null });
+  const second = useQuery({ ...recurrenceQueries.analysis(projectId, comparedId ?? ''), enabled: comparedId !== null });
+  const sharedAxes = useMemo(() => {
+    if (!comparedId || first.data?.status !== 'SUCCEEDED' || second.data?.status !== 'SUCCEEDED') return undefined;
+    return sharedRecurrenceAxes([first.data, second.data]);
+  }, [comparedId, first.data, second.data]);
 
   if (setupQuery.isPending) return <LoadingState />;
   if (setupQuery.isError) return <NonIdealState icon={IconNames.ERROR} title="The project could not be loaded" description={setupQuery.error.message} />;
@@ -64,6 +81,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
       <header className="sc-page-header">
         <H2 className="sc-page-title">Recurrence · {project.name}</H2>
       </header>
+      {project.myRole !== 'VIEWER' && <RefreshPanel projectId={projectId} />}
       {canRun && (
         <section className="sc-panel">
           <h3>New analysis</h3>
@@ -98,8 +116,8 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
             )}
           </div>
           <div className={secondId ? 'sc-recurrence-compare' : undefined}>
-            <AnalysisPanel projectId={projectId} analysisId={analysisId} canRun={canRun} />
-            {secondId && <AnalysisPanel projectId={projectId} analysisId={secondId} canRun={canRun} />}
+            <AnalysisPanel projectId={projectId} analysisId={analysisId} canRun={canRun} sharedAxes={sharedAxes} />
+            {secondId && <AnalysisPanel projectId={projectId} analysisId={secondId} canRun={canRun} sharedAxes={sharedAxes} />}
           </div>
         </>
       )}

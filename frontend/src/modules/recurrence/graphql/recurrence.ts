@@ -62,6 +62,21 @@ export const RecurrenceAnalysisDocument = graphql(`
       createdAt
       finishedAt
       hypothesisVersion
+      stale
+      staleReasons {
+        message
+        via
+      }
+      inputs {
+        ageModelRuns {
+          id
+          site {
+            id
+            name
+          }
+        }
+        hypothesisVersion
+      }
       segment {
         id
         name
@@ -195,6 +210,39 @@ export const CancelRecurrenceAnalysisDocument = graphql(`
     cancelRecurrenceAnalysis(id: $id) {
       id
       status
+    }
+  }
+`);
+
+export const RefreshStaleResultsDocument = graphql(`
+  mutation RefreshStaleResults($projectId: ID!) {
+    refreshStaleResults(projectId: $projectId) {
+      id
+    }
+  }
+`);
+
+export const LatestRefreshDocument = graphql(`
+  query LatestRefresh($projectId: ID!) {
+    project(id: $projectId) {
+      id
+      refreshPlans {
+        id
+        status
+        createdAt
+        steps {
+          id
+          stage
+          label
+          status
+          message
+        }
+        skipped {
+          id
+          label
+          reason
+        }
+      }
     }
   }
 `);

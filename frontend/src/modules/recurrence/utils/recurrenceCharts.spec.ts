@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, recurrenceExportUrl, valuePeak, yearsExtent } from './recurrenceCharts';
+import { elapsedSinceLastEvent, formatProbability, histogramAsDensity, recurrenceExportUrl, sharedRecurrenceAxes, valuePeak, yearsExtent } from './recurrenceCharts';
 
 describe(histogramAsDensity.name, () => {
   it('gives bars of total area 1, comparable with a fitted density', () => {
@@ -76,5 +76,29 @@ describe(formatProbability.name, () => {
 describe(recurrenceExportUrl.name, () => {
   it('addresses the analysis export endpoint', () => {
     expect(recurrenceExportUrl('a/1', 'csv')).toBe('/api/recurrence-analyses/a%2F1/export.csv');
+  });
+});
+
+describe(sharedRecurrenceAxes.name, () => {
+  const curve = (far: number, peak: number) => [
+    { years: 0, value: 0 },
+    { years: far / 2, value: peak },
+    { years: far, value: 0 },
+  ];
+  const analysis = (far: number, peak: number, hazard: number) => ({
+    histogram: [
+      { fromYears: 0, toYears: far / 4, count: 3 },
+      { fromYears: far / 4, toYears: far / 2, count: 1 },
+    ],
+    curves: [{ density: curve(far, peak), hazard: curve(far, hazard), survival: curve(far, 1) }],
+  });
+
+  it('gives both sides of a comparison the furthest years and the highest peaks of either', () => {
+    const axes = sharedRecurrenceAxes([analysis(2000, 0.001, 0.002), analysis(5000, 0.0004, 0.004)]);
+    expect(axes.yearsMax).toBe(5000);
+    expect(axes.hazardMax).toBe(0.004);
+    // The first analysis' tallest bar: 3 of its 4 draws in 500 yr, 3 / (4 x 500) = 0.0015 per year,
+    // above both density curves; pooling both histograms would halve it [analytic].
+    expect(axes.densityMax).toBeCloseTo(0.0015, 9);
   });
 });

@@ -82,6 +82,14 @@ export function isJobActive(status: string): boolean {
   return status === 'QUEUED' || status === 'RUNNING';
 }
 
+/** Renewal models by name as written in text (the API's enum values are upper-case codes). */
+export const RENEWAL_MODEL_NAMES: Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIBULL', string> = {
+  POISSON: 'Poisson (memoryless)',
+  BPT: 'BPT (Brownian passage time)',
+  LOGNORMAL: 'Lognormal',
+  WEIBULL: 'Weibull',
+};
+
 /** Renewal model names as the trade writes them (the API's enum is upper-case). */
 export const MODEL_LABELS: Readonly<Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WEIBULL', string>> = {
   POISSON: 'Poisson',
@@ -93,4 +101,35 @@ export const MODEL_LABELS: Readonly<Record<'POISSON' | 'BPT' | 'LOGNORMAL' | 'WE
 /** A model's screen name; unknown values pass through. */
 export function modelLabel(model: string): string {
   return (MODEL_LABELS as Record<string, string>)[model] ?? model;
+}
+
+/** What a side-by-side comparison needs of each analysis to put both on the same axes. */
+export type ComparableAnalysis = {
+  histogram: readonly HistogramBinLike[];
+  curves: readonly { density: readonly CurvePointLike[]; hazard: readonly CurvePointLike[]; survival: readonly CurvePointLike[] }[];
+  markerYears?: number | null;
+};
+
+/** Axes shared by two analyses shown side by side: one years range and one peak per figure. */
+export type SharedRecurrenceAxes = { yearsMax: number; densityMax: number; hazardMax: number };
+
+/**
+ * The axes both sides of a comparison use, so equal heights and positions mean equal values:
+ * the furthest year and the highest density and hazard of either analysis.
+ */
+export function sharedRecurrenceAxes(analyses: readonly ComparableAnalysis[]): SharedRecurrenceAxes {
+  const years = yearsExtent(
+    analyses.flatMap((analysis) => analysis.curves.flatMap((curve) => [curve.density, curve.hazard, curve.survival])),
+    analyses.flatMap((analysis) => analysis.histogram),
+    analyses.map((analysis) => analysis.markerYears),
+  )[1];
+  return {
+    yearsMax: years,
+    densityMax: valuePeak(
+      analyses.flatMap((analysis) => analysis.curves.map((curve) => curve.density)),
+      // Each histogram is a density of its own draws: normalised per analysis, never pooled.
+      analyses.flatMap((analysis) => histogramAsDensity(analysis.histogram)),
+    ),
+    hazardMax: valuePeak(analyses.flatMap((analysis) => analysis.curves.map((curve) => curve.hazard))),
+  };
 }

@@ -17,6 +17,7 @@ import {
   type SampleFormField,
   type SampleFormValues,
 } from '@/modules/samples/utils/sampleForm';
+import { calBpFromYear, radiocarbonFromF14C, yearFromCalBp, type CalendarEntry } from '@/modules/samples/utils/ageEntry';
 import { luminescenceCalBp } from '@/modules/samples/utils/sampleSummary';
 import {
   AGE_RELATION_LABELS,
@@ -59,6 +60,12 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
     sample ? sampleFormFrom({ ...sample, unitId: sample.unit.id }) : emptySampleForm([...site.units].sort((a, b) => b.position - a.position)[0]?.id ?? ''),
   );
   const [errors, setErrors] = useState<FieldErrors<SampleFormField>>({});
+  // How the age is typed: a 14C age or F14C; a calendar age in cal BP or as a year CE/BCE. The
+  // form keeps what the sample stores (14C age, cal BP) and these convert into it as they are typed.
+  const [c14Entry, setC14Entry] = useState<'AGE' | 'F14C'>('AGE');
+  const [f14c, setF14c] = useState({ value: '', error: '' });
+  const [calendarEntry, setCalendarEntry] = useState<CalendarEntry>('CAL_BP');
+  const [calendarYear, setCalendarYear] = useState('');
   const projectId = site.project.id;
   const { create, update } = useSampleMutations(projectId);
   const mutation = sample ? update : create;
@@ -81,7 +88,47 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
     const excluded = event.target.checked;
     setValues((previous) => ({ ...previous, excluded }));
   };
+  const f14cValue = readNumber(f14c.value).value;
+  const f14cErrorValue = readNumber(f14c.error).value;
+  const fromF14c = f14cValue != null && f14cErrorValue != null ? radiocarbonFromF14C(f14cValue, f14cErrorValue) : null;
+  const handleF14cChange = (part: 'value' | 'error') => (text: string) => {
+    const next = { ...f14c, [part]: text };
+    setF14c(next);
+    const value = readNumber(next.value).value;
+    const error = readNumber(next.error).value;
+    const converted = value != null && error != null ? radiocarbonFromF14C(value, error) : null;
+    setValues((previous) => ({
+      ...previous,
+      c14Age: converted?.ok ? String(converted.c14Age) : '',
+      c14Error: converted?.ok ? String(converted.c14Error) : '',
+    }));
+  };
+  const handleC14EntryChange = (entry: 'AGE' | 'F14C') => {
+    setC14Entry(entry);
+    if (entry === 'F14C') handleF14cChange('value')(f14c.value);
+  };
+  const handleCalendarYearChange = (text: string, entry: CalendarEntry = calendarEntry) => {
+    setCalendarYear(text);
+    const year = readNumber(text, { integer: true }).value;
+    if (entry !== 'CAL_BP') setValues((previous) => ({ ...previous, calendarAgeBp: year != null && year >= 1 ? String(calBpFromYear(year, entry)) : '' }));
+  };
+  const handleCalendarEntryChange = (entry: CalendarEntry) => {
+    setCalendarEntry(entry);
+    if (entry === 'CAL_BP') return;
+    // Switching to years shows the age already typed (or stored) as a year.
+    const calBp = readNumber(values.calendarAgeBp).value;
+    if (calBp != null) {
+      const { year, era } = yearFromCalBp(Math.round(calBp));
+      if (era !== entry) setCalendarEntry(era);
+      setCalendarYear(String(year));
+    } else {
+      handleCalendarYearChange(calendarYear, entry);
+    }
+  };
+  const f14cProblem = c14Entry === 'F14C' && values.method === 'RADIOCARBON' ? (fromF14c && !fromF14c.ok ? fromF14c : null) : null;
+
   const handleSubmit = () => {
+    if (f14cProblem) return;
     const result = readSampleForm(values, site.units);
     if (!result.ok) {
       setErrors(result.errors);
@@ -142,10 +189,47 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
         {values.method === 'RADIOCARBON' && (
           <>
             <div className="sc-field-row">
-              <NumberField name="c14Age" label="Conventional age" unit="14C yr BP" value={values.c14Age} onValueChange={set('c14Age')} error={errorOf('c14Age')} />
-              <NumberField name="c14Error" label="Error (1σ)" unit="14C yr" value={values.c14Error} onValueChange={set('c14Error')} error={errorOf('c14Error')} />
+              <SelectField
+                name="c14Entry"
+                label="Reported as"
+                value={c14Entry}
+                options={[
+                  { value: 'AGE', label: '14C age (yr BP)' },
+                  { value: 'F14C', label: 'F14C (fraction modern)' },
+                ]}
+                onValueChange={handleC14EntryChange}
+                className="sc-field-narrow"
+              />
+              {c14Entry === 'AGE' ? (
+                <>
+                  <NumberField name="c14Age" label="Conventional age" unit="14C yr BP" value={values.c14Age} onValueChange={set('c14Age')} error={errorOf('c14Age')} />
+                  <NumberField name="c14Error" label="Error (1σ)" unit="14C yr" value={values.c14Error} onValueChange={set('c14Error')} error={errorOf('c14Error')} />
+                </>
+              ) : (
+                <>
+                  <NumberField
+                    name="f14c"
+                    label="F14C"
+                    value={f14c.value}
+                    onValueChange={handleF14cChange('value')}
+                    error={f14cProblem?.field === 'f14c' ? f14cProblem.message : (errorOf('c14Age') ?? undefined)}
+                  />
+                  <NumberField
+                    name="f14cError"
+                    label="F14C error (1σ)"
+                    value={f14c.error}
+                    onValueChange={handleF14cChange('error')}
+                    error={f14cProblem?.field === 'f14cError' ? f14cProblem.message : (errorOf('c14Error') ?? undefined)}
+                  />
+                </>
+              )}
               <NumberField name="delta13C" label="δ13C" unit="‰" labelInfo="(optional)" value={values.delta13C} onValueChange={set('delta13C')} error={errorOf('delta13C')} />
             </div>
+            {c14Entry === 'F14C' && fromF14c?.ok && (
+              <p className={`${Classes.TEXT_MUTED} sc-form-note`}>
+                Stored as the conventional age <span className="num">{fromF14c.c14Age} ± {fromF14c.c14Error}</span> 14C yr BP (−8033 ln F; Stuiver &amp; Polach 1977).
+              </p>
+            )}
             <div className="sc-field-row">
               <SelectField name="curve" label="Calibration curve" value={values.curve} options={CURVE_OPTIONS} onValueChange={handleCurveChange} error={errorOf('curve')} />
               {shown.has('deltaR') && (
@@ -187,7 +271,30 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
         {(values.method === 'HISTORICAL' || values.method === 'TEPHRA') && (
           <>
             <div className="sc-field-row">
-              <NumberField name="calendarAgeBp" label="Centre of the range" unit="cal BP" value={values.calendarAgeBp} onValueChange={set('calendarAgeBp')} error={errorOf('calendarAgeBp')} />
+              <SelectField
+                name="calendarEntry"
+                label="Given as"
+                value={calendarEntry}
+                options={[
+                  { value: 'CAL_BP', label: 'cal BP' },
+                  { value: 'CE', label: 'year CE' },
+                  { value: 'BCE', label: 'year BCE' },
+                ]}
+                onValueChange={handleCalendarEntryChange}
+                className="sc-field-narrow"
+              />
+              {calendarEntry === 'CAL_BP' ? (
+                <NumberField name="calendarAgeBp" label="Centre of the range" unit="cal BP" value={values.calendarAgeBp} onValueChange={set('calendarAgeBp')} error={errorOf('calendarAgeBp')} />
+              ) : (
+                <NumberField
+                  name="calendarYear"
+                  label="Centre of the range"
+                  unit={calendarEntry}
+                  value={calendarYear}
+                  onValueChange={(text) => handleCalendarYearChange(text)}
+                  error={errorOf('calendarAgeBp')}
+                />
+              )}
               <NumberField name="calendarErrorYears" label="Half-width" unit="years" value={values.calendarErrorYears} onValueChange={set('calendarErrorYears')} error={errorOf('calendarErrorYears')} />
             </div>
             {tieCentre != null && tieHalfWidth != null && (

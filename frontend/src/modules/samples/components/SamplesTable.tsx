@@ -4,7 +4,8 @@ import { Cell, Column, ColumnHeaderCell, Table, TruncatedFormat } from '@bluepri
 import { useMemo, useState, type ReactNode } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { formatRadiocarbonAge } from '@/modules/ages/utils/formatAge';
-import { CURVE_LABELS, DATING_METHOD_LABELS, SAMPLE_MATERIAL_LABELS } from '@/modules/samples/utils/sampleVocabulary';
+import { fitColumnWidth } from '@/modules/samples/utils/columnWidth';
+import { AGE_RELATION_LABELS, CURVE_LABELS, DATING_METHOD_LABELS, SAMPLE_MATERIAL_LABELS } from '@/modules/samples/utils/sampleVocabulary';
 import type { SampleRow, UnitRow } from '@/modules/sites/utils/siteTypes';
 import { sortRows, type SortState, type SortValue } from '@/modules/ui/utils/tableSort';
 
@@ -13,6 +14,7 @@ type SampleSortKey =
   | 'method'
   | 'material'
   | 'unit'
+  | 'ageRelation'
   | 'depth'
   | 'c14Age'
   | 'curve'
@@ -25,7 +27,9 @@ type SampleSortKey =
 type SampleColumn = {
   key: SampleSortKey;
   name: string;
+  /** The narrowest and widest the column may be; its width between them follows its content. */
   width: number;
+  maxWidth?: number;
   className?: string;
   sortValue: (sample: SampleRow) => SortValue;
   text: (sample: SampleRow) => ReactNode;
@@ -37,6 +41,8 @@ export type SamplesTableProps = {
   canEdit: boolean;
   onEdit: (sample: SampleRow) => void;
   onDelete: (sample: SampleRow) => void;
+  /** Show a sample whole (its lab code is a link to this). */
+  onOpen: (sample: SampleRow) => void;
 };
 
 const ROW_HEIGHT = 22;
@@ -52,7 +58,7 @@ const warningsOf = (sample: SampleRow) => [...(sample.calibrationError ? [sample
  * The site's samples with their lab values and calibrated ages (median and 95.4 % ranges in
  * the chosen age scale). Columns sort from their header menu and can be resized.
  */
-export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: SamplesTableProps) {
+export function SamplesTable({ samples, units, canEdit, onEdit, onDelete, onOpen }: SamplesTableProps) {
   const { age, ranges, scale } = useAgeScale();
   const [sort, setSort] = useState<SortState<SampleSortKey>>({ key: 'depth', direction: 'ascending' });
   const unitsById = useMemo(() => new Map(units.map((unit) => [unit.id, unit])), [units]);
@@ -68,6 +74,13 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
         width: 140,
         sortValue: (s) => unitsById.get(s.unit.id)?.position,
         text: (s) => unitsById.get(s.unit.id)?.name ?? '?',
+      },
+      {
+        key: 'ageRelation',
+        name: 'Age relation',
+        width: 120,
+        sortValue: (s) => s.ageRelation,
+        text: (s) => AGE_RELATION_LABELS[s.ageRelation].replace(/ \(.*\)$/, ''),
       },
       {
         key: 'depth',
@@ -105,7 +118,8 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
       {
         key: 'hpd95',
         name: '95.4 % ranges',
-        width: 250,
+        width: 160,
+        maxWidth: 420,
         className: 'num',
         sortValue: oldest95Of,
         text: (s) => (s.calibration ? ranges(s.calibration.hpd95) : '–'),
@@ -113,14 +127,16 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
       {
         key: 'warnings',
         name: 'Warnings',
-        width: 180,
+        width: 100,
+        maxWidth: 320,
         sortValue: (s) => warningsOf(s).length || null,
         text: (s) => warningsOf(s).join('; '),
       },
       {
         key: 'excluded',
         name: 'Excluded',
-        width: 120,
+        width: 80,
+        maxWidth: 240,
         sortValue: (s) => (s.excluded ? 1 : null),
         text: (s) => (s.excluded ? (s.exclusionReason ?? 'yes') : ''),
       },
@@ -153,6 +169,15 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
   const cellRenderer = (column: SampleColumn) => (rowIndex: number) => {
     const sample = sorted[rowIndex];
     if (!sample) return <Cell />;
+    if (column.key === 'labCode') {
+      return (
+        <Cell interactive className="num">
+          <button type="button" className="sc-link-button" onClick={() => onOpen(sample)} aria-label={`Open sample ${sample.labCode}`}>
+            {sample.labCode}
+          </button>
+        </Cell>
+      );
+    }
     const isWarning = column.key === 'warnings' && warningsOf(sample).length > 0;
     const intent = column.key === 'warnings' && sample.calibrationError ? Intent.DANGER : isWarning ? Intent.WARNING : Intent.NONE;
     return (
@@ -173,7 +198,13 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
     );
   };
 
-  const columnWidths = useMemo(() => [...(canEdit ? [ACTIONS_WIDTH] : []), ...columns.map((column) => column.width)], [canEdit, columns]);
+  const columnWidths = useMemo(
+    () => [
+      ...(canEdit ? [ACTIONS_WIDTH] : []),
+      ...columns.map((column) => fitColumnWidth(column.name, samples.map((sample) => String(column.text(sample) ?? '')), column.width, column.maxWidth ?? Math.max(column.width, 200))),
+    ],
+    [canEdit, columns, samples],
+  );
   const height = Math.min(560, HEADER_HEIGHT + Math.max(sorted.length, 1) * ROW_HEIGHT + 16);
   return (
     <div className="sc-samples-table" style={{ height }}>
@@ -185,7 +216,7 @@ export function SamplesTable({ samples, units, canEdit, onEdit, onDelete }: Samp
         enableColumnResizing
         enableFocusedCell={false}
         numFrozenColumns={canEdit ? 2 : 1}
-        cellRendererDependencies={[sorted, scale, canEdit]}
+        cellRendererDependencies={[sorted, scale, canEdit, onOpen]}
       >
         {[
           ...(canEdit ? [<Column key="actions" name="" cellRenderer={actionsRenderer} />] : []),

@@ -7,6 +7,7 @@ import { DATING_METHOD_LABELS, SAMPLE_MATERIAL_LABELS } from '@/modules/samples/
 import type { SampleRow, SiteDetail } from '@/modules/sites/utils/siteTypes';
 import { DeleteAlert } from '@/modules/ui/components/DeleteAlert';
 import { matchesTextFilter } from '@/modules/ui/utils/tableSort';
+import { SampleDetailDialog } from './SampleDetailDialog';
 import { SampleDialog } from './SampleDialog';
 import { SamplesTable } from './SamplesTable';
 
@@ -20,6 +21,7 @@ export function SamplesView({ site, canEdit }: SamplesViewProps) {
   const [filter, setFilter] = useState('');
   const [editing, setEditing] = useState<SampleRow | 'new' | null>(null);
   const [deleting, setDeleting] = useState<SampleRow | null>(null);
+  const [opened, setOpened] = useState<SampleRow | null>(null);
   const [importing, setImporting] = useState(false);
   const { remove } = useSampleMutations(site.project.id);
   const unitNames = useMemo(() => new Map(site.units.map((unit) => [unit.id, unit.name])), [site.units]);
@@ -77,9 +79,21 @@ export function SamplesView({ site, canEdit }: SamplesViewProps) {
             description={canAdd ? 'Add samples one by one or import a lab sheet.' : canEdit ? 'Add units to the column first.' : undefined}
           />
         ) : (
-          <SamplesTable samples={shown} units={site.units} canEdit={canEdit} onEdit={setEditing} onDelete={setDeleting} />
+          <SamplesTable samples={shown} units={site.units} canEdit={canEdit} onEdit={setEditing} onDelete={setDeleting} onOpen={setOpened} />
         )}
       </SectionCard>
+      {opened && (
+        <SampleDetailDialog
+          sample={opened}
+          units={site.units}
+          canEdit={canEdit}
+          onEdit={(sample) => {
+            setOpened(null);
+            setEditing(sample);
+          }}
+          onClose={() => setOpened(null)}
+        />
+      )}
       {editing && <SampleDialog site={site} sample={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
       {importing && <ImportSamplesDialog site={site} onClose={() => setImporting(false)} />}
       <DeleteAlert

@@ -1,7 +1,7 @@
 import { Button, FormGroup, Intent, TagInput } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQueryClient } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
+import { useState, type KeyboardEvent, type ReactNode } from 'react';
 import { fieldErrorsOf, formErrorOf, isEditConflict } from '@/modules/api/utils/apiError';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { useEventHorizonMutations } from '@/modules/sites/hooks/columnMutations';
@@ -54,6 +54,10 @@ export function EventHorizonDialog({ projectId, siteId, units, eventHorizon, onC
 
   const handleEvidenceChange = (tags: ReactNode[]) =>
     setValues((previous) => ({ ...previous, evidence: tags.map(String) }));
+  // Enter adds the typed tag; left alone it would also submit the dialog's form after the first tag.
+  const handleEvidenceKeyDown = (event: KeyboardEvent<HTMLElement>) => {
+    if (event.key === 'Enter') event.preventDefault();
+  };
   const handleAddSuggestion = (tag: string) => setValues((previous) => ({ ...previous, evidence: [...previous.evidence, tag] }));
   const handleSubmit = () => {
     const result = readEventHorizonForm(values, units);
@@ -121,6 +125,7 @@ export function EventHorizonDialog({ projectId, siteId, units, eventHorizon, onC
           inputProps={{ id: 'evidence' }}
           values={values.evidence}
           onChange={handleEvidenceChange}
+          onKeyDown={handleEvidenceKeyDown}
           addOnBlur
           placeholder="evidence kinds"
           tagProps={{ minimal: true }}

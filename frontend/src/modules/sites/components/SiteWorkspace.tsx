@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { SiteTab } from '@/app/paths';
 import { SiteAttachmentsView } from '@/modules/attachments/components/SiteAttachmentsView';
+import { CoreLogsView } from '@/modules/core-logs/components/CoreLogsView';
 import { roleAllows } from '@/modules/auth/utils/permissions';
 import { SiteCalibrationView } from '@/modules/calibration/components/SiteCalibrationView';
 import { SiteDialog } from '@/modules/projects/components/SiteDialog';
@@ -45,6 +46,9 @@ export function SiteWorkspace({ site, tab, onTabChange }: SiteWorkspaceProps) {
           title="Calibration"
           panel={<SiteCalibrationView projectId={site.project.id} siteId={site.id} />}
         />
+        {(site.kind === 'CORE' || site.kind === 'LAKE') && (
+          <Tab id="logs" icon={IconNames.TIMELINE_LINE_CHART} title="Logs" panel={<CoreLogsView projectId={site.project.id} siteId={site.id} canEdit={canEdit} />} />
+        )}
         <Tab id="files" icon={IconNames.PAPERCLIP} title="Files" panel={<SiteAttachmentsView projectId={site.project.id} siteId={site.id} />} />
       </Tabs>
       {editingSite && project && (

@@ -76,3 +76,12 @@ export const RemoveMemberDocument = graphql(`
     removeMember(projectId: $projectId, userId: $userId)
   }
 `);
+
+export const InvitationLinkDocument = graphql(`
+  query InvitationLink($token: String!) {
+    invitationLink(token: $token) {
+      status
+      projectName
+    }
+  }
+`);

@@ -2,10 +2,17 @@ import { queryOptions } from '@tanstack/react-query';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
-import { InviteMemberDocument, ProjectTeamDocument, RemoveMemberDocument, SetMemberRoleDocument } from '@/modules/team/graphql/team';
+import { InvitationLinkDocument, InviteMemberDocument, ProjectTeamDocument, RemoveMemberDocument, SetMemberRoleDocument } from '@/modules/team/graphql/team';
 
 /** Query keys and options for a project's members and invitations, under the project's prefix. */
 export const teamQueries = {
+  /** What an invitation link can still do (public, asked before its form is shown). */
+  invitationLink: (token: string) =>
+    queryOptions({
+      queryKey: ['invitation-link', token] as const,
+      queryFn: async () => (await graphqlRequest(InvitationLinkDocument, { token })).invitationLink,
+      staleTime: 0,
+    }),
   all: (projectId: string) => [...projectQueries.detail(projectId), 'team'] as const,
   team: (projectId: string) =>
     queryOptions({
