@@ -188,6 +188,27 @@ async function writeSucceededRun(siteId: string, horizonIds: string[], ages: num
   );
 }
 
+let coreSiteId: string | undefined;
+
+/** A CORE site two metres deep (made once), for core-log uploads. */
+async function coreSite(): Promise<string> {
+  if (!coreSiteId) {
+    coreSiteId = await newSite({ kind: 'CORE' });
+    await newUnits(coreSiteId, 2);
+  }
+  return coreSiteId;
+}
+
+const CORE_LOG_CSV = 'depth (m),susceptibility (SI)\n0.10,12.5\n0.20,13.0\n0.30,11.8\n';
+
+async function newCoreLog(): Promise<string> {
+  const { uploadCoreLog } = await clients.RESEARCHER.ok(
+    `mutation($i: UploadCoreLogInput!) { uploadCoreLog(input: $i) { id } }`,
+    { i: { siteId: await coreSite(), name: unique('Log'), csv: CORE_LOG_CSV } },
+  );
+  return uploadCoreLog.id;
+}
+
 async function uploadAttachment(): Promise<string> {
   const response = await fetch(`${server.url}/api/attachments?siteId=${editSiteId}&fileName=matrix.png`, {
     method: 'POST',
@@ -312,6 +333,8 @@ const CASES: Record<string, MatrixCase> = {
   setRefreshSettings: { access: { project: Permission.ProjectSettings }, variables: async () => ({ input: { projectId: fixture.projectId, automatic: false } }) },
   createRelease: { access: { project: Permission.ReleaseCreate }, variables: async () => ({ input: { projectId: fixture.projectId, note: unique('Matrix release') } }) },
   deleteAttachment: { access: stratigraphy, variables: async () => ({ id: await uploadAttachment() }) },
+  uploadCoreLog: { access: stratigraphy, variables: async () => ({ input: { siteId: await coreSite(), name: unique('Log'), csv: CORE_LOG_CSV } }) },
+  deleteCoreLog: { access: stratigraphy, variables: async () => ({ id: await newCoreLog() }) },
 };
 
 const MUTATIONS = Object.keys(mutationFields);
