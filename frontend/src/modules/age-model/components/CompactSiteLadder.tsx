@@ -1,7 +1,6 @@
 import { area, scaleLinear } from 'd3';
 import { useMemo } from 'react';
-import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
-import { verticalTicks } from '@/modules/ages/utils/ageAxis';
+import { TimeGridTicks } from '@/modules/ages/components/TimeGridTicks';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { createTimeScale, ladderTimeWindow } from '@/modules/correlation/utils/ladderLayout';
@@ -23,7 +22,6 @@ export type CompactSiteLadderProps = { events: readonly CompactLadderEvent[] };
  */
 export function CompactSiteLadder({ events }: CompactSiteLadderProps) {
   const { ref, width } = useParentSize();
-  const { tick, axisTicks } = useAgeScale();
   const densities = useMemo(() => events.map((event) => event.density), [events]);
   const time = useMemo(() => createTimeScale(ladderTimeWindow(densities), MARGIN.top, HEIGHT - MARGIN.bottom), [densities]);
   const shapes = useMemo(() => {
@@ -43,14 +41,7 @@ export function CompactSiteLadder({ events }: CompactSiteLadderProps) {
     <div ref={ref} className="sc-chart-frame">
       {width > 0 && (
         <svg width={width} height={HEIGHT} role="img" aria-label="Events of this site down its column">
-          {verticalTicks(time, axisTicks, 8).map((value) => (
-            <g key={value} transform={`translate(0,${time(value)})`}>
-              <line x1={MARGIN.left - 4} x2={width - MARGIN.right} stroke={CHART_COLOURS.grid} />
-              <text x={MARGIN.left - 8} dy="0.32em" textAnchor="end" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
-                {tick(value)}
-              </text>
-            </g>
-          ))}
+          <TimeGridTicks time={time} count={8} left={MARGIN.left} right={width - MARGIN.right} />
           <line x1={MARGIN.left} x2={MARGIN.left} y1={MARGIN.top} y2={HEIGHT - MARGIN.bottom} stroke={CHART_COLOURS.axis} />
           {shapes.map((event) => (
             <g key={event.id}>

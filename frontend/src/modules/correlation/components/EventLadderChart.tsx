@@ -2,7 +2,7 @@ import { area, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform
 import { useEffect, useId, useMemo, useRef, useState, type RefObject } from 'react';
 import type { HypothesisQuery } from '@/gql/graphql';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
-import { verticalTicks } from '@/modules/ages/utils/ageAxis';
+import { TimeGridTicks } from '@/modules/ages/components/TimeGridTicks';
 import { ageAxisTitle } from '@/modules/ages/utils/formatAge';
 import { closeDensity, densityPeak, type DensityPoint } from '@/modules/calibration/utils/calibrationChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
@@ -48,7 +48,7 @@ type Hover = { x: number; y: number; siteName: string; event: LadderColumn['even
  */
 export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSelectEvent, figure }: EventLadderChartProps) {
   const { ref, width, height } = useParentSize();
-  const { tick, age, range, axisTicks, scale } = useAgeScale();
+  const { age, range, scale } = useAgeScale();
   const clipId = useId().replace(/:/g, '');
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
   const [hover, setHover] = useState<Hover | null>(null);
@@ -144,14 +144,7 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
             );
           })}
           <g clipPath={`url(#${clipId})`}>
-            {verticalTicks(time, axisTicks, 10).map((value) => (
-              <g key={value} transform={`translate(0,${time(value)})`}>
-                <line x1={MARGIN.left - 4} x2={width - MARGIN.right} stroke={CHART_COLOURS.grid} />
-                <text x={MARGIN.left - 8} dy="0.32em" textAnchor="end" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
-                  {tick(value)}
-                </text>
-              </g>
-            ))}
+            <TimeGridTicks time={time} count={10} left={MARGIN.left} right={width - MARGIN.right} />
             {bands.map((band) => (
               <rect key={band.regionalEventId} x={band.x} y={band.y} width={band.width} height={band.height} fill={CHART_COLOURS.regionalBand} fillOpacity={0.22} />
             ))}

@@ -1,7 +1,7 @@
 import { scaleLinear } from 'd3';
 import { useMemo, type RefObject } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
-import { verticalTicks } from '@/modules/ages/utils/ageAxis';
+import { TimeGridTicks } from '@/modules/ages/components/TimeGridTicks';
 import { ageAxisTitle } from '@/modules/ages/utils/formatAge';
 import type { LadderColumn, LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
@@ -29,7 +29,7 @@ export type SpaceTimeChartProps = {
  */
 export function SpaceTimeChart({ columns, hypothesis, figure }: SpaceTimeChartProps) {
   const { ref, width, height } = useParentSize();
-  const { tick, range, axisTicks, scale } = useAgeScale();
+  const { range, scale } = useAgeScale();
   const bars = useMemo(() => spaceTimeBars(hypothesis?.regionalEvents ?? [], eventSiteKm(columns)), [hypothesis, columns]);
   const time = useMemo(() => {
     const window = ladderTimeWindow(columns.flatMap((column) => column.events.map((event) => event.density)));
@@ -47,14 +47,7 @@ export function SpaceTimeChart({ columns, hypothesis, figure }: SpaceTimeChartPr
     <div ref={ref} className="sc-chart-frame sc-ladder-chart">
       {width > 0 && height > 0 && (
         <svg ref={figure} width={width} height={height} role="img" aria-label="Regional events in space and time">
-          {verticalTicks(time, axisTicks, 10).map((value) => (
-            <g key={value} transform={`translate(0,${time(value)})`}>
-              <line x1={MARGIN.left - 4} x2={width - MARGIN.right} stroke={CHART_COLOURS.grid} />
-              <text x={MARGIN.left - 8} dy="0.32em" textAnchor="end" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
-                {tick(value)}
-              </text>
-            </g>
-          ))}
+          <TimeGridTicks time={time} count={10} left={MARGIN.left} right={width - MARGIN.right} />
           {distance.ticks(8).map((km) => (
             <text key={km} x={distance(km)} y={height - 8} textAnchor="middle" fontSize={10} fill={CHART_COLOURS.mutedText} className="num">
               {km}
