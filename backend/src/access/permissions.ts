@@ -41,3 +41,18 @@ export const ROLE_PERMISSIONS: Record<Role, ReadonlySet<Permission>> = {
 export function roleAllows(role: Role, permission: Permission): boolean {
   return ROLE_PERMISSIONS[role].has(permission);
 }
+
+/**
+ * A permission's name in the GraphQL `enum Permission` (`age-model.run` -> `AGE_MODEL_RUN`);
+ * `permissions.spec.ts` checks that the schema lists exactly these names.
+ */
+export function permissionName(permission: Permission): string {
+  return permission.toUpperCase().replace(/[.-]/g, '_');
+}
+
+/** What a role may do, as GraphQL `Permission` names in the enum's order. */
+export function permissionNamesOf(role: Role): string[] {
+  return Object.values(Permission)
+    .filter((permission) => roleAllows(role, permission))
+    .map(permissionName);
+}

@@ -1,5 +1,5 @@
 import { Args, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
-import { Role } from '../access/permissions';
+import { permissionNamesOf, Role } from '../access/permissions';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { SegmentRow } from '../segments/segments.repository';
@@ -36,6 +36,12 @@ export class ProjectsResolver {
   @ResolveField('myRole')
   myRole(@Parent() project: ProjectRow, @CurrentUser() user: AuthUser): Promise<Role> {
     return this.projects.myRole(user, project.id);
+  }
+
+  /** What the caller's role allows here, from the server's role table. */
+  @ResolveField('myPermissions')
+  async myPermissions(@Parent() project: ProjectRow, @CurrentUser() user: AuthUser): Promise<string[]> {
+    return permissionNamesOf(await this.projects.myRole(user, project.id));
   }
 
   @ResolveField('segments')

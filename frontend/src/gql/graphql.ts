@@ -999,6 +999,29 @@ export type ParameterRange = {
   median: Scalars['Float']['output'];
 };
 
+/** What a member may do in a project; each role grants a fixed set (the server's role table). Screens read Project.myPermissions to hide or disable actions; the server checks every request itself. */
+export type Permission =
+  /** Start and cancel site age model runs. */
+  | 'AGE_MODEL_RUN'
+  /** Read the audit trail. */
+  | 'AUDIT_READ'
+  /** Create, edit and delete correlation hypotheses and ties. */
+  | 'CORRELATION_WRITE'
+  /** Members, roles, invitations. */
+  | 'MEMBERS_MANAGE'
+  /** Read everything in the project. */
+  | 'PROJECT_READ'
+  /** Project-wide settings, such as refreshing stale results automatically. */
+  | 'PROJECT_SETTINGS'
+  /** Start and cancel recurrence analyses. */
+  | 'RECURRENCE_RUN'
+  /** Freeze releases. */
+  | 'RELEASE_CREATE'
+  /** Ask for stale results to be re-run (each kind still needs its own run permission). */
+  | 'RESULTS_REFRESH'
+  /** Segments, sites, units, event horizons, samples, imports, attachments, core logs. */
+  | 'STRATIGRAPHY_WRITE';
+
 /** A study: all data belongs to exactly one project. */
 export type Project = {
   __typename?: 'Project';
@@ -1008,6 +1031,8 @@ export type Project = {
   id: Scalars['ID']['output'];
   invitations: Array<Invitation>;
   members: Array<Membership>;
+  /** What the caller's role allows in this project, from the server's role table. */
+  myPermissions: Array<Permission>;
   /** The caller's role in this project. */
   myRole: Role;
   name: Scalars['String']['output'];
@@ -1937,7 +1962,7 @@ export type AgeModelSiteQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
 
 export type StartAgeModelRunMutationVariables = Exact<{
   input: StartAgeModelRunInput;
@@ -1960,7 +1985,7 @@ export type SiteAttachmentsQueryVariables = Exact<{
 }>;
 
 
-export type SiteAttachmentsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, project: { __typename?: 'Project', id: string, myRole: Role }, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }> }> } };
+export type SiteAttachmentsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, project: { __typename?: 'Project', id: string, myRole: Role, myPermissions: Array<Permission> }, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, attachments: Array<{ __typename?: 'Attachment', id: string, fileName: string, contentType: string, sizeBytes: number, createdAt: string, url: string, thumbnailUrl?: string | null }> }> } };
 
 export type DeleteAttachmentMutationVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2043,7 +2068,7 @@ export type EventLadderQueryVariables = Exact<{
 }>;
 
 
-export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid?: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } | null }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
+export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid?: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } | null }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission>, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
 
 export type HypothesisQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2090,14 +2115,14 @@ export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
 
-export type ProjectsQuery = { __typename?: 'Query', projects: Array<{ __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role }> };
+export type ProjectsQuery = { __typename?: 'Query', projects: Array<{ __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, myPermissions: Array<Permission> }> };
 
 export type ProjectOverviewQueryVariables = Exact<{
   id: Scalars['ID']['input'];
 }>;
 
 
-export type ProjectOverviewQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, segments: Array<{ __typename?: 'Segment', id: string, version: number, name: string, startKm: number, endKm: number, notes?: string | null }>, sites: Array<{ __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, segment?: { __typename?: 'Segment', id: string, name: string } | null, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string }>, samples: Array<{ __typename?: 'Sample', id: string }> }> } };
+export type ProjectOverviewQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, myPermissions: Array<Permission>, segments: Array<{ __typename?: 'Segment', id: string, version: number, name: string, startKm: number, endKm: number, notes?: string | null }>, sites: Array<{ __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, segment?: { __typename?: 'Segment', id: string, name: string } | null, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string }>, samples: Array<{ __typename?: 'Sample', id: string }> }> } };
 
 export type CreateSegmentMutationVariables = Exact<{
   input: CreateSegmentInput;
@@ -2150,7 +2175,7 @@ export type RecurrenceSetupQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceSetupQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, segments: Array<{ __typename?: 'Segment', id: string, name: string }>, sites: Array<{ __typename?: 'Site', id: string, name: string, kind: SiteKind }>, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean }>, preferredHypothesis?: { __typename?: 'Hypothesis', id: string } | null, recurrenceAnalyses: Array<{ __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, createdAt: string, forecastStartYear: number, draws: number, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null }> } };
+export type RecurrenceSetupQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission>, segments: Array<{ __typename?: 'Segment', id: string, name: string }>, sites: Array<{ __typename?: 'Site', id: string, name: string, kind: SiteKind }>, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean }>, preferredHypothesis?: { __typename?: 'Hypothesis', id: string } | null, recurrenceAnalyses: Array<{ __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, createdAt: string, forecastStartYear: number, draws: number, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null }> } };
 
 export type RecurrenceAnalysisQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2192,7 +2217,7 @@ export type ProjectReleasesQueryVariables = Exact<{
 }>;
 
 
-export type ProjectReleasesQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, myRole: Role, releases: Array<{ __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string, email: string } }> } };
+export type ProjectReleasesQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, myRole: Role, myPermissions: Array<Permission>, releases: Array<{ __typename?: 'Release', id: string, number: number, note: string, createdAt: string, createdBy: { __typename?: 'User', id: string, displayName: string, email: string } }> } };
 
 export type ReleaseQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2244,7 +2269,7 @@ export type SiteQueryVariables = Exact<{
 }>;
 
 
-export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
 
 export type CreateUnitMutationVariables = Exact<{
   input: CreateUnitInput;
@@ -2318,7 +2343,7 @@ export type ProjectTeamQueryVariables = Exact<{
 }>;
 
 
-export type ProjectTeamQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, members: Array<{ __typename?: 'Membership', id: string, role: Role, user: { __typename?: 'User', id: string, email: string, displayName: string } }>, invitations: Array<{ __typename?: 'Invitation', id: string, email: string, role: Role, expiresAt: string, acceptedAt?: string | null }> } };
+export type ProjectTeamQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission>, members: Array<{ __typename?: 'Membership', id: string, role: Role, user: { __typename?: 'User', id: string, email: string, displayName: string } }>, invitations: Array<{ __typename?: 'Invitation', id: string, email: string, role: Role, expiresAt: string, acceptedAt?: string | null }> } };
 
 export type InviteMemberMutationVariables = Exact<{
   input: InviteMemberInput;
@@ -2440,6 +2465,7 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
       id
       name
       myRole
+      myPermissions
     }
     units {
       id
@@ -2511,6 +2537,7 @@ export const SiteAttachmentsDocument = new TypedDocumentString(`
     project {
       id
       myRole
+      myPermissions
     }
     attachments {
       id
@@ -2772,6 +2799,7 @@ export const EventLadderDocument = new TypedDocumentString(`
     id
     name
     myRole
+    myPermissions
     tectonicSetting
     hypotheses {
       id
@@ -2920,6 +2948,7 @@ export const ProjectsDocument = new TypedDocumentString(`
     description
     tectonicSetting
     myRole
+    myPermissions
   }
 }
     `) as unknown as TypedDocumentString<ProjectsQuery, ProjectsQueryVariables>;
@@ -2931,6 +2960,7 @@ export const ProjectOverviewDocument = new TypedDocumentString(`
     description
     tectonicSetting
     myRole
+    myPermissions
     segments {
       id
       version
@@ -3010,6 +3040,7 @@ export const RecurrenceSetupDocument = new TypedDocumentString(`
     id
     name
     myRole
+    myPermissions
     segments {
       id
       name
@@ -3248,6 +3279,7 @@ export const ProjectReleasesDocument = new TypedDocumentString(`
   project(id: $id) {
     id
     myRole
+    myPermissions
     releases {
       id
       number
@@ -3368,6 +3400,7 @@ export const SiteDocument = new TypedDocumentString(`
       id
       name
       myRole
+      myPermissions
     }
     segment {
       id
@@ -3511,6 +3544,7 @@ export const ProjectTeamDocument = new TypedDocumentString(`
     id
     name
     myRole
+    myPermissions
     members {
       id
       role

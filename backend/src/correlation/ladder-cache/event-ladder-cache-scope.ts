@@ -39,7 +39,7 @@ const COVERED: Readonly<Record<string, ReadonlySet<string>>> = Object.fromEntrie
     HpdRange: ['olderCalBp', 'youngerCalBp', 'probability'],
     DensityGrid: ['startCalBp', 'stepYears', 'values'],
     DensityPoint: ['calBp', 'probability'],
-    Project: ['id', 'name', 'description', 'tectonicSetting', 'myRole', 'hypotheses'],
+    Project: ['id', 'name', 'description', 'tectonicSetting', 'myRole', 'myPermissions', 'hypotheses'],
     Hypothesis: ['id', 'name', 'description', 'preferred', 'version', 'createdAt'],
   }).map(([type, fields]) => [type, new Set(fields)]),
 );

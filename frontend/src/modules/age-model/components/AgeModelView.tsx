@@ -11,7 +11,7 @@ import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUT
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
-import { roleAllows } from '@/modules/auth/utils/permissions';
+import { allows } from '@/modules/auth/utils/permissions';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
@@ -73,7 +73,7 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
     return <NonIdealState icon={IconNames.ERROR} title="The site could not be loaded" description={siteQuery.error.message} />;
   }
   const loadedSite = siteQuery.data;
-  const mayRun = roleAllows(loadedSite.project.myRole, 'age-model.run');
+  const mayRun = allows(loadedSite.project, 'AGE_MODEL_RUN');
   const busy = run ? isRunActive(run.status) : false;
 
   const handleStart = (settings: RunSettingsInput) => {

@@ -65,6 +65,7 @@ export const AgeModelSiteDocument = graphql(`
         id
         name
         myRole
+        myPermissions
       }
       units {
         id

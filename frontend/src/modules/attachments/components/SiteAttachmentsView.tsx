@@ -5,7 +5,7 @@ import { useMemo, useState } from 'react';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { attachmentQueries, useAttachmentMutations } from '@/modules/attachments/hooks/attachmentQueries';
 import { attachmentView } from '@/modules/attachments/utils/attachmentFiles';
-import { roleAllows } from '@/modules/auth/utils/permissions';
+import { allows } from '@/modules/auth/utils/permissions';
 import { fetchObjectUrl } from '@/modules/exchange/utils/authorizedHttp';
 import { DeleteAlert } from '@/modules/ui/components/DeleteAlert';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
@@ -42,7 +42,7 @@ export function SiteAttachmentsView({ projectId, siteId }: SiteAttachmentsViewPr
 
   if (site.isPending) return <LoadingState />;
   if (site.error) return <Callout intent={Intent.DANGER}>{formErrorOf(site.error, [])}</Callout>;
-  const canEdit = roleAllows(site.data.project.myRole, 'stratigraphy.write');
+  const canEdit = allows(site.data.project, 'STRATIGRAPHY_WRITE');
   const samplesWithFiles = site.data.samples.filter((sample) => sample.attachments.length > 0).sort((a, b) => a.labCode.localeCompare(b.labCode));
 
   const handleOpen = (attachment: AttachmentRow) => {

@@ -7,6 +7,7 @@ export const SiteAttachmentsDocument = graphql(`
       project {
         id
         myRole
+        myPermissions
       }
       attachments {
         id

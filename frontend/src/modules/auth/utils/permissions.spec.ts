@@ -1,22 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { roleAllows } from './permissions';
+import { allows } from './permissions';
 
-// The expected table is the brief's rule (ADMIN and RESEARCHER write stratigraphy and samples)
-// and the server's ROLE_PERMISSIONS in backend/src/access/permissions.ts.
-
-describe(roleAllows.name, () => {
-  it('lets admins and researchers write stratigraphy and no one else', () => {
-    expect(roleAllows('ADMIN', 'stratigraphy.write')).toBe(true);
-    expect(roleAllows('RESEARCHER', 'stratigraphy.write')).toBe(true);
-    expect(roleAllows('CORRELATOR', 'stratigraphy.write')).toBe(false);
-    expect(roleAllows('ANALYST', 'stratigraphy.write')).toBe(false);
-    expect(roleAllows('VIEWER', 'stratigraphy.write')).toBe(false);
+describe(allows.name, () => {
+  it('allows what the server listed for the caller and nothing else', () => {
+    const project = { myPermissions: ['PROJECT_READ', 'STRATIGRAPHY_WRITE'] as const };
+    expect(allows(project, 'STRATIGRAPHY_WRITE')).toBe(true);
+    expect(allows(project, 'CORRELATION_WRITE')).toBe(false);
+    expect(allows(project, 'MEMBERS_MANAGE')).toBe(false);
   });
 
-  it('gives each specialist role its own work only', () => {
-    expect(roleAllows('CORRELATOR', 'correlation.write')).toBe(true);
-    expect(roleAllows('ANALYST', 'recurrence.run')).toBe(true);
-    expect(roleAllows('RESEARCHER', 'members.manage')).toBe(false);
-    expect(roleAllows('ADMIN', 'members.manage')).toBe(true);
+  it('allows nothing before the project is loaded', () => {
+    expect(allows(undefined, 'PROJECT_READ')).toBe(false);
+    expect(allows(null, 'PROJECT_READ')).toBe(false);
   });
 });

@@ -1,36 +1,17 @@
-import type { Role } from '@/gql/graphql';
+import type { Permission, Role } from '@/gql/graphql';
+
+/** A project as the screens read it: what the signed-in member may do there, from the server. */
+export interface WithPermissions {
+  myPermissions: readonly Permission[];
+}
 
 /**
- * What a member may change, by role: the same table as the server's
- * (backend/src/access/permissions.ts). The screen uses it only to hide or disable controls;
- * the server checks every request itself.
+ * Whether the signed-in member may do something in a project, read from `Project.myPermissions`
+ * (the server's role table applied to the caller). The screen uses it only to hide or disable
+ * controls; the server checks every request itself. False while the project is not loaded.
  */
-export type ProjectPermission =
-  | 'stratigraphy.write'
-  | 'age-model.run'
-  | 'correlation.write'
-  | 'recurrence.run'
-  | 'members.manage'
-  | 'release.create';
-
-const ROLE_PERMISSIONS: Record<Role, ReadonlySet<ProjectPermission>> = {
-  ADMIN: new Set<ProjectPermission>([
-    'stratigraphy.write',
-    'age-model.run',
-    'correlation.write',
-    'recurrence.run',
-    'members.manage',
-    'release.create',
-  ]),
-  RESEARCHER: new Set<ProjectPermission>(['stratigraphy.write', 'age-model.run']),
-  CORRELATOR: new Set<ProjectPermission>(['correlation.write']),
-  ANALYST: new Set<ProjectPermission>(['recurrence.run']),
-  VIEWER: new Set<ProjectPermission>(),
-};
-
-/** Whether a role may do something in a project. */
-export function roleAllows(role: Role, permission: ProjectPermission): boolean {
-  return ROLE_PERMISSIONS[role].has(permission);
+export function allows(project: WithPermissions | null | undefined, permission: Permission): boolean {
+  return project?.myPermissions.includes(permission) ?? false;
 }
 
 /** Role names as people read them. */

@@ -5,7 +5,7 @@ import { useMemo, useRef, useState, type ChangeEvent } from 'react';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { ageScaleLabel } from '@/modules/ages/utils/formatAge';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
-import { roleAllows } from '@/modules/auth/utils/permissions';
+import { allows } from '@/modules/auth/utils/permissions';
 import { EventLadderChart, type LadderColumn } from '@/modules/correlation/components/EventLadderChart';
 import { FigureExportButtons } from '@/modules/correlation/components/FigureExportButtons';
 import { HypothesisDialog, type HypothesisValues } from '@/modules/correlation/components/HypothesisDialog';
@@ -74,7 +74,7 @@ export function LadderView({ projectId }: LadderViewProps) {
   if (ladderQuery.isError) return <NonIdealState icon={IconNames.ERROR} title="The ladder could not be loaded" description={ladderQuery.error.message} />;
 
   const { project } = ladderQuery.data;
-  const canEdit = roleAllows(project.myRole, 'correlation.write');
+  const canEdit = allows(project, 'CORRELATION_WRITE');
   const hypothesis = hypothesisQuery.data ?? null;
   const second = secondQuery.data ?? null;
   const [first, next] = selection.map((id) => anchors.get(id));

@@ -43,6 +43,7 @@ export const EventLadderDocument = graphql(`
       id
       name
       myRole
+      myPermissions
       tectonicSetting
       hypotheses {
         id

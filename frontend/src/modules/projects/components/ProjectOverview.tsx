@@ -1,7 +1,7 @@
 import { Button, Classes, H2, Intent, Section, SectionCard, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useState } from 'react';
-import { ROLE_LABELS, roleAllows } from '@/modules/auth/utils/permissions';
+import { allows, ROLE_LABELS } from '@/modules/auth/utils/permissions';
 import { SiteMap } from '@/modules/map/components/SiteMap';
 import { useSegmentMutations, useSiteMutations } from '@/modules/projects/hooks/projectMutations';
 import type { ProjectOverview as ProjectOverviewData, SegmentRow, SiteRow } from '@/modules/projects/utils/projectTypes';
@@ -17,7 +17,7 @@ export type ProjectOverviewProps = {
 
 /** A project at a glance: its segments, the map of its sites and the sites table, with their forms. */
 export function ProjectOverview({ project }: ProjectOverviewProps) {
-  const canEdit = roleAllows(project.myRole, 'stratigraphy.write');
+  const canEdit = allows(project, 'STRATIGRAPHY_WRITE');
   const [editingSegment, setEditingSegment] = useState<SegmentRow | 'new' | null>(null);
   const [deletingSegment, setDeletingSegment] = useState<SegmentRow | null>(null);
   const [editingSite, setEditingSite] = useState<SiteRow | 'new' | null>(null);

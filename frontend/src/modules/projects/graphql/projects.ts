@@ -8,6 +8,7 @@ export const ProjectsDocument = graphql(`
       description
       tectonicSetting
       myRole
+      myPermissions
     }
   }
 `);
@@ -20,6 +21,7 @@ export const ProjectOverviewDocument = graphql(`
       description
       tectonicSetting
       myRole
+      myPermissions
       segments {
         id
         version

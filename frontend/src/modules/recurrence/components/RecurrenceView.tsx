@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState, type ChangeEvent } from 'react';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { formErrorOf } from '@/modules/api/utils/apiError';
-import { roleAllows } from '@/modules/auth/utils/permissions';
+import { allows } from '@/modules/auth/utils/permissions';
 import { analysisLabel, RecurrenceResults } from '@/modules/recurrence/components/RecurrenceResults';
 import { RecurrenceSetupForm } from '@/modules/recurrence/components/RecurrenceSetupForm';
 import { RefreshPanel } from '@/modules/recurrence/components/RefreshPanel';
@@ -63,7 +63,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
   if (setupQuery.isPending) return <LoadingState />;
   if (setupQuery.isError) return <NonIdealState icon={IconNames.ERROR} title="The project could not be loaded" description={setupQuery.error.message} />;
   const project = setupQuery.data;
-  const canRun = roleAllows(project.myRole, 'recurrence.run');
+  const canRun = allows(project, 'RECURRENCE_RUN');
   const analyses = [...project.recurrenceAnalyses].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
   const analysisId = chosenId ?? analyses[0]?.id ?? null;
   const secondId = comparing ? (compareId ?? analyses.find((entry) => entry.id !== analysisId)?.id ?? null) : null;
@@ -81,7 +81,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
       <header className="sc-page-header">
         <H2 className="sc-page-title">Recurrence · {project.name}</H2>
       </header>
-      {project.myRole !== 'VIEWER' && <RefreshPanel projectId={projectId} />}
+      {allows(project, 'RESULTS_REFRESH') && <RefreshPanel projectId={projectId} />}
       {canRun && (
         <section className="sc-panel">
           <h3>New analysis</h3>

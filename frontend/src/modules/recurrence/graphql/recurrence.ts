@@ -7,6 +7,7 @@ export const RecurrenceSetupDocument = graphql(`
       id
       name
       myRole
+      myPermissions
       segments {
         id
         name

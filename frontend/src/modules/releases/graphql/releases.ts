@@ -5,6 +5,7 @@ export const ProjectReleasesDocument = graphql(`
     project(id: $id) {
       id
       myRole
+      myPermissions
       releases {
         id
         number

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import type { SiteTab } from '@/app/paths';
 import { SiteAttachmentsView } from '@/modules/attachments/components/SiteAttachmentsView';
 import { CoreLogsView } from '@/modules/core-logs/components/CoreLogsView';
-import { roleAllows } from '@/modules/auth/utils/permissions';
+import { allows } from '@/modules/auth/utils/permissions';
 import { SiteCalibrationView } from '@/modules/calibration/components/SiteCalibrationView';
 import { SiteDialog } from '@/modules/projects/components/SiteDialog';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
@@ -22,7 +22,7 @@ export type SiteWorkspaceProps = {
 
 /** A site's page body: its facts, then the column, samples and calibration tabs. */
 export function SiteWorkspace({ site, tab, onTabChange }: SiteWorkspaceProps) {
-  const canEdit = roleAllows(site.project.myRole, 'stratigraphy.write');
+  const canEdit = allows(site.project, 'STRATIGRAPHY_WRITE');
   const [editingSite, setEditingSite] = useState(false);
   const { data: project } = useQuery({ ...projectQueries.overview(site.project.id), enabled: editingSite });
   const handleTabChange = (next: TabId) => onTabChange(next as SiteTab);

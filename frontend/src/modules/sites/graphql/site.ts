@@ -17,6 +17,7 @@ export const SiteDocument = graphql(`
         id
         name
         myRole
+        myPermissions
       }
       segment {
         id

@@ -2,7 +2,7 @@ import { Callout, H2, Section, SectionCard, Tab, Tabs, Tag, type TabId } from '@
 import { IconNames } from '@blueprintjs/icons';
 import type { ProjectTeamQuery } from '@/gql/graphql';
 import { AuditTrailPanel } from '@/modules/audit/components/AuditTrailPanel';
-import { ROLE_LABELS, roleAllows } from '@/modules/auth/utils/permissions';
+import { allows, ROLE_LABELS } from '@/modules/auth/utils/permissions';
 import { ExchangePanel } from '@/modules/exchange/components/ExchangePanel';
 import { ReleasesPanel } from '@/modules/releases/components/ReleasesPanel';
 import { InvitationsPanel } from './InvitationsPanel';
@@ -23,8 +23,8 @@ export type ProjectAdminViewProps = {
  * exchange files. Admins change them; everyone else reads what their role may read.
  */
 export function ProjectAdminView({ project, tab, onTabChange }: ProjectAdminViewProps) {
-  const canManage = roleAllows(project.myRole, 'members.manage');
-  const canRelease = roleAllows(project.myRole, 'release.create');
+  const canManage = allows(project, 'MEMBERS_MANAGE');
+  const canRelease = allows(project, 'RELEASE_CREATE');
   const people = project.members.map((member) => member.user);
   const handleTabChange = (next: TabId) => onTabChange(next as AdminTab);
 

@@ -31,6 +31,7 @@ export const ProjectTeamDocument = graphql(`
       id
       name
       myRole
+      myPermissions
       members {
         id
         role
