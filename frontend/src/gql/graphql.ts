@@ -1955,14 +1955,14 @@ export type AgeModelRunQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
 
 export type AgeModelSiteQueryVariables = Exact<{
   id: Scalars['ID']['input'];
 }>;
 
 
-export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
 
 export type StartAgeModelRunMutationVariables = Exact<{
   input: StartAgeModelRunInput;
@@ -2047,7 +2047,7 @@ export type SiteCoreLogsQueryVariables = Exact<{
 }>;
 
 
-export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, topDepthM: number, baseDepthM: number, facies: Facies }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+export type SiteCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, depthM?: number | null, excluded: boolean, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number }> } | null }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, topDepthM: number, baseDepthM: number, rowCount: number, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
 
 export type UploadCoreLogMutationVariables = Exact<{
   input: UploadCoreLogInput;
@@ -2437,6 +2437,14 @@ export const AgeModelRunDocument = new TypedDocumentString(`
         probability
       }
     }
+    depthModel
+    ageDepth {
+      depthM
+      eventFreeDepthM
+      medianCalBp
+      low95CalBp
+      high95CalBp
+    }
     samples {
       outlierProbability
       medianCalBp
@@ -2471,6 +2479,10 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
       id
       position
       name
+      topDepthM
+      baseDepthM
+      facies
+      basalErosionM
     }
     eventHorizons {
       id
@@ -2500,6 +2512,9 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
       calibrationError
       calibration {
         medianCalBp
+        hpd95 {
+          ...HpdRangeFields
+        }
         density {
           calBp
           probability
@@ -2513,7 +2528,11 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
     }
   }
 }
-    `) as unknown as TypedDocumentString<AgeModelSiteQuery, AgeModelSiteQueryVariables>;
+    fragment HpdRangeFields on HpdRange {
+  olderCalBp
+  youngerCalBp
+  probability
+}`) as unknown as TypedDocumentString<AgeModelSiteQuery, AgeModelSiteQueryVariables>;
 export const StartAgeModelRunDocument = new TypedDocumentString(`
     mutation StartAgeModelRun($input: StartAgeModelRunInput!) {
   startAgeModelRun(input: $input) {
@@ -2720,11 +2739,35 @@ export const SiteCoreLogsDocument = new TypedDocumentString(`
     query SiteCoreLogs($id: ID!) {
   site(id: $id) {
     id
+    name
     units {
       id
+      position
+      name
       topDepthM
       baseDepthM
       facies
+      basalErosionM
+    }
+    eventHorizons {
+      id
+      name
+      unitAbove {
+        id
+      }
+    }
+    samples {
+      id
+      labCode
+      depthM
+      excluded
+      calibration {
+        medianCalBp
+        hpd95 {
+          olderCalBp
+          youngerCalBp
+        }
+      }
     }
     coreLogs {
       id

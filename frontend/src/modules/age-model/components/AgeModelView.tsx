@@ -7,11 +7,12 @@ import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
 import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
-import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, RUN_SETTINGS_FIELDS, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
-import { formErrorOf } from '@/modules/api/utils/apiError';
+import { fieldErrorsOf, formErrorOf } from '@/modules/api/utils/apiError';
 import { allows } from '@/modules/auth/utils/permissions';
+import { CoreSection } from '@/modules/core-drawing/components/CoreSection';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
@@ -99,7 +100,14 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
       {mayRun && (
         <section className="sc-panel">
           <h3>New run</h3>
-          <RunSettingsForm onStart={handleStart} starting={start.isPending} busy={busy} error={formErrorOf(start.error, [])} />
+          <RunSettingsForm
+            onStart={handleStart}
+            starting={start.isPending}
+            busy={busy}
+            site={loadedSite}
+            error={formErrorOf(start.error, RUN_SETTINGS_FIELDS)}
+            serverErrors={fieldErrorsOf(start.error)}
+          />
         </section>
       )}
 
@@ -124,6 +132,8 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
           onCancel={handleCancel}
         />
       )}
+
+      {run?.status === 'SUCCEEDED' && run.depthModel === 'HEMIPELAGIC_RATE' && <CoreSection projectId={projectId} siteId={siteId} ageDepth={run.ageDepth} />}
     </div>
   );
 }

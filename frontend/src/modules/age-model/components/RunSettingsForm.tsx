@@ -1,9 +1,12 @@
-import { Button, Callout, Intent } from '@blueprintjs/core';
+import { Button, Callout, FormGroup, Intent, Radio, RadioGroup } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useState, type FormEvent } from 'react';
 import {
-  DEFAULT_RUN_SETTINGS,
+  initialRunSettings,
   readRunSettings,
+  withDepthModel,
+  type DepthModelChoice,
+  type DepthModelSite,
   type RunSettingsField,
   type RunSettingsForm as RunSettingsValues,
   type RunSettingsInput,
@@ -17,13 +20,35 @@ export type RunSettingsFormProps = {
   /** A run of this site is queued or running: a second one waits until it ends. */
   busy: boolean;
   error: string | null;
+  /** The site the run is for: its kind and units choose the starting depth model. */
+  site: DepthModelSite;
+  /** The server's problems with the form's own fields (BAD_USER_INPUT), shown on each field. */
+  serverErrors?: Partial<Record<string, string>>;
+};
+
+/** The depth models in our own words, one line each. */
+const DEPTH_MODEL_TEXT: Record<DepthModelChoice, { label: string; line: string }> = {
+  ORDER_ONLY: {
+    label: 'Order only',
+    line: 'Ages only keep the order of the units; depth adds nothing. For trenches, marshes and outcrops.',
+  },
+  HEMIPELAGIC_RATE: {
+    label: 'Hemipelagic rate',
+    line: 'Ages follow the mud between event beds, settling at a slowly varying rate; each bed counts as instant. For turbidite cores.',
+  },
 };
 
 /** Settings of a new age model run and the button that starts it. */
-export function RunSettingsForm({ onStart, starting, busy, error }: RunSettingsFormProps) {
-  const [values, setValues] = useState<RunSettingsValues>(DEFAULT_RUN_SETTINGS);
+export function RunSettingsForm({ onStart, starting, busy, error, site, serverErrors = {} }: RunSettingsFormProps) {
+  const [values, setValues] = useState<RunSettingsValues>(() => initialRunSettings(site));
   const [errors, setErrors] = useState<FieldErrors<RunSettingsField>>({});
-  const change = (field: RunSettingsField) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
+  const change = (field: Exclude<RunSettingsField, 'depthModel'>) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
+  const errorOf = (field: RunSettingsField) => errors[field] ?? serverErrors[field];
+  const handleDepthModel = (event: FormEvent<HTMLInputElement>) => {
+    const next = event.currentTarget.value as DepthModelChoice;
+    setValues((previous) => withDepthModel(previous, next));
+  };
+  const hemipelagic = values.depthModel === 'HEMIPELAGIC_RATE';
   const handleSubmit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     const result = readRunSettings(values);
@@ -41,17 +66,50 @@ export function RunSettingsForm({ onStart, starting, busy, error }: RunSettingsF
           {error}
         </Callout>
       )}
+      <FormGroup
+        label="Depth model"
+        helperText={errorOf('depthModel') ?? DEPTH_MODEL_TEXT[values.depthModel].line}
+        intent={errorOf('depthModel') ? Intent.DANGER : Intent.NONE}
+        className="sc-depth-model-field"
+      >
+        <RadioGroup name="depthModel" inline selectedValue={values.depthModel} onChange={handleDepthModel}>
+          {(['HEMIPELAGIC_RATE', 'ORDER_ONLY'] as const).map((model) => (
+            <Radio key={model} value={model} label={DEPTH_MODEL_TEXT[model].label} />
+          ))}
+        </RadioGroup>
+      </FormGroup>
       <div className="sc-run-settings-fields">
-        <NumberField name="seed" label="Seed" labelInfo="(blank: random)" value={values.seed} onValueChange={change('seed')} error={errors.seed} />
-        <NumberField name="iterations" label="Iterations per chain" value={values.iterations} onValueChange={change('iterations')} error={errors.iterations} />
-        <NumberField name="chains" label="Chains" value={values.chains} onValueChange={change('chains')} error={errors.chains} />
+        {hemipelagic && (
+          <NumberField
+            name="hemipelagicRateCmPerKyr"
+            label="Mud rate, prior mean"
+            labelInfo="(blank: from the dated levels)"
+            helperText="Your own estimate of how fast the mud settles, if the dated levels should not set it"
+            unit="cm/kyr"
+            value={values.hemipelagicRateCmPerKyr}
+            onValueChange={change('hemipelagicRateCmPerKyr')}
+            error={errorOf('hemipelagicRateCmPerKyr')}
+          />
+        )}
+        <NumberField name="seed" label="Seed" labelInfo="(blank: random)" value={values.seed} onValueChange={change('seed')} error={errorOf('seed')} />
+        <NumberField name="iterations" label="Iterations per chain" value={values.iterations} onValueChange={change('iterations')} error={errorOf('iterations')} />
+        <NumberField name="chains" label="Chains" value={values.chains} onValueChange={change('chains')} error={errorOf('chains')} />
         <NumberField
           name="outlierPrior"
           label="Chance a sample is misplaced"
           helperText="Before the run, for every sample alike: reworked, intruded or mislabelled. 0.05 (1 in 20) is the usual starting point"
           value={values.outlierPrior}
           onValueChange={change('outlierPrior')}
-          error={errors.outlierPrior}
+          error={errorOf('outlierPrior')}
+        />
+        <NumberField
+          name="outlierShiftScaleYears"
+          label="Misplaced sample's shift"
+          helperText="Typical size of the age gap between a misplaced sample and its level. 500 yr: reworked or burrowed material is usually off by centuries; raise it for long or old sequences"
+          unit="yr"
+          value={values.outlierShiftScaleYears}
+          onValueChange={change('outlierShiftScaleYears')}
+          error={errorOf('outlierShiftScaleYears')}
         />
         <NumberField
           name="inheritanceScaleYears"
@@ -60,7 +118,7 @@ export function RunSettingsForm({ onStart, starting, busy, error }: RunSettingsF
           unit="yr"
           value={values.inheritanceScaleYears}
           onValueChange={change('inheritanceScaleYears')}
-          error={errors.inheritanceScaleYears}
+          error={errorOf('inheritanceScaleYears')}
         />
       </div>
       <Button type="submit" intent={Intent.PRIMARY} icon={IconNames.PLAY} text="Start run" loading={starting} disabled={busy} />

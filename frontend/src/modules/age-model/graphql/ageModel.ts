@@ -39,6 +39,14 @@ export const AgeModelRunDocument = graphql(`
           probability
         }
       }
+      depthModel
+      ageDepth {
+        depthM
+        eventFreeDepthM
+        medianCalBp
+        low95CalBp
+        high95CalBp
+      }
       samples {
         outlierProbability
         medianCalBp
@@ -71,6 +79,10 @@ export const AgeModelSiteDocument = graphql(`
         id
         position
         name
+        topDepthM
+        baseDepthM
+        facies
+        basalErosionM
       }
       eventHorizons {
         id
@@ -100,6 +112,9 @@ export const AgeModelSiteDocument = graphql(`
         calibrationError
         calibration {
           medianCalBp
+          hpd95 {
+            ...HpdRangeFields
+          }
           density {
             calBp
             probability

@@ -1,5 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { bracketingSamples, DEFAULT_RUN_SETTINGS, eventChartWindow, isFlaggedOutlier, progressPercent, readRunSettings } from './ageModelView';
+import {
+  bracketingSamples,
+  DEFAULT_RUN_SETTINGS,
+  defaultDepthModel,
+  eventChartWindow,
+  initialRunSettings,
+  isFlaggedOutlier,
+  progressPercent,
+  readRunSettings,
+  withDepthModel,
+} from './ageModelView';
 
 const sample = (id: string, position: number, options: { excluded?: boolean; calibrated?: boolean } = {}) => ({
   id,
@@ -24,14 +34,56 @@ describe(readRunSettings.name, () => {
   it('reads the defaults, blank seed meaning the server chooses', () => {
     expect(readRunSettings(DEFAULT_RUN_SETTINGS)).toEqual({
       ok: true,
-      input: { seed: null, iterations: 20000, chains: 4, outlierPrior: 0.05, inheritanceScaleYears: 100 },
+      input: { depthModel: 'ORDER_ONLY', seed: null, iterations: 20000, chains: 4, outlierPrior: 0.05, outlierShiftScaleYears: 500, inheritanceScaleYears: 100 },
     });
   });
 
-  it('reports every bad field at once', () => {
-    const result = readRunSettings({ seed: '1.5', iterations: '10', chains: '1', outlierPrior: '0', inheritanceScaleYears: '-3' });
+  it('reports every bad field at once, on the server bounds', () => {
+    const result = readRunSettings({
+      ...DEFAULT_RUN_SETTINGS,
+      seed: '1.5',
+      iterations: '400',
+      chains: '3',
+      outlierPrior: '0.6',
+      outlierShiftScaleYears: '5',
+      inheritanceScaleYears: '-3',
+    });
     expect(result.ok).toBe(false);
-    if (!result.ok) expect(Object.keys(result.errors).sort()).toEqual(['chains', 'inheritanceScaleYears', 'iterations', 'outlierPrior', 'seed']);
+    if (!result.ok) {
+      expect(Object.keys(result.errors).sort()).toEqual(['chains', 'inheritanceScaleYears', 'iterations', 'outlierPrior', 'outlierShiftScaleYears', 'seed']);
+    }
+  });
+
+  it('sends the rate prior for the hemipelagic model only, blank meaning measured', () => {
+    const hemipelagic = { ...DEFAULT_RUN_SETTINGS, depthModel: 'HEMIPELAGIC_RATE' as const };
+    expect(readRunSettings(hemipelagic)).toMatchObject({ ok: true, input: { depthModel: 'HEMIPELAGIC_RATE', hemipelagicRateCmPerKyr: null } });
+    expect(readRunSettings({ ...hemipelagic, hemipelagicRateCmPerKyr: '12,5' })).toMatchObject({ ok: true, input: { hemipelagicRateCmPerKyr: 12.5 } });
+    expect(readRunSettings({ ...hemipelagic, hemipelagicRateCmPerKyr: '0.05' })).toEqual({ ok: false, errors: { hemipelagicRateCmPerKyr: 'must be at least 0.1' } });
+    const orderOnly = readRunSettings({ ...DEFAULT_RUN_SETTINGS, hemipelagicRateCmPerKyr: '0.05' });
+    expect(orderOnly.ok && 'hemipelagicRateCmPerKyr' in orderOnly.input).toBe(false);
+  });
+});
+
+describe(defaultDepthModel.name, () => {
+  const mud = { facies: 'HEMIPELAGIC_MUD', topDepthM: 0, baseDepthM: 0.4 };
+  const bed = { facies: 'TURBIDITE', topDepthM: 0.4, baseDepthM: 0.5 };
+
+  it('picks the hemipelagic model for a core with mud units that have depths', () => {
+    expect(defaultDepthModel({ kind: 'CORE', units: [mud, bed] })).toBe('HEMIPELAGIC_RATE');
+    expect(initialRunSettings({ kind: 'CORE', units: [mud, bed] })).toMatchObject({ depthModel: 'HEMIPELAGIC_RATE', iterations: '60000' });
+  });
+
+  it('keeps order only for other sites, cores without mud, or mud without a thickness', () => {
+    expect(defaultDepthModel({ kind: 'TRENCH', units: [mud] })).toBe('ORDER_ONLY');
+    expect(defaultDepthModel({ kind: 'CORE', units: [bed] })).toBe('ORDER_ONLY');
+    expect(defaultDepthModel({ kind: 'CORE', units: [{ ...mud, baseDepthM: 0 }] })).toBe('ORDER_ONLY');
+  });
+});
+
+describe(withDepthModel.name, () => {
+  it('moves untouched iterations to the new model default and keeps typed ones', () => {
+    expect(withDepthModel(DEFAULT_RUN_SETTINGS, 'HEMIPELAGIC_RATE').iterations).toBe('60000');
+    expect(withDepthModel({ ...DEFAULT_RUN_SETTINGS, iterations: '5000' }, 'HEMIPELAGIC_RATE').iterations).toBe('5000');
   });
 });
 

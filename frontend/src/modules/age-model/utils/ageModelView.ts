@@ -46,55 +46,126 @@ export function bracketingSamples<TSample extends SampleLike>(
   return result.sort((a, b) => (a.side === b.side ? a.sample.labCode.localeCompare(b.sample.labCode) : a.side === 'above' ? -1 : 1));
 }
 
+/** How a run relates ages to depth (the API's `DepthModel`). */
+export type DepthModelChoice = 'ORDER_ONLY' | 'HEMIPELAGIC_RATE';
+
 /** The run settings as typed in the form. */
 export type RunSettingsForm = {
+  depthModel: DepthModelChoice;
   seed: string;
   iterations: string;
   chains: string;
   outlierPrior: string;
+  outlierShiftScaleYears: string;
   inheritanceScaleYears: string;
+  hemipelagicRateCmPerKyr: string;
 };
 
 export type RunSettingsField = keyof RunSettingsForm;
 
+/** Every field of the form, for telling its own server problems from the rest. */
+export const RUN_SETTINGS_FIELDS: readonly RunSettingsField[] = [
+  'depthModel',
+  'seed',
+  'iterations',
+  'chains',
+  'outlierPrior',
+  'outlierShiftScaleYears',
+  'inheritanceScaleYears',
+  'hemipelagicRateCmPerKyr',
+];
+
 /** The settings input of startAgeModelRun (without the site). */
 export type RunSettingsInput = {
+  depthModel: DepthModelChoice;
   seed: number | null;
   iterations: number | null;
   chains: number | null;
   outlierPrior: number | null;
+  outlierShiftScaleYears: number | null;
   inheritanceScaleYears: number | null;
+  /** Sent for HEMIPELAGIC_RATE only; null lets the server measure it from the dated levels. */
+  hemipelagicRateCmPerKyr?: number | null;
+};
+
+/**
+ * Iterations per chain the form starts with for each depth model: the server's defaults (the
+ * hemipelagic model's steps are cheap, and it keeps one draw in twenty, so it runs longer).
+ */
+export const DEFAULT_ITERATIONS: Record<DepthModelChoice, string> = {
+  ORDER_ONLY: '20000',
+  HEMIPELAGIC_RATE: '60000',
 };
 
 /**
  * The form's starting values: the server's documented defaults, and a blank seed (random). The
  * chance a sample is misplaced starts at 0.05: one sample in twenty reworked, intruded or
  * mislabelled, the prior most often used for outlier models of radiocarbon sequences
- * (Bronk Ramsey 2009, Radiocarbon 51(3):1023-1045) [common practice].
+ * (Bronk Ramsey 2009, Radiocarbon 51(3):1023-1045) [common practice]. The outlier shift scale
+ * starts at the server's 500 years.
  */
 export const DEFAULT_RUN_SETTINGS: RunSettingsForm = {
+  depthModel: 'ORDER_ONLY',
   seed: '',
-  iterations: '20000',
+  iterations: DEFAULT_ITERATIONS.ORDER_ONLY,
   chains: '4',
   outlierPrior: '0.05',
+  outlierShiftScaleYears: '500',
   inheritanceScaleYears: '100',
+  hemipelagicRateCmPerKyr: '',
+};
+
+/** What the form needs of a site to choose its depth model. */
+export type DepthModelSite = {
+  kind: string;
+  units: readonly { facies: string; topDepthM: number; baseDepthM: number }[];
 };
 
 /**
- * Check the settings: a whole-number seed (blank lets the server choose), iterations and chains
- * as positive whole numbers (at least two chains, since split R-hat compares chains), the
- * outlier prior strictly between 0 and 1, and a positive inheritance scale. Blank means the
- * server's default.
+ * The depth model a new run starts with: HEMIPELAGIC_RATE for a core with hemipelagic mud
+ * units that have depths (what that model needs first), ORDER_ONLY for everything else.
+ */
+export function defaultDepthModel(site: DepthModelSite): DepthModelChoice {
+  const mud = site.units.some((unit) => unit.facies === 'HEMIPELAGIC_MUD' && Number.isFinite(unit.topDepthM) && unit.baseDepthM > unit.topDepthM);
+  return site.kind === 'CORE' && mud ? 'HEMIPELAGIC_RATE' : 'ORDER_ONLY';
+}
+
+/** The form's starting values for a site. */
+export function initialRunSettings(site: DepthModelSite): RunSettingsForm {
+  const depthModel = defaultDepthModel(site);
+  return { ...DEFAULT_RUN_SETTINGS, depthModel, iterations: DEFAULT_ITERATIONS[depthModel] };
+}
+
+/**
+ * Switch the depth model; the iterations follow the model's default unless the researcher
+ * typed a number of their own.
+ */
+export function withDepthModel(form: RunSettingsForm, depthModel: DepthModelChoice): RunSettingsForm {
+  const untouched = form.iterations.trim() === DEFAULT_ITERATIONS[form.depthModel];
+  return { ...form, depthModel, iterations: untouched ? DEFAULT_ITERATIONS[depthModel] : form.iterations };
+}
+
+/**
+ * Check the settings against the server's bounds: a whole-number seed (blank lets the server
+ * choose), iterations from 500 to 500,000, chains from 4 to 16 (split R-hat compares chains),
+ * the outlier prior from 0.001 to 0.5, the outlier shift scale from 10 to 10,000 years, the
+ * inheritance scale from 1 to 5000 years, and for HEMIPELAGIC_RATE an optional prior mean rate
+ * from 0.1 to 1000 cm/kyr. Blank means the server's default.
  */
 export function readRunSettings(form: RunSettingsForm): FormResult<RunSettingsInput, RunSettingsField> {
   const reader = new FieldReader<RunSettingsField>();
   const input: RunSettingsInput = {
+    depthModel: form.depthModel,
     seed: reader.number('seed', form.seed, { integer: true, min: 0, max: 2_147_483_647 }),
-    iterations: reader.number('iterations', form.iterations, { integer: true, min: 100, max: 1_000_000 }),
-    chains: reader.number('chains', form.chains, { integer: true, min: 2, max: 16 }),
-    outlierPrior: reader.number('outlierPrior', form.outlierPrior, { above: 0, max: 0.99 }),
-    inheritanceScaleYears: reader.number('inheritanceScaleYears', form.inheritanceScaleYears, { above: 0, max: 10_000 }),
+    iterations: reader.number('iterations', form.iterations, { integer: true, min: 500, max: 500_000 }),
+    chains: reader.number('chains', form.chains, { integer: true, min: 4, max: 16 }),
+    outlierPrior: reader.number('outlierPrior', form.outlierPrior, { min: 0.001, max: 0.5 }),
+    outlierShiftScaleYears: reader.number('outlierShiftScaleYears', form.outlierShiftScaleYears, { min: 10, max: 10_000 }),
+    inheritanceScaleYears: reader.number('inheritanceScaleYears', form.inheritanceScaleYears, { min: 1, max: 5000 }),
   };
+  if (form.depthModel === 'HEMIPELAGIC_RATE') {
+    input.hemipelagicRateCmPerKyr = reader.number('hemipelagicRateCmPerKyr', form.hemipelagicRateCmPerKyr, { min: 0.1, max: 1000 });
+  }
   return reader.result(input);
 }
 

@@ -4,11 +4,35 @@ export const SiteCoreLogsDocument = graphql(`
   query SiteCoreLogs($id: ID!) {
     site(id: $id) {
       id
+      name
       units {
         id
+        position
+        name
         topDepthM
         baseDepthM
         facies
+        basalErosionM
+      }
+      eventHorizons {
+        id
+        name
+        unitAbove {
+          id
+        }
+      }
+      samples {
+        id
+        labCode
+        depthM
+        excluded
+        calibration {
+          medianCalBp
+          hpd95 {
+            olderCalBp
+            youngerCalBp
+          }
+        }
       }
       coreLogs {
         id
