@@ -183,6 +183,44 @@ describe('validation', () => {
   });
 });
 
+describe('inserting a unit mid-column', () => {
+  it('renumbers the unit at the position and every younger one in the same transaction, with audit records', async () => {
+    const { createSite } = await clients.RESEARCHER.ok(CREATE_SITE, { i: siteInput('Insert trench') });
+    const ids: string[] = [];
+    // Three units with a gap between 2.0 and 2.5 m, where a fourth will go.
+    for (const [position, top, base] of [[1, 2.5, 3], [2, 1, 2], [3, 0, 1]]) {
+      ids.push((await clients.RESEARCHER.ok(CREATE_UNIT, { i: { siteId: createSite.id, position, name: `L${position}`, topDepthM: top, baseDepthM: base, facies: 'PEAT' } })).createUnit.id);
+    }
+    const middle = { siteId: createSite.id, position: 2, name: 'New', topDepthM: 2, baseDepthM: 2.5, facies: 'SAND_SHEET' };
+    // Without makeRoom a taken position is refused, and nothing moves.
+    expect(await clients.RESEARCHER.errorOf(CREATE_UNIT, { i: middle })).toMatchObject({ code: 'BAD_USER_INPUT', field: 'position' });
+    // With makeRoom but depths that overlap a neighbour: refused, and nothing was renumbered.
+    const overlapping = await clients.RESEARCHER.errorOf(CREATE_UNIT, { i: { ...middle, makeRoom: true, topDepthM: 1.5 } });
+    expect(overlapping).toMatchObject({ code: 'BAD_USER_INPUT', field: 'topDepthM' });
+    const untouched = await sql<{ name: string; position: number }>('select name, position from units where site_id = $1 order by position', [createSite.id]);
+    expect(untouched.map((u) => `${u.name}@${u.position}`)).toEqual(['L1@1', 'L2@2', 'L3@3']);
+
+    const { createUnit } = await clients.RESEARCHER.ok(CREATE_UNIT, { i: { ...middle, makeRoom: true } });
+    expect(createUnit.position).toBe(2);
+    const after = await sql<{ id: string; name: string; position: number; version: number }>(
+      'select id, name, position, version from units where site_id = $1 order by position', [createSite.id],
+    );
+    expect(after.map((u) => `${u.name}@${u.position}`)).toEqual(['L1@1', 'New@2', 'L2@3', 'L3@4']);
+    // The moved units changed, so an edit form holding their old version gets CONFLICT.
+    expect(after.filter((u) => u.name === 'L2' || u.name === 'L3').map((u) => u.version)).toEqual([2, 2]);
+    expect(after.find((u) => u.name === 'L1')!.version).toBe(1);
+    const audit = await sql<{ object_id: string; action: string; before: { position: number } | null; after: { position: number } }>(
+      `select object_id, action, before, after from audit_records where object_type = 'unit' and object_id = any($1::text[]) order by seq`,
+      [[...ids, createUnit.id]],
+    );
+    const renumbered = audit.filter((r) => r.action === 'update');
+    expect(renumbered.map((r) => [r.object_id, r.before?.position, r.after.position])).toEqual(
+      expect.arrayContaining([[ids[1], 2, 3], [ids[2], 3, 4]]),
+    );
+    expect(audit.some((r) => r.action === 'create' && r.object_id === createUnit.id)).toBe(true);
+  });
+});
+
 describe('optimistic locking and audit', () => {
   it('answers CONFLICT for a stale version and keeps the newer write', async () => {
     const { createSite } = await clients.ADMIN.ok(CREATE_SITE, { i: siteInput('Lock test') });

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { sites, units } from '../database/schema';
 
@@ -41,6 +41,24 @@ export class UnitsRepository {
       .where(and(eq(units.id, id), eq(units.version, version)))
       .returning();
     return row;
+  }
+
+  /**
+   * Move every unit of a site at `fromPosition` or above up by one, bumping their versions. Two
+   * statements, because PostgreSQL checks the (site, position) unique constraint row by row: the
+   * first lifts the rows clear of every used position, the second sets them down one higher.
+   */
+  async shiftUp(siteId: string, fromPosition: number, executor: Executor): Promise<UnitRow[]> {
+    const lift = 1_000_000;
+    await executor
+      .update(units)
+      .set({ position: sql`${units.position} + ${lift}` })
+      .where(and(eq(units.siteId, siteId), gte(units.position, fromPosition)));
+    return executor
+      .update(units)
+      .set({ position: sql`${units.position} - ${lift - 1}`, version: sql`${units.version} + 1`, updatedAt: new Date() })
+      .where(and(eq(units.siteId, siteId), gte(units.position, fromPosition + lift)))
+      .returning();
   }
 
   async delete(id: string, executor: Executor): Promise<void> {

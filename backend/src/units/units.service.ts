@@ -41,13 +41,26 @@ export class UnitsService {
     const site = await this.sites.get(user, input.siteId, Permission.StratigraphyWrite);
     return withConstraintErrors(() =>
       this.database.transaction(async (tx) => {
-        const others = await this.units.listForSite(site.id, tx);
-        const violation = checkUnitPlacement(others, input);
+        const { makeRoom, ...values } = input;
+        const existing = await this.units.listForSite(site.id, tx);
+        const others = makeRoom ? shiftedFrom(existing, values.position) : existing;
+        const violation = checkUnitPlacement(others, values);
         if (violation) throw badInput(violation.field, violation.message);
-        const unit = await this.units.insert(input, tx);
-        await this.audit.record(tx, {
-          actor: user, projectId: site.projectId, action: 'create', objectType: 'unit', objectId: unit.id, after: unit,
-        });
+        const moved = makeRoom && existing.some((u) => u.position >= values.position)
+          ? await this.units.shiftUp(site.id, values.position, tx)
+          : [];
+        const unit = await this.units.insert(values, tx);
+        await this.audit.recordMany(tx, [
+          { actor: user, projectId: site.projectId, action: 'create', objectType: 'unit', objectId: unit.id, after: unit },
+          ...moved.map((after) => {
+            const before = existing.find((u) => u.id === after.id);
+            return {
+              actor: user, projectId: site.projectId, action: 'update' as const, objectType: 'unit', objectId: after.id,
+              before: before && { position: before.position, version: before.version },
+              after: { position: after.position, version: after.version, reason: `renumbered to make room for "${unit.name}"` },
+            };
+          }),
+        ]);
         return unit;
       }),
     );
@@ -83,6 +96,11 @@ export class UnitsService {
     );
     return true;
   }
+}
+
+/** The column as it would stand once every unit at `position` or above moved up one. */
+export function shiftedFrom<T extends { position: number }>(units: readonly T[], position: number): T[] {
+  return units.map((u) => (u.position >= position ? { ...u, position: u.position + 1 } : u));
 }
 
 /** Drop keys the client left out, so a partial update does not blank stored values. */

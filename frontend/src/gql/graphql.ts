@@ -334,8 +334,15 @@ export type CreateUnitInput = {
   basalErosionM?: InputMaybe<Scalars['Float']['input']>;
   baseDepthM: Scalars['Float']['input'];
   facies: Facies;
+  /**
+   * Insert mid-column: when true and `position` is taken, the unit there and every younger unit
+   * move up one position, renumbered in the same transaction as the insert (all or nothing). When
+   * false or absent, a taken position is refused. The depths must still fit between the neighbours.
+   */
+  makeRoom?: InputMaybe<Scalars['Boolean']['input']>;
   name: Scalars['String']['input'];
   notes?: InputMaybe<Scalars['String']['input']>;
+  /** 1 is the oldest unit, at the base of the column. */
   position: Scalars['Int']['input'];
   siteId: Scalars['ID']['input'];
   topDepthM: Scalars['Float']['input'];

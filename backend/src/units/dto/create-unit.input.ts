@@ -1,5 +1,5 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
-import { IsIn, IsInt, IsNumber, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
+import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
 
 export const FACIES = [
   'SOIL', 'COLLUVIUM', 'PEAT', 'TIDAL_MUD', 'SAND_SHEET', 'TURBIDITE', 'HEMIPELAGIC_MUD', 'TEPHRA', 'OTHER',
@@ -16,6 +16,11 @@ export class CreateUnitInput {
   @Min(1)
   @Max(10000)
   position: number;
+
+  /** Insert mid-column: the unit at `position` and every younger one move up one position. */
+  @IsOptional()
+  @IsBoolean()
+  makeRoom?: boolean | null;
 
   @IsString()
   @Length(1, 200)
@@ -47,4 +52,4 @@ export class CreateUnitInput {
   notes?: string | null;
 }
 
-export class UpdateUnitInput extends PartialType(OmitType(CreateUnitInput, ['siteId'] as const)) {}
+export class UpdateUnitInput extends PartialType(OmitType(CreateUnitInput, ['siteId', 'makeRoom'] as const)) {}

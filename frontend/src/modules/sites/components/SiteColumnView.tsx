@@ -25,6 +25,7 @@ export function SiteColumnView({ site, canEdit }: SiteColumnViewProps) {
   const projectId = site.project.id;
   const { age } = useAgeScale();
   const [editingUnit, setEditingUnit] = useState<UnitRow | 'new' | null>(null);
+  const [insertingNextTo, setInsertingNextTo] = useState<{ unit: UnitRow; side: 'above' | 'below' } | null>(null);
   const [deletingUnit, setDeletingUnit] = useState<UnitRow | null>(null);
   const [editingHorizon, setEditingHorizon] = useState<EventHorizonRow | 'new' | null>(null);
   const [deletingHorizon, setDeletingHorizon] = useState<EventHorizonRow | null>(null);
@@ -148,6 +149,20 @@ export function SiteColumnView({ site, canEdit }: SiteColumnViewProps) {
                     {canEdit && (
                       <td className="sc-actions-cell">
                         <ButtonGroup variant="minimal">
+                          <Button
+                            icon={IconNames.ADD_ROW_TOP}
+                            size="small"
+                            aria-label={`Insert a unit above ${unit.name}`}
+                            title={`Insert a unit above ${unit.name}`}
+                            onClick={() => setInsertingNextTo({ unit, side: 'above' })}
+                          />
+                          <Button
+                            icon={IconNames.ADD_ROW_BOTTOM}
+                            size="small"
+                            aria-label={`Insert a unit below ${unit.name}`}
+                            title={`Insert a unit below ${unit.name}`}
+                            onClick={() => setInsertingNextTo({ unit, side: 'below' })}
+                          />
                           <Button icon={IconNames.EDIT} size="small" aria-label={`Edit ${unit.name}`} onClick={() => setEditingUnit(unit)} />
                           <Button icon={IconNames.TRASH} size="small" intent={Intent.DANGER} aria-label={`Delete ${unit.name}`} onClick={() => setDeletingUnit(unit)} />
                         </ButtonGroup>
@@ -235,6 +250,16 @@ export function SiteColumnView({ site, canEdit }: SiteColumnViewProps) {
 
       {editingUnit && (
         <UnitDialog projectId={projectId} siteId={site.id} units={site.units} unit={editingUnit === 'new' ? null : editingUnit} onClose={() => setEditingUnit(null)} />
+      )}
+      {insertingNextTo && (
+        <UnitDialog
+          projectId={projectId}
+          siteId={site.id}
+          units={site.units}
+          unit={null}
+          insertNextTo={insertingNextTo}
+          onClose={() => setInsertingNextTo(null)}
+        />
       )}
       {editingHorizon && (
         <EventHorizonDialog

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { emptyEventHorizonForm, readEventHorizonForm } from './eventHorizonForm';
-import { emptyUnitForm, readUnitForm } from './unitForm';
+import { emptyUnitForm, insertUnitForm, readUnitForm, unitsDisplacedBy } from './unitForm';
 
 // The rules are the domain model's (SPEC.md: units ordered from the base, position 1 oldest;
 // an event horizon between the unit below and the unit above; quality 1 to 4) and the server's
@@ -15,6 +15,32 @@ describe(emptyUnitForm.name, () => {
   it('puts a new unit on top of the youngest, its base at that unit top', () => {
     expect(emptyUnitForm(units)).toMatchObject({ position: '3', baseDepthM: '0.4', topDepthM: '' });
     expect(emptyUnitForm([])).toMatchObject({ position: '1', baseDepthM: '' });
+  });
+});
+
+describe(insertUnitForm.name, () => {
+  // A column with a 0.2 m gap between 1.1 and 1.3 m, and a youngest unit reaching the surface.
+  const gapped = [
+    { id: 'g1', position: 1, name: 'mud', topDepthM: 1.3, baseDepthM: 2, facies: 'TIDAL_MUD' as const },
+    { id: 'g2', position: 2, name: 'peat', topDepthM: 0, baseDepthM: 1.1, facies: 'PEAT' as const },
+  ];
+
+  it('above a unit takes the next position up and fills the gap to the younger neighbour', () => {
+    expect(insertUnitForm(gapped, gapped[0]!, 'above')).toMatchObject({ position: '2', baseDepthM: '1.3', topDepthM: '1.1' });
+  });
+
+  it('below a unit takes its position and fills the gap to the older neighbour', () => {
+    expect(insertUnitForm(gapped, gapped[1]!, 'below')).toMatchObject({ position: '2', topDepthM: '1.1', baseDepthM: '1.3' });
+  });
+
+  it('leaves the far depth blank where the neighbours touch, and opens below the base unit', () => {
+    expect(insertUnitForm(units, units[0]!, 'above')).toMatchObject({ position: '2', baseDepthM: '1.1', topDepthM: '' });
+    expect(insertUnitForm(units, units[0]!, 'below')).toMatchObject({ position: '1', topDepthM: '2.3', baseDepthM: '' });
+  });
+
+  it('names the units that would move up', () => {
+    expect(unitsDisplacedBy(units, 2).map((u) => u.name)).toEqual(['peat']);
+    expect(unitsDisplacedBy(units, 3)).toEqual([]);
   });
 });
 

@@ -42,6 +42,41 @@ export function emptyUnitForm(existing: readonly StoredUnit[]): UnitFormValues {
   };
 }
 
+/**
+ * A form for a unit inserted next to `unit`: above it (younger, taking the next position up) or
+ * below it (older, taking `unit`'s position). The new unit's depths start at `unit`'s contact and
+ * end at the neighbour's on that side, when that side has a gap; otherwise they are left blank,
+ * since the neighbour must first give up some thickness.
+ */
+export function insertUnitForm(existing: readonly StoredUnit[], unit: StoredUnit, side: 'above' | 'below'): UnitFormValues {
+  const sorted = [...existing].sort((a, b) => a.position - b.position);
+  const at = sorted.findIndex((u) => u.position === unit.position);
+  const blank = { name: '', facies: 'OTHER' as Facies, basalErosionM: '', notes: '' };
+  if (side === 'above') {
+    const younger = sorted[at + 1];
+    const gap = younger ? younger.baseDepthM < unit.topDepthM : unit.topDepthM > 0;
+    return {
+      ...blank,
+      position: String(unit.position + 1),
+      baseDepthM: numberText(unit.topDepthM),
+      topDepthM: younger && gap ? numberText(younger.baseDepthM) : !younger && gap ? '0' : '',
+    };
+  }
+  const older = sorted[at - 1];
+  const gap = older ? older.topDepthM > unit.baseDepthM : false;
+  return {
+    ...blank,
+    position: String(unit.position),
+    topDepthM: numberText(unit.baseDepthM),
+    baseDepthM: older && gap ? numberText(older.topDepthM) : '',
+  };
+}
+
+/** Units a new unit at `position` would move up one place (the one there and every younger one). */
+export function unitsDisplacedBy(existing: readonly StoredUnit[], position: number): StoredUnit[] {
+  return existing.filter((u) => u.position >= position).sort((a, b) => a.position - b.position);
+}
+
 export function unitFormFrom(unit: StoredUnit): UnitFormValues {
   return {
     position: String(unit.position),
