@@ -13,7 +13,7 @@ ensureBuilt('backend');
 if (existsSync(BENCH_ENTRY)) {
   // The API benchmarks make (and drop) their own database beside this one.
   const env = { ...process.env, DATABASE_URL: await ensureDatabaseUrl('dev') };
-  process.exitCode = runInherit(process.execPath, [BENCH_ENTRY], { env });
+  process.exitCode = runInherit(process.execPath, [BENCH_ENTRY, ...process.argv.slice(2)], { env });
 } else {
   note('no benchmarks yet (backend/dist/bench/main.js is not built)');
 }

@@ -8,10 +8,11 @@ import { DatabaseModule } from './database/database.module';
 import { JobReaper } from './jobs/job-reaper';
 import { JobsModule } from './jobs/jobs.module';
 import { RecurrenceModule } from './recurrence/recurrence.module';
+import { PasswordResetMailModule } from './team/password-reset-mail.module';
 
 /** The worker process: the job handlers and what they need, no HTTP. */
 @Module({
-  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule, RecurrenceModule, AttachmentsModule],
+  imports: [ConfigModule, DatabaseModule, AccessModule, AuditModule, JobsModule, AgeModelsModule, RecurrenceModule, AttachmentsModule, PasswordResetMailModule],
   providers: [JobReaper],
 })
 export class WorkerModule {}

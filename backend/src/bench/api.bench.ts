@@ -52,6 +52,15 @@ export interface ProbeBench {
   outcome: string;
 }
 
+/** Issue 17's reset timing: answer times of `requestPasswordReset` for addresses with and without an account. */
+export interface ResetTimingBench {
+  requests: number;
+  knownMedianMs: number;
+  unknownMedianMs: number;
+  knownMs: number[];
+  unknownMs: number[];
+}
+
 export interface ApiBench {
   /** The ladder query with its densities as points (the page itself now asks for densityGrid). */
   ladder: LadderLoadBench;
@@ -60,8 +69,12 @@ export interface ApiBench {
   /** The page query with the answer cache off (`LADDER_CACHE_MIB=0`): every request executed. */
   ladderUncached: LadderLoadBench;
   import: ImportBench;
+}
+
+export interface ApiProbesBench {
   /** Issue 17's probes with their time and answer size (refused or bounded). */
   probes: ProbeBench[];
+  resetTiming: ResetTimingBench;
 }
 
 /** What this file uses of autocannon (which ships no types). */
@@ -308,7 +321,8 @@ async function waitUntilQuiet(pool: Pool): Promise<void> {
   }
 }
 
-async function benchImport(url: string, token: string, pool: Pool, projectId: string, pid: number | undefined): Promise<ImportBench> {
+/** The trench the lab-sheet import and the duplicate-lab-code probe write to. */
+async function createImportTrench(pool: Pool, projectId: string): Promise<string> {
   const site = await pool.query<{ id: string }>(
     `insert into sites (project_id, name, kind, latitude, longitude, along_strike_km) values ($1, 'Bench import trench', 'TRENCH', -41, 174, 700) returning id`,
     [projectId],
@@ -319,6 +333,11 @@ async function benchImport(url: string, token: string, pool: Pool, projectId: st
        ($1, 1, 'Lower peat', 2, 3, 'PEAT'), ($1, 2, 'Sand sheet', 1, 2, 'SAND_SHEET'), ($1, 3, 'Upper peat', 0, 1, 'PEAT')`,
     [siteId],
   );
+  return siteId;
+}
+
+async function benchImport(url: string, token: string, pool: Pool, projectId: string, pid: number | undefined): Promise<ImportBench> {
+  const siteId = await createImportTrench(pool, projectId);
   const lines = ['labCode,unit,depthM,method,material,ageRelation,c14Age,c14Error,curve'];
   for (let i = 1; i <= IMPORT_ROWS; i++) {
     const unit = 1 + (i % 3);
@@ -361,8 +380,43 @@ async function benchProbes(url: string, token: string, pool: Pool, projectId: st
   return results;
 }
 
-/** Seed, start the API, load the ladder, import a sheet; the bench database is dropped afterwards. */
-export async function benchApi(): Promise<ApiBench> {
+/** Reset requests per kind of address: under the throttle's per-client hour (30), one per address. */
+const RESET_REQUESTS = 6;
+
+/**
+ * Answer times of `requestPasswordReset` for addresses with an account and without, interleaved,
+ * one request per address (the throttle allows five per address an hour). The first request, which
+ * creates the job queue, is a warm-up and not counted.
+ */
+async function benchResetTiming(url: string, pool: Pool): Promise<ResetTimingBench> {
+  const hash = await bcrypt.hash(PASSWORD, 4);
+  const known: string[] = [];
+  for (let i = 0; i < RESET_REQUESTS; i++) {
+    const email = `bench-reset-${i}@stratochron.test`;
+    await pool.query(`insert into users (email, display_name, password_hash) values ($1, $2, $3)`, [email, `Bench reset ${i}`, hash]);
+    known.push(email);
+  }
+  const mutation = 'mutation($e: String!) { requestPasswordReset(email: $e) }';
+  const timed = async (email: string) => {
+    const started = performance.now();
+    const answer = await graphql<{ requestPasswordReset: boolean }>(url, undefined, mutation, { e: email });
+    const ms = performance.now() - started;
+    if (answer.errors?.length || answer.data?.requestPasswordReset !== true) throw new Error(`reset request failed: ${JSON.stringify(answer.errors).slice(0, 300)}`);
+    return ms;
+  };
+  await timed('bench-reset-warmup@nowhere.test');
+  const knownMs: number[] = [];
+  const unknownMs: number[] = [];
+  for (let i = 0; i < RESET_REQUESTS; i++) {
+    knownMs.push(await timed(known[i]));
+    unknownMs.push(await timed(`bench-reset-nobody-${i}@nowhere.test`));
+  }
+  const median = (values: number[]) => percentile([...values].sort((a, b) => a - b), 0.5);
+  return { requests: RESET_REQUESTS, knownMedianMs: median(knownMs), unknownMedianMs: median(unknownMs), knownMs, unknownMs };
+}
+
+/** A throw-away database beside the configured one, with the bench project and a started API. */
+async function withBenchApi<T>(body: (api: { url: string; pid: number | undefined; pool: Pool; token: string; projectId: string; email: string; restart(env: Record<string, string>): Promise<void> }) => Promise<T>): Promise<T> {
   const config = loadConfig();
   const benchDatabase = `stratochron_bench_${randomBytes(4).toString('hex')}`;
   const admin = new Client({ connectionString: config.databaseUrl });
@@ -372,28 +426,59 @@ export async function benchApi(): Promise<ApiBench> {
   const jwtSecret = randomBytes(24).toString('hex');
   let api: Awaited<ReturnType<typeof startApi>> | undefined;
   const pool = new Pool({ connectionString: databaseUrl, max: 4 });
+  // An idle connection ended by the database's drop below is no failure of the bench.
+  pool.on('error', () => undefined);
   try {
     api = await startApi(databaseUrl, jwtSecret); // runs the migrations
     const { projectId, email } = await seedProject(pool);
     const signIn = await graphql<{ signIn: { token: string } }>(api.url, undefined, 'mutation($e: String!, $p: String!) { signIn(email: $e, password: $p) { token } }', { e: email, p: PASSWORD });
     const token = signIn.data?.signIn.token;
     if (!token) throw new Error(`sign-in failed: ${JSON.stringify(signIn.errors)}`);
-    const ladderGrid = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_GRID_QUERY);
-    await waitUntilQuiet(pool);
-    const ladder = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_QUERY);
-    await waitUntilQuiet(pool);
-    api.child.kill('SIGKILL');
-    // A second API with the answer cache off, for what every request costs when executed.
-    api = await startApi(databaseUrl, jwtSecret, { LADDER_CACHE_MIB: '0' });
-    const ladderUncached = await benchLadder(api.url, token, projectId, api.child.pid, LADDER_GRID_QUERY);
-    await waitUntilQuiet(pool);
-    const imported = await benchImport(api.url, token, pool, projectId, api.child.pid);
-    const probes = await benchProbes(api.url, token, pool, projectId, email);
-    return { ladder, ladderGrid, ladderUncached, import: imported, probes };
+    const handle = {
+      url: api.url,
+      pid: api.child.pid,
+      pool,
+      token,
+      projectId,
+      email,
+      restart: async (env: Record<string, string>) => {
+        api?.child.kill('SIGKILL');
+        api = await startApi(databaseUrl, jwtSecret, env);
+        handle.url = api.url;
+        handle.pid = api.child.pid;
+      },
+    };
+    return await body(handle);
   } finally {
     api?.child.kill('SIGKILL');
     await pool.end();
     await admin.query(`drop database if exists "${benchDatabase}" with (force)`).catch(() => undefined);
     await admin.end();
   }
+}
+
+/** Seed, start the API, load the ladder, import a sheet; the bench database is dropped afterwards. */
+export function benchApi(): Promise<ApiBench> {
+  return withBenchApi(async (api) => {
+    const ladderGrid = await benchLadder(api.url, api.token, api.projectId, api.pid, LADDER_GRID_QUERY);
+    await waitUntilQuiet(api.pool);
+    const ladder = await benchLadder(api.url, api.token, api.projectId, api.pid, LADDER_QUERY);
+    await waitUntilQuiet(api.pool);
+    // A second API with the answer cache off, for what every request costs when executed.
+    await api.restart({ LADDER_CACHE_MIB: '0' });
+    const ladderUncached = await benchLadder(api.url, api.token, api.projectId, api.pid, LADDER_GRID_QUERY);
+    await waitUntilQuiet(api.pool);
+    const imported = await benchImport(api.url, api.token, api.pool, api.projectId, api.pid);
+    return { ladder, ladderGrid, ladderUncached, import: imported };
+  });
+}
+
+/** Issue 17's probes and the reset timing, on the bench project with no load before them. */
+export function benchApiProbes(): Promise<ApiProbesBench> {
+  return withBenchApi(async (api) => {
+    await createImportTrench(api.pool, api.projectId);
+    const probes = await benchProbes(api.url, api.token, api.pool, api.projectId, api.email);
+    const resetTiming = await benchResetTiming(api.url, api.pool);
+    return { probes, resetTiming };
+  });
 }

@@ -10,7 +10,10 @@ import { BENCHMARKS, BenchRow } from './benchmarks';
  */
 async function main(): Promise<void> {
   const rows: BenchRow[] = [];
-  for (const benchmark of BENCHMARKS) {
+  // `npm run bench -- probes`: only the benchmarks whose name contains one of the words given.
+  const only = process.argv.slice(2).map((word) => word.toLowerCase());
+  const chosen = only.length === 0 ? BENCHMARKS : BENCHMARKS.filter((b) => only.some((word) => b.name.toLowerCase().includes(word)));
+  for (const benchmark of chosen) {
     process.stdout.write(`running ${benchmark.name} ...\n`);
     try {
       rows.push(...(await benchmark.run()));

@@ -1,16 +1,15 @@
-import { Inject, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { AuditService } from '../audit/audit.service';
 import { normaliseEmail, requireBoundedCredentials, requirePasswordLength } from '../auth/account-rules';
 import { AttemptThrottle } from '../auth/attempt-throttle';
 import { hashPassword } from '../auth/passwords';
 import { badInput } from '../common/errors/domain-error';
-import { hashToken, issueToken, PASSWORD_RESET_LIFETIME_MS, TokenRefusal, tokenRefusal } from '../common/one-time-token';
-import { APP_CONFIG, AppConfig } from '../config/config';
+import { hashToken, TokenRefusal, tokenRefusal } from '../common/one-time-token';
 import { DatabaseService } from '../database/database.service';
-import { passwordResetMail } from '../mail/mail-templates';
-import { MailService } from '../mail/mail.service';
+import { JobQueueService } from '../jobs/job-queue.service';
 import { UsersRepository } from '../users/users.repository';
 import { ResetPasswordInput } from './dto/reset-password.input';
+import { PasswordResetMailJob } from './password-reset-mail.job';
 import { PasswordResetsRepository } from './password-resets.repository';
 
 const REFUSALS: Record<TokenRefusal | 'unknown', string> = {
@@ -27,36 +26,21 @@ export class PasswordResetsService {
     private readonly resets: PasswordResetsRepository,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
-    private readonly mail: MailService,
-    @Inject(APP_CONFIG) private readonly config: AppConfig,
+    private readonly jobs: JobQueueService,
+    private readonly mailJob: PasswordResetMailJob,
   ) {}
 
   /**
-   * E-mail a one-hour reset link when the address has an account. The answer is true either way
-   * so it does not reveal who has an account; a broken mail server is reported in both cases.
-   * Requests are limited per address and per client, so nobody can flood an inbox.
+   * Ask for a one-hour reset link by e-mail. The answer is true at once and the same for every
+   * address: whether it has an account, the link and the mail are the job's, after the answer
+   * (PasswordResetMailJob), so neither the answer nor its time tells who has an account. Requests
+   * are limited per address and per client, so nobody can flood an inbox.
    */
   async requestReset(emailInput: string, clientAddress: string): Promise<true> {
     requireBoundedCredentials(emailInput);
     const email = normaliseEmail(emailInput);
     await this.throttle.takeResetRequest(email, clientAddress);
-    const user = await this.users.findByEmail(email);
-    if (!user) {
-      await this.mail.checkReachable();
-      return true;
-    }
-    const now = new Date();
-    const issued = issueToken(PASSWORD_RESET_LIFETIME_MS, now);
-    await this.database.transaction(async (tx) => {
-      await this.resets.expireOpen(user.id, now, tx);
-      const reset = await this.resets.insert({ userId: user.id, tokenHash: issued.tokenHash, expiresAt: issued.expiresAt }, tx);
-      await this.audit.record(tx, {
-        actor: null, projectId: null, action: 'create', objectType: 'password_reset', objectId: reset.id,
-        after: { userId: user.id, expiresAt: reset.expiresAt },
-      });
-      const link = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(issued.token)}`;
-      await this.mail.send(user.email, passwordResetMail({ displayName: user.displayName, link, expiresAt: issued.expiresAt }));
-    });
+    await this.jobs.send(this.mailJob, { email });
     return true;
   }
 

@@ -11,7 +11,7 @@ import { MembersService } from './members.service';
 import { MembershipsRepository } from './memberships.repository';
 import { ProjectMembersResolver, UserMembershipsResolver } from './memberships.resolver';
 import { MembershipsService } from './memberships.service';
-import { PasswordResetsRepository } from './password-resets.repository';
+import { PasswordResetMailModule } from './password-reset-mail.module';
 import { PasswordResetsResolver } from './password-resets.resolver';
 import { PasswordResetsService } from './password-resets.service';
 
@@ -20,7 +20,7 @@ import { PasswordResetsService } from './password-resets.service';
  * invitations by e-mail, and password resets.
  */
 @Module({
-  imports: [MailModule, ProjectsModule, UsersModule],
+  imports: [MailModule, ProjectsModule, UsersModule, PasswordResetMailModule],
   providers: [
     MembershipsRepository,
     MembershipsService,
@@ -33,7 +33,6 @@ import { PasswordResetsService } from './password-resets.service';
     InvitationsService,
     InvitationsResolver,
     ProjectInvitationsResolver,
-    PasswordResetsRepository,
     PasswordResetsService,
     PasswordResetsResolver,
   ],
