@@ -43,10 +43,10 @@ import { NodeKind, OrderGraph } from './column';
 import { MixtureLikelihoods, yearOf } from './likelihood';
 
 /** Step scales (years) of the block shift, chosen uniformly per proposal. */
-const SHIFT_SCALES = [1, 3, 10, 30, 100, 300];
+export const SHIFT_SCALES = [1, 3, 10, 30, 100, 300];
 
 /** Share of block shifts that move the whole column with its boundaries. */
-const GLOBAL_SHIFT_SHARE = 0.25;
+export const GLOBAL_SHIFT_SHARE = 0.25;
 
 /**
  * Below this share of a sample's total mass the cumulative sums lose too many digits to invert;
@@ -55,7 +55,7 @@ const GLOBAL_SHIFT_SHARE = 0.25;
 const BISECTION_FLOOR = 1e-9;
 
 /** Share of a year that initial ages keep clear of their bounds, so no two start tied. */
-const INITIAL_CLEARANCE = 1e-3;
+export const INITIAL_CLEARANCE = 1e-3;
 
 /**
  * The paths of two or more nodes in the order graph, young to old. Consecutive nodes u (younger)
@@ -63,11 +63,12 @@ const INITIAL_CLEARANCE = 1e-3;
  * boundary is never joined, so a path's weight depends on one free node at most (the start
  * boundary at its top); the nodes bounding a path from outside stay fixed while it is drawn.
  */
-function orderPaths(graph: OrderGraph): Int32Array[] {
+export function orderPaths(graph: OrderAdjacency): Int32Array[] {
   const g = graph;
   const olderOf = new Int32Array(g.nodeCount).fill(-1);
   const youngerOf = new Int32Array(g.nodeCount).fill(-1);
-  for (let u = 2; u < g.nodeCount; u++) {
+  for (let u = 0; u < g.nodeCount; u++) {
+    if (g.kind[u] === NodeKind.END || g.kind[u] === NodeKind.START) continue;
     if (g.olderOffsets[u + 1] - g.olderOffsets[u] !== 1) continue;
     const v = g.olderNeighbours[g.olderOffsets[u]];
     if (g.youngerOffsets[v + 1] - g.youngerOffsets[v] !== 1) continue;
@@ -75,13 +76,25 @@ function orderPaths(graph: OrderGraph): Int32Array[] {
     youngerOf[v] = u;
   }
   const paths: Int32Array[] = [];
-  for (let start = 2; start < g.nodeCount; start++) {
+  for (let start = 0; start < g.nodeCount; start++) {
+    if (g.kind[start] === NodeKind.END || g.kind[start] === NodeKind.START) continue;
     if (youngerOf[start] !== -1 || olderOf[start] === -1) continue;
     const nodes: number[] = [start];
     while (olderOf[nodes[nodes.length - 1]] !== -1) nodes.push(olderOf[nodes[nodes.length - 1]]);
     paths.push(Int32Array.from(nodes));
   }
   return paths;
+}
+
+/** The covering relation of an order on ages, in compressed rows (an OrderGraph is one). */
+export interface OrderAdjacency {
+  readonly nodeCount: number;
+  /** NodeKind of each node. */
+  readonly kind: Uint8Array;
+  readonly olderOffsets: Int32Array;
+  readonly olderNeighbours: Int32Array;
+  readonly youngerOffsets: Int32Array;
+  readonly youngerNeighbours: Int32Array;
 }
 
 export interface SamplerModel {
@@ -186,19 +199,15 @@ export class OrderChain {
   private readonly blockNodes: Int32Array;
   /** firstAtStage[s + 1]: index in youngToOld of the first node whose first stage is >= s. */
   private readonly firstAtStage: Int32Array;
-  /** Window years, and its continuous edges and length. */
-  private readonly young: number;
-  private readonly old: number;
+  /** The window's continuous edges and length. */
   private readonly youngEdge: number;
   private readonly oldEdge: number;
   private readonly windowLength: number;
   /** Events placed so far while initialising. */
   private readonly placedEvents = new Set<number>();
   private readonly paths: Int32Array[];
-  /** Forward cumulative sums of the longest path, path length x window width. */
-  private readonly forward: Float64Array;
-  /** Proposed path ages, and the years of the current ones. */
-  private readonly proposal: Float64Array;
+  /** Work arrays of `drawPath` for the longest path. */
+  private readonly pathBuffers: PathBuffers;
   blockShiftProposed = 0;
   blockShiftAccepted = 0;
   boundaryProposed = 0;
@@ -221,15 +230,12 @@ export class OrderChain {
       while (k < this.youngToOld.length && this.graph.stageMin[this.youngToOld[k]] < stage) k++;
       this.firstAtStage[stage + 1] = k;
     }
-    this.young = this.likelihoods.youngCalBp;
-    this.old = this.likelihoods.oldCalBp;
     this.youngEdge = this.likelihoods.youngEdge;
     this.oldEdge = this.likelihoods.oldEdge;
     this.windowLength = this.oldEdge - this.youngEdge;
     this.paths = orderPaths(this.graph);
     const longest = this.paths.reduce((n, path) => Math.max(n, path.length), 0);
-    this.forward = new Float64Array(longest * (this.old - this.young + 1));
-    this.proposal = new Float64Array(longest);
+    this.pathBuffers = pathBuffers(this.likelihoods, this.random, this.graph.kind, depositIndex(this.graph), longest);
     this.initialise(startFromYoung);
   }
 
@@ -347,63 +353,12 @@ export class OrderChain {
 
   /** A draw from L (no outlier term) on [lo, hi]; `fallback` when L has no mass there. */
   private drawPlain(sample: number, lo: number, hi: number, fallback: number): number {
-    const L = this.likelihoods;
-    const below = L.plainCumulativeAt(sample, lo);
-    const mass = L.plainCumulativeAt(sample, hi) - below;
-    if (!(mass > BISECTION_FLOOR * L.plainTotalMass(sample))) return fallback;
-    const target = below + (INITIAL_CLEARANCE + (1 - 2 * INITIAL_CLEARANCE) * this.random.uniform()) * mass;
-    return this.invert((x) => L.plainCumulativeAt(sample, x), (y) => L.plain(sample, y), lo, hi, target);
-  }
-
-  /**
-   * The age x in [lo, hi] where a piecewise-linear cumulative integral (slope `valueOf(year)` in
-   * each year) reaches `target`: bisection over whole years, then linear within the year.
-   */
-  private invert(
-    cumulativeAt: (calBp: number) => number,
-    valueOf: (year: number) => number,
-    lo: number,
-    hi: number,
-    target: number,
-  ): number {
-    let a = yearOf(lo);
-    let b = Math.min(yearOf(hi), this.old);
-    // The first year whose end (capped at hi) reaches the target.
-    while (a < b) {
-      const mid = (a + b) >> 1;
-      if (cumulativeAt(Math.min(mid + 0.5, hi)) >= target) b = mid;
-      else a = mid + 1;
-    }
-    const from = Math.max(lo, a - 0.5);
-    const slope = valueOf(a);
-    const x = slope > 0 ? from + (target - cumulativeAt(from)) / slope : from;
-    return Math.min(hi, Math.max(lo, x));
+    return drawPlainDeposit(this.likelihoods, sample, lo, hi, fallback, this.random);
   }
 
   /** Gibbs draw of a deposit from L_q on [lo, hi]. */
   private drawDeposit(sample: number, lo: number, hi: number, current: number): number {
-    const L = this.likelihoods;
-    const below = L.cumulativeAt(sample, lo);
-    const mass = L.cumulativeAt(sample, hi) - below;
-    if (mass > BISECTION_FLOOR * L.totalMass(sample)) {
-      const target = below + this.random.uniform() * mass;
-      return this.invert((x) => L.cumulativeAt(sample, x), (y) => L.mixture(sample, y), lo, hi, target);
-    }
-    // Too little mass for the cumulative sums' digits: weigh the years directly.
-    const first = yearOf(lo);
-    const last = Math.min(yearOf(hi), this.old);
-    let sum = 0;
-    for (let y = first; y <= last; y++) sum += L.mixture(sample, y) * (Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5));
-    if (!(sum > 0)) return current;
-    let target = this.random.uniform() * sum;
-    for (let y = first; y <= last; y++) {
-      const from = Math.max(lo, y - 0.5);
-      const length = Math.min(hi, y + 0.5) - from;
-      const weight = L.mixture(sample, y) * length;
-      if (target <= weight && weight > 0) return from + (target / weight) * length;
-      target -= weight;
-    }
-    return hi;
+    return drawDepositAge(this.likelihoods, sample, lo, hi, current, this.random);
   }
 
   /**
@@ -425,16 +380,7 @@ export class OrderChain {
     }
     const c = isStart ? limit - other : other - limit;
     if (!(c > 0)) return;
-    const logRatio = Math.log((c + room) / c);
-    const u = this.random.uniform();
-    let x: number;
-    if (m === 1) {
-      x = c * Math.exp(u * logRatio) - c;
-    } else {
-      const tailShare = -Math.expm1((1 - m) * logRatio); // 1 - ((c + K) / c)^(1 - m)
-      x = c * Math.exp(Math.log1p(-u * tailShare) / (1 - m)) - c;
-    }
-    const proposed = Math.min(room, Math.max(0, x));
+    const proposed = proposeBoundaryOffset(c, room, m, this.random.uniform());
     const current = isStart ? this.values[node] - limit : limit - this.values[node];
     this.boundaryProposed++;
     const W = this.windowLength;
@@ -452,17 +398,9 @@ export class OrderChain {
   }
 
   /**
-   * Independence Metropolis-Hastings update of each path of the order given the rest. Along a
-   * path x_1 <= ... <= x_n in [lo, hi] the full conditional is prod_k g_k(x_k), with g = L_q for a
-   * deposit, 1 for an event and s^-m / (W - s) for the start boundary (beta is fixed).
-   *
-   * Proposal: years y_1 <= ... <= y_n are drawn exactly from prod_k w_k(y_k), w_k(y) = g^_k(y)
-   * l(y), where l(y) is the length of year y inside [lo, hi] and g^ is g (the start boundary's
-   * evaluated at the middle of its clipped year), by forward cumulative sums C_k(y) = sum_{z <= y}
-   * w_k(z) C_{k-1}(z) and sampling back from the top (Carter & Kohn 1994); then the ages of each
-   * run of r nodes sharing a year are r uniform points sorted, density r! / l^r. So the proposal
-   * density is q(x) = prod g^_k(y_k) prod_runs r! / Z, and with the target pi(x) ∝ prod g_k(x_k)
-   * the weight pi / q ∝ [g_start / g^_start] / prod_runs r! decides acceptance (Z cancels).
+   * Independence Metropolis-Hastings update of each path of the order given the rest (`drawPath`:
+   * years by forward filtering and backward sampling, ages uniform within their years, the
+   * difference from the continuous target corrected by the acceptance ratio).
    *
    * Why: with outliers allowed, a column with one sample per unit has a second mode where the
    * older samples are all outliers and the column shrinks to a short span. Leaving or entering it
@@ -470,11 +408,6 @@ export class OrderChain {
    * block shifts (which cannot change the span) do only slowly; this draw crosses in one step.
    */
   pathUpdate(): void {
-    const L = this.likelihoods;
-    const m = this.uniformCount;
-    const f = this.forward;
-    const r = this.random;
-    const W = this.windowLength;
     const end = this.values[0];
     for (const path of this.paths) {
       const n = path.length;
@@ -482,99 +415,10 @@ export class OrderChain {
       const lo = this.lowerBound(path[0]);
       const hi = topIsStart ? this.oldEdge : this.upperBound(path[n - 1]);
       if (!(hi > lo)) continue;
-      const firstYear = yearOf(lo);
-      const lastYear = Math.min(yearOf(hi), this.old);
-      const width = lastYear - firstYear + 1;
-      const lengthOf = (y: number): number => Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5);
-      // The start boundary's weight at the middle of its clipped year, relative to its largest.
-      const logStartAt = (y: number): number => {
-        const middle = (Math.max(lo, y - 0.5) + Math.min(hi, y + 0.5)) / 2;
-        return logSpanPrior(middle - end, m, W);
-      };
-      const logStartTop = topIsStart ? logStartAt(firstYear) : 0;
-      const firstLength = lengthOf(firstYear);
-      const lastLength = lengthOf(lastYear);
-      const offset = firstYear - this.young;
-      for (let k = 0; k < n; k++) {
-        const node = path[k];
-        const kind = this.graph.kind[node];
-        const row = k * width;
-        const previous = row - width;
-        let running = 0;
-        if (kind === NodeKind.DEPOSIT) {
-          const values = L.mixtureValues(node - this.firstDeposit);
-          for (let i = 0; i < width; i++) {
-            const w = values[offset + i] * (i === 0 ? firstLength : i === width - 1 ? lastLength : 1);
-            running += k === 0 ? w : w * f[previous + i];
-            f[row + i] = running;
-          }
-        } else if (kind === NodeKind.START) {
-          for (let i = 0; i < width; i++) {
-            const length = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
-            const w = Math.exp(logStartAt(firstYear + i) - logStartTop) * length;
-            running += k === 0 ? w : w * f[previous + i];
-            f[row + i] = running;
-          }
-        } else {
-          for (let i = 0; i < width; i++) {
-            const w = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
-            running += k === 0 ? w : w * f[previous + i];
-            f[row + i] = running;
-          }
-        }
-        // Rescale each row to end at 1 so that long paths neither underflow nor overflow.
-        if (!(running > 0)) return;
-        const scale = 1 / running;
-        for (let i = 0; i < width; i++) f[row + i] *= scale;
-      }
-      const proposal = this.proposal;
-      let upper = width - 1;
-      for (let k = n - 1; k >= 0; k--) {
-        const row = k * width;
-        const target = (1 - r.uniform()) * f[row + upper];
-        let a = 0;
-        let b = upper;
-        while (a < b) {
-          const mid = (a + b) >> 1;
-          if (f[row + mid] >= target) b = mid;
-          else a = mid + 1;
-        }
-        proposal[k] = firstYear + a;
-        upper = a;
-      }
-      // Ages within years: each run sharing a year gets sorted uniform points in its clipped year.
-      let logWeightProposed = 0;
-      for (let k = 0; k < n; ) {
-        const y = proposal[k];
-        let e = k;
-        while (e + 1 < n && proposal[e + 1] === y) e++;
-        const from = Math.max(lo, y - 0.5);
-        const length = lengthOf(y);
-        for (let t = k; t <= e; t++) proposal[t] = from + length * r.uniform();
-        if (e > k) sortRange(proposal, k, e + 1);
-        logWeightProposed -= logFactorial(e - k + 1);
-        k = e + 1;
-      }
-      let logWeightCurrent = 0;
-      for (let k = 0; k < n; ) {
-        const y = yearOf(this.values[path[k]]);
-        let e = k;
-        while (e + 1 < n && yearOf(this.values[path[e + 1]]) === y) e++;
-        logWeightCurrent -= logFactorial(e - k + 1);
-        k = e + 1;
-      }
-      if (topIsStart) {
-        const proposedTop = proposal[n - 1];
-        const currentTop = this.values[1];
-        logWeightProposed += logSpanPrior(proposedTop - end, m, W) - logStartAt(yearOf(proposedTop));
-        logWeightCurrent += logSpanPrior(currentTop - end, m, W) - logStartAt(yearOf(currentTop));
-      }
+      const outcome = drawPath(this.pathBuffers, this.values, path, lo, hi, topIsStart ? { end, m: this.uniformCount } : null);
+      if (outcome === 'stop') return;
       this.pathProposed++;
-      const logAccept = logWeightProposed - logWeightCurrent;
-      if (logAccept >= 0 || Math.log(r.uniform()) < logAccept) {
-        for (let k = 0; k < n; k++) this.values[path[k]] = proposal[k];
-        this.pathAccepted++;
-      }
+      if (outcome === 'accepted') this.pathAccepted++;
     }
   }
 
@@ -707,6 +551,261 @@ export class OrderChain {
     }
     return out;
   }
+}
+
+/** Index of each node's likelihood among the deposits, or -1 for a boundary or an event. */
+function depositIndex(graph: OrderGraph): Int32Array {
+  const first = firstDepositNode(graph);
+  const out = new Int32Array(graph.nodeCount).fill(-1);
+  for (let node = first; node < graph.nodeCount; node++) out[node] = node - first;
+  return out;
+}
+
+/**
+ * The age x in [lo, hi] where a piecewise-linear cumulative integral (slope `valueOf(year)` in
+ * each year) reaches `target`: bisection over whole years (none after `oldYear`), then linear
+ * within the year.
+ */
+export function invertCumulative(
+  cumulativeAt: (calBp: number) => number,
+  valueOf: (year: number) => number,
+  lo: number,
+  hi: number,
+  target: number,
+  oldYear: number,
+): number {
+  let a = yearOf(lo);
+  let b = Math.min(yearOf(hi), oldYear);
+  // The first year whose end (capped at hi) reaches the target.
+  while (a < b) {
+    const mid = (a + b) >> 1;
+    if (cumulativeAt(Math.min(mid + 0.5, hi)) >= target) b = mid;
+    else a = mid + 1;
+  }
+  const from = Math.max(lo, a - 0.5);
+  const slope = valueOf(a);
+  const x = slope > 0 ? from + (target - cumulativeAt(from)) / slope : from;
+  return Math.min(hi, Math.max(lo, x));
+}
+
+/** A draw of a deposit age from L (no outlier term) on [lo, hi]; `fallback` when L has no mass there. */
+export function drawPlainDeposit(
+  L: MixtureLikelihoods,
+  sample: number,
+  lo: number,
+  hi: number,
+  fallback: number,
+  random: SeededRandom,
+): number {
+  const below = L.plainCumulativeAt(sample, lo);
+  const mass = L.plainCumulativeAt(sample, hi) - below;
+  if (!(mass > BISECTION_FLOOR * L.plainTotalMass(sample))) return fallback;
+  const target = below + (INITIAL_CLEARANCE + (1 - 2 * INITIAL_CLEARANCE) * random.uniform()) * mass;
+  return invertCumulative((x) => L.plainCumulativeAt(sample, x), (y) => L.plain(sample, y), lo, hi, target, L.oldCalBp);
+}
+
+/** Gibbs draw of a deposit age from its full conditional, L_q restricted to [lo, hi]. */
+export function drawDepositAge(
+  L: MixtureLikelihoods,
+  sample: number,
+  lo: number,
+  hi: number,
+  current: number,
+  random: SeededRandom,
+): number {
+  const below = L.cumulativeAt(sample, lo);
+  const mass = L.cumulativeAt(sample, hi) - below;
+  if (mass > BISECTION_FLOOR * L.totalMass(sample)) {
+    const target = below + random.uniform() * mass;
+    return invertCumulative((x) => L.cumulativeAt(sample, x), (y) => L.mixture(sample, y), lo, hi, target, L.oldCalBp);
+  }
+  // Too little mass for the cumulative sums' digits: weigh the years directly.
+  const first = yearOf(lo);
+  const last = Math.min(yearOf(hi), L.oldCalBp);
+  let sum = 0;
+  for (let y = first; y <= last; y++) sum += L.mixture(sample, y) * (Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5));
+  if (!(sum > 0)) return current;
+  let target = random.uniform() * sum;
+  for (let y = first; y <= last; y++) {
+    const from = Math.max(lo, y - 0.5);
+    const length = Math.min(hi, y + 0.5) - from;
+    const weight = L.mixture(sample, y) * length;
+    if (target <= weight && weight > 0) return from + (target / weight) * length;
+    target -= weight;
+  }
+  return hi;
+}
+
+/**
+ * An exact draw of the distance x in [0, room] of a boundary beyond the extreme node from the
+ * density (c + x)^-m (inversion with the uniform u); see `OrderChain.updateBoundary`.
+ */
+export function proposeBoundaryOffset(c: number, room: number, m: number, u: number): number {
+  const logRatio = Math.log((c + room) / c);
+  let x: number;
+  if (m === 1) {
+    x = c * Math.exp(u * logRatio) - c;
+  } else {
+    const tailShare = -Math.expm1((1 - m) * logRatio); // 1 - ((c + K) / c)^(1 - m)
+    x = c * Math.exp(Math.log1p(-u * tailShare) / (1 - m)) - c;
+  }
+  return Math.min(room, Math.max(0, x));
+}
+
+/** What `drawPath` works with: the likelihoods, the chain's random stream and work arrays. */
+export interface PathBuffers {
+  readonly likelihoods: MixtureLikelihoods;
+  readonly random: SeededRandom;
+  /** Node kinds (NodeKind) and each node's deposit likelihood index (-1 if none). */
+  readonly kind: Uint8Array;
+  readonly depositOf: Int32Array;
+  /** Forward cumulative sums, longest path x window width. */
+  readonly forward: Float64Array;
+  /** Proposed path ages. */
+  readonly proposal: Float64Array;
+}
+
+export function pathBuffers(
+  likelihoods: MixtureLikelihoods,
+  random: SeededRandom,
+  kind: Uint8Array,
+  depositOf: Int32Array,
+  longestPath: number,
+): PathBuffers {
+  return {
+    likelihoods,
+    random,
+    kind,
+    depositOf,
+    forward: new Float64Array(longestPath * likelihoods.width),
+    proposal: new Float64Array(longestPath),
+  };
+}
+
+/**
+ * Independence Metropolis-Hastings draw of one path of the order given the rest: the nodes
+ * x_1 <= ... <= x_n (young to old) in [lo, hi], whose full conditional is prod_k g_k(x_k), with
+ * g = L_q for a deposit, 1 for an event and s^-m / (W - s) for a start boundary at the top (its
+ * end boundary `top.end` fixed; W the window's length).
+ *
+ * Proposal: years y_1 <= ... <= y_n are drawn exactly from prod_k w_k(y_k), w_k(y) = g^_k(y)
+ * l(y), where l(y) is the length of year y inside [lo, hi] and g^ is g (the start boundary's
+ * evaluated at the middle of its clipped year), by forward cumulative sums C_k(y) = sum_{z <= y}
+ * w_k(z) C_{k-1}(z) and sampling back from the top (Carter & Kohn 1994); then the ages of each
+ * run of r nodes sharing a year are r uniform points sorted, density r! / l^r. So the proposal
+ * density is q(x) = prod g^_k(y_k) prod_runs r! / Z, and with the target pi(x) ∝ prod g_k(x_k)
+ * the weight pi / q ∝ [g_start / g^_start] / prod_runs r! decides acceptance (Z cancels).
+ *
+ * Writes the accepted ages into `values`. Returns 'stop' (nothing proposed; the forward sums
+ * vanished) or whether the proposal was accepted.
+ */
+export function drawPath(
+  buffers: PathBuffers,
+  values: Float64Array,
+  path: Int32Array,
+  lo: number,
+  hi: number,
+  top: { readonly end: number; readonly m: number } | null,
+): 'stop' | 'accepted' | 'rejected' {
+  const { likelihoods: L, random: r, forward: f, kind: kinds, depositOf } = buffers;
+  const W = L.oldEdge - L.youngEdge;
+  const n = path.length;
+  const topIsStart = top !== null;
+  const end = top?.end ?? 0;
+  const m = top?.m ?? 0;
+  const firstYear = yearOf(lo);
+  const lastYear = Math.min(yearOf(hi), L.oldCalBp);
+  const width = lastYear - firstYear + 1;
+  const lengthOf = (y: number): number => Math.min(hi, y + 0.5) - Math.max(lo, y - 0.5);
+  // The start boundary's weight at the middle of its clipped year, relative to its largest.
+  const logStartAt = (y: number): number => {
+    const middle = (Math.max(lo, y - 0.5) + Math.min(hi, y + 0.5)) / 2;
+    return logSpanPrior(middle - end, m, W);
+  };
+  const logStartTop = topIsStart ? logStartAt(firstYear) : 0;
+  const firstLength = lengthOf(firstYear);
+  const lastLength = lengthOf(lastYear);
+  const offset = firstYear - L.youngCalBp;
+  for (let k = 0; k < n; k++) {
+    const node = path[k];
+    const kind = kinds[node];
+    const row = k * width;
+    const previous = row - width;
+    let running = 0;
+    if (kind === NodeKind.DEPOSIT) {
+      const likelihood = L.mixtureValues(depositOf[node]);
+      for (let i = 0; i < width; i++) {
+        const w = likelihood[offset + i] * (i === 0 ? firstLength : i === width - 1 ? lastLength : 1);
+        running += k === 0 ? w : w * f[previous + i];
+        f[row + i] = running;
+      }
+    } else if (kind === NodeKind.START) {
+      for (let i = 0; i < width; i++) {
+        const length = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
+        const w = Math.exp(logStartAt(firstYear + i) - logStartTop) * length;
+        running += k === 0 ? w : w * f[previous + i];
+        f[row + i] = running;
+      }
+    } else {
+      for (let i = 0; i < width; i++) {
+        const w = i === 0 ? firstLength : i === width - 1 ? lastLength : 1;
+        running += k === 0 ? w : w * f[previous + i];
+        f[row + i] = running;
+      }
+    }
+    // Rescale each row to end at 1 so that long paths neither underflow nor overflow.
+    if (!(running > 0)) return 'stop';
+    const scale = 1 / running;
+    for (let i = 0; i < width; i++) f[row + i] *= scale;
+  }
+  const proposal = buffers.proposal;
+  let upper = width - 1;
+  for (let k = n - 1; k >= 0; k--) {
+    const row = k * width;
+    const target = (1 - r.uniform()) * f[row + upper];
+    let a = 0;
+    let b = upper;
+    while (a < b) {
+      const mid = (a + b) >> 1;
+      if (f[row + mid] >= target) b = mid;
+      else a = mid + 1;
+    }
+    proposal[k] = firstYear + a;
+    upper = a;
+  }
+  // Ages within years: each run sharing a year gets sorted uniform points in its clipped year.
+  let logWeightProposed = 0;
+  for (let k = 0; k < n; ) {
+    const y = proposal[k];
+    let e = k;
+    while (e + 1 < n && proposal[e + 1] === y) e++;
+    const from = Math.max(lo, y - 0.5);
+    const length = lengthOf(y);
+    for (let t = k; t <= e; t++) proposal[t] = from + length * r.uniform();
+    if (e > k) sortRange(proposal, k, e + 1);
+    logWeightProposed -= logFactorial(e - k + 1);
+    k = e + 1;
+  }
+  let logWeightCurrent = 0;
+  for (let k = 0; k < n; ) {
+    const y = yearOf(values[path[k]]);
+    let e = k;
+    while (e + 1 < n && yearOf(values[path[e + 1]]) === y) e++;
+    logWeightCurrent -= logFactorial(e - k + 1);
+    k = e + 1;
+  }
+  if (topIsStart) {
+    const proposedTop = proposal[n - 1];
+    const currentTop = values[path[n - 1]];
+    logWeightProposed += logSpanPrior(proposedTop - end, m, W) - logStartAt(yearOf(proposedTop));
+    logWeightCurrent += logSpanPrior(currentTop - end, m, W) - logStartAt(yearOf(currentTop));
+  }
+  const logAccept = logWeightProposed - logWeightCurrent;
+  if (logAccept >= 0 || Math.log(r.uniform()) < logAccept) {
+    for (let k = 0; k < n; k++) values[path[k]] = proposal[k];
+    return 'accepted';
+  }
+  return 'rejected';
 }
 
 const LOG_FACTORIALS = [0, 0];
