@@ -52,6 +52,9 @@ export const FIELD_WEIGHTS: Readonly<Record<string, number>> = {
   // renewal fits and Monte Carlo
   'Query.fitRenewal': 5_000,
   'Query.renewalProbability': 2_000,
+  // a hypothesis's regional-event check on the whole project, for one segment's table
+  'Query.segmentEventTable': 3_000,
+  'Query.recurrenceComparison': 200,
   // bulk writes and snapshots
   'Mutation.importSamples': 20_000,
   'Mutation.installCalibrationCurve': 20_000,
@@ -98,6 +101,7 @@ export const FIELD_CAPS: Readonly<Record<string, number>> = {
   'Query.fitRenewal': 3,
   'Query.renewalProbability': 5,
   'Query.eventLadder': 2,
+  'Query.segmentEventTable': 2,
   'Query.releaseDiff': 2,
 };
 

@@ -187,12 +187,13 @@ export class ResultTablesService {
         table: 'analysis events',
         caution: RECURRENCE_CAUTION,
         inputs,
-        columns,
+        columns: [...columns, { key: 'inclusionProbability', title: 'inclusion probability (counting rule)' }],
         rows: snapshot.regionalEvents.map((e, i) => ({
           number: i + 1,
           members: e.memberIds.map((id) => names.get(id) ?? 'a deleted event').join('; '),
           ...ageCells(summarise(loadDensity(e.density as StoredDensity))),
           memberIds: e.memberIds.join(' '),
+          inclusionProbability: e.inclusionProbability ?? 1,
         })),
       };
     }

@@ -7,6 +7,7 @@ import { RENEWAL_MODEL_LABELS } from '../chronology/recurrence';
 import { type CsvValue, toCsv } from '../common/csv';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
 import type { StoredParameterRange, StoredRecurrenceResults, StoredWindowProbability } from './recurrence-results';
+import type { StoredEventTable } from './segment-event-table';
 
 /** What an export says about the analysis itself, so the numbers can be traced and rerun. */
 export interface RecurrenceExportHeader {
@@ -59,10 +60,18 @@ export interface RecurrenceExport {
     datingOnlyHigh95: number | null;
   }[];
   histogram: StoredRecurrenceResults['histogram'];
+  /** The segment's event table the analysis used, with its rule and weights; null for a site analysis or an older one. */
+  eventTable: StoredEventTable | null;
+  /** Events in a draw's record when inclusion weights make it vary; null otherwise. */
+  recordEvents: StoredRecurrenceResults['recordEvents'] | null;
 }
 
 /** The JSON export. */
-export function recurrenceExport(header: RecurrenceExportHeader, results: StoredRecurrenceResults): RecurrenceExport {
+export function recurrenceExport(
+  header: RecurrenceExportHeader,
+  results: StoredRecurrenceResults,
+  eventTable: StoredEventTable | null = null,
+): RecurrenceExport {
   const statistic = (quantity: string, unit: string, value: StoredParameterRange) => ({ quantity, unit, ...value });
   return {
     caution: RECURRENCE_CAUTION,
@@ -98,12 +107,18 @@ export function recurrenceExport(header: RecurrenceExportHeader, results: Stored
       ...results.poisson.map((w) => probabilityRow('POISSON_FROM_MEAN_RECURRENCE', w)),
     ],
     histogram: results.histogram,
+    eventTable,
+    recordEvents: results.recordEvents ?? null,
   };
 }
 
 /** The CSV export: the caution first, then one titled table after another, blank lines between. */
-export function recurrenceExportCsv(header: RecurrenceExportHeader, results: StoredRecurrenceResults): string {
-  const data = recurrenceExport(header, results);
+export function recurrenceExportCsv(
+  header: RecurrenceExportHeader,
+  results: StoredRecurrenceResults,
+  eventTable: StoredEventTable | null = null,
+): string {
+  const data = recurrenceExport(header, results, eventTable);
   const rows: CsvValue[][] = [
     [RECURRENCE_CAUTION],
     [],
@@ -124,8 +139,9 @@ export function recurrenceExportCsv(header: RecurrenceExportHeader, results: Sto
     ['finished', header.finishedAt],
     [],
     ['intervals'],
-    ['index (0 = youngest)', 'median years', 'low95', 'high95'],
-    ...data.intervals.map((i) => [i.index, i.medianYears, i.low95, i.high95]),
+    ['index (0 = youngest)', 'median years', 'low95', 'high95', 'share of draws'],
+    ...data.intervals.map((i) => [i.index, i.medianYears, i.low95, i.high95, i.shareOfDraws ?? 1]),
+    ...(data.recordEvents ? [['events in a draw\'s record', data.recordEvents.median, data.recordEvents.low95, data.recordEvents.high95]] : []),
     [],
     ['statistics'],
     ['quantity', 'unit', 'median', 'low95', 'high95'],
@@ -174,8 +190,49 @@ export function recurrenceExportCsv(header: RecurrenceExportHeader, results: Sto
     ['probabilities'],
     ['model', 'window (years)', 'median', 'low95 (dating and parameters)', 'high95 (dating and parameters)', 'dating-only low95', 'dating-only high95'],
     ...data.probabilities.map((p) => [probabilityLabel(p.model), p.windowYears, p.median, p.low95, p.high95, p.datingOnlyLow95, p.datingOnlyHigh95]),
+    ...(eventTable ? [[], ...eventTableCsvRows(eventTable)] : []),
   ];
   return toCsv(rows);
+}
+
+/** The event table as CSV rows: the rule, then one row per regional event, young to old. */
+export function eventTableCsvRows(table: StoredEventTable): CsvValue[][] {
+  return [
+    ['event table'],
+    ['segment', table.segmentName, 'hypothesis', table.hypothesisName, 'hypothesis version', table.hypothesisVersion],
+    ['minimum span share', table.rule.minimumSpanShare, 'untied events', table.rule.includeUntied ? 'in' : 'out'],
+    ['quality weights (1-4)', table.rule.qualityWeights?.join(' ') ?? 'none', 'tie confidence weights (1-4)', table.rule.confidenceWeights?.join(' ') ?? 'none'],
+    ['counted events', table.countedEvents, 'expected events (sum of probabilities)', table.expectedEvents],
+    ['note', table.note],
+    [
+      'regional event id',
+      'members',
+      'segments',
+      'span share',
+      'through-going',
+      'untied',
+      'tie confidences',
+      'qualities',
+      'median (cal BP)',
+      'counted',
+      'inclusion probability',
+      'reason',
+    ],
+    ...table.rows.map((row) => [
+      row.regionalEventId,
+      row.label,
+      row.segmentNames.join(' '),
+      row.spanShare,
+      row.throughGoing ? 'yes' : 'no',
+      row.untied ? 'yes' : 'no',
+      row.tieConfidences.join(' '),
+      row.qualities.join(' '),
+      row.medianCalBp,
+      row.counted ? 'yes' : 'no',
+      row.inclusionProbability,
+      row.reason,
+    ]),
+  ];
 }
 
 function probabilityRow(model: string, w: StoredWindowProbability): RecurrenceExport['probabilities'][number] {

@@ -8,6 +8,7 @@ import {
   checkHypothesis,
   CorrelationInputError,
   type OrderConflict,
+  type RegionalEventCheck,
   type SiteEvent,
   type TectonicSetting,
   type Tie,
@@ -25,6 +26,12 @@ export interface SegmentEventsInput {
   readonly tectonicSetting: TectonicSetting;
   /** Sites lying in the segment. */
   readonly segmentSiteIds: ReadonlySet<string>;
+  /**
+   * The counting rule's inclusion probability of each regional event by id (see
+   * chronology/recurrence/event-counting.ts); events absent or at 0 are left out. Absent: every
+   * regional event recorded on the segment, with probability 1.
+   */
+  readonly inclusion?: ReadonlyMap<string, number>;
 }
 
 export interface SegmentRegionalEvent {
@@ -33,6 +40,8 @@ export interface SegmentRegionalEvent {
   readonly siteIds: readonly string[];
   readonly medianCalBp: number;
   readonly density: CalendarDensity;
+  /** Probability that the event is in a draw's record (1 unless the rule weights it). */
+  readonly inclusionProbability: number;
 }
 
 export interface SegmentEvents {
@@ -50,17 +59,9 @@ export interface SegmentEvents {
  * segment keeps the ages of all its members in its combined density. Throws
  * `RecurrenceInputError` when a regional event has no combined age or there are too few events.
  */
-export function segmentRegionalEvents(input: SegmentEventsInput): SegmentEvents {
-  const known = new Set(input.events.map((event) => event.id));
-  const ties = input.ties.filter((tie) => known.has(tie.eventAId) && known.has(tie.eventBId));
-  let check;
-  try {
-    check = checkHypothesis({ events: input.events, ties, tectonicSetting: input.tectonicSetting });
-  } catch (error) {
-    if (error instanceof CorrelationInputError) throw new RecurrenceInputError('hypothesisId', error.message);
-    throw error;
-  }
-  const chosen = check.regionalEvents.filter((event) => event.siteIds.some((siteId) => input.segmentSiteIds.has(siteId)));
+export function segmentRegionalEvents(input: SegmentEventsInput, onSegment: HypothesisOnSegment = hypothesisOnSegment(input)): SegmentEvents {
+  const inclusion = input.inclusion;
+  const chosen = onSegment.candidates.filter((event) => !inclusion || (inclusion.get(event.id) ?? 0) > 0);
   const regionalEvents = chosen.map((event): SegmentRegionalEvent => {
     if (!event.combinedDensity || !event.combined) {
       throw new RecurrenceInputError(
@@ -74,19 +75,58 @@ export function segmentRegionalEvents(input: SegmentEventsInput): SegmentEvents 
       siteIds: event.siteIds,
       medianCalBp: event.combined.medianCalBp,
       density: event.combinedDensity,
+      inclusionProbability: inclusion ? (inclusion.get(event.id) as number) : 1,
     };
   });
   if (regionalEvents.length < MINIMUM_EVENTS) {
     throw new RecurrenceInputError(
-      'segmentId',
-      `The segment has ${regionalEvents.length} dated regional events under this hypothesis; at least ${MINIMUM_EVENTS} are needed (2 closed intervals). Run the sites' age models first.`,
+      inclusion ? 'countingRule' : 'segmentId',
+      `The segment has ${regionalEvents.length} dated regional events ${inclusion ? 'counted by the rule ' : ''}under this hypothesis; at least ${MINIMUM_EVENTS} are needed (2 closed intervals). ` +
+        (inclusion ? "Count more events (untied events in, a lower span share) or run the sites' age models first." : "Run the sites' age models first."),
+    );
+  }
+  const likely = regionalEvents.filter((event) => event.inclusionProbability >= 0.5).length;
+  if (likely < MINIMUM_EVENTS) {
+    throw new RecurrenceInputError(
+      'countingRule',
+      `Only ${likely} counted events have an inclusion probability of at least 0.5; at least ${MINIMUM_EVENTS} are needed for the point fits. Raise the weights.`,
     );
   }
   const chosenIds = new Set(chosen.map((event) => event.id));
   return {
     regionalEvents,
+    skippedTieIds: onSegment.skippedTieIds,
+    orderConflictCount: onSegment.orderConflicts.filter((conflict) => conflictTouches(conflict, chosenIds)).length,
+  };
+}
+
+/** A hypothesis's regional events recorded at the segment's sites, checked, before any counting rule. */
+export interface HypothesisOnSegment {
+  /** Young to old by combined median. */
+  readonly candidates: readonly RegionalEventCheck[];
+  readonly skippedTieIds: readonly string[];
+  readonly orderConflicts: readonly OrderConflict[];
+}
+
+/**
+ * Checks the whole project's events and ties together, so an earthquake that also ruptured a
+ * neighbouring segment keeps the ages of all its members, and keeps the regional events with a
+ * member at a site of the segment.
+ */
+export function hypothesisOnSegment(input: SegmentEventsInput): HypothesisOnSegment {
+  const known = new Set(input.events.map((event) => event.id));
+  const ties = input.ties.filter((tie) => known.has(tie.eventAId) && known.has(tie.eventBId));
+  let check;
+  try {
+    check = checkHypothesis({ events: input.events, ties, tectonicSetting: input.tectonicSetting });
+  } catch (error) {
+    if (error instanceof CorrelationInputError) throw new RecurrenceInputError('hypothesisId', error.message);
+    throw error;
+  }
+  return {
+    candidates: check.regionalEvents.filter((event) => event.siteIds.some((siteId) => input.segmentSiteIds.has(siteId))),
     skippedTieIds: input.ties.filter((tie) => !ties.includes(tie)).map((tie) => tie.id),
-    orderConflictCount: check.orderConflicts.filter((conflict) => conflictTouches(conflict, chosenIds)).length,
+    orderConflicts: check.orderConflicts,
   };
 }
 

@@ -22,7 +22,12 @@ import {
 /** Where an analysis' event ages come from. */
 export type RecurrenceSource =
   /** Regional events of a hypothesis, young to old, sampled in that order. */
-  | { readonly kind: 'ordered-densities'; readonly densities: readonly CalendarDensity[] }
+  | {
+      readonly kind: 'ordered-densities';
+      readonly densities: readonly CalendarDensity[];
+      /** Each event's probability of being in a draw's record, young to old like `densities`; absent: all 1. */
+      readonly inclusionProbabilities?: readonly number[];
+    }
   /** A site age model's joint draws, row-major drawCount x eventCount. */
   | { readonly kind: 'joint-draws'; readonly eventCount: number; readonly drawCount: number; readonly draws: ArrayLike<number> };
 
@@ -61,6 +66,12 @@ export interface StoredIntervalEstimate {
   medianYears: number;
   low95: number;
   high95: number;
+  /**
+   * Share of draws holding the interval: with inclusion weights an interval ends at event index
+   * and starts at the next older event kept in the draw, and exists only in draws keeping event
+   * index with an older one. Absent (1) without weights.
+   */
+  shareOfDraws?: number;
 }
 
 export interface StoredModelResult {
@@ -127,6 +138,8 @@ export interface StoredRecurrenceResults {
   modelAveraged?: StoredWindowProbability[];
   /** How the parameters were drawn, with the priors (absent before parameter uncertainty). */
   parameterNote?: string;
+  /** Events in a draw's record when inclusion weights make it vary; absent otherwise. */
+  recordEvents?: StoredRange;
   preferredModel: RenewalModel;
   modelComparisonNote: string;
   curves: StoredModelCurves[];
@@ -180,7 +193,13 @@ export function computeRecurrence(
   };
   const summary =
     source.kind === 'ordered-densities'
-      ? simulateRecurrence(source.densities, { ...options, drawCount: settings.drawCount, seed: settings.seed })
+      ? simulateRecurrence(source.densities, {
+          ...options,
+          drawCount: settings.drawCount,
+          seed: settings.seed,
+          // The engine reads draws oldest first; the densities run young to old.
+          ...(source.inclusionProbabilities ? { inclusionProbabilities: [...source.inclusionProbabilities].reverse(), inclusionSeed: settings.seed + 1 } : {}),
+        })
       : summariseRecurrence(selectJointDraws(source, settings.drawCount, settings.seed), options);
   return storeSummary(summary, settings.curvePoints ?? 200);
 }
@@ -229,13 +248,24 @@ export function storeSummary(summary: RecurrenceSummary, curvePoints = 200): Sto
     drawCount: summary.drawCount,
     eventCount: summary.eventCount,
     forecastStartCalBp: summary.forecastStartCalBp,
-    eventAgesCalBp: [...median.eventAgesCalBp],
-    lastEventMedianCalBp: median.eventAgesCalBp[median.eventAgesCalBp.length - 1],
+    eventAgesCalBp: [...summary.eventMedianAgesCalBp],
+    lastEventMedianCalBp: summary.eventMedianAgesCalBp[summary.eventMedianAgesCalBp.length - 1],
     openInterval: range(summary.openInterval),
     // The engine counts intervals oldest first; the API counts from the youngest.
     intervals: summary.intervals
-      .map((interval, i) => ({ index: intervalCount - 1 - i, medianYears: interval.median, low95: interval.low95, high95: interval.high95 }))
+      .map((interval, i): StoredIntervalEstimate => ({
+        index: intervalCount - 1 - i,
+        medianYears: interval.median,
+        low95: interval.low95,
+        high95: interval.high95,
+        ...(summary.intervalShares[i] < 1 ? { shareOfDraws: summary.intervalShares[i] } : {}),
+      }))
+      // An interval no draw held has no range to show.
+      .filter((interval) => interval.shareOfDraws !== 0)
       .reverse(),
+    ...(summary.recordEvents.low95 < summary.recordEvents.high95 || summary.recordEvents.median < summary.eventCount
+      ? { recordEvents: range(summary.recordEvents) }
+      : {}),
     meanRecurrence: range(summary.meanRecurrence),
     medianRecurrence: range(summary.medianRecurrence),
     sdRecurrence: range(summary.sdRecurrence),

@@ -62,7 +62,11 @@ export class RecurrenceJob implements RunKind<RecurrenceTable, RecurrenceCompute
   private async sourceOf(analysis: RecurrenceAnalysisRow): Promise<RecurrenceSource> {
     const snapshot = analysis.inputSnapshot as RecurrenceInputSnapshot;
     if (snapshot.kind === 'segment') {
-      return { kind: 'ordered-densities', densities: snapshot.regionalEvents.map((event) => loadDensity(event.density)) };
+      return {
+        kind: 'ordered-densities',
+        densities: snapshot.regionalEvents.map((event) => loadDensity(event.density)),
+        inclusionProbabilities: snapshot.regionalEvents.map((event) => event.inclusionProbability ?? 1),
+      };
     }
     const run = await this.ageModelRuns.findById(snapshot.ageModelRunId);
     const eventDraws = (run?.results as StoredAgeModelResults | null | undefined)?.eventDraws;

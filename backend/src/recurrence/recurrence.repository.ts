@@ -17,6 +17,10 @@ export interface ProjectEventRow {
   alongStrikeKm: number;
   /** Position of the unit below the horizon, counted from the base (larger is younger). */
   unitBelowPosition: number;
+  /** Horizon quality, 1 (certain) to 4 (possible). */
+  quality: number;
+  /** The segment the site lies in, if any. */
+  segmentId: string | null;
 }
 
 /**
@@ -68,9 +72,9 @@ export class RecurrenceRepository {
     return row;
   }
 
-  tiesOf(hypothesisId: string, executor: Executor = this.database.db): Promise<{ id: string; eventAId: string; eventBId: string }[]> {
+  tiesOf(hypothesisId: string, executor: Executor = this.database.db): Promise<{ id: string; eventAId: string; eventBId: string; confidence: number }[]> {
     return executor
-      .select({ id: ties.id, eventAId: ties.eventAId, eventBId: ties.eventBId })
+      .select({ id: ties.id, eventAId: ties.eventAId, eventBId: ties.eventBId, confidence: ties.confidence })
       .from(ties)
       .where(eq(ties.hypothesisId, hypothesisId));
   }
@@ -95,6 +99,8 @@ export class RecurrenceRepository {
         siteName: sites.name,
         alongStrikeKm: sites.alongStrikeKm,
         unitBelowPosition: units.position,
+        quality: eventHorizons.quality,
+        segmentId: sites.segmentId,
       })
       .from(eventHorizons)
       .innerJoin(sites, eq(sites.id, eventHorizons.siteId))

@@ -6,6 +6,7 @@ import { SegmentRow } from '../segments/segments.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
 import { StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
+import { SegmentEventTableInput } from './dto/segment-event-table.input';
 import { HypothesisRow, RecurrenceAnalysisRow, ReleaseRow } from './recurrence.repository';
 import { RecurrenceAnalysisView, RecurrenceService } from './recurrence.service';
 
@@ -26,6 +27,16 @@ export class RecurrenceResolver {
   @Query('renewalForecast')
   renewalForecast(@Args('input') input: RenewalForecastInput) {
     return this.recurrence.renewalForecast(input);
+  }
+
+  @Query('segmentEventTable')
+  segmentEventTable(@CurrentUser() user: AuthUser, @Args('input') input: SegmentEventTableInput) {
+    return this.recurrence.eventTable(user, input);
+  }
+
+  @Query('recurrenceComparison')
+  comparison(@CurrentUser() user: AuthUser, @Args('analysisAId') analysisAId: string, @Args('analysisBId') analysisBId: string) {
+    return this.recurrence.comparison(user, analysisAId, analysisBId);
   }
 
   @Query('recurrenceAnalysis')

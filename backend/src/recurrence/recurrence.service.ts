@@ -30,7 +30,10 @@ import { RecurrenceJob } from './recurrence.job';
 import { DEFAULT_DRAWS, DEFAULT_WINDOWS_YEARS, StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { RECURRENCE_CAUTION } from './recurrence-caution';
 import { RecurrenceExport, recurrenceExport, recurrenceExportCsv, RecurrenceExportHeader } from './recurrence-export';
-import { checkForecastStart, MINIMUM_EVENTS, segmentRegionalEvents, youngestDrawnAge } from './recurrence-inputs';
+import { checkForecastStart, hypothesisOnSegment, MINIMUM_EVENTS, segmentRegionalEvents, youngestDrawnAge } from './recurrence-inputs';
+import { compareAnalyses, ComparedSide, RecurrenceComparison, recurrenceComparisonCsv } from './recurrence-comparison';
+import { CountingRuleInput, countingRuleOf, inclusionOf, segmentEventTable, StoredEventTable } from './segment-event-table';
+import { SegmentEventTableInput } from './dto/segment-event-table.input';
 import { StoredRecurrenceResults } from './recurrence-results';
 import { HypothesisRow, RecurrenceAnalysisRow, RecurrenceRepository, ReleaseRow } from './recurrence.repository';
 
@@ -51,15 +54,27 @@ export type RecurrenceInputSnapshot =
       hypothesisVersion: number;
       ageModelRunIds: string[];
       /** Young to old, each with the combined density the draws come from. */
-      regionalEvents: { id: string; memberIds: string[]; siteIds: string[]; medianCalBp: number; density: { startCalBp: number; probabilities: number[] } }[];
+      regionalEvents: {
+        id: string;
+        memberIds: string[];
+        siteIds: string[];
+        medianCalBp: number;
+        density: { startCalBp: number; probabilities: number[] };
+        /** Probability of being in a draw's record under the counting rule; absent (1) before the rule. */
+        inclusionProbability?: number;
+      }[];
       skippedTieIds: string[];
       orderConflictCount: number;
+      /** The event table the analysis used, with its rule; absent in analyses stored before it. */
+      eventTable?: StoredEventTable;
     };
 
 /** The analysis as the API serves it: the row, its stored results spread in, and the caution. */
 export type RecurrenceAnalysisView = RecurrenceAnalysisRow &
   Partial<StoredRecurrenceResults> &
-  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { modelAveraged: NonNullable<StoredRecurrenceResults['modelAveraged']> } & { caution: string };
+  Pick<StoredRecurrenceResults, 'intervals' | 'poisson' | 'models' | 'curves' | 'histogram'> & { modelAveraged: NonNullable<StoredRecurrenceResults['modelAveraged']> } & { caution: string } & {
+    eventTable: StoredEventTable | null;
+  };
 
 const NO_RESULTS = { intervals: [], poisson: [], models: [], modelAveraged: [], curves: [], histogram: [] };
 
@@ -242,7 +257,7 @@ export class RecurrenceService {
 
   view(row: RecurrenceAnalysisRow): RecurrenceAnalysisView {
     const results = row.results as StoredRecurrenceResults | null;
-    return { ...row, ...NO_RESULTS, ...(results ?? {}), caution: RECURRENCE_CAUTION };
+    return { ...row, ...NO_RESULTS, ...(results ?? {}), caution: RECURRENCE_CAUTION, eventTable: eventTableOf(row) };
   }
 
   /** The export of a finished analysis (CONFLICT while it has no results). */
@@ -266,7 +281,40 @@ export class RecurrenceService {
       createdAt: analysis.createdAt.toISOString(),
       finishedAt: analysis.finishedAt?.toISOString() ?? null,
     };
-    return { json: recurrenceExport(header, results), csv: recurrenceExportCsv(header, results) };
+    const table = eventTableOf(analysis);
+    return { json: recurrenceExport(header, results, table), csv: recurrenceExportCsv(header, results, table) };
+  }
+
+  /** Two finished analyses side by side (each read with the caller's access), for the screen and the exports. */
+  async comparison(user: AuthUser, idA: string, idB: string): Promise<RecurrenceComparison & { analysisA: RecurrenceAnalysisView; analysisB: RecurrenceAnalysisView }> {
+    if (idA === idB) throw badInput('analysisBId', 'choose two different analyses to compare');
+    const [rowA, rowB] = [await this.get(user, idA), await this.get(user, idB)];
+    const side = async (row: RecurrenceAnalysisRow, field: string): Promise<ComparedSide> => {
+      const results = row.results as StoredRecurrenceResults | null;
+      if (row.status !== 'SUCCEEDED' || !results) throw badInput(field, `analysis ${row.id} has no results to compare (${row.status})`);
+      const hypothesis = row.hypothesisId ? await this.analyses.findHypothesis(row.hypothesisId) : undefined;
+      return {
+        id: row.id,
+        segmentId: row.segmentId,
+        siteId: row.siteId,
+        hypothesisId: row.hypothesisId,
+        hypothesisName: hypothesis?.name ?? null,
+        hypothesisVersion: row.hypothesisVersion,
+        seed: row.seed,
+        forecastStartYear: row.forecastStartYear,
+        windowsYears: row.windowsYears,
+        draws: row.draws,
+        results,
+        eventTable: eventTableOf(row),
+      };
+    };
+    const comparison = compareAnalyses(await side(rowA, 'analysisAId'), await side(rowB, 'analysisBId'));
+    return { ...comparison, analysisA: this.view(rowA), analysisB: this.view(rowB) };
+  }
+
+  async comparisonExport(user: AuthUser, idA: string, idB: string): Promise<{ json: RecurrenceComparison; csv: string }> {
+    const { analysisA: _a, analysisB: _b, ...json } = await this.comparison(user, idA, idB);
+    return { json, csv: recurrenceComparisonCsv(json) };
   }
 
   segmentOf(analysis: RecurrenceAnalysisRow): Promise<SegmentRow | undefined> {
@@ -290,6 +338,9 @@ export class RecurrenceService {
     const site = await this.sites.get(user, siteId, Permission.RecurrenceRun);
     if (input.hypothesisId) {
       throw badInput('hypothesisId', 'a site analysis uses the site’s own age model; leave hypothesisId out or give a segment');
+    }
+    if (input.countingRule) {
+      throw badInput('countingRule', 'a site analysis counts every event of the site’s age model; a counting rule applies to a segment');
     }
     const run = await this.ageModelRuns.latestSucceededForSite(site.id);
     const eventDraws = (run?.results as StoredAgeModelResults | null | undefined)?.eventDraws;
@@ -316,29 +367,13 @@ export class RecurrenceService {
    * sites, from each member's newest successful age model posterior.
    */
   private async prepareSegment(user: AuthUser, segmentId: string, input: StartRecurrenceAnalysisInput, forecastStartYear: number) {
-    const segment = await this.segments.get(user, segmentId, Permission.RecurrenceRun);
-    const hypothesis = await this.chooseHypothesis(segment.projectId, input.hypothesisId ?? null);
-    const [projectEvents, segmentSites, ties, tectonicSetting] = await Promise.all([
-      this.analyses.eventsOfProject(segment.projectId),
-      this.sites.listForSegment(segment.id),
-      this.analyses.tiesOf(hypothesis.id),
-      this.analyses.tectonicSetting(segment.projectId),
-    ]);
-    const posteriors = await this.latestRuns.posteriorsForSites([...new Set(projectEvents.map((e) => e.siteId))]);
-    const events: SiteEvent[] = projectEvents
-      .filter((event) => posteriors.has(event.id))
-      .map((event) => ({
-        id: event.id,
-        name: event.name,
-        siteId: event.siteId,
-        siteName: event.siteName,
-        alongStrikeKm: event.alongStrikeKm,
-        orderIndexFromBase: event.unitBelowPosition,
-        posterior: posteriors.get(event.id)!.density,
-      }));
-    const chosen = refuseInput(() =>
-      segmentRegionalEvents({ events, ties, tectonicSetting, segmentSiteIds: new Set(segmentSites.map((site) => site.id)) }),
-    );
+    const { segment, hypothesis, eventsInput, onSegment, table, posteriors } = await this.segmentTable(user, {
+      segmentId,
+      hypothesisId: input.hypothesisId ?? null,
+      countingRule: input.countingRule ?? null,
+      permission: Permission.RecurrenceRun,
+    });
+    const chosen = refuseInput(() => segmentRegionalEvents({ ...eventsInput, inclusion: inclusionOf(table) }, onSegment));
     refuseInput(() => checkForecastStart(chosen.regionalEvents[0].density.startCalBp - 0.5, forecastStartYear));
     const memberIds = chosen.regionalEvents.flatMap((event) => event.memberIds);
     const ageModelRunIds = [...new Set(memberIds.map((id) => posteriors.get(id)!.runId))].sort();
@@ -354,15 +389,74 @@ export class RecurrenceService {
         siteIds: [...event.siteIds],
         medianCalBp: event.medianCalBp,
         density: storeDensity(event.density),
+        inclusionProbability: event.inclusionProbability,
       })),
       skippedTieIds: [...chosen.skippedTieIds],
       orderConflictCount: chosen.orderConflictCount,
+      eventTable: table,
     };
     const warnings = [
       chosen.skippedTieIds.length > 0 ? `${chosen.skippedTieIds.length} ties were left out because an event has no age model yet` : null,
       chosen.orderConflictCount > 0 ? `the hypothesis has ${chosen.orderConflictCount} order conflicts among these events` : null,
     ].filter((w): w is string => w !== null);
     return { projectId: segment.projectId, snapshot, message: warnings.length > 0 ? `Queued; note: ${warnings.join('; ')}.` : null };
+  }
+
+  /** The segment's event table under a hypothesis (the preferred one by default) and a counting rule. */
+  async eventTable(user: AuthUser, input: SegmentEventTableInput): Promise<StoredEventTable> {
+    const { table } = await this.segmentTable(user, {
+      segmentId: input.segmentId,
+      hypothesisId: input.hypothesisId ?? null,
+      countingRule: input.countingRule ?? null,
+      permission: Permission.ProjectRead,
+    });
+    return table;
+  }
+
+  /**
+   * Reads a segment's events under a hypothesis, checks the hypothesis on the whole project and
+   * builds the event table under the counting rule (BAD_USER_INPUT naming the rule's field).
+   */
+  private async segmentTable(
+    user: AuthUser,
+    request: { segmentId: string; hypothesisId: string | null; countingRule: CountingRuleInput | null; permission: Permission },
+  ) {
+    const segment = await this.segments.get(user, request.segmentId, request.permission);
+    const hypothesis = await this.chooseHypothesis(segment.projectId, request.hypothesisId);
+    const [projectEvents, segmentSites, ties, tectonicSetting, projectSegments] = await Promise.all([
+      this.analyses.eventsOfProject(segment.projectId),
+      this.sites.listForSegment(segment.id),
+      this.analyses.tiesOf(hypothesis.id),
+      this.analyses.tectonicSetting(segment.projectId),
+      this.segments.listForProject(segment.projectId),
+    ]);
+    const posteriors = await this.latestRuns.posteriorsForSites([...new Set(projectEvents.map((e) => e.siteId))]);
+    const events: SiteEvent[] = projectEvents
+      .filter((event) => posteriors.has(event.id))
+      .map((event) => ({
+        id: event.id,
+        name: event.name,
+        siteId: event.siteId,
+        siteName: event.siteName,
+        alongStrikeKm: event.alongStrikeKm,
+        orderIndexFromBase: event.unitBelowPosition,
+        posterior: posteriors.get(event.id)!.density,
+      }));
+    const eventsInput = { events, ties, tectonicSetting, segmentSiteIds: new Set(segmentSites.map((site) => site.id)) };
+    const onSegment = refuseInput(() => hypothesisOnSegment(eventsInput));
+    const table = refuseInput(() =>
+      segmentEventTable({
+        segment,
+        segmentSiteKm: segmentSites.map((site) => site.alongStrikeKm),
+        hypothesis,
+        candidates: onSegment.candidates,
+        events: new Map(projectEvents.map((event) => [event.id, event])),
+        ties,
+        segmentNames: new Map(projectSegments.map((row) => [row.id, row.name])),
+        rule: countingRuleOf(request.countingRule),
+      }),
+    );
+    return { segment, hypothesis, eventsInput, onSegment, table, posteriors };
   }
 
   private async chooseHypothesis(projectId: string, hypothesisId: string | null): Promise<HypothesisRow> {
@@ -375,6 +469,12 @@ export class RecurrenceService {
     if (!preferred) throw badInput('hypothesisId', 'the project has no preferred hypothesis; choose one');
     return preferred;
   }
+}
+
+/** The event table a segment analysis stored with its inputs; null for a site analysis or an older one. */
+export function eventTableOf(row: Pick<RecurrenceAnalysisRow, 'inputSnapshot'>): StoredEventTable | null {
+  const snapshot = row.inputSnapshot as RecurrenceInputSnapshot | null;
+  return snapshot?.kind === 'segment' ? (snapshot.eventTable ?? null) : null;
 }
 
 /** Runs a pure step, turning its input errors into BAD_USER_INPUT. */

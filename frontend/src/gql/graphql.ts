@@ -206,6 +206,52 @@ export type ChiSquareTest = {
   t: Scalars['Float']['output'];
 };
 
+/** A regional event in either analysis's table, matched by its member site events. */
+export type ComparedEventRow = {
+  __typename?: 'ComparedEventRow';
+  /** Null when analysis A's table does not have the event. */
+  a?: Maybe<ComparedEventSide>;
+  b?: Maybe<ComparedEventSide>;
+  difference: EventDifference;
+  label: Scalars['String']['output'];
+  regionalEventId: Scalars['ID']['output'];
+};
+
+/** One side of a compared event row. */
+export type ComparedEventSide = {
+  __typename?: 'ComparedEventSide';
+  counted: Scalars['Boolean']['output'];
+  inclusionProbability: Scalars['Float']['output'];
+  medianCalBp?: Maybe<Scalars['Float']['output']>;
+  reason: Scalars['String']['output'];
+  spanShare: Scalars['Float']['output'];
+  throughGoing: Scalars['Boolean']['output'];
+  untied: Scalars['Boolean']['output'];
+};
+
+export type ComparedProbability = {
+  __typename?: 'ComparedProbability';
+  a: WindowProbability;
+  b: WindowProbability;
+  medianDifference: Scalars['Float']['output'];
+  /** A renewal model's name, or MODEL_AVERAGED. */
+  model: Scalars['String']['output'];
+  rangesOverlap: Scalars['Boolean']['output'];
+  windowYears: Scalars['Float']['output'];
+};
+
+export type ComparedStatistic = {
+  __typename?: 'ComparedStatistic';
+  a: RangeEstimate;
+  b: RangeEstimate;
+  /** B's median minus A's. */
+  medianDifference: Scalars['Float']['output'];
+  quantity: Scalars['String']['output'];
+  /** Whether the 95 % ranges overlap: a difference inside overlapping ranges is not resolved by the data. */
+  rangesOverlap: Scalars['Boolean']['output'];
+  unit: Scalars['String']['output'];
+};
+
 /** A physical-property log of a core (magnetic susceptibility, density, CT number, ...). */
 export type CoreLog = {
   __typename?: 'CoreLog';
@@ -245,6 +291,31 @@ export type CoreLogTrace = {
   unit: Scalars['String']['output'];
   /** Readings at those depths (block means), in the channel's unit. */
   values: Array<Scalars['Float']['output']>;
+};
+
+/** The counting rule a table was made with, defaults filled in. */
+export type CountingRule = {
+  __typename?: 'CountingRule';
+  confidenceWeights?: Maybe<Array<Scalars['Float']['output']>>;
+  includeUntied: Scalars['Boolean']['output'];
+  minimumSpanShare: Scalars['Float']['output'];
+  qualityWeights?: Maybe<Array<Scalars['Float']['output']>>;
+};
+
+/**
+ * Which of a segment's regional events count in its earthquake record. Every field is optional; the
+ * default counts every tied regional event recorded at a site of the segment and leaves untied
+ * single-site events out.
+ */
+export type CountingRuleInput = {
+  /** Inclusion probability (0-1) for tie confidence 1, 2, 3 and 4 (the event's weakest tie); omitted: no confidence weighting. */
+  confidenceWeights?: InputMaybe<Array<Scalars['Float']['input']>>;
+  /** Whether untied single-site events count as earthquakes of their own (default false); the span share does not apply to them. */
+  includeUntied?: InputMaybe<Scalars['Boolean']['input']>;
+  /** 0-1: a tied event counts only when its member sites span at least this share of the segment's along-strike extent (0: every event, partial or through-going). */
+  minimumSpanShare?: InputMaybe<Scalars['Float']['input']>;
+  /** Inclusion probability (0-1) for horizon quality 1, 2, 3 and 4 (the event's best member on the segment); omitted: no quality weighting. */
+  qualityWeights?: InputMaybe<Array<Scalars['Float']['input']>>;
 };
 
 export type CreateEventHorizonInput = {
@@ -401,6 +472,15 @@ export type DepthModel =
   /** Stratigraphic order only: events and samples lie in the order of their units, depth says nothing more (trenches, marshes, outcrops). */
   | 'ORDER_ONLY';
 
+/** How an event differs between two analyses' event tables. */
+export type EventDifference =
+  | 'COUNTED_IN_A_ONLY'
+  | 'COUNTED_IN_B_ONLY'
+  | 'INCLUSION_CHANGED'
+  | 'ONLY_IN_A'
+  | 'ONLY_IN_B'
+  | 'SAME';
+
 /** The contact at which an earthquake is interpreted: one site's event. */
 export type EventHorizon = {
   __typename?: 'EventHorizon';
@@ -552,6 +632,8 @@ export type IntervalEstimate = {
   index: Scalars['Int']['output'];
   low95: Scalars['Float']['output'];
   medianYears: Scalars['Float']['output'];
+  /** With inclusion weights: share of draws holding the interval (its younger event kept with an older one before it); null without weights. */
+  shareOfDraws?: Maybe<Scalars['Float']['output']>;
 };
 
 export type Invitation = {
@@ -1078,6 +1160,8 @@ export type Query = {
   /** Projects the caller is a member of. */
   projects: Array<Project>;
   recurrenceAnalysis: RecurrenceAnalysis;
+  /** Two finished analyses side by side (typically one setting on two hypotheses), with their differences. */
+  recurrenceComparison: RecurrenceComparison;
   refreshPlan: RefreshPlan;
   release: Release;
   releaseDiff: ReleaseDiff;
@@ -1086,6 +1170,8 @@ export type Query = {
   renewalProbability: RenewalProbability;
   sample: Sample;
   segment: Segment;
+  /** A segment's regional events under a hypothesis, and which count under a rule: what a segment analysis would use. */
+  segmentEventTable: SegmentEventTable;
   site: Site;
   /** Proposed ties between two cores' turbidites, top down, in order down both cores (any member). */
   tieSuggestions: Array<TieSuggestion>;
@@ -1149,6 +1235,12 @@ export type QueryRecurrenceAnalysisArgs = {
 };
 
 
+export type QueryRecurrenceComparisonArgs = {
+  analysisAId: Scalars['ID']['input'];
+  analysisBId: Scalars['ID']['input'];
+};
+
+
 export type QueryRefreshPlanArgs = {
   id: Scalars['ID']['input'];
 };
@@ -1182,6 +1274,11 @@ export type QuerySampleArgs = {
 
 export type QuerySegmentArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type QuerySegmentEventTableArgs = {
+  input: SegmentEventTableInput;
 };
 
 
@@ -1223,6 +1320,8 @@ export type RecurrenceAnalysis = {
   curves: Array<ModelCurves>;
   draws: Scalars['Int']['output'];
   eventCount?: Maybe<Scalars['Int']['output']>;
+  /** The event table a segment analysis used, with its rule and weights; null for a site analysis and analyses stored before it. */
+  eventTable?: Maybe<SegmentEventTable>;
   finishedAt?: Maybe<Scalars['DateTime']['output']>;
   forecastStartYear: Scalars['Int']['output'];
   histogram: Array<HistogramBin>;
@@ -1246,6 +1345,8 @@ export type RecurrenceAnalysis = {
   poisson: Array<WindowProbability>;
   progress: Scalars['Float']['output'];
   project: Project;
+  /** Events in a draw's record (median and 95 % range) when inclusion weights make it vary; null otherwise. */
+  recordEvents?: Maybe<RangeEstimate>;
   release?: Maybe<Release>;
   sdRecurrence?: Maybe<RangeEstimate>;
   seed: Scalars['Int']['output'];
@@ -1258,6 +1359,20 @@ export type RecurrenceAnalysis = {
   staleReasons: Array<StaleReason>;
   status: JobStatus;
   windowsYears: Array<Scalars['Float']['output']>;
+};
+
+/** Two finished recurrence analyses side by side. */
+export type RecurrenceComparison = {
+  __typename?: 'RecurrenceComparison';
+  analysisA: RecurrenceAnalysis;
+  analysisB: RecurrenceAnalysis;
+  caution: Scalars['String']['output'];
+  events: Array<ComparedEventRow>;
+  note: Scalars['String']['output'];
+  probabilities: Array<ComparedProbability>;
+  /** Settings in which the two differ; empty when one setting was run on two hypotheses. */
+  settingDifferences: Array<Scalars['String']['output']>;
+  statistics: Array<ComparedStatistic>;
 };
 
 /** What a recurrence analysis was computed from. */
@@ -1644,6 +1759,80 @@ export type Segment = {
   version: Scalars['Int']['output'];
 };
 
+/** A segment's event table under a hypothesis and a counting rule. */
+export type SegmentEventTable = {
+  __typename?: 'SegmentEventTable';
+  /** Events with an inclusion probability above 0. */
+  countedEvents: Scalars['Int']['output'];
+  /** Sum of the inclusion probabilities. */
+  expectedEvents: Scalars['Float']['output'];
+  hypothesisId: Scalars['ID']['output'];
+  hypothesisName: Scalars['String']['output'];
+  hypothesisVersion: Scalars['Int']['output'];
+  /** How the rule and any weights enter the analysis, and which way each choice biases the recurrence. */
+  note: Scalars['String']['output'];
+  /** Young to old. */
+  rows: Array<SegmentEventTableRow>;
+  rule: CountingRule;
+  segmentEndKm: Scalars['Float']['output'];
+  segmentId: Scalars['ID']['output'];
+  segmentName: Scalars['String']['output'];
+  segmentStartKm: Scalars['Float']['output'];
+  /** True when a counted event has a probability below 1, so the record varies between draws. */
+  weighted: Scalars['Boolean']['output'];
+};
+
+export type SegmentEventTableInput = {
+  countingRule?: InputMaybe<CountingRuleInput>;
+  /** Default: the project's preferred hypothesis. */
+  hypothesisId?: InputMaybe<Scalars['ID']['input']>;
+  segmentId: Scalars['ID']['input'];
+};
+
+/** One site event of a regional event in a segment's event table. */
+export type SegmentEventTableMember = {
+  __typename?: 'SegmentEventTableMember';
+  alongStrikeKm: Scalars['Float']['output'];
+  eventHorizonId: Scalars['ID']['output'];
+  eventName: Scalars['String']['output'];
+  /** 1 (certain) to 4 (possible). */
+  quality: Scalars['Int']['output'];
+  /** The segment the site lies in, if any. */
+  segmentId?: Maybe<Scalars['ID']['output']>;
+  segmentName?: Maybe<Scalars['String']['output']>;
+  siteId: Scalars['ID']['output'];
+  siteName: Scalars['String']['output'];
+};
+
+/** One regional event recorded on the segment, with whether and how it counts. */
+export type SegmentEventTableRow = {
+  __typename?: 'SegmentEventTableRow';
+  counted: Scalars['Boolean']['output'];
+  /** Probability that the event is in a Monte Carlo draw's record: 0 when not counted, 1 without weights. */
+  inclusionProbability: Scalars['Float']['output'];
+  /** Its members as site and event, along strike. */
+  label: Scalars['String']['output'];
+  /** Median of the combined age, cal BP; null when the members share no year. */
+  medianCalBp?: Maybe<Scalars['Float']['output']>;
+  members: Array<SegmentEventTableMember>;
+  /** Quality (1-4) of each member, in member order. */
+  qualities: Array<Scalars['Int']['output']>;
+  /** Why it is in or out, in words. */
+  reason: Scalars['String']['output'];
+  /** The regional event's stable id (its sorted member ids): the same event under any hypothesis has the same id. */
+  regionalEventId: Scalars['ID']['output'];
+  /** The segments its member sites lie in. */
+  segmentNames: Array<Scalars['String']['output']>;
+  /** Share (0-1) of the segment's along-strike extent spanned by the member sites (all of them, also beyond the segment). */
+  spanShare: Scalars['Float']['output'];
+  /** Recorded at (or beyond) both outermost sites of the segment: as through-going as the sites can show. */
+  throughGoing: Scalars['Boolean']['output'];
+  /** Confidence (1-4) of each tie inside the event. */
+  tieConfidences: Array<Scalars['Int']['output']>;
+  /** No member has any tie in the hypothesis. */
+  untied: Scalars['Boolean']['output'];
+};
+
 export type SetMemberRoleInput = {
   projectId: Scalars['ID']['input'];
   role: Role;
@@ -1766,6 +1955,8 @@ export type StartAgeModelRunInput = {
 };
 
 export type StartRecurrenceAnalysisInput = {
+  /** Which of the segment's events count (segment analyses only; refused for a site). */
+  countingRule?: InputMaybe<CountingRuleInput>;
   draws?: InputMaybe<Scalars['Int']['input']>;
   /** Start of the forecast windows, calendar year CE (default: this year). */
   forecastStartYear?: InputMaybe<Scalars['Int']['input']>;

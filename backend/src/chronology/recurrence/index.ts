@@ -48,3 +48,13 @@ export type { OrderedSequenceSampler } from './ordered-sequence';
 export { drawOrderedSequence, orderedSequenceSampler } from './ordered-sequence';
 export type { HistogramBin, HistogramOptions, RenewalCurve, RenewalCurves } from './curves';
 export { intervalHistogram, renewalCurves } from './curves';
+export type { CandidateEvent, CandidateMember, CountingRule, EventTableRow, RecordSize, SegmentExtent } from './event-counting';
+export {
+  applyCountingRule,
+  checkCountingRule,
+  DEFAULT_COUNTING_RULE,
+  GRADE_COUNT,
+  INCLUSION_METHOD_NOTE,
+  recordSize,
+  spanShare,
+} from './event-counting';

@@ -118,6 +118,15 @@ export interface RecurrenceSummary {
   readonly medianSequence: MedianSequenceFits;
   /** All draws' intervals pooled, for the interval histogram. */
   readonly intervalHistogram: readonly HistogramBin[];
+  /**
+   * With inclusion probabilities: for each interval of `intervals`, the share of draws in which
+   * its younger event was kept with an older one before it (1 for every interval without them).
+   */
+  readonly intervalShares: readonly number[];
+  /** Events in a draw's record (the event count in every draw without inclusion probabilities). */
+  readonly recordEvents: CredibleRange;
+  /** Median age of every event over the draws, cal BP, oldest first (kept or not). */
+  readonly eventMedianAgesCalBp: readonly number[];
 }
 
 export interface RecurrenceOptions {
@@ -146,7 +155,19 @@ export interface RecurrenceOptions {
   readonly parameterUncertainty?: boolean;
   /** Seed of the parameter draws (default 1). */
   readonly parameterSeed?: number;
+  /**
+   * Probability (0-1] that each event is in a draw's record, oldest first (the k-th oldest age of
+   * every draw; for ordered draws that is the k-th event). Absent: every event in every draw.
+   * Each draw keeps each event with its probability, independently, and is drawn again while it
+   * keeps fewer than three (see INCLUSION_METHOD_NOTE in event-counting.ts).
+   */
+  readonly inclusionProbabilities?: readonly number[];
+  /** Seed of the inclusion draws (default 1). */
+  readonly inclusionSeed?: number;
 }
+
+/** Most attempts at a record of at least three events before the weights are refused. */
+const INCLUSION_ATTEMPTS = 10_000;
 
 /**
  * Recurrence statistics from joint event-age draws. Each draw is the ages of the same events in
@@ -201,6 +222,12 @@ export function summariseRecurrence(
   const spreadRandom = new SeededRandom(options.spreadSeed ?? 1);
   const intervals = new Float64Array(intervalCount);
   const scratch = new Float64Array(intervalCount);
+  const inclusion = checkInclusion(options.inclusionProbabilities, eventCount);
+  const inclusionRandom = new SeededRandom(options.inclusionSeed ?? 1);
+  const kept = new Uint8Array(eventCount).fill(1);
+  const record = new Float64Array(eventCount);
+  const intervalPresent = new Float64Array(intervalCount);
+  const recordSizes = new Float64Array(drawCount);
   for (let d = 0; d < drawCount; d++) {
     if (d % progressInterval === 0) {
       if (options.shouldCancel?.()) throw new RecurrenceCancelledError(d);
@@ -208,27 +235,46 @@ export function summariseRecurrence(
     }
     readDraw(eventAgeDraws[d], d, eventCount, ages, spreadRandom);
     for (let k = 0; k < eventCount; k++) sortedAges[k][d] = ages[k];
-    for (let i = 0; i < intervalCount; i++) {
-      intervals[i] = ages[i] - ages[i + 1];
-      intervalDraws[i][d] = intervals[i];
+    if (inclusion) chooseRecord(inclusion, kept, inclusionRandom);
+    // The draw's record (the events kept, oldest first); interval i of `intervalDraws` ends at
+    // event i + 1 and starts at the next older event kept.
+    let size = 0;
+    for (let k = 0; k < eventCount; k++) {
+      if (kept[k] === 0) {
+        if (k > 0) intervalDraws[k - 1][d] = Number.NaN;
+        continue;
+      }
+      if (k > 0) {
+        if (size > 0) {
+          intervalDraws[k - 1][d] = record[size - 1] - ages[k];
+          intervalPresent[k - 1]++;
+        } else {
+          intervalDraws[k - 1][d] = Number.NaN;
+        }
+      }
+      record[size++] = ages[k];
     }
-    const stats = intervalStatistics(intervals, scratch);
+    recordSizes[d] = size;
+    const closedCount = size - 1;
+    for (let i = 0; i < closedCount; i++) intervals[i] = record[i] - record[i + 1];
+    const closed = closedCount === intervalCount ? intervals : intervals.subarray(0, closedCount);
+    const stats = intervalStatistics(closed, closedCount === intervalCount ? scratch : scratch.subarray(0, closedCount));
     meanDraws[d] = stats.mean;
     medianDraws[d] = stats.median;
     sdDraws[d] = stats.sd;
     cvDraws[d] = stats.sd / stats.mean;
-    const open = ages[eventCount - 1] - forecastStartCalBp;
+    const open = record[size - 1] - forecastStartCalBp;
     if (open < 0) {
       throw new RecurrenceInputError(
         'forecastStartYearCe',
-        `The forecast starts before the last event in draw ${d + 1} (last event ${formatAge(ages[eventCount - 1])} cal BP, forecast start ${formatAge(forecastStartCalBp)} cal BP).`,
+        `The forecast starts before the last event in draw ${d + 1} (last event ${formatAge(record[size - 1])} cal BP, forecast start ${formatAge(forecastStartCalBp)} cal BP).`,
       );
     }
     openDraws[d] = open;
     for (let w = 0; w < windows.length; w++) poissonDraws[w][d] = -Math.expm1(-windows[w] / stats.mean);
 
-    const record = prepareIntervals({ closedIntervals: intervals, openInterval: open });
-    const fits = fitAllModels(record, models);
+    const prepared = prepareIntervals({ closedIntervals: closed, openInterval: open });
+    const fits = fitAllModels(prepared, models);
     const anyAicc = fits.some((fit) => fit.aicc !== null);
     for (let m = 0; m < fits.length; m++) scores[m] = anyAicc ? (fits[m].aicc ?? Infinity) : fits[m].aic;
     akaikeWeights(scores, weights);
@@ -247,7 +293,7 @@ export function summariseRecurrence(
         averagedDatingOnly[w][d] += weights[m] * probability;
       }
       if (withParameters) {
-        const draw = posteriorSampler(fit.model, record)(parameterRandom);
+        const draw = posteriorSampler(fit.model, prepared)(parameterRandom);
         if (draw.approximate) approximate[m]++;
         muTotal[m][d] = draw.distribution.mu;
         alphaTotal[m][d] = draw.distribution.alpha;
@@ -265,13 +311,21 @@ export function summariseRecurrence(
   options.onProgress?.(drawCount, drawCount);
 
   const medianAges = sortedAges.map((values) => credibleRange(values).median);
+  // The point fits use the events kept in at least half the draws by their probabilities.
+  const medianRecordAges = inclusion ? medianAges.filter((_, k) => inclusion[k] >= 0.5) : medianAges;
+  if (medianRecordAges.length < 3) {
+    throw new RecurrenceInputError(
+      'inclusionProbabilities',
+      `Only ${medianRecordAges.length} events have an inclusion probability of at least 0.5; at least 3 are needed for the point fits.`,
+    );
+  }
   return {
     drawCount,
     eventCount,
     forecastStartYearCe: options.forecastStartYearCe,
     forecastStartCalBp,
     windowsYears: windows,
-    intervals: intervalDraws.map(credibleRange),
+    intervals: intervalDraws.map((values) => credibleRange(inclusion ? present(values) : values)),
     meanRecurrence: credibleRange(meanDraws),
     medianRecurrence: credibleRange(medianDraws),
     sdRecurrence: credibleRange(sdDraws),
@@ -303,8 +357,11 @@ export function summariseRecurrence(
       datingOnly: credibleRange(averagedDatingOnly[w]),
     })),
     parameterUncertainty: withParameters,
-    medianSequence: fitMedianSequence(medianAges, forecastStartCalBp, windows, models),
-    intervalHistogram: intervalHistogram(concatenate(intervalDraws)),
+    medianSequence: fitMedianSequence(medianRecordAges, forecastStartCalBp, windows, models),
+    intervalHistogram: intervalHistogram(concatenate(inclusion ? intervalDraws.map(present) : intervalDraws)),
+    intervalShares: Array.from(intervalPresent, (count) => count / drawCount),
+    recordEvents: credibleRange(recordSizes),
+    eventMedianAgesCalBp: medianAges,
   };
 }
 
@@ -328,6 +385,47 @@ export function simulateRecurrence(densities: readonly CalendarDensity[], option
   const draws: Float64Array[] = new Array(options.drawCount);
   for (let d = 0; d < options.drawCount; d++) draws[d] = sampler(rng);
   return summariseRecurrence(draws, options);
+}
+
+/** Checks inclusion probabilities (null when absent or all 1). */
+function checkInclusion(probabilities: readonly number[] | undefined, eventCount: number): Float64Array | null {
+  if (!probabilities) return null;
+  if (probabilities.length !== eventCount) {
+    throw new RecurrenceInputError(
+      'inclusionProbabilities',
+      `Give one inclusion probability for each of the ${eventCount} events; there are ${probabilities.length}.`,
+    );
+  }
+  for (const p of probabilities) {
+    if (!(p > 0 && p <= 1)) {
+      throw new RecurrenceInputError('inclusionProbabilities', `Inclusion probabilities must be above 0 and at most 1; one is ${p}.`);
+    }
+  }
+  return probabilities.every((p) => p === 1) ? null : Float64Array.from(probabilities);
+}
+
+/**
+ * Keeps each event with its probability, independently, drawing again until at least three are
+ * kept (rejection: the kept sets are then distributed as the independent draws conditioned on
+ * holding three or more).
+ */
+function chooseRecord(inclusion: Float64Array, kept: Uint8Array, random: SeededRandom): void {
+  for (let attempt = 0; attempt < INCLUSION_ATTEMPTS; attempt++) {
+    let size = 0;
+    for (let k = 0; k < inclusion.length; k++) {
+      kept[k] = inclusion[k] >= 1 || random.uniform() < inclusion[k] ? 1 : 0;
+      size += kept[k];
+    }
+    if (size >= 3) return;
+  }
+  throw new RecurrenceInputError(
+    'inclusionProbabilities',
+    `The inclusion probabilities leave fewer than three events in almost every draw (${INCLUSION_ATTEMPTS} attempts); raise the weights or count more events.`,
+  );
+}
+
+function present(values: Float64Array): Float64Array {
+  return values.filter((value) => !Number.isNaN(value));
 }
 
 /** Median and 2.5 % / 97.5 % quantiles (linear interpolation between order statistics, Hyndman & Fan 1996 type 7). */

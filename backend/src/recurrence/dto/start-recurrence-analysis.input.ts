@@ -1,4 +1,6 @@
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsNumber, IsOptional, IsUUID, Max, Min } from 'class-validator';
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsNumber, IsOptional, IsUUID, Max, Min, ValidateNested } from 'class-validator';
+import { CountingRuleInput } from './segment-event-table.input';
 
 /** Most draws one analysis may ask for: 20,000 keeps a run within a minute or so on one core. */
 export const MAX_DRAWS = 20_000;
@@ -49,4 +51,10 @@ export class StartRecurrenceAnalysisInput {
   @IsOptional()
   @IsUUID()
   releaseId?: string | null;
+
+  /** Which of the segment's events count (segment analyses only); default: every tied event, untied events out. */
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CountingRuleInput)
+  countingRule?: CountingRuleInput | null;
 }
