@@ -47,6 +47,15 @@ async function samplesOf(siteId: string): Promise<number> {
   return Number(row.n);
 }
 
+/** 2,000 radiocarbon rows over the three units of `newSite`. */
+function bulkSheet(prefix: string): string {
+  const lines = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve'];
+  for (let i = 1; i <= 2000; i++) {
+    lines.push(`${prefix}-${i},${1 + (i % 3)},${(2.9 - (i % 3) - 0.0004 * (i % 1000)).toFixed(4)},RADIOCARBON,DETRITAL_CHARCOAL,${600 + 4 * i},${20 + (i % 40)},INTCAL20`);
+  }
+  return lines.join('\n');
+}
+
 /** Lab codes are unique per project, so every sheet gets its own prefix. */
 function goodSheet(prefix: string, c14ErrorOfRow3 = '35'): string {
   return [
@@ -159,11 +168,7 @@ describe('importSamples', () => {
 
   it('commits a 2,000-row sheet in one go', async () => {
     const siteId = await newSite();
-    const lines = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve'];
-    for (let i = 1; i <= 2000; i++) {
-      lines.push(`BULK-${i},${1 + (i % 3)},${(2.9 - (i % 3) - 0.0004 * (i % 1000)).toFixed(4)},RADIOCARBON,DETRITAL_CHARCOAL,${600 + 4 * i},${20 + (i % 40)},INTCAL20`);
-    }
-    const result = await importSheet(clients.ADMIN, siteId, lines.join('\n'), true);
+    const result = await importSheet(clients.ADMIN, siteId, bulkSheet('BULK'), true);
     expect(result.errors).toEqual([]);
     expect(result).toMatchObject({ rowCount: 2000, committed: true });
     expect(result.preview).toHaveLength(2000);
@@ -172,5 +177,31 @@ describe('importSamples', () => {
       [siteId],
     );
     expect(stored).toEqual({ n: '2000', calibrated: '2000' });
+  });
+});
+
+describe('a sheet whose calibrations run past the budget', () => {
+  let strict: TestServer;
+
+  beforeAll(async () => {
+    // A 1 ms budget: 2,000 calibrations take longer on any machine (tens of milliseconds at least).
+    strict = await startTestServer({ IMPORT_CALIBRATION_BUDGET_MS: '1' });
+  });
+
+  afterAll(async () => {
+    await strict?.close();
+  });
+
+  it('is refused whole with a message naming the budget, and nothing is stored', async () => {
+    const siteId = await newSite();
+    const researcher = await new GraphqlClient(strict.url).signIn(fixture.emails.RESEARCHER, PASSWORD);
+    const error = await researcher.errorOf(IMPORT, { i: { siteId, csv: bulkSheet('SLOW'), commit: true } });
+    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'csv' });
+    expect(error.message).toMatch(/2,000 datings took longer than the import allows \(0\.001 s\); nothing was imported/);
+    expect(await samplesOf(siteId)).toBe(0);
+    // A sheet with nothing to calibrate (no method column) has nothing to time: its problems come back as usual.
+    const methodless = await researcher.ok<{ importSamples: ImportResult }>(IMPORT, { i: { siteId, csv: 'labCode,unit,depthM\nX-1,U9,1', commit: true } });
+    expect(methodless.importSamples.committed).toBe(false);
+    expect(methodless.importSamples.errors.map((e) => e.field)).toEqual(expect.arrayContaining(['method', 'material']));
   });
 });

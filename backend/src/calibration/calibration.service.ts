@@ -9,10 +9,11 @@ import { calibrateLuminescence } from '../chronology/calibration/calendar-ages';
 import { CurveFormatError } from '../chronology/calibration/curve';
 import { validateCurveText } from '../chronology/calibration/custom-curve';
 import { CalibrationInputError } from '../chronology/calibration/errors';
-import { calibrationForSample, SampleDating } from '../chronology/calibration/sample-calibration';
+import { calibrationForSample, CurveLookup, SampleDating } from '../chronology/calibration/sample-calibration';
 import { badInput, forbidden } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
 import { StoredCalibration } from '../database/schema';
+import { toStored } from './stored-calibration';
 import { CalibrationCurvesRepository } from './calibration-curves.repository';
 import { CalibrateInput, CalibrateLuminescenceInput, InstallCurveInput } from './dto/calibrate.input';
 import { CurveInfo, CurveRegistryService } from './curve-registry.service';
@@ -70,6 +71,11 @@ export class CalibrationService {
   /** A stored sample's calibration as the API shows it: the stored summaries plus the recomputed density. */
   async viewOfSample(stored: StoredCalibration, dating: SampleDating): Promise<CalibrationView> {
     return { ...stored, density: densityPoints(await this.densityOfSample(dating)) };
+  }
+
+  /** The built-in and installed curves by code (for computations handed to a thread). */
+  curveLookup(): Promise<CurveLookup> {
+    return this.registry.lookup();
   }
 
   /** The same, for bulk imports: returns the problem instead of throwing. */
@@ -155,18 +161,6 @@ function asUserInput<T>(compute: () => T): T {
     if (error instanceof CalibrationInputError) throw badInput(error.field, error.message);
     throw error;
   }
-}
-
-export function toStored(result: CalibrationResult, curve: string | null): StoredCalibration {
-  return {
-    curve,
-    medianCalBp: result.medianCalBp,
-    meanCalBp: result.meanCalBp,
-    sdYears: result.sdYears,
-    hpd68: result.hpd68,
-    hpd95: result.hpd95,
-    warnings: result.warnings,
-  };
 }
 
 /** Probabilities at or below this share of the (unit) mass are left out of a density as the API lists it. */

@@ -39,6 +39,11 @@ export interface AppConfig {
    * shared by every project on the server, so only an operator may install one.
    */
   readonly operatorEmails: readonly string[];
+  /**
+   * Wall-clock budget of a lab sheet's calibrations (run in a thread off the API's event loop);
+   * a sheet that needs longer is refused whole.
+   */
+  readonly importCalibrationBudgetMs: number;
   /** Memory for serialised event-ladder answers per API process, MiB; 0 turns the cache off. */
   readonly ladderCacheMiB: number;
   /**
@@ -132,6 +137,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
     operatorEmails,
     ladderCacheMiB: integer('LADDER_CACHE_MIB', 64, 0, 16_384),
+    importCalibrationBudgetMs: integer('IMPORT_CALIBRATION_BUDGET_MS', 20_000, 1, 600_000),
     trustProxy,
     devMailPage,
   };

@@ -107,8 +107,8 @@ export interface LabSheetContext<C extends LabSheetCalibration> {
   readonly takenLabCodes: ReadonlySet<string>;
   /** The site's latitude (Marine20 warns in polar waters). */
   readonly latitude: number | null;
-  /** The calendar age of a row's dating, or why it cannot be had. */
-  readonly calibrate: (dating: SampleDating) => C | FieldProblem;
+  /** The calendar age of a row's dating, or why it cannot be had (`row` is the sheet row). */
+  readonly calibrate: (dating: SampleDating, row: number) => C | FieldProblem;
   /** The sample form's type and range rules on a row placed in `unit`; none when it passes. */
   readonly fieldRules?: (sample: LabSheetSample, unit: LabSheetUnit | null) => readonly FieldProblem[];
 }
@@ -208,7 +208,7 @@ export function checkLabSheetRows<C extends LabSheetCalibration>(reading: LabShe
 
     let calibration: C | null = null;
     if (sample.method !== null) {
-      const result = context.calibrate(datingOf(sample, context.latitude));
+      const result = context.calibrate(datingOf(sample, context.latitude), row);
       if (isFieldProblem(result)) problems.add(row, result.field, result.message);
       else calibration = result;
     }
@@ -276,6 +276,11 @@ function sortProblems(problems: LabSheetProblem[]): LabSheetProblem[] {
 
 function isFieldProblem(value: LabSheetCalibration | FieldProblem): value is FieldProblem {
   return 'field' in value && 'message' in value;
+}
+
+/** The datings `checkLabSheetRows` will ask the calibrator for, with their rows (to calibrate them beforehand). */
+export function labSheetDatings(reading: LabSheetReading, latitude: number | null): { row: number; dating: SampleDating }[] {
+  return reading.samples.filter((sample) => sample.method !== null).map((sample) => ({ row: sample.row, dating: datingOf(sample, latitude) }));
 }
 
 function datingOf(sample: LabSheetSample, latitude: number | null): SampleDating {

@@ -1,17 +1,22 @@
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import { Permission } from '../access/permissions';
 import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { CalibrationService } from '../calibration/calibration.service';
+import { SampleDating } from '../chronology/calibration/sample-calibration';
 import { withConstraintErrors } from '../common/errors/database-errors';
+import { badInput } from '../common/errors/domain-error';
+import { APP_CONFIG, AppConfig } from '../config/config';
 import { DatabaseService } from '../database/database.service';
+import { ComputeTimedOut, runInThread } from '../jobs/compute-runner';
 import { StoredCalibration } from '../database/schema';
 import { SampleInsert, SamplesRepository } from '../samples/samples.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
 import { ImportSamplesInput } from './dto/import-samples.input';
-import { CheckedLabSheetRow, checkLabSheetRows, LabSheetProblem, listedProblems, readLabSheet } from './lab-sheet';
+import { CheckedLabSheetRow, checkLabSheetRows, FieldProblem, LabSheetProblem, labSheetDatings, listedProblems, readLabSheet } from './lab-sheet';
+import { labSheetCalibrationCompute } from './lab-sheet-calibration.compute';
 import { sampleFormRules } from './sample-form-rules';
 
 /** `ImportPreviewRow` of the schema. */
@@ -41,6 +46,7 @@ export class SampleImportService {
     private readonly samples: SamplesRepository,
     private readonly calibration: CalibrationService,
     private readonly audit: AuditService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
   /**
@@ -52,11 +58,12 @@ export class SampleImportService {
     const site = await this.sites.get(user, input.siteId, Permission.StratigraphyWrite);
     const reading = readLabSheet(input.csv);
     const labCodes = [...new Set(reading.samples.flatMap((sample) => (sample.labCode === null ? [] : [sample.labCode])))];
-    const [units, calibrate, takenLabCodes] = await Promise.all([
+    const [units, calibrated, takenLabCodes] = await Promise.all([
       this.units.listForSite(site.id),
-      this.calibration.sampleCalibrator(),
+      this.calibrateSheet(labSheetDatings(reading, site.latitude)),
       this.samples.existingLabCodes(site.projectId, labCodes),
     ]);
+    const calibrate = (_dating: SampleDating, row: number) => calibrated.get(row) as StoredCalibration | FieldProblem;
     const check = checkLabSheetRows<StoredCalibration>(reading, {
       units, takenLabCodes, latitude: site.latitude, calibrate, fieldRules: sampleFormRules,
     });
@@ -85,6 +92,39 @@ export class SampleImportService {
       }),
     );
     return { ...result, committed: true };
+  }
+
+  /**
+   * Calibrate a sheet's datings in a thread, off the API's event loop, within
+   * IMPORT_CALIBRATION_BUDGET_MS; a sheet that needs longer is refused whole (nothing is stored,
+   * nothing is previewed) with a message saying so.
+   */
+  private async calibrateSheet(datings: { row: number; dating: SampleDating }[]): Promise<Map<number, StoredCalibration | FieldProblem>> {
+    if (datings.length === 0) return new Map();
+    const lookup = await this.calibration.curveLookup();
+    const codes = new Set(datings.flatMap(({ dating }) => (dating.method === 'RADIOCARBON' && dating.curve?.trim() ? [dating.curve.trim()] : [])));
+    const curves = [...codes].flatMap((code) => {
+      const curve = lookup(code);
+      return curve ? [{ code, curve }] : [];
+    });
+    const budgetMs = this.config.importCalibrationBudgetMs;
+    try {
+      const output = await runInThread(labSheetCalibrationCompute, { datings, curves }, {
+        onProgress: () => undefined,
+        shouldCancel: async () => false,
+        timeLimitMs: budgetMs,
+      });
+      return new Map(output.map(({ row, result }) => [row, result]));
+    } catch (error) {
+      if (error instanceof ComputeTimedOut) {
+        throw badInput(
+          'csv',
+          `calibrating this sheet's ${datings.length.toLocaleString('en')} datings took longer than the import allows ` +
+            `(${budgetMs / 1000} s); nothing was imported. Split the sheet into smaller ones and import each.`,
+        );
+      }
+      throw error;
+    }
   }
 }
 
