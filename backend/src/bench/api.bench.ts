@@ -121,7 +121,7 @@ const LADDER_QUERY = `query EventLadder($projectId: ID!) {
       }
     }
   }
-  project(id: $projectId) { id name myRole tectonicSetting hypotheses { id name preferred version } }
+  project(id: $projectId) { id name myRole myPermissions tectonicSetting hypotheses { id name preferred version } }
 }`;
 
 /** The query the ladder page sends now: `densityGrid` in place of `density` points. */

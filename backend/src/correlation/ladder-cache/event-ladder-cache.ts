@@ -1,12 +1,11 @@
 import type { ApolloServerPlugin, GraphQLRequestContext } from '@apollo/server';
 import { Inject, Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { FieldNode, FragmentDefinitionNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'graphql';
+import { FieldNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'graphql';
 import type { Request } from 'express';
 import { gzipSync } from 'node:zlib';
 import { Role, ROLES } from '../../access/permissions';
 import { APP_CONFIG, AppConfig } from '../../config/config';
-import { coveredByLadderRevision } from './event-ladder-cache-scope';
 import { LadderCacheState, LadderRevisionRepository } from './ladder-revision.repository';
 import { epochCurrent, TokenClaims } from '../../auth/token-claims';
 
@@ -32,20 +31,22 @@ export interface LadderCacheEntry {
  * A whole-answer cache for the event ladder: a read that many people repeat and that costs a
  * full GraphQL execution and serialisation of ~8,000 fields (0.5 MB) each time.
  *
- * An answer is stored only after ordinary execution has produced it without errors, for an
- * operation that asks for nothing but `eventLadder` and `project` of one project, and below them
- * only for fields the revision covers (`coveredByLadderRevision`). None of those fields depends
- * on who asks beyond their role (`myRole`), so an answer is keyed by the caller's role, the query
- * text, the operation name and the variables, and is shared by every member with that role. It
- * remembers the project's data revision read *before* execution, and is served again (by
- * `EventLadderCacheMiddleware`, already serialised and compressed, without entering GraphQL) only
- * after one query per request shows that the caller's token epoch is current, that the caller is
- * a member with that role, and that the revision is unchanged: the counts, versions, column
- * revisions and update times of everything the answer shows (sites, segments, age model runs,
- * hypotheses, the project). A write during execution therefore leaves an entry that is never
- * served. Everything else, including every error, goes through ordinary execution, which stays
- * the authority on access and validation. Answers are kept per API process up to
- * `LADDER_CACHE_MIB` (least recently used dropped first); 0 turns the cache off.
+ * An answer is stored only after ordinary execution has produced it without errors, for a query
+ * that asks for nothing but `eventLadder` and `project` of one project. Everything such a query
+ * can show is a row of that project, a user who is its member or an installed calibration curve,
+ * and every change to those bumps the project's revision (`project_revisions`, kept by triggers
+ * in the database: migration 0010_project_revisions.sql; `test/integration/ladder-cache.spec.ts`
+ * fails when a table of project rows has none). Nothing in it depends on who asks beyond their
+ * role (`myRole`, `myPermissions`, fields only some roles may read), so an answer is keyed by the
+ * caller's role, the query text, the operation name and the variables, and is shared by every
+ * member with that role. It remembers the revision read *before* execution, and is served again
+ * (by `EventLadderCacheMiddleware`, already serialised and compressed, without entering GraphQL)
+ * only after one query per request shows that the caller's token epoch is current, that the
+ * caller is a member with that role, and that the revision is unchanged. A write during execution
+ * therefore leaves an entry that is never served. Everything else, including every error, goes
+ * through ordinary execution, which stays the authority on access and validation. Answers are
+ * kept per API process up to `LADDER_CACHE_MIB` (least recently used dropped first); 0 turns
+ * the cache off.
  */
 @Injectable()
 export class EventLadderCache {
@@ -175,12 +176,6 @@ export class EventLadderCache {
     const body = req?.body as Partial<GraphqlHttpBody> | undefined;
     // Only a plain POST body can be looked up again by the middleware.
     if (!projectId || req?.method !== 'POST' || typeof body?.query !== 'string' || body.query !== context.source) return undefined;
-    const fragments = Object.fromEntries(
-      (context.document?.definitions ?? [])
-        .filter((d): d is FragmentDefinitionNode => d.kind === Kind.FRAGMENT_DEFINITION)
-        .map((d) => [d.name.value, d]),
-    );
-    if (!coveredByLadderRevision(context.schema, operation, fragments)) return undefined;
     const claims = this.bearerClaims(req.headers?.authorization);
     if (!claims) return undefined;
     return { userId: claims.sub, requestKey: this.requestKey(body as GraphqlHttpBody), projectId };

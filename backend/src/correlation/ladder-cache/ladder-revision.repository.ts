@@ -10,7 +10,7 @@ export interface LadderCacheState {
   epoch: number | null;
   /** The caller's role in the project; null when not a member. */
   role: Role | null;
-  /** The project's data revision. */
+  /** The project's revision ('' when the project has none, e.g. it is gone). */
   revision: string;
 }
 
@@ -20,19 +20,15 @@ export class LadderRevisionRepository {
   constructor(private readonly database: DatabaseService) {}
 
   /**
-   * The caller's token epoch, role and the project data revision, in one query.
+   * The caller's token epoch, role and the project's revision (`project_revisions`, bumped by
+   * triggers in the database whenever any of the project's rows changes), in one query.
    */
   async state(userId: string, projectId: string): Promise<LadderCacheState> {
     const result = (await this.database.db.execute(sql`
       select
         (select token_epoch from users where id = ${userId}) as epoch,
         (select role from memberships where project_id = ${projectId} and user_id = ${userId}) as role,
-        concat_ws('|',
-          (select concat_ws(':', count(*), sum(column_revision), sum(version), max(updated_at)) from sites where project_id = ${projectId}),
-          (select concat_ws(':', count(*), sum(version), max(updated_at)) from segments where project_id = ${projectId}),
-          (select concat_ws(':', count(*), max(r.updated_at)) from age_model_runs r join sites s on s.id = r.site_id where s.project_id = ${projectId}),
-          (select concat_ws(':', count(*), sum(version), max(updated_at)) from hypotheses where project_id = ${projectId}),
-          (select concat_ws(':', version, updated_at) from projects where id = ${projectId})) as revision`)) as unknown as QueryResult<LadderCacheState>;
+        coalesce((select revision::text from project_revisions where project_id = ${projectId}), '') as revision`)) as unknown as QueryResult<LadderCacheState>;
     return result.rows[0];
   }
 }

@@ -19,3 +19,4 @@ export * from './attachments';
 export * from './provenance';
 export * from './core-logs';
 export * from './rate-limits';
+export * from './project-revisions';
