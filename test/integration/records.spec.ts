@@ -295,7 +295,7 @@ describe('project bundle', () => {
     expect(exported.status).toBe(200);
     const original = exported.json<ProjectBundle>();
     expect(validateBundle(original)).toMatchObject({ ok: true });
-    expect(original).toMatchObject({ format: 'stratochron-bundle', version: 1 });
+    expect(original).toMatchObject({ format: 'stratochron-bundle', version: 2 });
     expect([original.sites.length, original.units.length, original.eventHorizons.length, original.samples.length, original.ties.length]).toEqual([2, 4, 2, 1, 1]);
 
     const imported = await http(clients.OUTSIDER, 'POST', '/api/projects/import', JSON.stringify(original), 'application/json');

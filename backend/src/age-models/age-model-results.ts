@@ -32,6 +32,8 @@ export interface StoredSamplePosterior {
   outlierProbability: number;
   medianCalBp: number;
   hpd95: DensitySummary['hpd95'];
+  /** Inherited and intruded samples: sample age minus deposit age (years), given not an outlier. */
+  offset?: { scaleYears: number; medianYears: number; low95Years: number; high95Years: number };
 }
 
 export interface StoredAgeModelResults {
@@ -89,6 +91,16 @@ export function storeResults(result: AgeModelResult & { ageDepth?: AgeDepthPoint
       outlierProbability: s.outlierProbability,
       medianCalBp: s.medianCalBp,
       hpd95: s.summary.hpd95,
+      ...(s.offset
+        ? {
+            offset: {
+              scaleYears: s.offset.scaleYears,
+              medianYears: Math.round(s.offset.medianYears * 10) / 10,
+              low95Years: Math.round(s.offset.low95Years * 10) / 10,
+              high95Years: Math.round(s.offset.high95Years * 10) / 10,
+            },
+          }
+        : {}),
     })),
     eventDraws: {
       eventHorizonIds: [...result.eventDraws.eventHorizonIds],

@@ -12,6 +12,7 @@ import { asNotFoundOf, badInput, notFound } from '../common/errors/domain-error'
 import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
 import { JobQueueService } from '../jobs/job-queue.service';
+import { DEFAULT_INHERITANCE_SCALE_YEARS } from '../samples/sample-rules';
 import { SamplesRepository } from '../samples/samples.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
@@ -60,7 +61,7 @@ export class AgeModelsService {
   async queue(site: SiteRow, input: Omit<StartAgeModelRunInput, 'siteId'>, user: AuthUser | null): Promise<AgeModelRunRow> {
     // The revision is read before the column: a change in between makes the run look stale, never fresh.
     const columnRevision = (await this.sites.findById(site.id))?.columnRevision ?? site.columnRevision;
-    const { model, fingerprint } = await this.columnOf(site);
+    const { model, fingerprint } = await this.columnOf(site, input.inheritanceScaleYears ?? null);
     const depthModel = input.depthModel ?? 'ORDER_ONLY';
     if (depthModel === 'HEMIPELAGIC_RATE') {
       const unfit = hemipelagicProblems(model);
@@ -123,8 +124,12 @@ export class AgeModelsService {
     return this.runs.latestForSite(siteId);
   }
 
-  /** The model input of a site's current column (sample densities recomputed), with its fingerprint. */
-  private async columnOf(site: SiteRow): Promise<{ model: AgeModelInput; fingerprint: string }> {
+  /**
+   * The model input of a site's current column (sample densities recomputed), with its fingerprint.
+   * Each sample's offset scale is its own, else the run's `inheritanceScaleYears` when the run gives
+   * one, else the default for its material (`DEFAULT_INHERITANCE_SCALE_YEARS`).
+   */
+  private async columnOf(site: SiteRow, runInheritanceScale: number | null): Promise<{ model: AgeModelInput; fingerprint: string }> {
     const [units, eventHorizons, samples, fingerprints] = await Promise.all([
       this.units.listForSite(site.id),
       this.eventHorizons.listForSite(site.id),
@@ -147,6 +152,7 @@ export class AgeModelsService {
             depthM: s.depthM,
             ageRelation: s.ageRelation,
             excluded: s.excluded,
+            offsetScaleYears: s.inheritanceScaleYears ?? runInheritanceScale ?? DEFAULT_INHERITANCE_SCALE_YEARS[s.material],
             likelihood: await this.calibration.densityOfSample(s),
           })),
       ),

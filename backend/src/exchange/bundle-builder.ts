@@ -112,6 +112,7 @@ export function buildBundle(records: ProjectRecords, exportedAt: Date): ProjectB
       topDepthM: u.topDepthM,
       baseDepthM: u.baseDepthM,
       facies: u.facies,
+      basalErosionM: u.basalErosionM ?? null,
       notes: u.notes ?? null,
     })),
     eventHorizons: eventHorizons.map((h) => ({

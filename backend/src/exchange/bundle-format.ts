@@ -1,5 +1,6 @@
 /**
- * The Stratochron project bundle, format `stratochron-bundle` version 1: everything a person
+ * The Stratochron project bundle, format `stratochron-bundle` version 2 (version 1 is still read:
+ * it lacks the fields marked `since: 2`, which then take null): everything a person
  * entered in a project (segments, sites, units, event horizons, samples, correlation hypotheses
  * and their ties) as plain JSON. Records name each other by `ref`, the exporting database's id;
  * an import gives every record a new id and rewires the refs. Computed results (calibrations,
@@ -10,7 +11,11 @@
 import { MAX_AGE_ERROR_YEARS } from '../chronology/calibration/bounds';
 
 export const BUNDLE_FORMAT = 'stratochron-bundle';
-export const BUNDLE_VERSION = 1;
+/** The version this server writes. */
+export const BUNDLE_VERSION = 2;
+/** The versions this server reads: version 1 is version 2 without the fields marked `since: 2`. */
+export const READABLE_BUNDLE_VERSIONS = [1, 2] as const;
+export type BundleVersion = (typeof READABLE_BUNDLE_VERSIONS)[number];
 
 export const SITE_KINDS = ['TRENCH', 'CORE', 'OUTCROP', 'MARSH', 'LAKE'] as const;
 export const FACIES = ['SOIL', 'COLLUVIUM', 'PEAT', 'TIDAL_MUD', 'SAND_SHEET', 'TURBIDITE', 'HEMIPELAGIC_MUD', 'TEPHRA', 'OTHER'] as const;
@@ -56,6 +61,8 @@ export interface BundleUnit {
   topDepthM: number;
   baseDepthM: number;
   facies: (typeof FACIES)[number];
+  /** Since version 2: thickness of mud (m) the unit's base eroded. */
+  basalErosionM: number | null;
   notes: string | null;
 }
 
@@ -85,6 +92,10 @@ export interface BundleSample {
   curve: string | null;
   deltaR: number | null;
   deltaRError: number | null;
+  /** Since version 2: name of the regional Delta-R entry. */
+  deltaRSource: string | null;
+  /** Since version 2: the sample's own inheritance (intrusion) scale, years. */
+  inheritanceScaleYears: number | null;
   calendarAgeBp: number | null;
   calendarErrorYears: number | null;
   measurementYear: number | null;
@@ -143,15 +154,19 @@ export const BUNDLE_TABLE_MAX_ITEMS: Readonly<Record<BundleTable, number>> = {
   ties: 50_000,
 };
 
-/** One field of a bundle record: its JSON type and the bounds the database enforces. */
-export type FieldSpec =
+/**
+ * One field of a bundle record: its JSON type and the bounds the database enforces. `since` is the
+ * first format version that has the field (absent: every version).
+ */
+export type FieldSpec = (
   | { type: 'string'; nullable?: boolean; minLength?: number; maxLength: number }
   | { type: 'number'; nullable?: boolean; minimum?: number; maximum?: number; exclusiveMinimum?: number }
   | { type: 'integer'; nullable?: boolean; minimum?: number; maximum?: number }
   | { type: 'boolean' }
   | { type: 'enum'; values: readonly string[]; nullable?: boolean }
   | { type: 'strings'; maxItems: number; maxLength: number }
-  | { type: 'ref'; nullable?: boolean };
+  | { type: 'ref'; nullable?: boolean }
+) & { since?: BundleVersion };
 
 const text = (maxLength: number, nullable = false): FieldSpec => ({ type: 'string', minLength: nullable ? 0 : 1, maxLength, nullable });
 const notes: FieldSpec = { type: 'string', maxLength: 5000, nullable: true };
@@ -190,6 +205,7 @@ export const RECORD_FIELDS: { [T in BundleTable]: Record<string, FieldSpec> } = 
     topDepthM: { type: 'number', minimum: 0, maximum: 100000 },
     baseDepthM: { type: 'number', minimum: 0, maximum: 100000 },
     facies: { type: 'enum', values: FACIES },
+    basalErosionM: { type: 'number', nullable: true, minimum: 0, maximum: 100000, since: 2 },
     notes,
   } satisfies Record<keyof BundleUnit, FieldSpec>,
   eventHorizons: {
@@ -217,6 +233,8 @@ export const RECORD_FIELDS: { [T in BundleTable]: Record<string, FieldSpec> } = 
     curve: { type: 'string', nullable: true, minLength: 1, maxLength: 50 },
     deltaR: { type: 'number', nullable: true, minimum: -10000, maximum: 10000 },
     deltaRError: { type: 'number', nullable: true, minimum: 0, maximum: MAX_AGE_ERROR_YEARS },
+    deltaRSource: { type: 'string', nullable: true, maxLength: 100, since: 2 },
+    inheritanceScaleYears: { type: 'number', nullable: true, minimum: 1, maximum: 10000, since: 2 },
     calendarAgeBp: { type: 'number', nullable: true, minimum: -100, maximum: 1000000 },
     calendarErrorYears: { type: 'number', nullable: true, exclusiveMinimum: 0, maximum: MAX_AGE_ERROR_YEARS },
     measurementYear: { type: 'integer', nullable: true, minimum: 1900, maximum: 2200 },

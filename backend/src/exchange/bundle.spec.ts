@@ -17,10 +17,10 @@ function records(prefix = ''): ProjectRecords {
       { id: id('s1'), segmentId: id('seg'), name: 'Bell marsh', kind: 'MARSH', latitude: -41, longitude: 174, alongStrikeKm: 10, elevationM: 2, waterDepthM: null, notes: '=SUM(A1)' },
     ],
     units: [
-      { id: id('u2'), siteId: id('s1'), position: 2, name: 'Peat', topDepthM: 0, baseDepthM: 1, facies: 'PEAT', notes: null },
-      { id: id('u1'), siteId: id('s1'), position: 1, name: 'Mud', topDepthM: 1, baseDepthM: 2, facies: 'TIDAL_MUD', notes: null },
-      { id: id('u3'), siteId: id('s2'), position: 1, name: 'T1', topDepthM: 0, baseDepthM: 0.2, facies: 'TURBIDITE', notes: null },
-      { id: id('u4'), siteId: id('s2'), position: 2, name: 'Hemi', topDepthM: 0, baseDepthM: 0.1, facies: 'HEMIPELAGIC_MUD', notes: null },
+      { id: id('u2'), siteId: id('s1'), position: 2, name: 'Peat', topDepthM: 0, baseDepthM: 1, facies: 'PEAT', basalErosionM: null, notes: null },
+      { id: id('u1'), siteId: id('s1'), position: 1, name: 'Mud', topDepthM: 1, baseDepthM: 2, facies: 'TIDAL_MUD', basalErosionM: null, notes: null },
+      { id: id('u3'), siteId: id('s2'), position: 1, name: 'T1', topDepthM: 0, baseDepthM: 0.2, facies: 'TURBIDITE', basalErosionM: null, notes: null },
+      { id: id('u4'), siteId: id('s2'), position: 2, name: 'Hemi', topDepthM: 0, baseDepthM: 0.1, facies: 'HEMIPELAGIC_MUD', basalErosionM: 0.02, notes: null },
     ],
     eventHorizons: [
       { id: id('e1'), siteId: id('s1'), name: 'E1', unitBelowId: id('u1'), unitAboveId: id('u2'), quality: 1, evidence: ['subsidence'], notes: null },
@@ -29,7 +29,7 @@ function records(prefix = ''): ProjectRecords {
     samples: [
       {
         id: id('x1'), siteId: id('s1'), unitId: id('u1'), labCode: 'HX-2', method: 'RADIOCARBON', material: 'IN_SITU_PLANT', depthM: 1.1,
-        ageRelation: 'DATES_DEPOSIT', c14Age: 1000, c14Error: 30, delta13C: -27, curve: 'INTCAL20', deltaR: null, deltaRError: null,
+        ageRelation: 'DATES_DEPOSIT', c14Age: 1000, c14Error: 30, delta13C: -27, curve: 'INTCAL20', deltaR: null, deltaRError: null, deltaRSource: null, inheritanceScaleYears: 40,
         calendarAgeBp: null, calendarErrorYears: null, measurementYear: null, excluded: false, exclusionReason: null, notes: null,
       },
     ],
@@ -64,8 +64,41 @@ describe(validateBundle.name, () => {
     expect(validateBundle(JSON.parse(JSON.stringify(valid())))).toMatchObject({ ok: true });
   });
 
+  it('reads a version 1 bundle (without the version 2 fields) as version 2 with those fields null', () => {
+    const v2 = valid();
+    const v1 = {
+      ...v2,
+      version: 1,
+      units: v2.units.map(({ basalErosionM: _e, ...u }) => u),
+      samples: v2.samples.map(({ deltaRSource: _d, inheritanceScaleYears: _i, ...s }) => s),
+    };
+    const result = validateBundle(v1);
+    expect(result.ok).toBe(true);
+    if (result.ok) {
+      expect(result.bundle.version).toBe(2);
+      expect(result.bundle.units.every((u) => u.basalErosionM === null)).toBe(true);
+      expect(result.bundle.samples[0]).toMatchObject({ deltaRSource: null, inheritanceScaleYears: null });
+    }
+    // A version 1 bundle carrying a version 2 field is refused: the field is not in its version.
+    const mixed = validateBundle({ ...v1, units: v2.units });
+    expect(mixed.ok).toBe(false);
+    if (!mixed.ok) expect(mixed.problems[0]).toMatchObject({ path: 'units[0].basalErosionM', message: 'is not a field of this format version' });
+  });
+
+  it('keeps a unit\'s basal erosion and a sample\'s Delta-R source and inheritance scale', () => {
+    const result = validateBundle(valid());
+    expect(result.ok).toBe(true);
+    if (result.ok) {
+      expect(result.bundle.units.find((u) => u.facies === 'HEMIPELAGIC_MUD')?.basalErosionM).toBe(0.02);
+      expect(result.bundle.samples[0].inheritanceScaleYears).toBe(40);
+    }
+    const bad = validateBundle({ ...valid(), samples: valid().samples.map((s) => ({ ...s, inheritanceScaleYears: 0.5 })) });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.problems[0].path).toBe('samples[0].inheritanceScaleYears');
+  });
+
   it('refuses another format or version', () => {
-    const result = validateBundle({ ...valid(), format: 'other', version: 2 });
+    const result = validateBundle({ ...valid(), format: 'other', version: 3 });
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.problems.map((p) => p.path)).toEqual(['format', 'version']);
   });

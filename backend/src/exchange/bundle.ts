@@ -4,6 +4,8 @@ import {
   BUNDLE_TABLES,
   BUNDLE_VERSION,
   BundleTable,
+  BundleVersion,
+  READABLE_BUNDLE_VERSIONS,
   FieldSpec,
   PROJECT_FIELDS,
   ProjectBundle,
@@ -69,8 +71,14 @@ function checkField(value: unknown, spec: FieldSpec, path: string, problems: Bun
   }
 }
 
-function checkObject(value: unknown, fields: Record<string, FieldSpec>, path: string, problems: BundleProblem[]): void {
+/** The fields a record has in a format version. */
+function fieldsOf(fields: Record<string, FieldSpec>, version: BundleVersion): Record<string, FieldSpec> {
+  return Object.fromEntries(Object.entries(fields).filter(([, spec]) => (spec.since ?? 1) <= version));
+}
+
+function checkObject(value: unknown, allFields: Record<string, FieldSpec>, path: string, problems: BundleProblem[], version: BundleVersion = BUNDLE_VERSION): void {
   if (!isRecord(value)) return void problems.push({ path, message: 'must be an object' });
+  const fields = fieldsOf(allFields, version);
   for (const [name, spec] of Object.entries(fields)) {
     if (!Object.hasOwn(value, name)) problems.push({ path: `${path}.${name}`, message: 'is required (use null for no value)' });
     else checkField(value[name], spec, `${path}.${name}`, problems);
@@ -91,7 +99,11 @@ export function validateBundle(input: unknown): BundleValidation {
   const problems: BundleProblem[] = [];
   if (!isRecord(input)) return { ok: false, problems: [{ path: '', message: 'a bundle is a JSON object' }] };
   if (input.format !== BUNDLE_FORMAT) problems.push({ path: 'format', message: `must be "${BUNDLE_FORMAT}"` });
-  if (input.version !== BUNDLE_VERSION) problems.push({ path: 'version', message: `must be ${BUNDLE_VERSION} (this server reads version ${BUNDLE_VERSION})` });
+  const readable = (READABLE_BUNDLE_VERSIONS as readonly unknown[]).includes(input.version);
+  if (!readable) {
+    problems.push({ path: 'version', message: `must be ${READABLE_BUNDLE_VERSIONS.join(' or ')} (this server reads versions ${READABLE_BUNDLE_VERSIONS.join(' and ')} and writes ${BUNDLE_VERSION})` });
+  }
+  const version = (readable ? input.version : BUNDLE_VERSION) as BundleVersion;
   if (typeof input.exportedAt !== 'string' || Number.isNaN(Date.parse(input.exportedAt))) {
     problems.push({ path: 'exportedAt', message: 'must be an ISO 8601 date-time' });
   }
@@ -108,12 +120,32 @@ export function validateBundle(input: unknown): BundleValidation {
       problems.push({ path: table, message: `holds ${rows.length} records; a bundle may hold at most ${BUNDLE_TABLE_MAX_ITEMS[table]}` });
       continue;
     }
-    rows.forEach((row, i) => checkObject(row, RECORD_FIELDS[table], `${table}[${i}]`, problems));
+    rows.forEach((row, i) => checkObject(row, RECORD_FIELDS[table], `${table}[${i}]`, problems, version));
   }
   if (problems.length > 0) return { ok: false, problems: problems.slice(0, MAX_PROBLEMS) };
-  const bundle = input as unknown as ProjectBundle;
+  const bundle = upgraded(input as unknown as ProjectBundle, version);
   checkRelations(bundle, problems);
   return problems.length > 0 ? { ok: false, problems: problems.slice(0, MAX_PROBLEMS) } : { ok: true, bundle };
+}
+
+/** A checked bundle of an older version as the current version: fields it lacks are null. */
+function upgraded(bundle: ProjectBundle, version: BundleVersion): ProjectBundle {
+  if (version === BUNDLE_VERSION) return bundle;
+  const fill = <T extends object>(rows: T[], table: BundleTable): T[] => {
+    const added = Object.entries(RECORD_FIELDS[table]).filter(([, spec]) => (spec.since ?? 1) > version).map(([name]) => name);
+    return added.length === 0 ? rows : rows.map((row) => ({ ...Object.fromEntries(added.map((name) => [name, null])), ...row }));
+  };
+  return {
+    ...bundle,
+    version: BUNDLE_VERSION,
+    segments: fill(bundle.segments, 'segments'),
+    sites: fill(bundle.sites, 'sites'),
+    units: fill(bundle.units, 'units'),
+    eventHorizons: fill(bundle.eventHorizons, 'eventHorizons'),
+    samples: fill(bundle.samples, 'samples'),
+    hypotheses: fill(bundle.hypotheses, 'hypotheses'),
+    ties: fill(bundle.ties, 'ties'),
+  };
 }
 
 function indexRefs<T extends { ref: string }>(rows: T[], table: BundleTable, problems: BundleProblem[]): Map<string, T> {
@@ -279,15 +311,15 @@ const TABLE_DESCRIPTIONS: Record<BundleTable, string> = {
 };
 
 /**
- * The JSON Schema (draft 2020-12) of format version 1, built from the same field tables the
+ * The JSON Schema (draft 2020-12) of format version 2 (the version written), built from the same field tables the
  * validator reads; `bundle.schema.json` is this object written out. The schema covers each
  * record's shape; the rules between records are the validator's (and the README's).
  */
 export function bundleJsonSchema(): JsonSchema {
   return {
     $schema: 'https://json-schema.org/draft/2020-12/schema',
-    $id: 'https://stratochron.invalid/schemas/stratochron-bundle/1',
-    title: 'Stratochron project bundle, version 1',
+    $id: 'https://stratochron.invalid/schemas/stratochron-bundle/2',
+    title: 'Stratochron project bundle, version 2',
     type: 'object',
     additionalProperties: false,
     required: ['format', 'version', 'exportedAt', 'project', ...BUNDLE_TABLES],

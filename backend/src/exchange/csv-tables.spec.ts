@@ -3,7 +3,7 @@ import { BUNDLE_FORMAT, ProjectBundle } from './bundle-format';
 import { tableCsv } from './csv-tables';
 
 const bundle: ProjectBundle = {
-  format: BUNDLE_FORMAT, version: 1, exportedAt: '2025-01-01T00:00:00.000Z',
+  format: BUNDLE_FORMAT, version: 2, exportedAt: '2025-01-01T00:00:00.000Z',
   project: { name: 'P', description: null, tectonicSetting: 'CRUSTAL' },
   segments: [],
   sites: [{ ref: 's1', segmentRef: null, name: 'Dry, "old" pit', kind: 'TRENCH', latitude: 10.5, longitude: -3, alongStrikeKm: -12, elevationM: null, waterDepthM: null, notes: '=HYPERLINK("x")' }],

@@ -61,7 +61,8 @@ export function tableCsv(bundle: ProjectBundle, name: CsvTable): string {
         column('method', (s) => s.method), column('material', (s) => s.material), column('depth_m', (s) => s.depthM),
         column('age_relation', (s) => s.ageRelation), column('c14_age', (s) => s.c14Age), column('c14_error', (s) => s.c14Error),
         column('delta13c', (s) => s.delta13C), column('curve', (s) => s.curve), column('delta_r', (s) => s.deltaR),
-        column('delta_r_error', (s) => s.deltaRError), column('calendar_age_bp', (s) => s.calendarAgeBp),
+        column('delta_r_error', (s) => s.deltaRError), column('delta_r_source', (s) => s.deltaRSource),
+        column('inheritance_scale_years', (s) => s.inheritanceScaleYears), column('calendar_age_bp', (s) => s.calendarAgeBp),
         column('calendar_error_years', (s) => s.calendarErrorYears), column('measurement_year', (s) => s.measurementYear),
         column('excluded', (s) => s.excluded), column('exclusion_reason', (s) => s.exclusionReason), column('notes', (s) => s.notes),
       ]);

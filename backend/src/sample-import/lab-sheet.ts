@@ -26,6 +26,8 @@ export const LAB_SHEET_COLUMNS = [
   'curve',
   'deltaR',
   'deltaRError',
+  'deltaRSource',
+  'inheritanceScaleYears',
   'calendarAgeBp',
   'calendarErrorYears',
   'measurementYear',
@@ -43,7 +45,8 @@ export const REQUIRED_LAB_SHEET_COLUMNS: readonly LabSheetColumn[] = ['labCode',
 export const MAX_LAB_SHEET_ROWS = 50_000;
 
 const NUMBER_COLUMNS = [
-  'depthM', 'c14Age', 'c14Error', 'delta13C', 'deltaR', 'deltaRError', 'calendarAgeBp', 'calendarErrorYears', 'measurementYear',
+  'depthM', 'c14Age', 'c14Error', 'delta13C', 'deltaR', 'deltaRError', 'inheritanceScaleYears', 'calendarAgeBp', 'calendarErrorYears',
+  'measurementYear',
 ] as const;
 type NumberColumn = (typeof NUMBER_COLUMNS)[number];
 
@@ -66,6 +69,8 @@ export interface LabSheetSample extends Record<NumberColumn, number | null> {
   ageRelation: AgeRelation | null;
   /** Upper-cased curve code; whether it is installed is the calibrator's call. */
   curve: string | null;
+  /** Name of the regional Delta-R entry. */
+  deltaRSource: string | null;
   excluded: boolean;
   exclusionReason: string | null;
   notes: string | null;
@@ -412,6 +417,7 @@ function readRow(
     material: choice('material', required('material'), SAMPLE_MATERIALS),
     ageRelation: ageRelationCell === null ? 'DATES_DEPOSIT' : choice('ageRelation', ageRelationCell, AGE_RELATIONS),
     curve: ((value) => (value === null ? null : enumSpelling(value)))(text('curve')),
+    deltaRSource: text('deltaRSource'),
     excluded: ((value) => {
       if (value === null) return false;
       const read = readBoolean(value);

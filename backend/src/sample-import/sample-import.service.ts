@@ -155,6 +155,8 @@ function sampleValues(site: SiteRow, { sample, unit, calibration }: CheckedLabSh
     curve: sample.curve,
     deltaR: sample.deltaR,
     deltaRError: sample.deltaRError,
+    deltaRSource: sample.deltaRSource,
+    inheritanceScaleYears: sample.inheritanceScaleYears,
     calendarAgeBp: sample.calendarAgeBp,
     calendarErrorYears: sample.calendarErrorYears,
     measurementYear: sample.measurementYear,

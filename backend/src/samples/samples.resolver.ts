@@ -1,3 +1,4 @@
+import { DEFAULT_INHERITANCE_SCALE_YEARS } from './sample-rules';
 import { Args, Int, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
 import { AuthUser } from '../auth/auth-user';
 import { CalibrationService, CalibrationView } from '../calibration/calibration.service';
@@ -47,6 +48,11 @@ export class SamplesResolver {
   @ResolveField('calibration')
   async calibration(@Parent() sample: SampleRow): Promise<CalibrationView | null> {
     return sample.calibration ? this.calibrations.viewOfSample(sample.calibration, sample) : null;
+  }
+
+  @ResolveField('inheritanceScaleDefaultYears')
+  inheritanceScaleDefaultYears(@Parent() sample: SampleRow): number {
+    return DEFAULT_INHERITANCE_SCALE_YEARS[sample.material];
   }
 
   @ResolveField('unit')

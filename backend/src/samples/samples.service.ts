@@ -13,7 +13,7 @@ import { SitesService } from '../sites/sites.service';
 import { UnitRow, UnitsRepository } from '../units/units.repository';
 import { stripUndefined } from '../units/units.service';
 import { CreateSampleInput, UpdateSampleInput } from './dto/create-sample.input';
-import { depthOutsideUnit } from './sample-rules';
+import { depthOutsideUnit, inheritanceScaleProblem, normaliseDeltaRSource } from './sample-rules';
 import { SampleInsert, SampleRow, SamplesRepository } from './samples.repository';
 
 
@@ -96,8 +96,16 @@ export class SamplesService {
     const unit = await this.units.findById(fields.unitId, tx);
     if (!unit || unit.siteId !== site.id) throw badInput('unitId', 'the unit must be a unit of this site');
     checkDepthInUnit(fields.depthM ?? null, unit);
+    const scaleProblem = inheritanceScaleProblem(fields.inheritanceScaleYears);
+    if (scaleProblem) throw badInput('inheritanceScaleYears', scaleProblem);
     const calibration = await this.calibration.calibrateSample({ ...fields, latitude: site.latitude });
-    return { ...fields, labCode: fields.labCode.trim(), calibration, calibrationError: null };
+    return {
+      ...fields,
+      deltaRSource: normaliseDeltaRSource(fields.deltaRSource),
+      labCode: fields.labCode.trim(),
+      calibration,
+      calibrationError: null,
+    };
   }
 
   private async checkLabCodeFree(projectId: string, labCode: string, tx: Executor): Promise<void> {

@@ -365,9 +365,13 @@ export type CreateSampleInput = {
   delta13C?: InputMaybe<Scalars['Float']['input']>;
   deltaR?: InputMaybe<Scalars['Float']['input']>;
   deltaRError?: InputMaybe<Scalars['Float']['input']>;
+  /** Name of the regional Delta-R entry (at most 100 characters); empty clears it. */
+  deltaRSource?: InputMaybe<Scalars['String']['input']>;
   depthM?: InputMaybe<Scalars['Float']['input']>;
   excluded?: InputMaybe<Scalars['Boolean']['input']>;
   exclusionReason?: InputMaybe<Scalars['String']['input']>;
+  /** Scale of the exponential prior on the sample's age offset from its deposit, years (1 to 10,000); null takes the material's default. */
+  inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   labCode: Scalars['String']['input'];
   material: SampleMaterial;
   measurementYear?: InputMaybe<Scalars['Int']['input']>;
@@ -1710,10 +1714,24 @@ export type Sample = {
   delta13C?: Maybe<Scalars['Float']['output']>;
   deltaR?: Maybe<Scalars['Float']['output']>;
   deltaRError?: Maybe<Scalars['Float']['output']>;
+  /**
+   * Name of the regional Delta-R entry deltaR comes from. Marine samples of a site with the same
+   * source share one reservoir offset in the age model; samples with no source share it when their
+   * deltaR and deltaRError are identical.
+   */
+  deltaRSource?: Maybe<Scalars['String']['output']>;
   depthM?: Maybe<Scalars['Float']['output']>;
   excluded: Scalars['Boolean']['output'];
   exclusionReason?: Maybe<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
+  /** The scale the age model uses when inheritanceScaleYears is null: the default for the sample's material. */
+  inheritanceScaleDefaultYears: Scalars['Float']['output'];
+  /**
+   * OLDER_THAN_DEPOSIT / YOUNGER_THAN_DEPOSIT samples: scale (mean, years) of the exponential prior on
+   * the sample's inheritance (or intrusion) offset from its deposit, 1 to 10,000; null takes the
+   * default for the material (inheritanceScaleDefaultYears).
+   */
+  inheritanceScaleYears?: Maybe<Scalars['Float']['output']>;
   labCode: Scalars['String']['output'];
   material: SampleMaterial;
   measurementYear?: Maybe<Scalars['Int']['output']>;
@@ -1735,11 +1753,28 @@ export type SampleMaterial =
   | 'PLANT_MACROFOSSIL'
   | 'SHELL';
 
+/** The posterior of a sample's age offset from its deposit (sample age minus deposit age), years. */
+export type SampleOffsetPosterior = {
+  __typename?: 'SampleOffsetPosterior';
+  /** Upper end of the central 95 % range (97.5 % quantile), years. */
+  high95Years: Scalars['Float']['output'];
+  /** Lower end of the central 95 % range (2.5 % quantile), years. */
+  low95Years: Scalars['Float']['output'];
+  medianYears: Scalars['Float']['output'];
+  /** Scale (mean, years) of the exponential prior the run used for this sample. */
+  scaleYears: Scalars['Float']['output'];
+};
+
 /** Posterior of one sample: its outlier probability and calendar age. */
 export type SamplePosterior = {
   __typename?: 'SamplePosterior';
   hpd95: Array<HpdRange>;
   medianCalBp: Scalars['Float']['output'];
+  /**
+   * OLDER_THAN_DEPOSIT / YOUNGER_THAN_DEPOSIT samples: the posterior of sample age minus deposit age
+   * (inheritance positive, intrusion negative) given the sample is not an outlier; null otherwise.
+   */
+  offset?: Maybe<SampleOffsetPosterior>;
   outlierProbability: Scalars['Float']['output'];
   sample: Sample;
 };
@@ -1935,7 +1970,11 @@ export type StartAgeModelRunInput = {
    * left out it is measured from the dated levels (their median ages over their event-free depths).
    */
   hemipelagicRateCmPerKyr?: InputMaybe<Scalars['Float']['input']>;
-  /** Scale of the exponential prior on inherited age offsets, years (default 100). */
+  /**
+   * Scale of the exponential prior on inherited (and intruded) age offsets, years, for samples that
+   * give none of their own (Sample.inheritanceScaleYears). Left out, each such sample takes the
+   * default for its material (Sample.inheritanceScaleDefaultYears).
+   */
   inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   /** Iterations per chain after burn-in. */
   iterations?: InputMaybe<Scalars['Int']['input']>;
@@ -2061,9 +2100,13 @@ export type UpdateSampleInput = {
   delta13C?: InputMaybe<Scalars['Float']['input']>;
   deltaR?: InputMaybe<Scalars['Float']['input']>;
   deltaRError?: InputMaybe<Scalars['Float']['input']>;
+  /** Name of the regional Delta-R entry (at most 100 characters); empty clears it. */
+  deltaRSource?: InputMaybe<Scalars['String']['input']>;
   depthM?: InputMaybe<Scalars['Float']['input']>;
   excluded?: InputMaybe<Scalars['Boolean']['input']>;
   exclusionReason?: InputMaybe<Scalars['String']['input']>;
+  /** Scale of the exponential prior on the sample's age offset from its deposit, years (1 to 10,000); null takes the material's default. */
+  inheritanceScaleYears?: InputMaybe<Scalars['Float']['input']>;
   labCode?: InputMaybe<Scalars['String']['input']>;
   material?: InputMaybe<SampleMaterial>;
   measurementYear?: InputMaybe<Scalars['Int']['input']>;
@@ -2153,7 +2196,7 @@ export type AgeModelRunQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, offset?: { __typename?: 'SampleOffsetPosterior', scaleYears: number, medianYears: number, low95Years: number, high95Years: number } | null }> } };
 
 export type AgeModelSiteQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2467,7 +2510,7 @@ export type SiteQueryVariables = Exact<{
 }>;
 
 
-export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, deltaRSource?: string | null, inheritanceScaleYears?: number | null, inheritanceScaleDefaultYears: number, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
 
 export type CreateUnitMutationVariables = Exact<{
   input: CreateUnitInput;
@@ -2652,6 +2695,12 @@ export const AgeModelRunDocument = new TypedDocumentString(`
       }
       hpd95 {
         ...HpdRangeFields
+      }
+      offset {
+        scaleYears
+        medianYears
+        low95Years
+        high95Years
       }
     }
   }
@@ -3686,6 +3735,9 @@ export const SiteDocument = new TypedDocumentString(`
       curve
       deltaR
       deltaRError
+      deltaRSource
+      inheritanceScaleYears
+      inheritanceScaleDefaultYears
       calendarAgeBp
       calendarErrorYears
       measurementYear

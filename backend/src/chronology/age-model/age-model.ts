@@ -16,9 +16,10 @@
  */
 import { CalendarDensity, DensitySummary, normalise, summariseReadable, trim } from '../common/density';
 import { SeededRandom } from '../common/random';
-import { AgeModelInput, AgeRelation, buildOrderGraph, OrderGraph } from './column';
+import { AgeModelInput, AgeRelation, buildOrderGraph, ColumnSample, OrderGraph } from './column';
 import { chainDiagnostics } from './convergence';
 import { CalendarWindow, depositLikelihood, MixtureLikelihoods, modelWindow, yearOf } from './likelihood';
+import { OffsetPosterior, offsetPosterior } from './offset-posterior';
 import { firstDepositNode, OrderChain, PosteriorAccumulator } from './sampler';
 
 export interface AgeModelSettings {
@@ -42,7 +43,10 @@ export interface AgeModelSettings {
    * (see `outlierShiftLikelihood`).
    */
   readonly outlierShiftScaleYears: number;
-  /** Scale (mean, years) of the exponential prior on inheritance and intrusion offsets. */
+  /**
+   * Scale (mean, years) of the exponential prior on inheritance and intrusion offsets, for samples
+   * that carry no scale of their own (`ColumnSample.offsetScaleYears`).
+   */
   readonly inheritanceScaleYears: number;
   /** Most joint draws returned in `eventDraws` (and `allDraws`), evenly spaced over all chains. */
   readonly maxStoredDraws: number;
@@ -141,6 +145,11 @@ export interface SamplePosterior {
   readonly summary: DensitySummary;
   readonly rhat: number;
   readonly ess: number;
+  /**
+   * OLDER_THAN_DEPOSIT and YOUNGER_THAN_DEPOSIT samples: the posterior of sample age minus deposit
+   * age given the sample is not an outlier, with the prior scale used (`offset-posterior.ts`).
+   */
+  readonly offset?: OffsetPosterior;
 }
 
 export interface BoundaryPosterior {
@@ -250,6 +259,15 @@ function checkSettings(settings: AgeModelSettings): void {
   }
 }
 
+/** Most and least a sample's own offset scale may be (years); the service refuses values outside. */
+export const OFFSET_SCALE_LIMITS = { min: 1, max: 10_000 } as const;
+
+/** The offset scale a sample is modelled with: its own, else the run's. */
+export function offsetScaleOf(sample: Pick<ColumnSample, 'offsetScaleYears'>, settings: Pick<AgeModelSettings, 'inheritanceScaleYears'>): number {
+  const own = sample.offsetScaleYears;
+  return own !== undefined && own !== null && own > 0 && Number.isFinite(own) ? own : settings.inheritanceScaleYears;
+}
+
 function labelOf(thing: { id: string; name?: string }): string {
   return thing.name !== undefined && thing.name.trim() !== '' ? `"${thing.name}"` : `"${thing.id}"`;
 }
@@ -307,9 +325,8 @@ export function runAgeModel(
   checkSettings(resolved);
   const graph = buildOrderGraph(input);
   const own = graph.samples.map((sample) => sample.likelihood);
-  const deposits = graph.samples.map((sample) =>
-    depositLikelihood(sample.likelihood, sample.ageRelation, resolved.inheritanceScaleYears),
-  );
+  const scaleOf = (sample: ColumnSample): number => offsetScaleOf(sample, resolved);
+  const deposits = graph.samples.map((sample) => depositLikelihood(sample.likelihood, sample.ageRelation, scaleOf(sample)));
   const window = modelWindow(deposits, own, resolved.windowMarginYears);
   const likelihoods = new MixtureLikelihoods(deposits, window, resolved.outlierPrior, resolved.outlierShiftScaleYears);
   const model = { graph, likelihoods };
@@ -363,7 +380,13 @@ export function runAgeModel(
     );
     const summary = summariseReadable(density);
     const { rhat, ess } = chainDiagnostics(series(firstDeposit + j));
+    const q = resolved.outlierPrior;
+    const offset = offsetPosterior(sample.likelihood, sample.ageRelation, scaleOf(sample), density, (calBp) => {
+      const mixed = likelihoods.mixture(j, calBp);
+      return mixed > 0 ? (1 - q) / mixed : 0;
+    });
     return {
+      ...(offset ? { offset } : {}),
       sampleId: sample.id,
       ageRelation: sample.ageRelation,
       outlierProbability: accumulator.outlierSums[j] / accumulator.draws,

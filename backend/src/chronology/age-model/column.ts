@@ -47,6 +47,12 @@ export interface ColumnSample {
   readonly likelihood: CalendarDensity;
   /** Excluded samples take no part in the model. */
   readonly excluded?: boolean;
+  /**
+   * Scale (mean, years) of the exponential prior on this sample's age offset from its deposit:
+   * inheritance for OLDER_THAN_DEPOSIT, intrusion for YOUNGER_THAN_DEPOSIT. Absent or null takes the
+   * run's `inheritanceScaleYears`. Ignored for DATES_DEPOSIT.
+   */
+  readonly offsetScaleYears?: number | null;
 }
 
 export interface AgeModelInput {

@@ -41,6 +41,12 @@ export const samples = pgTable(
     curve: text('curve'),
     deltaR: doublePrecision('delta_r'),
     deltaRError: doublePrecision('delta_r_error'),
+    // Name of the regional Delta-R entry the sample's Delta-R comes from; samples of a site with one
+    // source share one reservoir offset in the age model.
+    deltaRSource: text('delta_r_source'),
+    // Scale (years) of the exponential prior on an inherited or intruded sample's age offset; null
+    // takes the default for its material.
+    inheritanceScaleYears: doublePrecision('inheritance_scale_years'),
     calendarAgeBp: doublePrecision('calendar_age_bp'),
     calendarErrorYears: doublePrecision('calendar_error_years'),
     measurementYear: integer('measurement_year'),
@@ -59,6 +65,10 @@ export const samples = pgTable(
     check('samples_c14_error_positive', sql`${t.c14Error} is null or ${t.c14Error} > 0`),
     check('samples_c14_age_not_negative', sql`${t.c14Age} is null or ${t.c14Age} >= 0`),
     check('samples_delta_r_error_not_negative', sql`${t.deltaRError} is null or ${t.deltaRError} >= 0`),
+    check(
+      'samples_inheritance_scale_range',
+      sql`${t.inheritanceScaleYears} is null or (${t.inheritanceScaleYears} >= 1 and ${t.inheritanceScaleYears} <= 10000)`,
+    ),
     check('samples_calendar_error_positive', sql`${t.calendarErrorYears} is null or ${t.calendarErrorYears} > 0`),
     check('samples_depth_not_negative', sql`${t.depthM} is null or ${t.depthM} >= 0`),
     check(

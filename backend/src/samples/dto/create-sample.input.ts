@@ -2,7 +2,7 @@ import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, IsUUID, Length, Matches, Max, Min } from 'class-validator';
 import { MAX_AGE_ERROR_YEARS, MAX_AGE_YEARS } from '../../chronology/calibration/bounds';
 import { CURVE_CODES, CurveCode } from '../../calibration/dto/calibrate.input';
-import { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS } from '../sample-rules';
+import { AGE_RELATIONS, DATING_METHODS, INHERITANCE_SCALE_LIMITS, SAMPLE_MATERIALS } from '../sample-rules';
 
 export { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS };
 
@@ -73,6 +73,17 @@ export class CreateSampleInput {
   @Min(0, { message: 'deltaRError cannot be negative' })
   @Max(MAX_AGE_ERROR_YEARS, { message: `deltaRError must not be greater than ${MAX_AGE_ERROR_YEARS} (14C years)` })
   deltaRError?: number | null;
+
+  @IsOptional()
+  @IsString()
+  @Length(0, 100, { message: 'deltaRSource may hold at most 100 characters' })
+  deltaRSource?: string | null;
+
+  @IsOptional()
+  @IsNumber(finite)
+  @Min(INHERITANCE_SCALE_LIMITS.min, { message: `inheritanceScaleYears must be at least ${INHERITANCE_SCALE_LIMITS.min} year` })
+  @Max(INHERITANCE_SCALE_LIMITS.max, { message: `inheritanceScaleYears must not be greater than ${INHERITANCE_SCALE_LIMITS.max} years` })
+  inheritanceScaleYears?: number | null;
 
   @IsOptional()
   @IsNumber(finite)

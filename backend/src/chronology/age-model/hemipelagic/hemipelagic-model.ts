@@ -42,12 +42,14 @@ import {
   DEFAULT_AGE_MODEL_SETTINGS,
   ESS_MINIMUM,
   EventPosterior,
+  offsetScaleOf,
   RHAT_LIMIT,
   SamplePosterior,
 } from '../age-model';
 import { AgeModelInput, ColumnEventHorizon, ColumnProblemError, isModelled } from '../column';
 import { chainDiagnostics } from '../convergence';
 import { LATEST_CAL_BP } from '../likelihood';
+import { offsetPosterior } from '../offset-posterior';
 import { AdaptiveMetropolis } from './adaptive-metropolis';
 import { coreDepthScale, CoreDepthScale, hemipelagicProblems } from './core-depth';
 import { GridLevelLikelihoods, LevelLikelihoods } from './levels';
@@ -498,12 +500,13 @@ export function runHemipelagicModel(
   }
   const h = settings.hemipelagic;
   const structure = buildStructure(input, h);
-  const levels =
-    makeLevels?.(modelled, settings) ??
-    new GridLevelLikelihoods(modelled, settings.inheritanceScaleYears, {
-      prior: settings.outlierPrior,
-      shiftScaleYears: settings.outlierShiftScaleYears,
-    });
+  const gridLevels = makeLevels
+    ? undefined
+    : new GridLevelLikelihoods(modelled, settings.inheritanceScaleYears, {
+        prior: settings.outlierPrior,
+        shiftScaleYears: settings.outlierShiftScaleYears,
+      });
+  const levels = makeLevels?.(modelled, settings) ?? gridLevels!;
 
   const measured = measuredYearsPerMetre(levels, structure);
   let meanYearsPerMetre: number;
@@ -627,7 +630,15 @@ export function runHemipelagicModel(
   const samples: SamplePosterior[] = modelled.map((sample, j) => {
     const density = kernelDensity(pooled(E + j));
     const summary = summarise(density);
+    const q = settings.outlierPrior;
+    const offset = gridLevels
+      ? offsetPosterior(sample.likelihood, sample.ageRelation, offsetScaleOf(sample, settings), density, (calBp) => {
+          const mixed = gridLevels.mixture(j, calBp);
+          return mixed > 0 ? (1 - q) / mixed : 0;
+        })
+      : undefined;
     return {
+      ...(offset ? { offset } : {}),
       sampleId: sample.id,
       ageRelation: sample.ageRelation,
       outlierProbability: outlierSums[j] / totalDraws,

@@ -53,7 +53,7 @@ export class GridLevelLikelihoods implements LevelLikelihoods {
   private readonly sds: Float64Array;
 
   constructor(
-    samples: readonly Pick<ColumnSample, 'likelihood' | 'ageRelation'>[],
+    samples: readonly Pick<ColumnSample, 'likelihood' | 'ageRelation' | 'offsetScaleYears'>[],
     inheritanceScaleYears: number,
     private readonly outliers: OutlierModel,
   ) {
@@ -64,7 +64,8 @@ export class GridLevelLikelihoods implements LevelLikelihoods {
     this.medians = new Float64Array(this.count);
     this.sds = new Float64Array(this.count);
     samples.forEach((sample, j) => {
-      const d = normalised(depositLikelihood(sample.likelihood, sample.ageRelation, inheritanceScaleYears));
+      const scale = sample.offsetScaleYears != null && sample.offsetScaleYears > 0 ? sample.offsetScaleYears : inheritanceScaleYears;
+      const d = normalised(depositLikelihood(sample.likelihood, sample.ageRelation, scale));
       const margin = Math.ceil(25 * outliers.shiftScaleYears);
       const window: CalendarWindow = { youngCalBp: d.startCalBp - margin, oldCalBp: d.startCalBp + d.values.length - 1 + margin };
       const plain = new Float64Array(window.oldCalBp - window.youngCalBp + 1);
@@ -104,6 +105,12 @@ export class GridLevelLikelihoods implements LevelLikelihoods {
   /** The outlier alternative O(t). */
   shifted(level: number, calBp: number): number {
     return this.read(this.shiftedValues[level], level, calBp);
+  }
+
+  /** L_q(t) = (1 - q) L(t) + q O(t). */
+  mixture(level: number, calBp: number): number {
+    const q = this.outliers.prior;
+    return (1 - q) * this.plain(level, calBp) + q * this.shifted(level, calBp);
   }
 
   logLikelihood(level: number, calBp: number): number {

@@ -7,7 +7,7 @@ import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
 import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
-import { bracketingSamples, eventChartWindow, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, RUN_SETTINGS_FIELDS, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { bracketingSamples, eventChartWindow, formatOffset, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, RUN_SETTINGS_FIELDS, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { fieldErrorsOf, formErrorOf } from '@/modules/api/utils/apiError';
@@ -244,6 +244,9 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                   <th>Median</th>
                   <th>95.4 % range</th>
                   <th title="After the run: how likely the sample is misplaced (reworked, intruded, mislabelled), given the column's order">Misplaced?</th>
+                  <th title="Inherited or intruded samples: how much older (+) or younger (−) the material is than its deposit, median and 95 % range, if the sample is not misplaced; the prior's mean is in the tooltip">
+                    Offset
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -263,6 +266,9 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                           check
                         </Tag>
                       )}
+                    </td>
+                    <td className="num" title={entry.offset ? `prior mean ${Math.round(entry.offset.scaleYears)} years` : undefined}>
+                      {formatOffset(entry.offset)}
                     </td>
                   </tr>
                 ))}

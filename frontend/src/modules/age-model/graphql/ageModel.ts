@@ -57,6 +57,12 @@ export const AgeModelRunDocument = graphql(`
         hpd95 {
           ...HpdRangeFields
         }
+        offset {
+          scaleYears
+          medianYears
+          low95Years
+          high95Years
+        }
       }
     }
   }

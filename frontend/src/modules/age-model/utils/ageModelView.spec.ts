@@ -4,6 +4,7 @@ import {
   DEFAULT_RUN_SETTINGS,
   defaultDepthModel,
   eventChartWindow,
+  formatOffset,
   initialRunSettings,
   isFlaggedOutlier,
   progressPercent,
@@ -114,5 +115,13 @@ describe(eventChartWindow.name, () => {
     expect(young[1]).toBeGreaterThanOrEqual(850 + 2 * 40);
     expect(old[0]).toBeGreaterThan(young[1]);
     expect(old[0]).toBeLessThanOrEqual(5200 - 2 * 40);
+  });
+});
+
+describe(formatOffset.name, () => {
+  it('signs inherited offsets + and intruded ones −, with the 95 % range', () => {
+    expect(formatOffset({ medianYears: 210.4, low95Years: 39.6, high95Years: 520 })).toBe('+210 yr (+40 to +520)');
+    expect(formatOffset({ medianYears: -35, low95Years: -120.2, high95Years: -1 })).toBe('−35 yr (−120 to −1)');
+    expect(formatOffset(null)).toBe('–');
   });
 });

@@ -194,3 +194,16 @@ export function eventChartWindow(posterior: readonly DensityPoint[], likelihoods
   const found = calendarWindow([visibleBody(posterior), ...likelihoods.map((density) => visibleBody(density))], { padding: 0.1, minSpanYears: 200 });
   return found ? [found.youngerCalBp, found.olderCalBp] : [0, 1000];
 }
+
+/**
+ * A sample's posterior offset from its deposit (sample age minus deposit age) as the samples table
+ * shows it: signed median and central 95 % range in whole years, e.g. "+210 yr (+40 to +520)".
+ */
+export function formatOffset(offset: { medianYears: number; low95Years: number; high95Years: number } | null | undefined): string {
+  if (!offset) return '–';
+  const signed = (v: number) => {
+    const r = Math.round(v);
+    return r > 0 ? `+${r}` : r < 0 ? `−${-r}` : '0';
+  };
+  return `${signed(offset.medianYears)} yr (${signed(offset.low95Years)} to ${signed(offset.high95Years)})`;
+}

@@ -35,7 +35,7 @@ export function ExchangePanel({ projectId }: ExchangePanelProps) {
       <section>
         <H5>Export</H5>
         <p className={Classes.TEXT_MUTED}>
-          The bundle holds everything entered in the project (format <span className="num">stratochron-bundle</span> version 1) and
+          The bundle holds everything entered in the project (format <span className="num">stratochron-bundle</span> version 2) and
           imports into any Stratochron server. Calibrations and runs are recomputed from it.
         </p>
         <div className="sc-exchange-buttons">

@@ -38,7 +38,7 @@ describe(sampleImportTemplateCsv.name, () => {
     expect(lines[0]).toBe(SAMPLE_IMPORT_COLUMNS.join(','));
     expect(SAMPLE_IMPORT_COLUMNS).toEqual([
       'labCode', 'unit', 'depthM', 'method', 'material', 'ageRelation', 'c14Age', 'c14Error',
-      'delta13C', 'curve', 'deltaR', 'deltaRError', 'calendarAgeBp', 'calendarErrorYears',
+      'delta13C', 'curve', 'deltaR', 'deltaRError', 'deltaRSource', 'inheritanceScaleYears', 'calendarAgeBp', 'calendarErrorYears',
       'measurementYear', 'excluded', 'exclusionReason', 'notes',
     ]);
   });

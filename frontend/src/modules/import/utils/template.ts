@@ -18,6 +18,8 @@ export const SAMPLE_IMPORT_COLUMNS = [
   'curve',
   'deltaR',
   'deltaRError',
+  'deltaRSource',
+  'inheritanceScaleYears',
   'calendarAgeBp',
   'calendarErrorYears',
   'measurementYear',
@@ -60,6 +62,17 @@ export const SAMPLE_IMPORT_COLUMN_SPECS: readonly SampleImportColumnSpec[] = [
   { column: 'curve', requirement: 'radiocarbon', description: 'INTCAL20, MARINE20 or SHCAL20.' },
   { column: 'deltaR', requirement: 'optional', description: 'Local marine reservoir offset Delta-R, 14C yr (marine curves).' },
   { column: 'deltaRError', requirement: 'optional', description: '1-sigma error of Delta-R, 14C yr.' },
+  {
+    column: 'deltaRSource',
+    requirement: 'optional',
+    description: 'Name of the regional Delta-R entry; marine samples of a site with one source share one reservoir offset.',
+  },
+  {
+    column: 'inheritanceScaleYears',
+    requirement: 'optional',
+    description:
+      'Detrital or intrusive samples: mean inherited (or intruded) age, years (1-10,000); empty takes the default for the material.',
+  },
   {
     column: 'calendarAgeBp',
     requirement: 'luminescence',

@@ -26,6 +26,7 @@ import {
   CURVE_LABELS,
   DATING_METHOD_LABELS,
   DATING_METHODS,
+  DEFAULT_INHERITANCE_SCALE_YEARS,
   SAMPLE_MATERIAL_LABELS,
   SAMPLE_MATERIALS,
 } from '@/modules/samples/utils/sampleVocabulary';
@@ -161,7 +162,7 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
       onSubmit={handleSubmit}
       submitting={mutation.isPending}
       submitLabel={sample ? 'Save' : 'Add sample'}
-      formError={formErrorOf(mutation.error, sampleFormFields(values.method, values.curve))}
+      formError={formErrorOf(mutation.error, sampleFormFields(values.method, values.curve, values.ageRelation))}
       conflict={Boolean(sample) && isEditConflict(mutation.error)}
       onReload={handleReload}
       width={680}
@@ -183,6 +184,18 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
         onValueChange={handleRelationChange}
         error={errorOf('ageRelation')}
       />
+      {values.ageRelation !== 'DATES_DEPOSIT' && (
+        <NumberField
+          name="inheritanceScaleYears"
+          label={values.ageRelation === 'OLDER_THAN_DEPOSIT' ? 'Mean inherited age' : 'Mean intrusion age'}
+          unit="years"
+          labelInfo="(optional)"
+          helperText={`Scale of the age model's prior on how much ${values.ageRelation === 'OLDER_THAN_DEPOSIT' ? 'older' : 'younger'} the material is than its deposit; empty takes ${DEFAULT_INHERITANCE_SCALE_YEARS[values.material]} years for ${SAMPLE_MATERIAL_LABELS[values.material].toLowerCase()}.`}
+          value={values.inheritanceScaleYears}
+          onValueChange={set('inheritanceScaleYears')}
+          error={errorOf('inheritanceScaleYears')}
+        />
+      )}
 
       <fieldset className="sc-fieldset">
         <legend>{DATING_METHOD_LABELS[values.method]} age</legend>
@@ -239,6 +252,17 @@ export function SampleDialog({ site, sample, onClose }: SampleDialogProps) {
                 </>
               )}
             </div>
+            {shown.has('deltaRSource') && (
+              <TextField
+                name="deltaRSource"
+                label="Delta-R source"
+                labelInfo="(optional)"
+                helperText="The regional Delta-R entry this value comes from. Marine samples of the site with one source share one reservoir offset in the age model; without a source, samples with the same Delta-R and error share it."
+                value={values.deltaRSource}
+                onValueChange={set('deltaRSource')}
+                error={errorOf('deltaRSource')}
+              />
+            )}
             {polarMarine && (
               <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} compact>
                 This site lies above 60° latitude: Marine20 is not meant for polar waters.

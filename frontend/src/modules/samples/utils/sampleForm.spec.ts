@@ -12,7 +12,7 @@ const form = (overrides: Partial<SampleFormValues>): SampleFormValues => ({ ...e
 describe(methodFields.name, () => {
   it('asks Delta-R only of radiocarbon on a marine curve', () => {
     expect(methodFields('RADIOCARBON', 'INTCAL20')).toEqual(['c14Age', 'c14Error', 'delta13C', 'curve']);
-    expect(methodFields('RADIOCARBON', 'MARINE20')).toEqual(['c14Age', 'c14Error', 'delta13C', 'curve', 'deltaR', 'deltaRError']);
+    expect(methodFields('RADIOCARBON', 'MARINE20')).toEqual(['c14Age', 'c14Error', 'delta13C', 'curve', 'deltaR', 'deltaRError', 'deltaRSource']);
   });
 
   it('asks luminescence for its measurement year, and ties for a centre and half-width', () => {
@@ -92,6 +92,26 @@ describe(readSampleForm.name, () => {
     expect(result.ok ? null : result.errors.exclusionReason).toBe('say why the sample is excluded');
   });
 
+  it('sends an inherited sample\'s own inheritance scale within 1-10,000 years, and none for a sample dating its deposit', () => {
+    const inherited = readSampleForm(form({ c14Age: '1835', c14Error: '25', ageRelation: 'OLDER_THAN_DEPOSIT', inheritanceScaleYears: '250' }), units);
+    expect(inherited).toEqual({ ok: true, input: expect.objectContaining({ inheritanceScaleYears: 250 }) });
+    const empty = readSampleForm(form({ c14Age: '1835', c14Error: '25', ageRelation: 'OLDER_THAN_DEPOSIT' }), units);
+    expect(empty).toEqual({ ok: true, input: expect.objectContaining({ inheritanceScaleYears: null }) });
+    const dating = readSampleForm(form({ c14Age: '1835', c14Error: '25', inheritanceScaleYears: '250' }), units);
+    expect(dating).toEqual({ ok: true, input: expect.objectContaining({ inheritanceScaleYears: null }) });
+    const tooLarge = readSampleForm(form({ c14Age: '1835', c14Error: '25', ageRelation: 'YOUNGER_THAN_DEPOSIT', inheritanceScaleYears: '20000' }), units);
+    expect(tooLarge.ok).toBe(false);
+    if (!tooLarge.ok) expect(Object.keys(tooLarge.errors)).toEqual(['inheritanceScaleYears']);
+  });
+
+  it('sends a marine sample\'s Delta-R source, trimmed', () => {
+    const result = readSampleForm(
+      form({ c14Age: '1835', c14Error: '25', material: 'PLANKTIC_FORAMS', curve: 'MARINE20', deltaR: '150', deltaRError: '40', deltaRSource: ' Velmora shelf ' }),
+      units,
+    );
+    expect(result).toEqual({ ok: true, input: expect.objectContaining({ deltaRSource: 'Velmora shelf' }) });
+  });
+
   it('asks for a unit of the site', () => {
     const result = readSampleForm(form({ unitId: 'elsewhere', c14Age: '1', c14Error: '1' }), units);
     expect(result.ok ? null : result.errors.unitId).toBe('choose the unit the sample came from');
@@ -115,7 +135,7 @@ describe(sampleFormFrom.name, () => {
     const stored = {
       unitId: 'u1', labCode: 'TSH-0042', method: 'RADIOCARBON' as const, material: 'SHELL' as const, depthM: 1.2,
       ageRelation: 'DATES_DEPOSIT' as const, c14Age: 2410, c14Error: 30, delta13C: null, curve: 'MARINE20' as const,
-      deltaR: -40, deltaRError: 55, calendarAgeBp: null, calendarErrorYears: null, measurementYear: null,
+      deltaR: -40, deltaRError: 55, deltaRSource: 'Tasman shelf', inheritanceScaleYears: null, calendarAgeBp: null, calendarErrorYears: null, measurementYear: null,
       excluded: false, exclusionReason: null, notes: null,
     };
     const values = sampleFormFrom(stored);

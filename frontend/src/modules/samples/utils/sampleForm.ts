@@ -1,6 +1,6 @@
 import type { AgeRelation, CreateSampleInput, CurveCode, DatingMethod, SampleMaterial, UpdateSampleInput } from '@/gql/graphql';
 import { FieldReader, numberText, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
-import { isMarineCurve, isMarineMaterial } from './sampleVocabulary';
+import { INHERITANCE_SCALE_LIMITS, isMarineCurve, isMarineMaterial } from './sampleVocabulary';
 import { MAX_AGE_ERROR_YEARS } from '@/modules/ages/utils/ageBounds';
 
 /** A sample form as typed: numbers stay text until the form is checked. */
@@ -17,6 +17,8 @@ export type SampleFormValues = {
   curve: CurveCode | '';
   deltaR: string;
   deltaRError: string;
+  deltaRSource: string;
+  inheritanceScaleYears: string;
   calendarAgeBp: string;
   calendarErrorYears: string;
   measurementYear: string;
@@ -48,7 +50,7 @@ const COMMON_FIELDS: readonly SampleFormField[] = [
 export function methodFields(method: DatingMethod, curve: CurveCode | ''): SampleFormField[] {
   switch (method) {
     case 'RADIOCARBON':
-      return ['c14Age', 'c14Error', 'delta13C', 'curve', ...(isMarineCurve(curve || null) ? (['deltaR', 'deltaRError'] as const) : [])];
+      return ['c14Age', 'c14Error', 'delta13C', 'curve', ...(isMarineCurve(curve || null) ? (['deltaR', 'deltaRError', 'deltaRSource'] as const) : [])];
     case 'LUMINESCENCE':
       return ['calendarAgeBp', 'calendarErrorYears', 'measurementYear'];
     case 'HISTORICAL':
@@ -58,8 +60,8 @@ export function methodFields(method: DatingMethod, curve: CurveCode | ''): Sampl
 }
 
 /** Every field the form shows for a method (for matching server errors to fields). */
-export function sampleFormFields(method: DatingMethod, curve: CurveCode | ''): SampleFormField[] {
-  return [...COMMON_FIELDS, ...methodFields(method, curve)];
+export function sampleFormFields(method: DatingMethod, curve: CurveCode | '', ageRelation: AgeRelation = 'DATES_DEPOSIT'): SampleFormField[] {
+  return [...COMMON_FIELDS, ...(ageRelation !== 'DATES_DEPOSIT' ? (['inheritanceScaleYears'] as const) : []), ...methodFields(method, curve)];
 }
 
 /** Lab codes as the server accepts them: letters, digits, spaces and . - _ / (1 to 64 characters). */
@@ -80,6 +82,8 @@ export function emptySampleForm(unitId = ''): SampleFormValues {
     curve: 'INTCAL20',
     deltaR: '',
     deltaRError: '',
+    deltaRSource: '',
+    inheritanceScaleYears: '',
     calendarAgeBp: '',
     calendarErrorYears: '',
     measurementYear: '',
@@ -107,6 +111,8 @@ export function sampleFormFrom(sample: StoredSample): SampleFormValues {
     curve: sample.curve ?? '',
     deltaR: numberText(sample.deltaR),
     deltaRError: numberText(sample.deltaRError),
+    deltaRSource: sample.deltaRSource ?? '',
+    inheritanceScaleYears: numberText(sample.inheritanceScaleYears),
     calendarAgeBp: numberText(sample.calendarAgeBp),
     calendarErrorYears: numberText(sample.calendarErrorYears),
     measurementYear: numberText(sample.measurementYear),
@@ -163,6 +169,12 @@ export function readSampleForm(
   const deltaR = shown.has('deltaR') ? reader.number('deltaR', values.deltaR, { min: -2000, max: 5000 }) : null;
   const deltaRError = shown.has('deltaRError') ? reader.number('deltaRError', values.deltaRError, { min: 0, max: MAX_AGE_ERROR_YEARS }) : null;
   if (deltaRError !== null && deltaR === null && !reader.errors.deltaR) reader.fail('deltaR', 'give Delta-R with its error');
+  const deltaRSource = shown.has('deltaRSource') ? optionalText(values.deltaRSource) : null;
+  if (deltaRSource !== null && deltaRSource.length > 100) reader.fail('deltaRSource', 'at most 100 characters');
+  const inheritanceScaleYears =
+    values.ageRelation !== 'DATES_DEPOSIT'
+      ? reader.number('inheritanceScaleYears', values.inheritanceScaleYears, { min: INHERITANCE_SCALE_LIMITS.min, max: INHERITANCE_SCALE_LIMITS.max })
+      : null;
   const calendarAgeBp = shown.has('calendarAgeBp')
     ? reader.number('calendarAgeBp', values.calendarAgeBp, luminescence ? { required: true, above: 0 } : { required: true })
     : null;
@@ -188,6 +200,8 @@ export function readSampleForm(
     curve: radiocarbon && values.curve !== '' ? values.curve : null,
     deltaR,
     deltaRError,
+    deltaRSource,
+    inheritanceScaleYears,
     calendarAgeBp,
     calendarErrorYears,
     measurementYear,

@@ -56,3 +56,22 @@ export function isMarineCurve(curve: CurveCode | null | undefined): boolean {
 export function isMarineMaterial(material: SampleMaterial): boolean {
   return material === 'PLANKTIC_FORAMS' || material === 'BENTHIC_FORAMS' || material === 'SHELL';
 }
+
+/** Bounds of a sample's own inheritance (intrusion) scale, years, as the server checks them. */
+export const INHERITANCE_SCALE_LIMITS = { min: 1, max: 10_000 } as const;
+
+/**
+ * The inheritance (intrusion) scale the age model takes for a sample that gives none, by material;
+ * the server's table (backend samples/sample-rules.ts, DEFAULT_INHERITANCE_SCALE_YEARS, where each
+ * is justified). A stored sample reports its own as `inheritanceScaleDefaultYears`.
+ */
+export const DEFAULT_INHERITANCE_SCALE_YEARS: Record<SampleMaterial, number> = {
+  DETRITAL_CHARCOAL: 200,
+  IN_SITU_PLANT: 10,
+  PLANT_MACROFOSSIL: 25,
+  PLANKTIC_FORAMS: 100,
+  BENTHIC_FORAMS: 100,
+  SHELL: 100,
+  BULK_SEDIMENT: 300,
+  OTHER: 100,
+};

@@ -62,6 +62,9 @@ export const SiteDocument = graphql(`
         curve
         deltaR
         deltaRError
+        deltaRSource
+        inheritanceScaleYears
+        inheritanceScaleDefaultYears
         calendarAgeBp
         calendarErrorYears
         measurementYear
