@@ -2411,6 +2411,30 @@ export type DeleteSiteMutationVariables = Exact<{
 
 export type DeleteSiteMutation = { __typename?: 'Mutation', deleteSite: boolean };
 
+export type SegmentEventTableFieldsFragment = { __typename?: 'SegmentEventTable', segmentId: string, segmentName: string, segmentStartKm: number, segmentEndKm: number, hypothesisId: string, hypothesisName: string, hypothesisVersion: number, countedEvents: number, expectedEvents: number, weighted: boolean, note: string, rule: { __typename?: 'CountingRule', minimumSpanShare: number, includeUntied: boolean, qualityWeights?: Array<number> | null, confidenceWeights?: Array<number> | null }, rows: Array<{ __typename?: 'SegmentEventTableRow', regionalEventId: string, label: string, segmentNames: Array<string>, spanShare: number, throughGoing: boolean, untied: boolean, tieConfidences: Array<number>, qualities: Array<number>, medianCalBp?: number | null, counted: boolean, inclusionProbability: number, reason: string, members: Array<{ __typename?: 'SegmentEventTableMember', eventHorizonId: string, eventName: string, siteId: string, siteName: string, alongStrikeKm: number, segmentName?: string | null, quality: number }> }> };
+
+export type SegmentEventTableQueryVariables = Exact<{
+  input: SegmentEventTableInput;
+}>;
+
+
+export type SegmentEventTableQuery = { __typename?: 'Query', segmentEventTable: { __typename?: 'SegmentEventTable', segmentId: string, segmentName: string, segmentStartKm: number, segmentEndKm: number, hypothesisId: string, hypothesisName: string, hypothesisVersion: number, countedEvents: number, expectedEvents: number, weighted: boolean, note: string, rule: { __typename?: 'CountingRule', minimumSpanShare: number, includeUntied: boolean, qualityWeights?: Array<number> | null, confidenceWeights?: Array<number> | null }, rows: Array<{ __typename?: 'SegmentEventTableRow', regionalEventId: string, label: string, segmentNames: Array<string>, spanShare: number, throughGoing: boolean, untied: boolean, tieConfidences: Array<number>, qualities: Array<number>, medianCalBp?: number | null, counted: boolean, inclusionProbability: number, reason: string, members: Array<{ __typename?: 'SegmentEventTableMember', eventHorizonId: string, eventName: string, siteId: string, siteName: string, alongStrikeKm: number, segmentName?: string | null, quality: number }> }> } };
+
+export type AnalysisEventTableQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type AnalysisEventTableQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, recordEvents?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, shareOfDraws?: number | null }>, eventTable?: { __typename?: 'SegmentEventTable', segmentId: string, segmentName: string, segmentStartKm: number, segmentEndKm: number, hypothesisId: string, hypothesisName: string, hypothesisVersion: number, countedEvents: number, expectedEvents: number, weighted: boolean, note: string, rule: { __typename?: 'CountingRule', minimumSpanShare: number, includeUntied: boolean, qualityWeights?: Array<number> | null, confidenceWeights?: Array<number> | null }, rows: Array<{ __typename?: 'SegmentEventTableRow', regionalEventId: string, label: string, segmentNames: Array<string>, spanShare: number, throughGoing: boolean, untied: boolean, tieConfidences: Array<number>, qualities: Array<number>, medianCalBp?: number | null, counted: boolean, inclusionProbability: number, reason: string, members: Array<{ __typename?: 'SegmentEventTableMember', eventHorizonId: string, eventName: string, siteId: string, siteName: string, alongStrikeKm: number, segmentName?: string | null, quality: number }> }> } | null } };
+
+export type RecurrenceComparisonQueryVariables = Exact<{
+  analysisAId: Scalars['ID']['input'];
+  analysisBId: Scalars['ID']['input'];
+}>;
+
+
+export type RecurrenceComparisonQuery = { __typename?: 'Query', recurrenceComparison: { __typename?: 'RecurrenceComparison', settingDifferences: Array<string>, note: string, caution: string, analysisA: { __typename?: 'RecurrenceAnalysis', id: string, hypothesisVersion?: number | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null }, analysisB: { __typename?: 'RecurrenceAnalysis', id: string, hypothesisVersion?: number | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null }, events: Array<{ __typename?: 'ComparedEventRow', regionalEventId: string, label: string, difference: EventDifference, a?: { __typename?: 'ComparedEventSide', counted: boolean, inclusionProbability: number, spanShare: number, throughGoing: boolean, untied: boolean, medianCalBp?: number | null, reason: string } | null, b?: { __typename?: 'ComparedEventSide', counted: boolean, inclusionProbability: number, spanShare: number, throughGoing: boolean, untied: boolean, medianCalBp?: number | null, reason: string } | null }>, statistics: Array<{ __typename?: 'ComparedStatistic', quantity: string, unit: string, medianDifference: number, rangesOverlap: boolean, a: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number }, b: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } }>, probabilities: Array<{ __typename?: 'ComparedProbability', model: string, windowYears: number, medianDifference: number, rangesOverlap: boolean, a: { __typename?: 'WindowProbability', median: number, low95: number, high95: number }, b: { __typename?: 'WindowProbability', median: number, low95: number, high95: number } }> } };
+
 export type RecurrenceSetupQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -2640,6 +2664,50 @@ export const HpdRangeFieldsFragmentDoc = new TypedDocumentString(`
   probability
 }
     `, {"fragmentName":"HpdRangeFields"}) as unknown as TypedDocumentString<HpdRangeFieldsFragment, unknown>;
+export const SegmentEventTableFieldsFragmentDoc = new TypedDocumentString(`
+    fragment SegmentEventTableFields on SegmentEventTable {
+  segmentId
+  segmentName
+  segmentStartKm
+  segmentEndKm
+  hypothesisId
+  hypothesisName
+  hypothesisVersion
+  rule {
+    minimumSpanShare
+    includeUntied
+    qualityWeights
+    confidenceWeights
+  }
+  rows {
+    regionalEventId
+    label
+    members {
+      eventHorizonId
+      eventName
+      siteId
+      siteName
+      alongStrikeKm
+      segmentName
+      quality
+    }
+    segmentNames
+    spanShare
+    throughGoing
+    untied
+    tieConfidences
+    qualities
+    medianCalBp
+    counted
+    inclusionProbability
+    reason
+  }
+  countedEvents
+  expectedEvents
+  weighted
+  note
+}
+    `, {"fragmentName":"SegmentEventTableFields"}) as unknown as TypedDocumentString<SegmentEventTableFieldsFragment, unknown>;
 export const AgeModelRunDocument = new TypedDocumentString(`
     query AgeModelRun($id: ID!) {
   ageModelRun(id: $id) {
@@ -3324,6 +3392,194 @@ export const DeleteSiteDocument = new TypedDocumentString(`
   deleteSite(id: $id)
 }
     `) as unknown as TypedDocumentString<DeleteSiteMutation, DeleteSiteMutationVariables>;
+export const SegmentEventTableDocument = new TypedDocumentString(`
+    query SegmentEventTable($input: SegmentEventTableInput!) {
+  segmentEventTable(input: $input) {
+    ...SegmentEventTableFields
+  }
+}
+    fragment SegmentEventTableFields on SegmentEventTable {
+  segmentId
+  segmentName
+  segmentStartKm
+  segmentEndKm
+  hypothesisId
+  hypothesisName
+  hypothesisVersion
+  rule {
+    minimumSpanShare
+    includeUntied
+    qualityWeights
+    confidenceWeights
+  }
+  rows {
+    regionalEventId
+    label
+    members {
+      eventHorizonId
+      eventName
+      siteId
+      siteName
+      alongStrikeKm
+      segmentName
+      quality
+    }
+    segmentNames
+    spanShare
+    throughGoing
+    untied
+    tieConfidences
+    qualities
+    medianCalBp
+    counted
+    inclusionProbability
+    reason
+  }
+  countedEvents
+  expectedEvents
+  weighted
+  note
+}`) as unknown as TypedDocumentString<SegmentEventTableQuery, SegmentEventTableQueryVariables>;
+export const AnalysisEventTableDocument = new TypedDocumentString(`
+    query AnalysisEventTable($id: ID!) {
+  recurrenceAnalysis(id: $id) {
+    id
+    recordEvents {
+      median
+      low95
+      high95
+    }
+    intervals {
+      index
+      shareOfDraws
+    }
+    eventTable {
+      ...SegmentEventTableFields
+    }
+  }
+}
+    fragment SegmentEventTableFields on SegmentEventTable {
+  segmentId
+  segmentName
+  segmentStartKm
+  segmentEndKm
+  hypothesisId
+  hypothesisName
+  hypothesisVersion
+  rule {
+    minimumSpanShare
+    includeUntied
+    qualityWeights
+    confidenceWeights
+  }
+  rows {
+    regionalEventId
+    label
+    members {
+      eventHorizonId
+      eventName
+      siteId
+      siteName
+      alongStrikeKm
+      segmentName
+      quality
+    }
+    segmentNames
+    spanShare
+    throughGoing
+    untied
+    tieConfidences
+    qualities
+    medianCalBp
+    counted
+    inclusionProbability
+    reason
+  }
+  countedEvents
+  expectedEvents
+  weighted
+  note
+}`) as unknown as TypedDocumentString<AnalysisEventTableQuery, AnalysisEventTableQueryVariables>;
+export const RecurrenceComparisonDocument = new TypedDocumentString(`
+    query RecurrenceComparison($analysisAId: ID!, $analysisBId: ID!) {
+  recurrenceComparison(analysisAId: $analysisAId, analysisBId: $analysisBId) {
+    analysisA {
+      id
+      hypothesis {
+        id
+        name
+      }
+      hypothesisVersion
+    }
+    analysisB {
+      id
+      hypothesis {
+        id
+        name
+      }
+      hypothesisVersion
+    }
+    settingDifferences
+    events {
+      regionalEventId
+      label
+      difference
+      a {
+        counted
+        inclusionProbability
+        spanShare
+        throughGoing
+        untied
+        medianCalBp
+        reason
+      }
+      b {
+        counted
+        inclusionProbability
+        spanShare
+        throughGoing
+        untied
+        medianCalBp
+        reason
+      }
+    }
+    statistics {
+      quantity
+      unit
+      a {
+        median
+        low95
+        high95
+      }
+      b {
+        median
+        low95
+        high95
+      }
+      medianDifference
+      rangesOverlap
+    }
+    probabilities {
+      model
+      windowYears
+      a {
+        median
+        low95
+        high95
+      }
+      b {
+        median
+        low95
+        high95
+      }
+      medianDifference
+      rangesOverlap
+    }
+    note
+    caution
+  }
+}
+    `) as unknown as TypedDocumentString<RecurrenceComparisonQuery, RecurrenceComparisonQueryVariables>;
 export const RecurrenceSetupDocument = new TypedDocumentString(`
     query RecurrenceSetup($projectId: ID!) {
   project(id: $projectId) {

@@ -1,7 +1,9 @@
 import { Button, Callout, Intent, SegmentedControl } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useState, type FormEvent } from 'react';
-import type { RecurrenceSetupQuery } from '@/gql/graphql';
+import type { CountingRuleInput, RecurrenceSetupQuery } from '@/gql/graphql';
+import { CountingRulePanel } from '@/modules/recurrence/components/CountingRulePanel';
+import { defaultCountingRule, readCountingRule, type CountingRuleForm } from '@/modules/recurrence/utils/eventCounting';
 import {
   defaultRecurrenceSettings,
   readRecurrenceSettings,
@@ -22,7 +24,7 @@ export type RecurrenceSetupFormProps = {
   project: RecurrenceSetupQuery['project'];
   starting: boolean;
   error: string | null;
-  onStart: (input: RecurrenceSettingsInput) => void;
+  onStart: (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }) => void;
 };
 
 /** Settings of a new recurrence analysis and the button that starts it. */
@@ -33,17 +35,21 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
     siteId: project.sites[0]?.id ?? '',
   }));
   const [errors, setErrors] = useState<FieldErrors<RecurrenceSettingsField>>({});
+  const [rule, setRule] = useState<CountingRuleForm>(defaultCountingRule);
   const change = (field: RecurrenceSettingsField) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
   const handleTargetChange = (value: string) => setValues((previous) => ({ ...previous, target: value as RecurrenceTarget }));
   const handleSubmit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     const result = readRecurrenceSettings(values);
+    const countingRule = readCountingRule(rule);
     if (!result.ok) {
       setErrors(result.errors);
       return;
     }
+    // The rule's own fields show their problems in the panel.
+    if (values.target === 'segment' && !countingRule.ok) return;
     setErrors({});
-    onStart(result.input);
+    onStart(values.target === 'segment' && countingRule.ok ? { ...result.input, countingRule: countingRule.input } : result.input);
   };
   const segmentOptions = project.segments.map((segment) => ({ value: segment.id, label: segment.name }));
   const hypothesisOptions = project.hypotheses.map((hypothesis) => ({ value: hypothesis.id, label: `${hypothesis.name}${hypothesis.preferred ? ' (preferred)' : ''}` }));
@@ -70,6 +76,9 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
         <NumberField name="draws" label="Draws" value={values.draws} onValueChange={change('draws')} error={errors.draws} />
         <NumberField name="seed" label="Seed" labelInfo="(blank: random)" value={values.seed} onValueChange={change('seed')} error={errors.seed} />
       </div>
+      {values.target === 'segment' && (
+        <CountingRulePanel projectId={project.id} segmentId={values.segmentId} hypothesisId={values.hypothesisId} form={rule} onChange={setRule} />
+      )}
       <Button type="submit" intent={Intent.PRIMARY} icon={IconNames.PLAY} text="Start analysis" loading={starting} />
     </form>
   );

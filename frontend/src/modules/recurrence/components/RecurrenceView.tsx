@@ -7,6 +7,9 @@ import { formErrorOf } from '@/modules/api/utils/apiError';
 import { allows } from '@/modules/auth/utils/permissions';
 import { analysisLabel, RecurrenceResults } from '@/modules/recurrence/components/RecurrenceResults';
 import { RecurrenceSetupForm } from '@/modules/recurrence/components/RecurrenceSetupForm';
+import { AnalysisEventTable } from '@/modules/recurrence/components/AnalysisEventTable';
+import { ComparisonPanel } from '@/modules/recurrence/components/ComparisonPanel';
+import type { CountingRuleInput } from '@/gql/graphql';
 import { RefreshPanel } from '@/modules/recurrence/components/RefreshPanel';
 import { CancelRecurrenceAnalysisDocument, StartRecurrenceAnalysisDocument } from '@/modules/recurrence/graphql/recurrence';
 import { recurrenceQueries } from '@/modules/recurrence/hooks/recurrenceQueries';
@@ -31,7 +34,12 @@ function AnalysisPanel({ projectId, analysisId, canRun, sharedAxes }: AnalysisPa
     );
   }
   const handleCancel = () => cancel.mutate({ id: analysisId });
-  return <RecurrenceResults analysis={analysisQuery.data} canCancel={canRun} cancelling={cancel.isPending} onCancel={handleCancel} sharedAxes={sharedAxes} />;
+  return (
+    <div>
+      <RecurrenceResults analysis={analysisQuery.data} canCancel={canRun} cancelling={cancel.isPending} onCancel={handleCancel} sharedAxes={sharedAxes} />
+      {analysisQuery.data.status === 'SUCCEEDED' && <AnalysisEventTable projectId={projectId} analysisId={analysisId} status={analysisQuery.data.status} />}
+    </div>
+  );
 }
 
 /**
@@ -68,7 +76,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
   const analysisId = chosenId ?? analyses[0]?.id ?? null;
   const secondId = comparing ? (compareId ?? analyses.find((entry) => entry.id !== analysisId)?.id ?? null) : null;
 
-  const handleStart = (input: RecurrenceSettingsInput) =>
+  const handleStart = (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }) =>
     start.mutate({ input }, { onSuccess: ({ startRecurrenceAnalysis }) => setChosenId(startRecurrenceAnalysis.id) });
   const handleChoose = (event: ChangeEvent<HTMLSelectElement>) => setChosenId(event.target.value);
   const handleCompare = (event: ChangeEvent<HTMLSelectElement>) => setCompareId(event.target.value);
@@ -115,6 +123,7 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
               </HTMLSelect>
             )}
           </div>
+          {secondId && sharedAxes && <ComparisonPanel projectId={projectId} analysisAId={analysisId} analysisBId={secondId} />}
           <div className={secondId ? 'sc-recurrence-compare' : undefined}>
             <AnalysisPanel projectId={projectId} analysisId={analysisId} canRun={canRun} sharedAxes={sharedAxes} />
             {secondId && <AnalysisPanel projectId={projectId} analysisId={secondId} canRun={canRun} sharedAxes={sharedAxes} />}
