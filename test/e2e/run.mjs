@@ -367,6 +367,10 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   await page.getByRole('link', { name: /age model/i }).first().click();
   await page.getByRole('button', { name: 'Start run' }).waitFor();
   await checkControls(page, EDIT_CONTROLS.ageModel, true, 'the researcher');
+  // The run form offers both depth models and the outlier shift scale.
+  await page.getByRole('radio', { name: 'Order only' }).waitFor();
+  await page.getByRole('radio', { name: 'Hemipelagic rate' }).waitFor();
+  await page.locator('#outlierShiftScaleYears').waitFor();
   await page.locator('#iterations').fill('2000');
   await page.locator('#seed').fill(seed);
   await shot('settings');
@@ -384,6 +388,13 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   check(!/\b(\d+)–\1 cal BP/.test(firstRange), `the first event lists a zero-width range: "${firstRange}"`);
   log(`age model: ${await rows.count()} events (table rows before ${before}), first range ${firstRange.replace(/\s+/g, ' ')}`);
   await shot('run-finished');
+  // A demo core's Logs tab draws the core on true and event-free depth.
+  await page.goto(`${baseUrl}/projects`);
+  await openProject(page);
+  await page.locator('table a[href*="/sites/"]', { hasText: /\bcore\b/i }).first().click();
+  await page.getByRole('tab', { name: 'Logs' }).click();
+  await page.getByRole('img', { name: /the core on true and event-free depth/ }).waitFor();
+  await shot('core-drawing');
 }
 
 async function correlatorTiesEvents(page, { baseUrl, shot }) {

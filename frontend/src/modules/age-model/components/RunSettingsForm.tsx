@@ -42,10 +42,17 @@ const DEPTH_MODEL_TEXT: Record<DepthModelChoice, { label: string; line: string }
 export function RunSettingsForm({ onStart, starting, busy, error, site, serverErrors = {} }: RunSettingsFormProps) {
   const [values, setValues] = useState<RunSettingsValues>(() => initialRunSettings(site));
   const [errors, setErrors] = useState<FieldErrors<RunSettingsField>>({});
-  const change = (field: Exclude<RunSettingsField, 'depthModel'>) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
-  const errorOf = (field: RunSettingsField) => errors[field] ?? serverErrors[field];
+  // Fields changed since the last start: the server's word on them no longer applies.
+  const [edited, setEdited] = useState<ReadonlySet<RunSettingsField>>(new Set());
+  const markEdited = (field: RunSettingsField) => setEdited((previous) => (previous.has(field) ? previous : new Set(previous).add(field)));
+  const change = (field: Exclude<RunSettingsField, 'depthModel'>) => (value: string) => {
+    markEdited(field);
+    setValues((previous) => ({ ...previous, [field]: value }));
+  };
+  const errorOf = (field: RunSettingsField) => errors[field] ?? (edited.has(field) ? undefined : serverErrors[field]);
   const handleDepthModel = (event: FormEvent<HTMLInputElement>) => {
     const next = event.currentTarget.value as DepthModelChoice;
+    markEdited('depthModel');
     setValues((previous) => withDepthModel(previous, next));
   };
   const hemipelagic = values.depthModel === 'HEMIPELAGIC_RATE';
@@ -57,6 +64,7 @@ export function RunSettingsForm({ onStart, starting, busy, error, site, serverEr
       return;
     }
     setErrors({});
+    setEdited(new Set());
     onStart(result.input);
   };
   return (
@@ -83,8 +91,7 @@ export function RunSettingsForm({ onStart, starting, busy, error, site, serverEr
           <NumberField
             name="hemipelagicRateCmPerKyr"
             label="Mud rate, prior mean"
-            labelInfo="(blank: from the dated levels)"
-            helperText="Your own estimate of how fast the mud settles, if the dated levels should not set it"
+            helperText="Blank: measured from the dated levels. Type your own estimate to set it instead"
             unit="cm/kyr"
             value={values.hemipelagicRateCmPerKyr}
             onValueChange={change('hemipelagicRateCmPerKyr')}

@@ -174,9 +174,15 @@ export function AgeDepthChart({ points, scale, levels, horizons, axis, width, he
         <line x1={0} x2={18} y1={22} y2={22} stroke={CHART_COLOURS.likelihoodBelow} strokeWidth={1.6} />
         <path d="M9,18 L13,22 L9,26 L5,22 Z" fill={CHART_COLOURS.likelihoodBelow} />
         <text x={23} y={25}>dated level: calibrated 95.4 % range, median</text>
-        <rect x={240} y={17} width={18} height={10} fill={faciesGroundFill(idPrefix, 'TURBIDITE')} fillOpacity={0.55} />
-        <rect x={240} y={17} width={18} height={10} fill={`url(#${faciesPatternId(idPrefix, 'TURBIDITE')})`} />
-        <text x={263} y={25}>{axis === 'TRUE' ? 'turbidite bed' : 'turbidite bed (dashed line)'}</text>
+        {axis === 'TRUE' ? (
+          <>
+            <rect x={240} y={17} width={18} height={10} fill={faciesGroundFill(idPrefix, 'TURBIDITE')} fillOpacity={0.55} />
+            <rect x={240} y={17} width={18} height={10} fill={`url(#${faciesPatternId(idPrefix, 'TURBIDITE')})`} />
+          </>
+        ) : (
+          <line x1={240} x2={258} y1={22} y2={22} stroke={FACIES_STYLES.TURBIDITE.ink} strokeDasharray="4 3" />
+        )}
+        <text x={263} y={25}>{axis === 'TRUE' ? 'turbidite bed' : 'turbidite bed (no thickness here)'}</text>
       </g>
     </svg>
   );

@@ -11,7 +11,15 @@ import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 export type CoreDrawingUnit = CoreUnit & { facies: Facies };
 export type CoreDrawingHorizon = { id: string; name: string; unitAboveId: string };
 export type CoreDrawingLevel = { id: string; label: string; depthM: number; excluded: boolean };
-export type CoreDrawingTrace = { key: string; title: string; unit: string; depthsM: readonly number[]; values: readonly number[] };
+export type CoreDrawingTrace = {
+  key: string;
+  /** The channel's name, and the log it belongs to. */
+  channel: string;
+  source: string;
+  unit: string;
+  depthsM: readonly number[];
+  values: readonly number[];
+};
 
 export type CoreDrawingProps = {
   units: readonly CoreDrawingUnit[];
@@ -30,17 +38,27 @@ const TOP = 52;
 const LEGEND_HEIGHT = 44;
 const BOTTOM = 14;
 const X = {
-  horizonLabel: 78,
-  trueAxis: 118,
-  trueColumn: 122,
+  horizonLabel: 66,
+  trueColumn: 92,
   trueWidth: 56,
-  efColumn: 258,
+  /** Link lines start right of the true depth labels. */
+  linkStart: 182,
+  efColumn: 246,
   efWidth: 38,
-  levelLabel: 338,
-  logs: 416,
+  levelLabel: 334,
+  logs: 410,
 };
-const LOG_WIDTH = 112;
-const LOG_GAP = 14;
+const LOG_WIDTH = 116;
+const LOG_GAP = 22;
+/** A white edge behind labels drawn over other marks. */
+const HALO = { stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' } as const;
+
+/** The short word written inside a unit: its kind for beds and mud, else its name. */
+function unitWord(unit: CoreDrawingUnit): string {
+  if (unit.facies === 'TURBIDITE') return 'bed';
+  if (unit.facies === 'HEMIPELAGIC_MUD') return 'mud';
+  return truncateLabel(unit.name, 8);
+}
 const FONT = 10;
 
 /** Pixels per metre: a short core is stretched to a readable height, a long one kept on screen. */
@@ -119,17 +137,6 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         m, beds removed
       </text>
 
-      {/* true depth axis */}
-      <line x1={X.trueAxis} x2={X.trueAxis} y1={TOP} y2={TOP + plotHeight} stroke={CHART_COLOURS.axis} />
-      {trueTicks.map((tick) => (
-        <g key={tick} transform={`translate(0,${yTrue(tick)})`}>
-          <line x1={X.trueAxis - 4} x2={X.trueAxis} stroke={CHART_COLOURS.axis} />
-          <text x={X.trueAxis - 6} dy="0.32em" textAnchor="end" className="num" fill={MUTED}>
-            {tick.toFixed(tick % 1 === 0 ? 0 : 1)}
-          </text>
-        </g>
-      ))}
-
       {/* links between the two depths: beds as wedges that close to a line, round depths as thin lines */}
       <g aria-hidden="true">
         {bedSegments.map((segment) => (
@@ -143,7 +150,7 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
           />
         ))}
         {links.map((link) => (
-          <line key={link.depthM} x1={trueRight} x2={X.efColumn} y1={yTrue(link.depthM)} y2={yEventFree(link.eventFreeDepthM)} stroke={CHART_COLOURS.axis} strokeWidth={0.6} strokeDasharray="2 2" />
+          <line key={link.depthM} x1={X.linkStart} x2={X.efColumn} y1={yTrue(link.depthM)} y2={yEventFree(link.eventFreeDepthM)} stroke={CHART_COLOURS.axis} strokeWidth={0.6} strokeDasharray="2 2" />
         ))}
       </g>
 
@@ -161,8 +168,8 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
             <rect x={X.trueColumn} y={y0} width={X.trueWidth} height={h} fill={faciesGroundFill(idPrefix, unit.facies)} />
             <rect x={X.trueColumn} y={y0} width={X.trueWidth} height={h} fill={`url(#${faciesPatternId(idPrefix, unit.facies)})`} stroke={CHART_COLOURS.axis} strokeWidth={0.5} />
             {h >= 13 && (
-              <text x={X.trueColumn + X.trueWidth / 2} y={y0 + h / 2} dy="0.32em" textAnchor="middle" fill={style.labelInk} fontSize={9}>
-                {truncateLabel(unit.name, 9)}
+              <text x={X.trueColumn + X.trueWidth / 2 - 4} y={y0 + h / 2} dy="0.32em" textAnchor="middle" fill={style.labelInk} fontSize={9}>
+                {unitWord(unit)}
               </text>
             )}
             {segment.isBed ? (
@@ -186,13 +193,23 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         </g>
       ))}
 
+      {/* true depth axis on the column's right edge, its labels where the links start */}
+      {trueTicks.map((tick) => (
+        <g key={tick} transform={`translate(0,${yTrue(tick)})`}>
+          <line x1={trueRight} x2={trueRight + 5} stroke={CHART_COLOURS.axis} />
+          <text x={trueRight + 7} dy="0.32em" className="num" fill={MUTED} {...HALO}>
+            {tick.toFixed(tick % 1 === 0 ? 0 : 1)}
+          </text>
+        </g>
+      ))}
+
       {/* event horizons: named on the left with a leader to the contact */}
       {placedHorizons.map(({ horizon, y, yEf, erosion }, index) => {
         const labelY = horizonLabelYs[index] ?? y;
         return (
           <g key={horizon.id}>
             <title>{`${horizon.name}: event horizon at ${placedHorizons[index]!.depthM} m${erosion ? `, base scoured about ${thicknessLabel(erosion.erosionM)}` : ''}`}</title>
-            <path d={`M${X.horizonLabel + 3},${labelY} L${X.trueAxis - 26},${labelY} L${X.trueColumn - 3},${y}`} fill="none" stroke={MUTED} strokeWidth={0.7} />
+            <path d={`M${X.horizonLabel + 3},${labelY} L${X.trueColumn - 16},${labelY} L${X.trueColumn - 3},${y}`} fill="none" stroke={MUTED} strokeWidth={0.7} />
             <path d={`M${X.trueColumn - 8},${y - 4} L${X.trueColumn},${y} L${X.trueColumn - 8},${y + 4} Z`} fill={INK} />
             <line x1={X.trueColumn} x2={trueRight} y1={y} y2={y} stroke={INK} strokeWidth={1.4} />
             <line x1={X.efColumn} x2={efRight + 4} y1={yEf} y2={yEf} stroke={INK} strokeWidth={1.4} />
@@ -227,8 +244,8 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         return (
           <g key={level.id}>
             <title>{`${level.label}: dated level at ${level.depthM} m${level.excluded ? ' (excluded)' : ''}`}</title>
-            <path d={diamond(trueRight, y)} fill={fill} stroke={CHART_COLOURS.likelihoodBelow} strokeWidth={1} />
-            <path d={diamond(efRight, yEf)} fill={fill} stroke={CHART_COLOURS.likelihoodBelow} strokeWidth={1} />
+            <path d={diamond(trueRight - 7, y)} fill={fill} stroke={CHART_COLOURS.likelihoodBelow} strokeWidth={1} />
+            <path d={diamond(efRight - 7, yEf)} fill={fill} stroke={CHART_COLOURS.likelihoodBelow} strokeWidth={1} />
             <path d={`M${efRight + 30},${yEf} L${X.levelLabel - 3},${labelY}`} fill="none" stroke={MUTED} strokeWidth={0.5} />
             <text x={X.levelLabel} y={labelY} dy="0.32em" className="num" fontSize={9} fill={level.excluded ? MUTED : INK}>
               {truncateLabel(level.label, 11)}
@@ -249,18 +266,26 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         const bottomY = logsOn === 'TRUE' ? TOP + plotHeight : yEventFree(scale.eventFreeLengthM);
         return (
           <g key={trace.key}>
+            <title>{`${trace.channel} · ${trace.source} (${trace.unit || 'no unit'}) on ${logsOn === 'TRUE' ? 'true' : 'event-free'} depth`}</title>
             <text x={left} y={14} fontWeight={600}>
-              {truncateLabel(trace.title, 20)}
+              {truncateLabel(trace.channel, 21)}
             </text>
             <text x={left} y={27} fill={MUTED}>
-              {`${trace.unit || 'no unit'} · on ${logsOn === 'TRUE' ? 'true' : 'event-free'} depth`}
+              {truncateLabel(`${trace.unit || 'no unit'} · ${trace.source}`, 24)}
             </text>
-            {x.ticks(3).map((tick) => (
+            {x.ticks(3).map((tick, tickIndex, all) => (
               <g key={tick}>
                 <line x1={x(tick)} x2={x(tick)} y1={TOP - 4} y2={bottomY} stroke={CHART_COLOURS.grid} />
-                <text x={x(tick)} y={TOP - 7} textAnchor="middle" className="num" fontSize={9} fill={MUTED}>
+                {(all.length <= 3 || tickIndex % 2 === 0) && <text
+                  x={x(tick)}
+                  y={TOP - 7}
+                  textAnchor={tickIndex === 0 ? 'start' : tickIndex === all.length - 1 ? 'end' : 'middle'}
+                  className="num"
+                  fontSize={9}
+                  fill={MUTED}
+                >
                   {tick}
-                </text>
+                </text>}
               </g>
             ))}
             {bedSegments.map((segment) =>

@@ -40,7 +40,7 @@ export function CoreSection({ projectId, siteId, ageDepth }: CoreSectionProps) {
   const traces = useMemo<CoreDrawingTrace[]>(
     () =>
       site?.coreLogs.flatMap((log) =>
-        log.traces.map((trace) => ({ key: `${log.id}-${trace.channel}`, title: `${trace.channel} · ${log.name}`, unit: trace.unit, depthsM: trace.depthsM, values: trace.values })),
+        log.traces.map((trace) => ({ key: `${log.id}-${trace.channel}`, channel: trace.channel, source: log.name, unit: trace.unit, depthsM: trace.depthsM, values: trace.values })),
       ) ?? [],
     [site],
   );

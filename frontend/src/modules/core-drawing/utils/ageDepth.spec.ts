@@ -27,10 +27,22 @@ describe('curveOnAxis', () => {
     expect(curveOnAxis(points, 'TRUE').map((p) => p.depth)).toEqual([0, 1, 1.2, 1.4, 2]);
   });
 
-  it('keeps one point per event-free depth across a bed', () => {
+  it('keeps the first and last point of a bed on event-free depth', () => {
     const curve = curveOnAxis(points, 'EVENT_FREE');
-    expect(curve.map((p) => p.depth)).toEqual([0, 1, 1.6]);
+    expect(curve.map((p) => p.depth)).toEqual([0, 1, 1, 1.6]);
     expect(curve[1]).toEqual({ depth: 1, median: 1000, young: 950, old: 1050 });
+  });
+
+  it('shows a gap in time at a scoured bed base as a step at one event-free depth', () => {
+    // The mud under the bed starts 80 years older than the bed: eroded mud.
+    const scoured = [point(0, 0, 0), point(1, 1, 1000), point(1.2, 1, 1000), point(1.4, 1, 1080), point(2, 1.6, 1680)];
+    const curve = curveOnAxis(scoured, 'EVENT_FREE');
+    expect(curve.map((p) => [p.depth, p.median])).toEqual([
+      [0, 0],
+      [1, 1000],
+      [1, 1080],
+      [1.6, 1680],
+    ]);
   });
 
   it('orders the band ends whatever order they come in', () => {

@@ -21,22 +21,31 @@ export type AgeDepthPoint = {
   high95CalBp: number;
 };
 
-/** A curve point on the chosen axis, sorted top down; duplicates of one depth (inside a bed on event-free depth) are kept once. */
+/** A curve point on the chosen axis, top down. */
 export type CurvePoint = { depth: number; median: number; young: number; old: number };
 
 /**
- * The curve on the chosen axis, top down. On event-free depth every point inside a bed maps to
- * the bed's top: only the first of a run of equal depths is kept, so the curve has one age per
- * depth there (a bed records no time).
+ * The curve on the chosen axis, top down. On event-free depth every point of a bed falls on the
+ * bed's one depth: of such a run of equal depths only the first and the last are kept, so the
+ * curve passes a bed at once, and a gap in time at its base (mud the bed eroded) shows as a step
+ * across at that depth.
  */
 export function curveOnAxis(points: readonly AgeDepthPoint[], axis: DepthAxis): CurvePoint[] {
   const sorted = [...points].sort((a, b) => a.depthM - b.depthM);
   const result: CurvePoint[] = [];
+  let runStart = -1;
   for (const point of sorted) {
     const depth = axis === 'TRUE' ? point.depthM : point.eventFreeDepthM;
+    const next = { depth, median: point.medianCalBp, young: Math.min(point.low95CalBp, point.high95CalBp), old: Math.max(point.low95CalBp, point.high95CalBp) };
     const previous = result[result.length - 1];
-    if (previous && Math.abs(previous.depth - depth) < 1e-9) continue;
-    result.push({ depth, median: point.medianCalBp, young: Math.min(point.low95CalBp, point.high95CalBp), old: Math.max(point.low95CalBp, point.high95CalBp) });
+    if (previous && Math.abs(previous.depth - depth) < 1e-9) {
+      // Same depth as the run so far: the new point replaces the run's last unless that is its first.
+      if (result.length - 1 > runStart) result[result.length - 1] = next;
+      else result.push(next);
+      continue;
+    }
+    runStart = result.length;
+    result.push(next);
   }
   return result;
 }
