@@ -154,8 +154,45 @@ describe('importSamples', () => {
     expect(unknownUnit.errors).toEqual([{ row: 1, field: 'unit', message: 'this site has no unit named "Gravel"' }]);
     const unknownColumn = await importSheet(clients.RESEARCHER, siteId, 'labCode,unit,method,material,lab\nUN-2,1,TEPHRA,OTHER,x\n', true);
     expect(unknownColumn.committed).toBe(false);
-    expect(unknownColumn.errors).toEqual([expect.objectContaining({ row: 0, field: 'lab' })]);
+    expect(unknownColumn.errors).toEqual([expect.objectContaining({ row: 0, field: 'header', message: expect.stringContaining('"lab"') })]);
     expect(await samplesOf(siteId)).toBe(0);
+  });
+
+  it("reads a laboratory's own headers once the user maps them, and remembers the mapping for the project", async () => {
+    const siteId = await newSite();
+    // An invented laboratory's sheet: its own header names, and a column we do not keep.
+    const sheet = (code: string) => `Lab ID,Layer,Method,Material,Conventional age,±,Curve,Lab remarks\n${code},U3,RADIOCARBON,detrital charcoal,1500,30,INTCAL20,fine\n`;
+    const query = `mutation($i: ImportSamplesInput!) { importSamples(input: $i) { committed errors { row scope field message } columns { header field source } } }`;
+    const first = (await clients.RESEARCHER.ok(query, { i: { siteId, csv: sheet('MAP-1'), commit: false } })).importSamples;
+    // One problem lists every unrecognised header, in the header's scope, not one per column and not "row 0" of the data.
+    expect(first.errors).toEqual([
+      { row: 0, scope: 'HEADER', field: 'header', message: expect.stringContaining('These 5 columns are not recognised: "Lab ID", "Layer", "Conventional age", "±" and "Lab remarks"') },
+      { row: 0, scope: 'HEADER', field: 'labCode', message: 'The sheet needs a labCode column.' },
+      { row: 0, scope: 'HEADER', field: 'unit', message: 'The sheet needs a unit column.' },
+    ]);
+    expect(first.columns.filter((c: { source: string }) => c.source === 'UNKNOWN').map((c: { header: string }) => c.header)).toEqual(['Lab ID', 'Layer', 'Conventional age', '±', 'Lab remarks']);
+
+    const columnChoices = [
+      { header: 'Lab ID', field: 'labCode' }, { header: 'Layer', field: 'unit' }, { header: 'conventional  AGE', field: 'c14Age' }, { header: '±', field: 'c14Error' }, { header: 'Lab remarks', field: null },
+    ];
+    // A field name of our own is checked before anything is read.
+    expect(await clients.RESEARCHER.errorOf(query, { i: { siteId, csv: sheet('MAP-1'), commit: false, columnChoices: [{ header: 'Lab ID', field: 'labId' }] } }))
+      .toMatchObject({ code: 'BAD_USER_INPUT', field: expect.stringContaining('columnChoices') });
+    const mapped = (await clients.RESEARCHER.ok(query, { i: { siteId, csv: sheet('MAP-1'), commit: true, columnChoices } })).importSamples;
+    expect(mapped).toMatchObject({ committed: true, errors: [] });
+    expect(await samplesOf(siteId)).toBe(1);
+
+    // The next sheet of the project, at another site, is read with the remembered choices.
+    const otherSite = await newSite();
+    const again = (await clients.RESEARCHER.ok(query, { i: { siteId: otherSite, csv: sheet('MAP-2'), commit: false } })).importSamples;
+    expect(again.errors).toEqual([]);
+    expect(again.columns).toContainEqual({ header: 'Lab ID', field: 'labCode', source: 'REMEMBERED' });
+    expect(again.columns).toContainEqual({ header: 'Lab remarks', field: null, source: 'REMEMBERED' });
+    expect(again.columns).toContainEqual({ header: 'Method', field: 'method', source: 'NAME' });
+    const audit = await sql<{ after: Record<string, string | null> }>(
+      `select after from audit_records where object_type = 'labSheetColumnChoices' and project_id = $1`, [fixture.projectId],
+    );
+    expect(audit).toEqual([{ after: { 'Lab ID': 'labCode', Layer: 'unit', 'Conventional age': 'c14Age', '±': 'c14Error', 'Lab remarks': null } }]);
   });
 
   it('gives a VIEWER FORBIDDEN and an outsider NOT_FOUND, writing nothing', async () => {

@@ -83,6 +83,7 @@ const LIST_LENGTHS: Readonly<Record<string, number>> = {
   'ReleasedSite.samples': 50,
   'ImportResult.errors': 1,
   'ImportResult.preview': 1,
+  'ImportResult.columns': 1,
   // auditTrail multiplies by its own `input.first`
   'AuditConnection.edges': 1,
 };

@@ -8,6 +8,8 @@ import {
   checkLabSheet,
   enumSpelling,
   FieldProblem,
+  HeaderChoice,
+  headerKey,
   LAB_SHEET_COLUMNS,
   LabSheetCalibration,
   LabSheetContext,
@@ -160,13 +162,64 @@ describe(readLabSheet.name, () => {
   });
 
   describe('header problems (row 0)', () => {
-    it('refuses an unknown column, naming it as the field', () => {
+    it('refuses an unknown column, naming it in one problem', () => {
       const reading = readLabSheet('labCode,unit,method,material,labName\nX-1,1,TEPHRA,OTHER,Somewhere\n');
       expect(reading.problems).toHaveLength(1);
-      expect(reading.problems[0]).toMatchObject({ row: 0, field: 'labName' });
-      expect(reading.problems[0].message).toMatch(/^Unknown column "labName"\. The columns are: labCode, unit, depthM/);
+      expect(reading.problems[0]).toMatchObject({ row: 0, field: 'header' });
+      expect(reading.problems[0].message).toMatch(/^This column is not recognised: "labName"\. Choose the field each one holds, or ignore it; the fields are labCode, unit, depthM/);
       expect(reading.samples).toEqual([]);
       expect(reading.rowCount).toBe(1);
+    });
+
+    // A sheet as a radiocarbon laboratory might send it (invented lab, invented values): none of
+    // its headers is one of our field names except Material.
+    const LAB_SHEET = 'Lab ID,Layer,Method,Conventional age,±,d13C,Material\nQX-101,1,RADIOCARBON,1520,25,-26.1,detrital charcoal\n';
+
+    it('lists every unrecognised column once, in one problem, not once per column', () => {
+      const reading = readLabSheet(LAB_SHEET);
+      const listing = reading.problems.filter((p) => p.field === 'header');
+      expect(listing).toHaveLength(1);
+      expect(listing[0].message).toContain('These 5 columns are not recognised: "Lab ID", "Layer", "Conventional age", "±" and "d13C".');
+      // The field list appears once in the whole answer.
+      expect(reading.problems.map((p) => p.message).join(' ').split('labCode, unit, depthM')).toHaveLength(2);
+      expect(reading.columns).toEqual([
+        { header: 'Lab ID', field: null, source: 'UNKNOWN' },
+        { header: 'Layer', field: null, source: 'UNKNOWN' },
+        { header: 'Method', field: 'method', source: 'NAME' },
+        { header: 'Conventional age', field: null, source: 'UNKNOWN' },
+        { header: '±', field: null, source: 'UNKNOWN' },
+        { header: 'd13C', field: null, source: 'UNKNOWN' },
+        { header: 'Material', field: 'material', source: 'NAME' },
+      ]);
+    });
+
+    it('reads the sheet once each header is given a field, and ignores a column chosen to be ignored', () => {
+      const choices = new Map<string, HeaderChoice>([
+        [headerKey('Lab ID'), { field: 'labCode', source: 'CHOSEN' }],
+        [headerKey('LAYER'), { field: 'unit', source: 'REMEMBERED' }],
+        [headerKey('conventional   age'), { field: 'c14Age', source: 'CHOSEN' }],
+        [headerKey('±'), { field: 'c14Error', source: 'CHOSEN' }],
+        [headerKey('d13C'), { field: null, source: 'CHOSEN' }],
+      ]);
+      const reading = readLabSheet(LAB_SHEET, choices);
+      expect(reading.problems).toEqual([]);
+      expect(reading.samples[0]).toMatchObject({ labCode: 'QX-101', unit: '1', c14Age: 1520, c14Error: 25, delta13C: null, material: 'DETRITAL_CHARCOAL' });
+      expect(reading.columns.find((c) => c.header === 'Layer')).toEqual({ header: 'Layer', field: 'unit', source: 'REMEMBERED' });
+      expect(reading.columns.find((c) => c.header === 'd13C')).toEqual({ header: 'd13C', field: null, source: 'CHOSEN' });
+    });
+
+    it('refuses two columns that give the same field, naming both headers', () => {
+      const choices = new Map<string, HeaderChoice>([[headerKey('Lab ID'), { field: 'labCode', source: 'CHOSEN' }]]);
+      const reading = readLabSheet('Lab ID,labCode,unit,method,material\nA,B,1,TEPHRA,OTHER\n', choices);
+      expect(reading.problems).toEqual([
+        { row: 0, field: 'labCode', message: 'Columns "Lab ID" and "labCode" both give labCode; keep one, or choose another field for one of them.' },
+      ]);
+    });
+
+    it('reads our field names whatever their case, spacing or punctuation', () => {
+      const reading = readLabSheet('Lab code,UNIT,Method,material,Depth (m)\nX-1,1,TEPHRA,OTHER,0.5\n');
+      expect(reading.problems).toEqual([]);
+      expect(reading.samples[0]).toMatchObject({ labCode: 'X-1', depthM: 0.5 });
     });
 
     it('refuses a column given twice (in any case) and a missing required column', () => {

@@ -5,7 +5,11 @@
  * and in the words a single sample would be. Every problem is collected; none stops the check.
  *
  * Row numbers count data records from 1 (the record after the header), blank records included,
- * so row n is line n + 1 of a sheet without multi-line cells. Row 0 is the header or the sheet.
+ * so row n is line n + 1 of a sheet without multi-line cells. Row 0 is the header (field: the
+ * column, or `header` for the list of unrecognised columns) or the sheet as a whole (field `csv`).
+ *
+ * A header is read as the field it names (ignoring case, spaces and punctuation), or as a choice
+ * the caller passes (a user's mapping of "Conventional age" to c14Age, or to nothing).
  */
 import Papa from 'papaparse';
 import type { HpdRange } from '../chronology/common/density';
@@ -81,6 +85,51 @@ export interface LabSheetReading {
   readonly rowCount: number;
   readonly samples: LabSheetSample[];
   readonly problems: LabSheetProblem[];
+  /** How each non-empty header cell was read, in sheet order (empty when the sheet is empty). */
+  readonly columns: LabSheetHeaderColumn[];
+}
+
+/**
+ * How a header was read: by its own name (our field name, ignoring case, spaces and punctuation),
+ * by a choice made for this sheet, by a choice the project remembers, or not at all.
+ */
+export type HeaderSource = 'NAME' | 'CHOSEN' | 'REMEMBERED' | 'UNKNOWN';
+
+export interface LabSheetHeaderColumn {
+  readonly header: string;
+  /** The field the column gives; null when unknown or chosen to be ignored. */
+  readonly field: LabSheetColumn | null;
+  readonly source: HeaderSource;
+}
+
+/** A choice for one header: the field it gives, or null to ignore the column. */
+export interface HeaderChoice {
+  readonly field: LabSheetColumn | null;
+  readonly source: 'CHOSEN' | 'REMEMBERED';
+}
+
+/** Choices by `headerKey`. */
+export type HeaderChoices = ReadonlyMap<string, HeaderChoice>;
+
+/** The key a header is remembered by: trimmed, lower-cased, runs of white space as one space. */
+export function headerKey(header: string): string {
+  return header.trim().toLowerCase().replace(/\s+/g, ' ');
+}
+
+/** "Lab code", "lab_code" and "LABCODE" all name labCode; "Depth (m)" names depthM. */
+function nameKey(header: string): string {
+  return header.toLowerCase().replace(/[^a-z0-9]/g, '');
+}
+
+const COLUMNS_BY_NAME_KEY = new Map<string, LabSheetColumn>(LAB_SHEET_COLUMNS.map((column) => [nameKey(column), column]));
+
+/** The field a header names by itself, if any. */
+export function columnNamedBy(header: string): LabSheetColumn | null {
+  return COLUMNS_BY_NAME_KEY.get(nameKey(header)) ?? null;
+}
+
+export function isLabSheetColumn(value: string): value is LabSheetColumn {
+  return (LAB_SHEET_COLUMNS as readonly string[]).includes(value);
 }
 
 /** A unit of the site the sheet is imported into. */
@@ -142,18 +191,21 @@ export function checkLabSheet<C extends LabSheetCalibration>(csv: string, contex
  * Parse the CSV text: header, then each cell to its type. Comma, semicolon or tab separated (the
  * separator the header uses), quoted cells as in RFC 4180, CRLF or LF, with or without a BOM.
  */
-export function readLabSheet(csv: string): LabSheetReading {
+export function readLabSheet(csv: string, choices: HeaderChoices = new Map()): LabSheetReading {
   const text = csv.charCodeAt(0) === 0xfeff ? csv.slice(1) : csv;
   const problems: LabSheetProblem[] = [];
   if (text.trim() === '') {
-    return { rowCount: 0, samples: [], problems: [{ row: 0, field: 'csv', message: 'The sheet is empty: it needs a header row and one row per sample.' }] };
+    return {
+      rowCount: 0, samples: [], columns: [],
+      problems: [{ row: 0, field: 'csv', message: 'The sheet is empty: it needs a header row and one row per sample.' }],
+    };
   }
   const parsed = Papa.parse<string[]>(text, { delimiter: headerDelimiter(text), header: false, skipEmptyLines: false });
   for (const error of parsed.errors) {
     problems.push({ row: error.row ?? 0, field: 'csv', message: `The CSV is malformed here: ${describeParseError(error)}.` });
   }
   const [header = [], ...records] = parsed.data;
-  const columns = readHeader(header, problems);
+  const { columns, read: headerColumns } = readHeader(header, choices, problems);
   const filled = records
     .map((cells, index) => ({ cells, row: index + 1 }))
     .filter(({ cells }) => cells.some((cell) => cell.trim() !== ''));
@@ -165,10 +217,11 @@ export function readLabSheet(csv: string): LabSheetReading {
       row: 0, field: 'csv', message: `The sheet has ${filled.length} rows; at most ${MAX_LAB_SHEET_ROWS} can be imported at once. Split it.`,
     });
   }
-  if (!columns || problems.some((p) => p.row === 0)) return { rowCount: filled.length, samples: [], problems };
-  const knownIndices = new Set(columns.values());
+  if (!columns || problems.some((p) => p.row === 0)) return { rowCount: filled.length, samples: [], problems, columns: headerColumns };
+  // Columns chosen to be ignored are known: their cells are not "under no column".
+  const knownIndices = new Set(header.flatMap((cell, index) => (cell.trim() !== '' ? [index] : [])));
   const samples = filled.map(({ cells, row }) => readRow(cells, row, columns, knownIndices, problems));
-  return { rowCount: filled.length, samples, problems: sortProblems(problems) };
+  return { rowCount: filled.length, samples, problems: sortProblems(problems), columns: headerColumns };
 }
 
 /** Check read rows against the site's units, the project's lab codes, the sample rules and the calibrator. */
@@ -322,32 +375,59 @@ function describeParseError(error: Papa.ParseError): string {
   }
 }
 
-/** Column index of each known column, or null when the header is unusable (problems say why). */
-function readHeader(header: readonly string[], problems: LabSheetProblem[]): Map<LabSheetColumn, number> | null {
-  const byLowerCase = new Map<string, LabSheetColumn>(LAB_SHEET_COLUMNS.map((column) => [column.toLowerCase(), column]));
+/**
+ * Column index of each field, or null when the header is unusable (problems say why), with how
+ * each header was read. Every header not read is named in one problem, not one per column.
+ */
+function readHeader(
+  header: readonly string[],
+  choices: HeaderChoices,
+  problems: LabSheetProblem[],
+): { columns: Map<LabSheetColumn, number> | null; read: LabSheetHeaderColumn[] } {
   const columns = new Map<LabSheetColumn, number>();
+  const headersByColumn = new Map<LabSheetColumn, string>();
+  const read: LabSheetHeaderColumn[] = [];
+  const unknown: string[] = [];
   let usable = true;
   header.forEach((raw, index) => {
     const name = raw.trim();
     if (name === '') return; // a trailing separator; its cells must then be empty (checked per row)
-    const column = byLowerCase.get(name.toLowerCase());
+    const choice = choices.get(headerKey(name));
+    const named = columnNamedBy(name);
+    const column = choice ? choice.field : named;
+    read.push({ header: name, field: column, source: choice ? choice.source : named ? 'NAME' : 'UNKNOWN' });
+    if (choice && choice.field === null) return; // chosen to be ignored
     if (!column) {
-      problems.push({ row: 0, field: name, message: `Unknown column "${name}". The columns are: ${LAB_SHEET_COLUMNS.join(', ')}.` });
+      unknown.push(name);
       usable = false;
     } else if (columns.has(column)) {
-      problems.push({ row: 0, field: column, message: `Column ${column} appears twice in the header.` });
+      const first = headersByColumn.get(column);
+      const both = first !== undefined && nameKey(first) === nameKey(name) ? `Column ${column} appears twice in the header.` : `Columns "${first}" and "${name}" both give ${column}; keep one, or choose another field for one of them.`;
+      problems.push({ row: 0, field: column, message: both });
       usable = false;
     } else {
       columns.set(column, index);
+      headersByColumn.set(column, name);
     }
   });
+  if (unknown.length > 0) {
+    const listed = unknown.map((name) => `"${name}"`);
+    const names = listed.length === 1 ? listed[0] : `${listed.slice(0, -1).join(', ')} and ${listed[listed.length - 1]}`;
+    problems.push({
+      row: 0,
+      field: 'header',
+      message:
+        `${unknown.length === 1 ? 'This column is' : `These ${unknown.length} columns are`} not recognised: ${names}. ` +
+        `Choose the field each one holds, or ignore it; the fields are ${LAB_SHEET_COLUMNS.join(', ')}.`,
+    });
+  }
   for (const column of REQUIRED_LAB_SHEET_COLUMNS) {
     if (!columns.has(column)) {
       problems.push({ row: 0, field: column, message: `The sheet needs a ${column} column.` });
       usable = false;
     }
   }
-  return usable ? columns : null;
+  return { columns: usable ? columns : null, read };
 }
 
 function readRow(

@@ -14,8 +14,20 @@ import { SampleInsert, SamplesRepository } from '../samples/samples.repository';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
-import { ImportSamplesInput } from './dto/import-samples.input';
-import { CheckedLabSheetRow, checkLabSheetRows, FieldProblem, LabSheetProblem, labSheetDatings, listedProblems, readLabSheet } from './lab-sheet';
+import { ColumnChoicesRepository } from './column-choices.repository';
+import { ImportSamplesInput, LabSheetColumnChoiceInput } from './dto/import-samples.input';
+import {
+  CheckedLabSheetRow,
+  checkLabSheetRows,
+  FieldProblem,
+  HeaderChoice,
+  headerKey,
+  LabSheetHeaderColumn,
+  LabSheetProblem,
+  labSheetDatings,
+  listedProblems,
+  readLabSheet,
+} from './lab-sheet';
 import { labSheetCalibrationCompute } from './lab-sheet-calibration.compute';
 import { sampleFormRules } from './sample-form-rules';
 
@@ -29,10 +41,16 @@ export interface ImportPreviewRow {
   warnings: string[];
 }
 
+/** `ImportRowError` of the schema. */
+export interface ImportProblem extends LabSheetProblem {
+  scope: 'HEADER' | 'SHEET' | 'ROW';
+}
+
 /** `ImportResult` of the schema. */
 export interface ImportResult {
   rowCount: number;
-  errors: LabSheetProblem[];
+  errors: ImportProblem[];
+  columns: LabSheetHeaderColumn[];
   committed: boolean;
   preview: ImportPreviewRow[];
 }
@@ -47,6 +65,7 @@ export class SampleImportService {
     private readonly calibration: CalibrationService,
     private readonly audit: AuditService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
+    private readonly columnChoices: ColumnChoicesRepository,
   ) {}
 
   /**
@@ -56,7 +75,13 @@ export class SampleImportService {
    */
   async importSamples(user: AuthUser, input: ImportSamplesInput): Promise<ImportResult> {
     const site = await this.sites.get(user, input.siteId, Permission.StratigraphyWrite);
-    const reading = readLabSheet(input.csv);
+    const chosen = readChoices(input.columnChoices ?? []);
+    const remembered = await this.columnChoices.listForProject(site.projectId);
+    const choices = new Map<string, HeaderChoice>([
+      ...remembered.map((row): [string, HeaderChoice] => [row.headerKey, { field: row.field as HeaderChoice['field'], source: 'REMEMBERED' }]),
+      ...[...chosen].map(([key, { field }]): [string, HeaderChoice] => [key, { field, source: 'CHOSEN' }]),
+    ]);
+    const reading = readLabSheet(input.csv, choices);
     const labCodes = [...new Set(reading.samples.flatMap((sample) => (sample.labCode === null ? [] : [sample.labCode])))];
     const [units, calibrated, takenLabCodes] = await Promise.all([
       this.units.listForSite(site.id),
@@ -69,7 +94,8 @@ export class SampleImportService {
     });
     const result: ImportResult = {
       rowCount: check.rowCount,
-      errors: listedProblems(check.problems),
+      errors: listedProblems(check.problems).map(withScope),
+      columns: reading.columns,
       committed: false,
       preview: check.accepted.map(previewRow),
     };
@@ -89,6 +115,19 @@ export class SampleImportService {
             return { actor: user, projectId: site.projectId, action: 'import', objectType: 'sample', objectId: id, after: { id, ...entered } };
           }),
         );
+        // The header choices this sheet was read with are remembered for the project's next sheets,
+        // only for headers the sheet has (a stray choice for another sheet is not stored).
+        const used = reading.columns.filter((column) => column.source === 'CHOSEN');
+        if (used.length > 0) {
+          await this.columnChoices.upsert(
+            used.map((column) => ({ projectId: site.projectId, headerKey: headerKey(column.header), header: column.header, field: column.field, chosenBy: user.id })),
+            tx,
+          );
+          await this.audit.record(tx, {
+            actor: user, projectId: site.projectId, action: 'update', objectType: 'labSheetColumnChoices', objectId: site.projectId,
+            after: Object.fromEntries(used.map((column) => [column.header, column.field])),
+          });
+        }
       }),
     );
     return { ...result, committed: true };
@@ -126,6 +165,25 @@ export class SampleImportService {
       throw error;
     }
   }
+}
+
+/** The request's header choices by header key; two choices for one header are refused. */
+function readChoices(inputs: readonly LabSheetColumnChoiceInput[]): Map<string, { field: HeaderChoice['field'] }> {
+  const byKey = new Map<string, { header: string; field: HeaderChoice['field'] }>();
+  for (const input of inputs) {
+    const key = headerKey(input.header);
+    if (key === '') throw badInput('columnChoices', 'a header choice needs a header name');
+    const earlier = byKey.get(key);
+    if (earlier && earlier.field !== (input.field ?? null)) {
+      throw badInput('columnChoices', `header "${input.header}" is given two fields (${earlier.field ?? 'ignore'} and ${input.field ?? 'ignore'})`);
+    }
+    byKey.set(key, { header: input.header, field: input.field ?? null });
+  }
+  return byKey;
+}
+
+function withScope(problem: LabSheetProblem): ImportProblem {
+  return { ...problem, scope: problem.row > 0 ? 'ROW' : problem.field === 'csv' ? 'SHEET' : 'HEADER' };
 }
 
 function previewRow({ sample, unit, calibration }: CheckedLabSheetRow<StoredCalibration>): ImportPreviewRow {

@@ -586,6 +586,25 @@ export type Hypothesis = {
   version: Scalars['Int']['output'];
 };
 
+export type ImportColumn = {
+  __typename?: 'ImportColumn';
+  /** The field the column is read as; null when not recognised or ignored. */
+  field?: Maybe<Scalars['String']['output']>;
+  header: Scalars['String']['output'];
+  source: ImportColumnSource;
+};
+
+/** How the import read one header of the sheet. */
+export type ImportColumnSource =
+  /** Chosen for this sheet (columnChoices). */
+  | 'CHOSEN'
+  /** The header is one of our field names (ignoring case, spaces and punctuation). */
+  | 'NAME'
+  /** A choice the project remembers from an earlier committed import. */
+  | 'REMEMBERED'
+  /** Not recognised: choose a field or ignore the column. */
+  | 'UNKNOWN';
+
 export type ImportPreviewRow = {
   __typename?: 'ImportPreviewRow';
   hpd95: Array<HpdRange>;
@@ -596,8 +615,19 @@ export type ImportPreviewRow = {
   warnings: Array<Scalars['String']['output']>;
 };
 
+/** Where an import problem lies. */
+export type ImportProblemScope =
+  /** The header row: field names the column concerned, or is "header" for the list of unrecognised columns. */
+  | 'HEADER'
+  /** One data row; row 1 is the first data row after the header. */
+  | 'ROW'
+  /** The sheet as a whole (empty, malformed, too long, or the count of problems not listed); field is "csv". */
+  | 'SHEET';
+
 export type ImportResult = {
   __typename?: 'ImportResult';
+  /** Every named header of the sheet in order, with the field it is read as. */
+  columns: Array<ImportColumn>;
   committed: Scalars['Boolean']['output'];
   errors: Array<ImportRowError>;
   /** Calibrated preview of the valid rows (lab code, median and 95.4 % ranges). */
@@ -605,15 +635,23 @@ export type ImportResult = {
   rowCount: Scalars['Int']['output'];
 };
 
-/** One problem in one row of a lab sheet; row 1 is the first data row after the header. */
+/** One problem in a lab sheet: in one row, in the header, or in the sheet as a whole (see scope). */
 export type ImportRowError = {
   __typename?: 'ImportRowError';
   field: Scalars['String']['output'];
   message: Scalars['String']['output'];
+  /** The data row (from 1); 0 for a HEADER or SHEET problem. */
   row: Scalars['Int']['output'];
+  scope: ImportProblemScope;
 };
 
 export type ImportSamplesInput = {
+  /**
+   * The field each named header of this sheet holds, for headers that are not our own field names
+   * (e.g. "Conventional age" -> c14Age), or null to ignore the column. These override the project's
+   * remembered choices; a committed import remembers them for the project's later sheets.
+   */
+  columnChoices?: InputMaybe<Array<LabSheetColumnChoiceInput>>;
   /** false: validate only. true: write all rows in one transaction, or none when any row has an error. */
   commit: Scalars['Boolean']['input'];
   /** CSV text with the documented header (see the template). */
@@ -687,6 +725,14 @@ export type JobStatus =
 export type JointRunReference = {
   __typename?: 'JointRunReference';
   id: Scalars['ID']['output'];
+};
+
+/** What one header of a lab sheet holds. */
+export type LabSheetColumnChoiceInput = {
+  /** One of the template's column names (labCode, unit, c14Age, ...), or null: ignore the column. */
+  field?: InputMaybe<Scalars['String']['input']>;
+  /** The header as written in the sheet (matched ignoring case and repeated spaces); 1 to 200 characters. */
+  header: Scalars['String']['input'];
 };
 
 export type LadderColumn = {
@@ -2351,7 +2397,7 @@ export type ImportSamplesMutationVariables = Exact<{
 }>;
 
 
-export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, field: string, message: string }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+export type ImportSamplesMutation = { __typename?: 'Mutation', importSamples: { __typename?: 'ImportResult', rowCount: number, committed: boolean, errors: Array<{ __typename?: 'ImportRowError', row: number, scope: ImportProblemScope, field: string, message: string }>, columns: Array<{ __typename?: 'ImportColumn', header: string, field?: string | null, source: ImportColumnSource }>, preview: Array<{ __typename?: 'ImportPreviewRow', row: number, labCode: string, unitName: string, medianCalBp?: number | null, warnings: Array<string>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
 
 export type ProjectsQueryVariables = Exact<{ [key: string]: never; }>;
 
@@ -3278,8 +3324,14 @@ export const ImportSamplesDocument = new TypedDocumentString(`
     committed
     errors {
       row
+      scope
       field
       message
+    }
+    columns {
+      header
+      field
+      source
     }
     preview {
       row

@@ -20,3 +20,4 @@ export * from './provenance';
 export * from './core-logs';
 export * from './rate-limits';
 export * from './project-revisions';
+export * from './lab-sheet-columns';

@@ -8,6 +8,7 @@ import {
   DialogFooter,
   FileInput,
   FormGroup,
+  HTMLSelect,
   HTMLTable,
   Intent,
   Tag,
@@ -19,7 +20,18 @@ import type { ImportSamplesMutation } from '@/gql/graphql';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { useImportSamples } from '@/modules/import/hooks/useImportSamples';
-import { checkImportHeader, SAMPLE_IMPORT_COLUMN_SPECS, sampleImportTemplateCsv } from '@/modules/import/utils/template';
+import {
+  choicesInput,
+  choiceValueOf,
+  IGNORE,
+  problemPlace,
+  SOURCE_LABELS,
+  UNCHOSEN,
+  withChoice,
+  type ChoiceValue,
+  type ColumnChoices,
+} from '@/modules/import/utils/columnChoices';
+import { SAMPLE_IMPORT_COLUMN_SPECS, SAMPLE_IMPORT_COLUMNS, sampleImportTemplateCsv } from '@/modules/import/utils/template';
 import { downloadText } from '@/modules/ui/utils/download';
 
 type ImportResult = ImportSamplesMutation['importSamples'];
@@ -37,13 +49,16 @@ export function ImportSamplesDialog({ site, onClose }: ImportSamplesDialogProps)
   const [csv, setCsv] = useState('');
   const [fileName, setFileName] = useState<string | null>(null);
   const [showColumns, setShowColumns] = useState(false);
-  const [checked, setChecked] = useState<{ csv: string; result: ImportResult } | null>(null);
+  const [checked, setChecked] = useState<{ csv: string; choices: ColumnChoices; result: ImportResult } | null>(null);
   const [imported, setImported] = useState<ImportResult | null>(null);
+  // Headers the user has given a field (or chosen to ignore) for this sheet; the server remembers
+  // them for the project once the import is committed.
+  const [choices, setChoices] = useState<ColumnChoices>({});
   const { check, commit } = useImportSamples(site.project.id);
 
-  const header = csv.trim() === '' ? null : checkImportHeader(csv);
-  const headerProblems = header !== null && (header.missing.length > 0 || header.unknown.length > 0);
-  const result = checked?.csv === csv ? checked.result : null;
+  const result = checked?.csv === csv && checked.choices === choices ? checked.result : null;
+  // The columns stay on screen while a changed choice is re-checked.
+  const shownColumns = checked?.csv === csv ? checked.result.columns : null;
   const canCommit = result !== null && result.errors.length === 0 && result.rowCount > 0 && !commit.isPending;
   const requestError = formErrorOf(check.error ?? commit.error, []);
 
@@ -58,17 +73,26 @@ export function ImportSamplesDialog({ site, onClose }: ImportSamplesDialogProps)
     setFileName(file.name);
   };
   const handleTemplate = () => downloadText('stratochron-samples-template.csv', sampleImportTemplateCsv());
-  const handleCheck = () => {
+  const runCheck = (nextChoices: ColumnChoices) => {
     commit.reset();
-    check.mutate({ siteId: site.id, csv }, { onSuccess: (checkedResult) => setChecked({ csv, result: checkedResult }) });
+    check.mutate(
+      { siteId: site.id, csv, columnChoices: choicesInput(nextChoices) },
+      { onSuccess: (checkedResult) => setChecked({ csv, choices: nextChoices, result: checkedResult }) },
+    );
+  };
+  const handleCheck = () => runCheck(choices);
+  const handleChoice = (header: string, value: ChoiceValue) => {
+    const next = withChoice(choices, header, value);
+    setChoices(next);
+    runCheck(next);
   };
   const handleCommit = () => {
     commit.mutate(
-      { input: { siteId: site.id, csv, commit: true } },
+      { input: { siteId: site.id, csv, commit: true, columnChoices: choicesInput(choices) } },
       {
         onSuccess: ({ importSamples }) => {
           if (importSamples.committed) setImported(importSamples);
-          else setChecked({ csv, result: importSamples });
+          else setChecked({ csv, choices, result: importSamples });
         },
       },
     );
@@ -121,19 +145,8 @@ export function ImportSamplesDialog({ site, onClose }: ImportSamplesDialogProps)
             <FormGroup label="Sheet" labelFor="import-csv" helperText="Paste the CSV here, or choose a file above. The first line names the columns.">
               <TextArea id="import-csv" className="num sc-csv-input" value={csv} onChange={handleTextChange} rows={8} fill spellCheck={false} />
             </FormGroup>
-            {header && headerProblems && (
-              <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} compact className="sc-form-callout">
-                {header.missing.length > 0 && (
-                  <div>
-                    Missing columns: <span className="num">{header.missing.join(', ')}</span>
-                  </div>
-                )}
-                {header.unknown.length > 0 && (
-                  <div>
-                    Unknown columns: <span className="num">{header.unknown.join(', ')}</span>
-                  </div>
-                )}
-              </Callout>
+            {shownColumns && shownColumns.some((column) => column.source !== 'NAME') && (
+              <ColumnChoiceTable columns={shownColumns} choices={choices} onChoice={handleChoice} disabled={check.isPending} />
             )}
             {requestError && (
               <Callout intent={Intent.DANGER} icon={IconNames.ERROR} compact className="sc-form-callout">
@@ -192,7 +205,7 @@ function ImportCheckResult({ result }: ImportCheckResultProps) {
         <HTMLTable compact striped className="sc-table sc-table-fill">
           <thead>
             <tr>
-              <th className="sc-numeric">Row</th>
+              <th>Where</th>
               <th>Field</th>
               <th>Problem</th>
             </tr>
@@ -200,7 +213,7 @@ function ImportCheckResult({ result }: ImportCheckResultProps) {
           <tbody>
             {result.errors.map((error, index) => (
               <tr key={`${error.row}-${error.field}-${index}`}>
-                <td className="num sc-numeric">{error.row}</td>
+                <td className="num sc-nowrap">{problemPlace(error)}</td>
                 <td className="num">{error.field}</td>
                 <td>{error.message}</td>
               </tr>
@@ -247,6 +260,74 @@ function ImportCheckResult({ result }: ImportCheckResultProps) {
           </HTMLTable>
         </>
       )}
+    </div>
+  );
+}
+
+type ColumnChoiceTableProps = {
+  columns: ImportResult['columns'];
+  choices: ColumnChoices;
+  onChoice: (header: string, value: ChoiceValue) => void;
+  disabled: boolean;
+};
+
+/**
+ * The sheet's headers with the field each is read as. A header that is not one of our field names
+ * gets a field chosen here (or is ignored); the choice is checked at once and, once the sheet is
+ * imported, remembered for the project's next sheets.
+ */
+function ColumnChoiceTable({ columns, choices, onChoice, disabled }: ColumnChoiceTableProps) {
+  const unknown = columns.filter((column) => choiceValueOf(column, choices) === UNCHOSEN).length;
+  return (
+    <div className="sc-import-mapping" data-testid="import-column-choices">
+      <h4 className="sc-subheading">Columns of this sheet</h4>
+      <p className={Classes.TEXT_SMALL}>
+        {unknown > 0
+          ? `${unknown} ${unknown === 1 ? 'column is' : 'columns are'} not one of our field names: choose what each holds, or ignore it. `
+          : 'Every column is read. '}
+        Choices are remembered for this project when the sheet is imported.
+      </p>
+      <HTMLTable compact striped className="sc-table sc-table-fill">
+        <thead>
+          <tr>
+            <th>Header in the sheet</th>
+            <th>Read as</th>
+            <th>How</th>
+          </tr>
+        </thead>
+        <tbody>
+          {columns.map((column) => {
+            const value = choiceValueOf(column, choices);
+            const source = column.header in choices ? 'CHOSEN' : column.source;
+            return (
+              <tr key={column.header}>
+                <td className="num">{column.header}</td>
+                <td>
+                  <HTMLSelect
+                    aria-label={`Field held by column ${column.header}`}
+                    value={value}
+                    disabled={disabled}
+                    onChange={(event) => onChoice(column.header, event.target.value as ChoiceValue)}
+                  >
+                    {value === UNCHOSEN && <option value={UNCHOSEN}>Choose a field…</option>}
+                    {SAMPLE_IMPORT_COLUMNS.map((field) => (
+                      <option key={field} value={field}>
+                        {field}
+                      </option>
+                    ))}
+                    <option value={IGNORE}>Ignore this column</option>
+                  </HTMLSelect>
+                </td>
+                <td>
+                  <Tag minimal intent={value === UNCHOSEN ? Intent.WARNING : Intent.NONE}>
+                    {value === UNCHOSEN ? SOURCE_LABELS.UNKNOWN : SOURCE_LABELS[source]}
+                  </Tag>
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </HTMLTable>
     </div>
   );
 }

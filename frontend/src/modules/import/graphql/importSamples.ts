@@ -7,8 +7,14 @@ export const ImportSamplesDocument = graphql(`
       committed
       errors {
         row
+        scope
         field
         message
+      }
+      columns {
+        header
+        field
+        source
       }
       preview {
         row

@@ -1,4 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
+import type { ImportSamplesInput } from '@/gql/graphql';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { ImportSamplesDocument } from '@/modules/import/graphql/importSamples';
@@ -10,8 +11,8 @@ import { projectQueries } from '@/modules/projects/hooks/projectQueries';
  */
 export function useImportSamples(projectId: string) {
   const check = useMutation({
-    mutationFn: async ({ siteId, csv }: { siteId: string; csv: string }) =>
-      (await graphqlRequest(ImportSamplesDocument, { input: { siteId, csv, commit: false } })).importSamples,
+    mutationFn: async ({ siteId, csv, columnChoices }: { siteId: string; csv: string; columnChoices: ImportSamplesInput['columnChoices'] }) =>
+      (await graphqlRequest(ImportSamplesDocument, { input: { siteId, csv, commit: false, columnChoices } })).importSamples,
   });
   const commit = useGraphqlMutation(ImportSamplesDocument, { invalidates: [projectQueries.detail(projectId)] });
   return { check, commit };

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import {
-  checkImportHeader,
   csvField,
   csvRecord,
   REQUIRED_IMPORT_COLUMNS,
@@ -73,15 +72,5 @@ describe('SAMPLE_IMPORT_COLUMN_SPECS', () => {
 describe(splitFirstCsvRecord.name, () => {
   it('reads quoted fields with commas and doubled quotes, and stops at the line end', () => {
     expect(splitFirstCsvRecord('a,"b, ""c""",d\r\ne,f')).toEqual(['a', 'b, "c"', 'd']);
-  });
-});
-
-describe(checkImportHeader.name, () => {
-  it('accepts the template header', () => {
-    expect(checkImportHeader(sampleImportTemplateCsv())).toEqual({ missing: [], unknown: [] });
-  });
-
-  it('names missing required columns and unknown ones, ignoring a byte-order mark', () => {
-    expect(checkImportHeader('\uFEFFlabCode,unit,method,age\r\n')).toEqual({ missing: ['material'], unknown: ['age'] });
   });
 });

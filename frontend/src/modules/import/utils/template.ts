@@ -186,22 +186,3 @@ export function splitFirstCsvRecord(text: string): string[] {
   fields.push(field);
   return fields;
 }
-
-export type HeaderCheck = {
-  missing: SampleImportColumn[];
-  unknown: string[];
-};
-
-/**
- * Compare a sheet's header with the template before sending it, so a wrong file is caught at
- * once; the server still checks every row.
- */
-export function checkImportHeader(csv: string): HeaderCheck {
-  const known = new Set<string>(SAMPLE_IMPORT_COLUMNS);
-  const header = splitFirstCsvRecord(csv.replace(/^\uFEFF/, '')).map((name) => name.trim());
-  const present = new Set(header);
-  return {
-    missing: REQUIRED_IMPORT_COLUMNS.filter((column) => !present.has(column)),
-    unknown: header.filter((name) => name !== '' && !known.has(name)),
-  };
-}
