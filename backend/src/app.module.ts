@@ -12,6 +12,7 @@ import { CalibrationModule } from './calibration/calibration.module';
 import { formatGraphqlError } from './common/errors/format-graphql-error';
 import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { answerJson } from './common/answer-json';
 import { costLimitPlugin } from './common/graphql-cost';
 import { inputScreeningPlugin } from './common/graphql-input-screen';
 import { depthLimitRule } from './common/graphql-limits';
@@ -65,6 +66,8 @@ import { ReleasesModule } from './releases/releases.module';
         // cost ~10 % of executing a large answer such as the event ladder.
         // Inputs are screened (ids, NUL) and the operation priced before any resolver runs.
         plugins: [ApolloServerPluginCacheControlDisabled(), inputScreeningPlugin(), costLimitPlugin(), ladderCache.plugin()],
+        // One serialisation per answer, shared with the answer-size cap and the ladder cache.
+        stringifyResult: answerJson,
         introspection: config.nodeEnv !== 'production',
         includeStacktraceInErrorResponses: false,
         context: ({ req }: { req: unknown }) => ({ req, loaders: loaders.create() }),

@@ -1,6 +1,7 @@
 import type { ApolloServerPlugin } from '@apollo/server';
 import { DocumentNode, GraphQLError, GraphQLOutputType, GraphQLSchema, isListType, isNonNullType } from 'graphql';
 import { ComplexityEstimator, getComplexity } from 'graphql-query-complexity';
+import { answerJson } from './answer-json';
 
 /**
  * The cost model of one GraphQL operation. A field costs its own weight (what it computes: a
@@ -185,7 +186,7 @@ export function costLimitPlugin(maximum = MAX_OPERATION_COST, maxAnswerBytes = M
         },
         async willSendResponse({ response }) {
           if (response.body.kind !== 'single') return;
-          const bytes = Buffer.byteLength(JSON.stringify(response.body.singleResult));
+          const bytes = Buffer.byteLength(answerJson(response.body.singleResult));
           if (bytes <= maxAnswerBytes) return;
           response.http.status = 400;
           response.body.singleResult = {

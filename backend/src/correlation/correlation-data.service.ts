@@ -4,6 +4,10 @@ import type { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import type { ProjectEvent } from './correlation-adapter';
 import { HypothesesRepository, type ProjectEventRow } from './hypotheses.repository';
+import { LadderRevisionRepository } from './ladder-cache/ladder-revision.repository';
+
+/** Projects whose loaded data this process keeps (least recently used dropped first). */
+const KEPT_PROJECTS = 16;
 
 /** Everything correlation and the ladder need of a project, loaded in a few queries. */
 export interface ProjectCorrelationData {
@@ -17,17 +21,43 @@ export interface ProjectCorrelationData {
 
 @Injectable()
 export class CorrelationDataService {
+  /** Loaded data by project, with the project revision read before loading them. */
+  private readonly kept = new Map<string, { revision: string; data: ProjectCorrelationData }>();
+
   constructor(
     private readonly repository: HypothesesRepository,
     private readonly sites: SitesService,
     private readonly latestRuns: LatestRunsService,
+    private readonly revisions: LadderRevisionRepository,
   ) {}
 
-  /** Sites, event horizons and latest successful runs of a project. */
+  /**
+   * Sites, event horizons and latest successful runs of a project. Kept per process while the
+   * project revision (`project_revisions`, moved by triggers on any change to the project's rows)
+   * stays where it was when they were read: one small query instead of loading 600 events again.
+   * The revision is read first, so a write during the load leaves data that are never reused.
+   * Callers must not change what they get.
+   */
   async load(projectId: string): Promise<ProjectCorrelationData> {
+    const revision = await this.revisions.projectRevision(projectId);
+    const kept = this.kept.get(projectId);
+    if (kept && revision !== '' && kept.revision === revision) {
+      this.kept.delete(projectId);
+      this.kept.set(projectId, kept);
+      return kept.data;
+    }
     const [sites, events] = await Promise.all([this.sites.listForProject(projectId), this.repository.listProjectEvents(projectId)]);
     const runsBySite = await this.latestRuns.forSites(sites.map((site) => site.id));
-    return { sites, events, runsBySite };
+    const data = { sites, events, runsBySite };
+    if (revision !== '') {
+      this.kept.delete(projectId);
+      this.kept.set(projectId, { revision, data });
+      for (const oldest of this.kept.keys()) {
+        if (this.kept.size <= KEPT_PROJECTS) break;
+        this.kept.delete(oldest);
+      }
+    }
+    return data;
   }
 }
 

@@ -5,6 +5,7 @@ import { FieldNode, Kind, OperationDefinitionNode, valueFromASTUntyped } from 'g
 import type { Request } from 'express';
 import { gzipSync } from 'node:zlib';
 import { Role, ROLES } from '../../access/permissions';
+import { answerJson } from '../../common/answer-json';
 import { APP_CONFIG, AppConfig } from '../../config/config';
 import { LadderCacheState, LadderRevisionRepository } from './ladder-revision.repository';
 import { epochCurrent, TokenClaims } from '../../auth/token-claims';
@@ -125,8 +126,8 @@ export class EventLadderCache {
           },
           willSendResponse: async ({ response }) => {
             if (!pending || response.body.kind !== 'single' || response.body.singleResult.errors?.length) return;
-            // The bytes Apollo sends: JSON of the result and a newline.
-            const json = Buffer.from(`${JSON.stringify(response.body.singleResult)}\n`);
+            // The bytes Apollo sends (made once for the answer-size cap, this and Apollo itself).
+            const json = Buffer.from(answerJson(response.body.singleResult));
             this.store(pending.requestKey, pending.projectId, { role: pending.role, revision: pending.revision, json, gzip: gzipSync(json) });
           },
         };

@@ -31,4 +31,11 @@ export class LadderRevisionRepository {
         coalesce((select revision::text from project_revisions where project_id = ${projectId}), '') as revision`)) as unknown as QueryResult<LadderCacheState>;
     return result.rows[0];
   }
+
+  /** The project's revision alone ('' when it has none): what per-process memos of project data compare. */
+  async projectRevision(projectId: string): Promise<string> {
+    const result = (await this.database.db.execute(sql`
+      select revision::text as revision from project_revisions where project_id = ${projectId}`)) as unknown as QueryResult<{ revision: string }>;
+    return result.rows[0]?.revision ?? '';
+  }
 }
