@@ -359,11 +359,23 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   const seed = String(7 + round);
   await signIn(page, baseUrl, 'researcher@demo.test');
   await openProject(page);
+  const siteId = (await firstSiteLink(page).getAttribute('href'))?.match(/\/sites\/([0-9a-f-]{36})/)?.[1];
+  check(siteId, 'the first site link names no site id');
   await firstSiteLink(page).click();
-  // The run lists one row per event horizon of the column: count them on the site page first.
+  // The run lists one row per event horizon of the column: how many there are comes from the API
+  // (counting rows right after the first appears would read a partially drawn table), and the
+  // site page must show them all.
+  const signedIn = await graphql(baseUrl, 'mutation ($email: String!, $password: String!) { signIn(email: $email, password: $password) { token } }', {
+    email: 'researcher@demo.test',
+    password: PASSWORD,
+  });
+  const token = signedIn.data?.signIn?.token;
+  check(token, `the researcher cannot sign in over GraphQL: ${JSON.stringify(signedIn.errors)}`);
+  const column = await graphql(baseUrl, 'query ($id: ID!) { site(id: $id) { eventHorizons { id } } }', { id: siteId }, token);
+  const expected = column.data?.site?.eventHorizons?.length;
+  check(expected > 0, `the first site has no event horizons over GraphQL: ${JSON.stringify(column.errors ?? column.data)}`);
   const horizonRows = page.locator('.sc-section', { hasText: 'Event horizons' }).locator('tbody tr');
-  await horizonRows.first().waitFor();
-  const expected = await horizonRows.count();
+  await waitForCount(horizonRows, (count) => count === expected, `${expected} event horizon rows on the site page`);
   await page.getByRole('link', { name: /age model/i }).first().click();
   await page.getByRole('button', { name: 'Start run' }).waitFor();
   await checkControls(page, EDIT_CONTROLS.ageModel, true, 'the researcher');

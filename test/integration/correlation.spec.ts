@@ -110,11 +110,15 @@ describe('hypotheses and regional events', () => {
     expect(created.version).toBe(1);
     const { addTie } = await clients.CORRELATOR.ok(ADD_TIE, tieInput(hypothesisId, 'A2', 'B2'));
     expect(addTie).toMatchObject({ confidence: 2, evidence: ['age overlap'], eventA: { id: events.A2 }, eventB: { id: events.B2, site: { id: siteIds.B } } });
-    await clients.CORRELATOR.ok(ADD_TIE, tieInput(hypothesisId, 'B2', 'C2'));
+    const { addTie: second } = await clients.CORRELATOR.ok(ADD_TIE, tieInput(hypothesisId, 'B2', 'C2'));
 
     const { hypothesis } = await clients.VIEWER.ok(HYPOTHESIS, { id: hypothesisId });
     expect(hypothesis.version).toBe(3);
-    expect(hypothesis.ties).toHaveLength(2);
+    // Read back: both ties are stored with the events they join, as another member sees them.
+    const stored = hypothesis.ties.map((t: { id: string; eventA: { id: string }; eventB: { id: string } }) => [t.id, t.eventA.id, t.eventB.id]);
+    expect(stored.sort()).toEqual([[addTie.id, events.A2, events.B2], [second.id, events.B2, events.C2]].sort());
+    const rows = await sql<{ confidence: number; evidence: string[] }>(`select confidence, evidence from ties where id = $1`, [addTie.id]);
+    expect(rows).toEqual([{ confidence: 2, evidence: ['age overlap'] }]);
     expect(hypothesis.regionalEvents).toHaveLength(4);
     const joined = hypothesis.regionalEvents.find((r: { members: unknown[] }) => r.members.length === 3);
     expect(joined.members.map((m: { id: string }) => m.id)).toEqual([events.A2, events.B2, events.C2]);

@@ -84,8 +84,25 @@ describe(orderedSequenceSampler.name, () => {
 });
 
 describe(drawOrderedSequence.name, () => {
-  it('gives the same draw from the same seed', () => {
-    const densities = [normalDensity(500, 40), normalDensity(800, 20)];
-    expect(drawOrderedSequence(densities, new SeededRandom(9))).toEqual(drawOrderedSequence(densities, new SeededRandom(9)));
+  it('draws each sequence ordered young to old, with the ordered joint distribution [analytic]', () => {
+    // Three events on the same 301 years (uniform): ordered, they are the order statistics of three
+    // distinct years, whose means are 100 + (k/4)(301 + 1) - 1 for k = 1, 2, 3 [analytic], i.e.
+    // 174.5, 250, 325.5 (the same argument as the two-event case above, with m = 301 values).
+    const densities = [uniformDensity(100, 400), uniformDensity(100, 400), uniformDensity(100, 400)];
+    const rng = new SeededRandom(9);
+    const draws = Array.from({ length: 3_000 }, () => drawOrderedSequence(densities, rng));
+    for (const ages of draws) {
+      expect(ages).toHaveLength(3);
+      expect(ages[0]).toBeLessThan(ages[1]);
+      expect(ages[1]).toBeLessThan(ages[2]);
+    }
+    const means = meansOf(draws);
+    // Standard error of each mean at most 67/sqrt(3000) = 1.2 years; allow 5.
+    expect(Math.abs(means[0] - 174.5)).toBeLessThan(5);
+    expect(Math.abs(means[1] - 250)).toBeLessThan(5);
+    expect(Math.abs(means[2] - 325.5)).toBeLessThan(5);
+    // The middle of three uniform order statistics has sd range/sqrt(20) = 300/4.47 = 67 [analytic].
+    expect(sdOf(draws.map((ages) => ages[1]))).toBeGreaterThan(61);
+    expect(sdOf(draws.map((ages) => ages[1]))).toBeLessThan(73);
   });
 });
