@@ -4,6 +4,8 @@ import { benchApi, benchApiProbes, LadderLoadBench } from './api.bench';
 import { benchCalibration } from '../chronology/calibration/calibration.bench';
 import { benchmarkCorrelationChecks } from '../chronology/correlation/correlation.bench';
 import { benchRecurrence } from '../chronology/recurrence/recurrence.bench';
+import { benchJointAgeModel } from '../chronology/joint-age-model/joint-age-model.bench';
+import { JOINT_VALIDATION_BENCH, validateJointModel } from '../chronology/joint-age-model/joint-validation';
 
 /** One line of the benchmark table. */
 export interface BenchRow {
@@ -58,6 +60,66 @@ export const BENCHMARKS: Benchmark[] = [
         },
         { figure: '  smallest event ESS', value: Math.round(r.minEss), target: '> 400', met: r.minEss > 400 },
         { figure: '  worst split R-hat', value: round(r.maxRhat, 3), target: '<= 1.05', met: r.maxRhat <= 1.05 },
+      ];
+    },
+  },
+  {
+    name: 'joint age model',
+    run: async () => {
+      const r = await benchJointAgeModel();
+      return [
+        {
+          figure: `joint age model, demo's preferred hypothesis: ${r.sites} sites, ${r.regionalEvents} regional events, ${r.siteEvents} site events, ${r.samples} samples, ${r.chains} chains on one core (s)`,
+          value: round(r.seconds),
+          target: '< 60 s',
+          met: r.seconds < 60,
+          note: `CPU ${round(r.cpuSeconds)} s`,
+        },
+        { figure: '  smallest ESS (site events; regional events through their members)', value: Math.round(r.minEss), target: '> 400', met: r.minEss > 400 },
+        { figure: '  worst split R-hat', value: round(r.maxRhat, 3), target: '<= 1.05', met: r.maxRhat <= 1.05 },
+        {
+          figure: '  same 4 chains on two worker threads (s)',
+          value: r.twoWorkerSeconds === null ? 'n/a' : round(r.twoWorkerSeconds),
+          target: 'about half the one-core time',
+          met: r.twoWorkerSeconds === null || r.twoWorkerSeconds < 0.7 * r.seconds,
+          note: r.twoWorkerSeconds === null ? 'needs the built JavaScript' : undefined,
+        },
+      ];
+    },
+  },
+  {
+    name: 'joint age model coverage',
+    run: () => {
+      const r = validateJointModel(JOINT_VALIDATION_BENCH);
+      const pct = (x: number) => round(100 * x, 1);
+      return [
+        {
+          figure: `joint 95.4 % ranges covering the true age, ${r.joint.events} regional events in ${r.records} simulated records (%)`,
+          value: pct(r.joint.coverage95),
+          target: '90-99 %',
+          met: r.joint.events >= 100 && r.joint.coverage95 >= 0.9 && r.joint.coverage95 <= 0.99,
+        },
+        { figure: '  same, 68.3 % ranges (%)', value: pct(r.joint.coverage68), target: 'near 68.3 %', met: r.joint.coverage68 >= 0.6 && r.joint.coverage68 <= 0.77 },
+        {
+          figure: '  mean 95.4 % width, joint (years)',
+          value: round(r.joint.meanWidth95, 0),
+          target: '<= product of marginals',
+          met: r.joint.meanWidth95 <= r.product.meanWidth95,
+        },
+        {
+          figure: '  product of site marginals: 95.4 % / 68.3 % coverage (%), mean width (years)',
+          value: `${pct(r.product.coverage95)} / ${pct(r.product.coverage68)}, ${round(r.product.meanWidth95, 0)}`,
+          target: '(the method replaced)',
+          met: true,
+          note: r.productEmpty > 0 ? `${r.productEmpty} events with no overlap of members (counted as missed)` : undefined,
+        },
+        {
+          figure: `  untied site events, joint: 95.4 % / 68.3 % coverage of ${r.untied.events} (%)`,
+          value: `${pct(r.untied.coverage95)} / ${pct(r.untied.coverage68)}`,
+          target: '(no target)',
+          met: true,
+        },
+        { figure: '  joint runs: worst split R-hat, smallest ESS', value: `${round(r.maxRhat, 3)}, ${Math.round(r.minEss)}`, target: '(no target)', met: true },
       ];
     },
   },

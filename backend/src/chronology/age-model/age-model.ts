@@ -276,7 +276,7 @@ function labelOf(thing: { id: string; name?: string }): string {
  * A density from a difference array of range weights plus directly added end years, times an
  * optional per-year factor.
  */
-function densityFromDifferences(
+export function densityFromDifferences(
   differences: Float64Array,
   direct: Float64Array,
   open: Int32Array,

@@ -25,9 +25,11 @@
  *   column (order by depth within units, no accumulation-rate model): their ages are constrained
  *   by superposition and the ties only, not by the hemipelagic mud's thickness. A joint
  *   hemipelagic model is future work.
- * - Densities are kernel-smoothed from the pooled draws (Gaussian kernel, Silverman's bandwidth,
- *   `kernelDensity`), not Rao-Blackwellised as the site model's: a chain hands over its draws
- *   only. HPD ranges are quoted readable (`summariseReadable`).
+ * - Event densities are Rao-Blackwellised as the site model's (each chain accumulates every
+ *   event's full conditional, uniform between its neighbours in all its sites, and hands them over
+ *   in `siteEventDensities`); sample (deposit) densities are kernel-smoothed from the pooled draws
+ *   (Gaussian kernel, Silverman's bandwidth, `kernelDensity`), as are event densities of chains
+ *   stored without theirs. HPD ranges are quoted readable (`summariseReadable`).
  * - Reservoir offsets are integrated per sample as in the site model's likelihoods.
  *
  * Each chain runs as its own job (`runJointChain`), from a dispersed start set by its index and a
@@ -37,6 +39,7 @@
  * outlier probabilities and evenly thinned joint draws of the regional events.
  */
 import {
+  densityFromDifferences,
   AgeModelCancelled,
   AgeModelDiagnostics,
   AgeModelHooks,
@@ -49,7 +52,8 @@ import {
 } from '../age-model/age-model';
 import { ChainDiagnostics, chainDiagnostics } from '../age-model/convergence';
 import { kernelDensity } from '../age-model/hemipelagic/hemipelagic-model';
-import { CalendarDensity, summariseReadable } from '../common/density';
+import { PosteriorAccumulator } from '../age-model/sampler';
+import { CalendarDensity, normalise, summariseReadable, trim } from '../common/density';
 import { SeededRandom } from '../common/random';
 import { JointChain } from './joint-chain';
 import { buildJointGraph, buildJointModel, sampleLabel } from './joint-model';
@@ -63,11 +67,18 @@ import type {
   SummariseJointChains,
 } from './types';
 
-/** Chain settings other than seed and index: the site model's defaults. */
+/**
+ * Chain settings other than seed and index. Outliers, offsets and window are the site model's
+ * defaults. The joint sampler mixes faster per sweep than the site model needs (cut shifts move
+ * all sites together), so fewer sweeps suffice: on the demo's preferred hypothesis (14 sites, 11
+ * regional events, 82 samples) four chains of 1,000 + 3,000 sweeps kept every 3rd give a smallest
+ * ESS above 400 (`npm run bench`); raise `iterations` for a larger hypothesis until the
+ * diagnostics say converged.
+ */
 export const DEFAULT_JOINT_CHAIN_SETTINGS: Omit<JointChainSettings, 'seed' | 'chainIndex'> = {
-  iterations: DEFAULT_AGE_MODEL_SETTINGS.iterations,
-  burnIn: DEFAULT_AGE_MODEL_SETTINGS.burnIn,
-  thin: DEFAULT_AGE_MODEL_SETTINGS.thin,
+  iterations: 3_000,
+  burnIn: 1_000,
+  thin: 3,
   outlierPrior: DEFAULT_AGE_MODEL_SETTINGS.outlierPrior,
   outlierShiftScaleYears: DEFAULT_AGE_MODEL_SETTINGS.outlierShiftScaleYears,
   inheritanceScaleYears: DEFAULT_AGE_MODEL_SETTINGS.inheritanceScaleYears,
@@ -76,8 +87,12 @@ export const DEFAULT_JOINT_CHAIN_SETTINGS: Omit<JointChainSettings, 'seed' | 'ch
 
 /** Sweeps between polls of `shouldCancel` and progress reports (as the site model). */
 const POLL_SWEEPS = 200;
-/** Sweeps between path draws (as the site model). */
-const PATH_UPDATE_PERIOD = 16;
+/**
+ * Sweeps between path draws. A path draw costs its length times the window's width, and a joint
+ * window spans every site's record; cut shifts already carry the chain between modes, so the
+ * joint model draws paths four times less often than the site model (16).
+ */
+const PATH_UPDATE_PERIOD = 64;
 /** Cut shifts per sweep (moves of everything older or younger than an age, in all sites). */
 const CUT_SHIFTS_PER_SWEEP = 4;
 /** Kept values (ages x draws) of one chain above this would need too much memory. */
@@ -164,6 +179,9 @@ export const runJointChain: RunJointChain = (input, settings, hooks: AgeModelHoo
   const siteEventDraws = new Float64Array(keptCount * g.siteEventNodes.length);
   const sampleDraws = new Float64Array(keptCount * g.sampleNodes.length);
   const outlierSums = new Float64Array(g.sampleNodes.length);
+  // Rao-Blackwellised event densities, one per distinct event node (a regional event once).
+  const eventNodes = Int32Array.from(new Set(g.siteEventNodes));
+  const accumulator = new PosteriorAccumulator(eventNodes.length, 0, model.window.youngCalBp, model.likelihoods.width);
   const sweeps = settings.burnIn + settings.iterations;
   const blockShifts = chain.blockShiftsPerSweep;
   let kept = 0;
@@ -192,10 +210,18 @@ export const runJointChain: RunJointChain = (input, settings, hooks: AgeModelHoo
       copy(g.siteEventNodes, siteEventDraws);
       copy(g.sampleNodes, sampleDraws);
       chain.addOutlierShares(outlierSums);
+      chain.accumulateEvents(accumulator, eventNodes);
       kept++;
     }
   }
   const rate = (accepted: number, proposed: number): number => (proposed > 0 ? accepted / proposed : 0);
+  const densityOfNode = new Map<number, CalendarDensity>();
+  eventNodes.forEach((node, k) =>
+    densityOfNode.set(
+      node,
+      densityFromDifferences(accumulator.eventDifferences[k], accumulator.eventDirect[k], accumulator.eventOpen[k], model.window.youngCalBp),
+    ),
+  );
   hooks.onProgress?.(1);
   return {
     chainIndex: settings.chainIndex,
@@ -213,6 +239,7 @@ export const runJointChain: RunJointChain = (input, settings, hooks: AgeModelHoo
       boundaries: rate(chain.boundaryAccepted, chain.boundaryProposed),
       paths: rate(chain.pathAccepted, chain.pathProposed),
     },
+    siteEventDensities: Array.from(g.siteEventNodes, (node) => densityOfNode.get(node) as CalendarDensity),
   };
 };
 
@@ -242,6 +269,26 @@ function pooled(series: readonly Float64Array[]): Float64Array {
     at += s.length;
   }
   return out;
+}
+
+/** The weighted mixture of densities on the 1-year grid, normalised and trimmed. */
+function averageDensities(densities: readonly CalendarDensity[], weights: readonly number[]): CalendarDensity {
+  let young = Infinity;
+  let old = -Infinity;
+  for (const d of densities) {
+    young = Math.min(young, d.startCalBp);
+    old = Math.max(old, d.startCalBp + d.probabilities.length - 1);
+  }
+  const probabilities = new Float64Array(old - young + 1);
+  densities.forEach((d, c) => {
+    let mass = 0;
+    for (const p of d.probabilities) mass += p;
+    if (!(mass > 0)) return;
+    const w = weights[c] / mass;
+    const offset = d.startCalBp - young;
+    for (let i = 0; i < d.probabilities.length; i++) probabilities[offset + i] += w * d.probabilities[i];
+  });
+  return normalise(trim({ startCalBp: young, probabilities }, 1e-7));
 }
 
 interface Posterior extends ChainDiagnostics {
@@ -276,9 +323,24 @@ export const summariseJointChains: SummariseJointChains = (input, chains, option
   const E = graph.siteEvents.length;
   const S = graph.samples.length;
 
+  // Rao-Blackwellised densities when every chain brought them, else the draws smoothed.
+  const rb = chains.every((c) => c.siteEventDensities !== undefined && c.siteEventDensities.length === E);
+  const eventDensity = (siteEvent: number, draws: readonly Float64Array[]): CalendarDensity =>
+    rb
+      ? averageDensities(
+          chains.map((c) => (c.siteEventDensities as readonly CalendarDensity[])[siteEvent]),
+          chains.map((c) => c.drawCount),
+        )
+      : kernelDensity(pooled(draws));
+  const firstMember = new Map<number, number>();
+  graph.siteEventNodes.forEach((node, k) => {
+    if (!firstMember.has(node)) firstMember.set(node, k);
+  });
   const regionalEvents: RegionalEventPosterior[] = input.regionalEvents.map((regional, k) => {
-    const p = posteriorOf(seriesOf(chains, (c) => c.regionalEvents, R, k, perChain));
-    return { regionalEventId: regional.regionalEventId, density: p.density, summary: summariseReadable(p.density), rhat: p.rhat, ess: p.ess };
+    const series = seriesOf(chains, (c) => c.regionalEvents, R, k, perChain);
+    const density = eventDensity(firstMember.get(graph.regionalNodes[k]) as number, series);
+    const { rhat, ess } = chainDiagnostics(series);
+    return { regionalEventId: regional.regionalEventId, density, summary: summariseReadable(density), rhat, ess };
   });
   // A tied site event's draws are its regional event's: its posterior is computed once.
   const regionalOfNode = new Map<number, number>();
@@ -289,8 +351,10 @@ export const summariseJointChains: SummariseJointChains = (input, chains, option
       const r = regionalEvents[regional];
       return { siteId: event.siteId, eventHorizonId: event.eventHorizonId, density: r.density, summary: r.summary, rhat: r.rhat, ess: r.ess };
     }
-    const p = posteriorOf(seriesOf(chains, (c) => c.siteEventDraws, E, k, perChain));
-    return { siteId: event.siteId, eventHorizonId: event.eventHorizonId, density: p.density, summary: summariseReadable(p.density), rhat: p.rhat, ess: p.ess };
+    const series = seriesOf(chains, (c) => c.siteEventDraws, E, k, perChain);
+    const density = eventDensity(k, series);
+    const { rhat, ess } = chainDiagnostics(series);
+    return { siteId: event.siteId, eventHorizonId: event.eventHorizonId, density, summary: summariseReadable(density), rhat, ess };
   });
   const totalDraws = chains.reduce((n, c) => n + c.drawCount, 0);
   const samples: (SamplePosterior & { readonly siteId: string })[] = graph.samples.map((entry, j) => {

@@ -26,6 +26,7 @@ import {
   GLOBAL_SHIFT_SHARE,
   INITIAL_CLEARANCE,
   PathBuffers,
+  PosteriorAccumulator,
   SHIFT_SCALES,
   drawDepositAge,
   drawPath,
@@ -37,6 +38,12 @@ import {
 } from '../age-model/sampler';
 import { SeededRandom } from '../common/random';
 import { JointGraph, JointModel } from './joint-model';
+
+// Plain constants: reading NodeKind's members in the inner loops costs a property lookup each.
+const END = NodeKind.END;
+const START = NodeKind.START;
+const EVENT = NodeKind.EVENT;
+const DEPOSIT = NodeKind.DEPOSIT;
 
 export class JointChain {
   private readonly graph: JointGraph;
@@ -112,7 +119,7 @@ export class JointChain {
 
   private isBoundary(node: number): boolean {
     const kind = this.graph.kind[node];
-    return kind === NodeKind.START || kind === NodeKind.END;
+    return kind === START || kind === END;
   }
 
   /**
@@ -139,7 +146,7 @@ export class JointChain {
         bound = fromYoung ? Math.max(bound, pass[b]) : Math.min(bound, pass[b]);
       }
       pass[node] = bound;
-      if (g.kind[node] !== NodeKind.DEPOSIT) continue;
+      if (g.kind[node] !== DEPOSIT) continue;
       const j = g.depositOf[node];
       const own = drawPlainDeposit(L, j, this.youngEdge, this.oldEdge, bound, r);
       const fits = fromYoung ? own > bound : own < bound;
@@ -153,7 +160,7 @@ export class JointChain {
     for (let k = g.youngToOld.length - 1; k >= 0; k--) {
       const node = g.youngToOld[k];
       if (this.isBoundary(node)) continue;
-      if (g.kind[node] === NodeKind.DEPOSIT) {
+      if (g.kind[node] === DEPOSIT) {
         olderLimit[node] = this.values[node];
         continue;
       }
@@ -165,7 +172,7 @@ export class JointChain {
       olderLimit[node] = hi;
     }
     for (const node of g.youngToOld) {
-      if (g.kind[node] !== NodeKind.EVENT) continue;
+      if (g.kind[node] !== EVENT) continue;
       let lo: number | undefined;
       for (let e = g.youngerOffsets[node]; e < g.youngerOffsets[node + 1]; e++) {
         const b = g.youngerNeighbours[e];
@@ -196,7 +203,7 @@ export class JointChain {
    */
   private updateBoundary(node: number): void {
     const g = this.graph;
-    const isStart = g.kind[node] === NodeKind.START;
+    const isStart = g.kind[node] === START;
     const m = g.sites[g.siteOf[node]].uniformCount;
     const other = this.values[g.otherBoundary[node]];
     const limit = isStart ? this.lowerBound(node) : this.upperBound(node);
@@ -227,11 +234,11 @@ export class JointChain {
     for (let step = 0; step < n; step++) {
       const node = order[fromYoung ? step : n - 1 - step];
       const kind = g.kind[node];
-      if (kind === NodeKind.START || kind === NodeKind.END) this.updateBoundary(node);
+      if (kind === START || kind === END) this.updateBoundary(node);
       else {
         const lo = this.lowerBound(node);
         const hi = this.upperBound(node);
-        if (kind === NodeKind.EVENT) this.values[node] = lo + (hi - lo) * this.random.uniform();
+        if (kind === EVENT) this.values[node] = lo + (hi - lo) * this.random.uniform();
         else this.values[node] = drawDepositAge(this.likelihoods, g.depositOf[node], lo, hi, this.values[node], this.random);
       }
     }
@@ -317,10 +324,10 @@ export class JointChain {
       const node = block[k];
       const moved = v[node] + step;
       const kind = g.kind[node];
-      if (kind === NodeKind.START || kind === NodeKind.END) {
+      if (kind === START || kind === END) {
         if (moved > this.oldEdge || moved < this.youngEdge) return false;
         const other = g.otherBoundary[node];
-        if (!inBlock[other] && kind === NodeKind.START) {
+        if (!inBlock[other] && kind === START) {
           const site = g.sites[g.siteOf[node]];
           const span = v[node] - v[other];
           const movedSpan = span + step;
@@ -345,7 +352,7 @@ export class JointChain {
           if (!inBlock[b] && v[b] > moved) return false;
         }
       }
-      if (kind === NodeKind.DEPOSIT) {
+      if (kind === DEPOSIT) {
         const j = g.depositOf[node];
         const now = L.at(j, v[node]);
         const then = L.at(j, moved);
@@ -367,7 +374,7 @@ export class JointChain {
     for (const path of this.paths) {
       const n = path.length;
       const top = path[n - 1];
-      const topIsStart = g.kind[top] === NodeKind.START;
+      const topIsStart = g.kind[top] === START;
       const lo = this.lowerBound(path[0]);
       const hi = topIsStart ? this.oldEdge : this.upperBound(top);
       if (!(hi > lo)) continue;
@@ -377,6 +384,21 @@ export class JointChain {
       this.pathProposed++;
       if (outcome === 'accepted') this.pathAccepted++;
     }
+  }
+
+  /**
+   * Add the full conditional of each event node (uniform between its neighbours in every site) to
+   * the accumulator's k-th event density (Rao-Blackwellisation, Gelfand & Smith 1990).
+   */
+  accumulateEvents(into: PosteriorAccumulator, eventNodes: Int32Array): void {
+    for (let k = 0; k < eventNodes.length; k++) {
+      const node = eventNodes[k];
+      const lo = this.lowerBound(node);
+      const hi = this.upperBound(node);
+      if (hi > lo) into.addInterval(into.eventDifferences[k], into.eventDirect[k], into.eventOpen[k], lo, hi, 1 / (hi - lo));
+      else into.addPoint(into.eventDirect[k], into.eventOpen[k], lo);
+    }
+    into.draws++;
   }
 
   /** Add each sample's conditional outlier probability (Rao-Blackwellised) given the current state. */
