@@ -4,6 +4,7 @@ import { parseRangesCalBp } from '../../backend/src/provenance/result-tables';
 import { RECURRENCE_CAUTION } from '../../backend/src/recurrence/recurrence-caution';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
 import { RunExecutor } from '../../backend/src/jobs/run-executor';
+import { RefreshService } from '../../backend/src/provenance/refresh.service';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture } from '../support/fixtures';
@@ -23,10 +24,11 @@ const START_ANALYSIS = `mutation($i: StartRecurrenceAnalysisInput!) { startRecur
 const RUN = `query($id: ID!) { ageModelRun(id: $id) { id status stale staleReasons { message inputKind inputId inputName via } } }`;
 const RUN_EVENTS = `query($id: ID!) { ageModelRun(id: $id) { seed events { eventHorizon { id name } medianCalBp hpd68 { olderCalBp youngerCalBp } hpd95 { olderCalBp youngerCalBp } } } }`;
 const REGIONAL = `query($id: ID!) { hypothesis(id: $id) { version regionalEvents { members { id } combinedMedianCalBp combinedHpd95 { olderCalBp youngerCalBp } concordance } } }`;
+const PROGRESS = 'progress { total waiting running succeeded failed blocked skipped fraction }';
 const REFRESH = `mutation($p: ID!) { refreshStaleResults(projectId: $p) { id status ageModelRuns { id } jointRuns { id } recurrenceAnalyses { id }
-  steps { id stage kind staleId label status freshId message dependsOn } skipped { kind id label reason } } }`;
-const PLAN = `query($id: ID!) { refreshPlan(id: $id) { id status ageModelRuns { id } recurrenceAnalyses { id seed stale inputs { ageModelRuns { id } hypothesisVersion } }
-  steps { id stage kind staleId label status freshId message dependsOn } } }`;
+  steps { id stage kind staleId label status freshId message dependsOn waitingFor } skipped { kind id label reason } ${PROGRESS} } }`;
+const PLAN = `query($id: ID!) { refreshPlan(id: $id) { id status automatic ageModelRuns { id } recurrenceAnalyses { id seed stale inputs { ageModelRuns { id } hypothesisVersion } }
+  steps { id stage kind staleId label status freshId message dependsOn waitingFor } ${PROGRESS} } }`;
 const CANCEL_RUN = `mutation($id: ID!) { cancelAgeModelRun(id: $id) { id status } }`;
 const ANALYSIS = `query($id: ID!) { recurrenceAnalysis(id: $id) { id status stale
   staleReasons { message inputKind inputId inputName via }
@@ -109,7 +111,8 @@ beforeAll(async () => {
     const { addTie } = await clients.CORRELATOR.ok(ADD_TIE, { i: { hypothesisId, eventAId: site.A.events[i], eventBId: site.B.events[i], confidence: 1 } });
     if (i === 0) firstTieId = addTie.id;
   }
-  analyses.segment = await runAnalysis({ segmentId, hypothesisId });
+  // Untied events counted too: after a tie is removed below, the segment still has three events.
+  analyses.segment = await runAnalysis({ segmentId, hypothesisId, countingRule: { includeUntied: true } });
   analyses.siteC = await runAnalysis({ siteId: site.C.id });
 }, 120_000);
 
@@ -318,6 +321,11 @@ describe('refreshStaleResults', () => {
     expect(plan.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([step(site.A.run).freshId, step(site.C.run).freshId].sort());
     expect(plan.recurrenceAnalyses).toEqual([]);
     expect(plan.skipped).toEqual([]);
+    // The whole plan is in the answer: what is queued now, and what waits for which run.
+    expect(step(analyses.segment).waitingFor).toEqual(['age model of Tarn Flat']);
+    expect(step(analyses.siteC).waitingFor).toEqual(['age model of Sedge Bank']);
+    expect(step(site.A.run).waitingFor).toEqual([]);
+    expect(plan.progress).toEqual({ total: 4, waiting: 2, running: 2, succeeded: 0, failed: 0, blocked: 0, skipped: 0, fraction: 0 });
 
     // The fresh run of C is cancelled (a failure); the fresh run of A succeeds.
     await clients.RESEARCHER.ok(CANCEL_RUN, { id: step(site.C.run).freshId });
@@ -328,15 +336,21 @@ describe('refreshStaleResults', () => {
     expect(nowStep(site.C.run).status).toBe('FAILED');
     expect(nowStep(analyses.siteC)).toMatchObject({ status: 'BLOCKED', message: 'not started: age model of Sedge Bank failed' });
     expect(nowStep(analyses.segment).status).toBe('QUEUED');
+    expect(nowStep(analyses.segment).waitingFor).toEqual([]);
     expect(now.status).toBe('ACTIVE');
+    expect(now.progress).toEqual({ total: 4, waiting: 0, running: 1, succeeded: 1, failed: 1, blocked: 1, skipped: 0, fraction: 0.75 });
 
     await executeRun(RecurrenceJob, nowStep(analyses.segment).freshId!);
     now = await planOf(plan.id);
     expect(nowStep(analyses.segment).status).toBe('SUCCEEDED');
     expect(now.status).toBe('FINISHED');
+    expect(now.progress.fraction).toBe(1);
     const [fresh] = now.recurrenceAnalyses;
     expect(fresh.id).toBe(nowStep(analyses.segment).freshId);
     expect(fresh).toMatchObject({ seed: 5, stale: false, inputs: { hypothesisVersion: 5 } });
+    // ... and its counting rule (untied events in): the one setting the default would change.
+    const { recurrenceAnalysis: counted } = await clients.VIEWER.ok(`query($id: ID!) { recurrenceAnalysis(id: $id) { eventTable { rule { includeUntied } } } }`, { id: fresh.id });
+    expect(counted.eventTable.rule.includeUntied).toBe(true);
     expect(fresh.inputs.ageModelRuns.map((r: { id: string }) => r.id).sort()).toEqual([nowStep(site.A.run).freshId, site.B.run].sort());
     // The fresh run kept the stale run's seed and settings.
     const { ageModelRun } = await clients.VIEWER.ok(`query($id: ID!) { ageModelRun(id: $id) { seed settings stale } }`, { id: nowStep(site.A.run).freshId });
@@ -347,6 +361,43 @@ describe('refreshStaleResults', () => {
     const { refreshStaleResults: plan } = await clients.RESEARCHER.ok(REFRESH, { p: fixture.projectId });
     expect((plan.steps as Step[]).map((s) => s.staleId)).toEqual([site.C.run]);
     expect(plan.skipped).toEqual([expect.objectContaining({ kind: 'recurrenceAnalysis', id: analyses.siteC, reason: expect.stringContaining('cannot run recurrence analyses') })]);
+  });
+});
+
+describe('automatic refresh', () => {
+  const SETTINGS = `mutation($i: SetRefreshSettingsInput!) { setRefreshSettings(input: $i) { automatic debounceSeconds } }`;
+  const PLANS = `query($p: ID!) { project(id: $p) { refreshPlans { id automatic createdAt steps { label } } } }`;
+
+  it('waits for the debounce after a change, and replicas ticking together start one refresh', async () => {
+    const { setRefreshSettings } = await clients.ADMIN.ok(SETTINGS, { i: { projectId: fixture.projectId, automatic: true, debounceSeconds: 30 } });
+    expect(setRefreshSettings).toEqual({ automatic: true, debounceSeconds: 30 });
+    // The researcher's refresh above is still running its site run: finish it (an active refresh holds the automatic one back).
+    const [active] = (await clients.VIEWER.ok(PLANS, { p: fixture.projectId })).project.refreshPlans;
+    const activePlan = await clients.VIEWER.ok(PLAN, { id: active.id });
+    for (const step of activePlan.refreshPlan.steps as { kind: string; status: string; freshId: string | null }[]) {
+      if (step.kind === 'ageModelRun' && step.status === 'QUEUED') await executeRun(AgeModelJob, step.freshId!);
+    }
+    expect((await clients.VIEWER.ok(PLAN, { id: active.id })).refreshPlan.status).toBe('FINISHED');
+    const plansBefore = (await clients.VIEWER.ok(PLANS, { p: fixture.projectId })).project.refreshPlans.length;
+    const unit = site.A.units[1];
+    await clients.RESEARCHER.ok(UPDATE_UNIT, { id: unit.id, v: unit.version, i: { notes: 'contact re-logged' } });
+    unit.version += 1;
+    const changedAt = Date.now();
+    const refresh = server.app.get(RefreshService);
+    // 10 s after the change: still inside the 30 s debounce, nothing starts.
+    await refresh.refreshAutomatically(new Date(changedAt + 10_000));
+    expect((await clients.VIEWER.ok(PLANS, { p: fixture.projectId })).project.refreshPlans).toHaveLength(plansBefore);
+    // 31 s after: three replicas tick at once; the project's lock in PostgreSQL lets one start.
+    const later = new Date(changedAt + 31_000);
+    await Promise.all([refresh.refreshAutomatically(later), refresh.refreshAutomatically(later), refresh.refreshAutomatically(later)]);
+    const plans = (await clients.VIEWER.ok(PLANS, { p: fixture.projectId })).project.refreshPlans;
+    expect(plans).toHaveLength(plansBefore + 1);
+    expect(plans[0].automatic).toBe(true);
+    expect(plans[0].steps.map((s: { label: string }) => s.label)).toContain('age model of Tarn Flat');
+    // Once started, another tick does not start a second one for the same change.
+    await refresh.refreshAutomatically(new Date(changedAt + 60_000));
+    expect((await clients.VIEWER.ok(PLANS, { p: fixture.projectId })).project.refreshPlans).toHaveLength(plansBefore + 1);
+    await clients.ADMIN.ok(SETTINGS, { i: { projectId: fixture.projectId, automatic: false } });
   });
 });
 

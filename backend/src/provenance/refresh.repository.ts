@@ -132,6 +132,15 @@ export class RefreshRepository {
     return at ? new Date(at) : null;
   }
 
+  /**
+   * Take the project's automatic-refresh lock for the rest of the transaction, or answer false
+   * when another API replica holds it (PostgreSQL advisory lock, so every replica shares it).
+   */
+  async tryAutomaticRefreshLock(projectId: string, executor: Executor): Promise<boolean> {
+    const result = await executor.execute(sql`select pg_try_advisory_xact_lock(hashtext(${`refresh:${projectId}`})) as locked`);
+    return (result as unknown as { rows: { locked: boolean }[] }).rows[0]?.locked === true;
+  }
+
   async settingsOf(projectId: string) {
     const [row] = await this.database.db.select().from(refreshSettings).where(eq(refreshSettings.projectId, projectId));
     return row;

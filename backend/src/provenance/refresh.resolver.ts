@@ -5,6 +5,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { RecurrenceService } from '../recurrence/recurrence.service';
 import { SetRefreshSettingsInput } from './dto/set-refresh-settings.input';
 import { RefreshPlanRow, RefreshRepository } from './refresh.repository';
+import { refreshProgress, waitingFor } from './refresh-progress';
 import { RefreshService } from './refresh.service';
 
 @Resolver('RefreshPlan')
@@ -35,8 +36,14 @@ export class RefreshResolver {
   }
 
   @ResolveField('steps')
-  steps(@Parent() plan: RefreshPlanRow) {
-    return this.refresh.stepsOf(plan.id).then((steps) => steps.map((s) => ({ ...s, kind: s.resultKind })));
+  async steps(@Parent() plan: RefreshPlanRow) {
+    const steps = await this.refresh.stepsOf(plan.id);
+    return steps.map((s) => ({ ...s, kind: s.resultKind, waitingFor: waitingFor(s, steps) }));
+  }
+
+  @ResolveField('progress')
+  async progress(@Parent() plan: RefreshPlanRow) {
+    return refreshProgress(await this.refresh.stepsOf(plan.id), (plan.skipped as unknown[] | null)?.length ?? 0);
   }
 
   @ResolveField('requestedBy')

@@ -6,7 +6,7 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { DomainError, notFound } from '../common/errors/domain-error';
 import { DatabaseService } from '../database/database.service';
-import { RecurrenceService } from '../recurrence/recurrence.service';
+import { eventTableOf, RecurrenceService } from '../recurrence/recurrence.service';
 import { SitesService } from '../sites/sites.service';
 import { ProvenanceService } from './provenance.service';
 import { RefreshPlanRow, RefreshRepository, RefreshStepRow } from './refresh.repository';
@@ -152,16 +152,23 @@ export class RefreshService {
    */
   async refreshAutomatically(now = new Date()): Promise<void> {
     for (const settings of await this.repository.automaticProjects()) {
-      const [latest] = await this.repository.plansOfProject(settings.projectId, 1);
-      if (latest?.status === 'ACTIVE') continue;
-      const changedAt = await this.repository.lastChangeAt(settings.projectId);
-      if (!changedAt || (latest && latest.createdAt >= changedAt)) continue;
-      if (now.getTime() - changedAt.getTime() < settings.debounceSeconds * 1000) continue;
-      const user = await this.repository.user(settings.updatedById);
-      if (!user) continue;
-      await this.refresh(user, settings.projectId, true).catch((error: unknown) =>
-        this.logger.warn(`automatic refresh of project ${settings.projectId}: ${error instanceof Error ? error.message : String(error)}`),
-      );
+      // Every API replica ticks: the project's advisory lock lets one of them decide and start, and
+      // the next one to get it sees that plan (newer than the last change) and does nothing.
+      await this.database
+        .transaction(async (tx) => {
+          if (!(await this.repository.tryAutomaticRefreshLock(settings.projectId, tx))) return;
+          const [latest] = await this.repository.plansOfProject(settings.projectId, 1);
+          if (latest?.status === 'ACTIVE') return;
+          const changedAt = await this.repository.lastChangeAt(settings.projectId);
+          if (!changedAt || (latest && latest.createdAt >= changedAt)) return;
+          if (now.getTime() - changedAt.getTime() < settings.debounceSeconds * 1000) return;
+          const user = await this.repository.user(settings.updatedById);
+          if (!user) return;
+          await this.refresh(user, settings.projectId, true);
+        })
+        .catch((error: unknown) =>
+          this.logger.warn(`automatic refresh of project ${settings.projectId}: ${error instanceof Error ? error.message : String(error)}`),
+        );
     }
   }
 
@@ -314,7 +321,10 @@ export class RefreshService {
       const stale = await this.repository.recurrenceAnalysis(step.staleId);
       if (!stale) throw notFound('the stale recurrence analysis');
       const settings = stale.settings as { drawsRequested?: number };
+      // A segment analysis counts its events by the rule it was started with (stored with its event table).
+      const rule = eventTableOf(stale)?.rule;
       const fresh = await this.recurrence.start(user, {
+        countingRule: rule ? { ...rule } : null,
         segmentId: stale.segmentId,
         siteId: stale.segmentId ? null : stale.siteId,
         hypothesisId: stale.hypothesisId,

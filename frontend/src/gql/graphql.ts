@@ -1441,9 +1441,11 @@ export type RecurrenceInputs = {
 };
 
 /**
- * One refresh of a project's stale results: the plan in dependency order and its progress. The
- * result lists hold the fresh results queued so far; a step still waiting for the runs it needs
- * adds its fresh result when it starts.
+ * One refresh of a project's stale results: the whole plan in dependency order (steps: queued now,
+ * waiting for the runs they need, ended) with its progress, and what it skipped and why. The result
+ * lists hold the fresh results queued so far; a step still waiting for the runs it needs (an
+ * analysis waiting for its site's fresh age model) is listed in steps with what it waits for, and
+ * adds its fresh result to the list when it starts. A failed step stops only the steps that need it.
  */
 export type RefreshPlan = {
   __typename?: 'RefreshPlan';
@@ -1455,6 +1457,8 @@ export type RefreshPlan = {
   id: Scalars['ID']['output'];
   /** Fresh joint age model runs queued by this refresh. */
   jointRuns: Array<JointRunReference>;
+  /** How far it has come. */
+  progress: RefreshProgress;
   /** Fresh recurrence analyses queued by this refresh. */
   recurrenceAnalyses: Array<RecurrenceAnalysis>;
   requestedBy?: Maybe<User>;
@@ -1463,6 +1467,27 @@ export type RefreshPlan = {
   /** ACTIVE while a step waits or runs, then FINISHED. */
   status: Scalars['String']['output'];
   steps: Array<RefreshStep>;
+};
+
+/** How far a refresh has come: its steps by status, and the stale results it skipped. */
+export type RefreshProgress = {
+  __typename?: 'RefreshProgress';
+  /** Not started because a step they need failed or was not started. */
+  blocked: Scalars['Int']['output'];
+  /** Fresh result failed or could not be queued. */
+  failed: Scalars['Int']['output'];
+  /** Share of the steps that ended (succeeded, failed or blocked), 0 to 1; 1 for a plan with no steps. */
+  fraction: Scalars['Float']['output'];
+  /** Fresh result queued or running (or being queued). */
+  running: Scalars['Int']['output'];
+  /** Stale results left out of the plan (see skipped). */
+  skipped: Scalars['Int']['output'];
+  /** Fresh result computed. */
+  succeeded: Scalars['Int']['output'];
+  /** Steps in the plan. */
+  total: Scalars['Int']['output'];
+  /** Waiting for the steps they need. */
+  waiting: Scalars['Int']['output'];
 };
 
 /** Whether a project refreshes stale results by itself after each change. */
@@ -1493,6 +1518,8 @@ export type RefreshStep = {
   staleId: Scalars['ID']['output'];
   /** WAITING (for the steps it needs), STARTING, QUEUED (fresh result queued or running), SUCCEEDED, FAILED, or BLOCKED (a step it needs failed). */
   status: Scalars['String']['output'];
+  /** What it still waits for, in words: the steps it needs that have not succeeded yet (empty once it may start). */
+  waitingFor: Array<Scalars['String']['output']>;
 };
 
 /** A connected group of tied events: one inferred earthquake. */
@@ -2521,7 +2548,14 @@ export type LatestRefreshQueryVariables = Exact<{
 }>;
 
 
-export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, label: string, status: string, message?: string | null }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, label: string, reason: string }> }> } };
+export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshSettings: { __typename?: 'RefreshSettings', automatic: boolean, debounceSeconds: number }, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, automatic: boolean, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, kind: string, label: string, status: string, message?: string | null, freshId?: string | null, waitingFor: Array<string> }>, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string } }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, kind: string, label: string, reason: string }>, progress: { __typename?: 'RefreshProgress', total: number, waiting: number, running: number, succeeded: number, failed: number, blocked: number, skipped: number, fraction: number } }> } };
+
+export type SetRefreshSettingsMutationVariables = Exact<{
+  input: SetRefreshSettingsInput;
+}>;
+
+
+export type SetRefreshSettingsMutation = { __typename?: 'Mutation', setRefreshSettings: { __typename?: 'RefreshSettings', automatic: boolean, debounceSeconds: number } };
 
 export type ProjectReleasesQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -3852,26 +3886,59 @@ export const LatestRefreshDocument = new TypedDocumentString(`
     query LatestRefresh($projectId: ID!) {
   project(id: $projectId) {
     id
+    refreshSettings {
+      automatic
+      debounceSeconds
+    }
     refreshPlans {
       id
       status
+      automatic
       createdAt
       steps {
         id
         stage
+        kind
         label
         status
         message
+        freshId
+        waitingFor
+      }
+      ageModelRuns {
+        id
+        site {
+          id
+        }
       }
       skipped {
         id
+        kind
         label
         reason
+      }
+      progress {
+        total
+        waiting
+        running
+        succeeded
+        failed
+        blocked
+        skipped
+        fraction
       }
     }
   }
 }
     `) as unknown as TypedDocumentString<LatestRefreshQuery, LatestRefreshQueryVariables>;
+export const SetRefreshSettingsDocument = new TypedDocumentString(`
+    mutation SetRefreshSettings($input: SetRefreshSettingsInput!) {
+  setRefreshSettings(input: $input) {
+    automatic
+    debounceSeconds
+  }
+}
+    `) as unknown as TypedDocumentString<SetRefreshSettingsMutation, SetRefreshSettingsMutationVariables>;
 export const ProjectReleasesDocument = new TypedDocumentString(`
     query ProjectReleases($id: ID!) {
   project(id: $id) {

@@ -89,7 +89,9 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
       <header className="sc-page-header">
         <H2 className="sc-page-title">Recurrence · {project.name}</H2>
       </header>
-      {allows(project, 'RESULTS_REFRESH') && <RefreshPanel projectId={projectId} />}
+      {allows(project, 'RESULTS_REFRESH') && (
+        <RefreshPanel projectId={projectId} canConfigure={allows(project, 'PROJECT_SETTINGS')} onShowAnalysis={setChosenId} />
+      )}
       {canRun && (
         <section className="sc-panel">
           <h3>New analysis</h3>

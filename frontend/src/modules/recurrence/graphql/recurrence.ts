@@ -227,23 +227,57 @@ export const LatestRefreshDocument = graphql(`
   query LatestRefresh($projectId: ID!) {
     project(id: $projectId) {
       id
+      refreshSettings {
+        automatic
+        debounceSeconds
+      }
       refreshPlans {
         id
         status
+        automatic
         createdAt
         steps {
           id
           stage
+          kind
           label
           status
           message
+          freshId
+          waitingFor
+        }
+        ageModelRuns {
+          id
+          site {
+            id
+          }
         }
         skipped {
           id
+          kind
           label
           reason
         }
+        progress {
+          total
+          waiting
+          running
+          succeeded
+          failed
+          blocked
+          skipped
+          fraction
+        }
       }
+    }
+  }
+`);
+
+export const SetRefreshSettingsDocument = graphql(`
+  mutation SetRefreshSettings($input: SetRefreshSettingsInput!) {
+    setRefreshSettings(input: $input) {
+      automatic
+      debounceSeconds
     }
   }
 `);
