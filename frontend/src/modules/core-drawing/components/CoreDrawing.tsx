@@ -3,9 +3,10 @@ import { useId, useMemo, type Ref } from 'react';
 import type { Facies } from '@/gql/graphql';
 import { FaciesPatterns } from '@/modules/column/components/FaciesPatterns';
 import { spreadLabels, truncateLabel } from '@/modules/column/utils/columnLayout';
-import { FACIES_STYLES, faciesGroundFill, faciesPatternId } from '@/modules/column/utils/facies';
+import { FACIES_ORDER, FACIES_STYLES, faciesGroundFill, faciesPatternId } from '@/modules/column/utils/facies';
 import type { DepthAxis } from '@/modules/core-drawing/utils/ageDepth';
 import { coreScale, depthLinks, erosionMarks, thicknessLabel, traceOnAxis, type CoreUnit } from '@/modules/core-drawing/utils/coreDepth';
+import { flowLegend, LEGEND_SWATCH } from '@/modules/core-drawing/utils/legendLayout';
 import { CHART_COLOURS } from '@/modules/correlation/utils/chartPalette';
 
 export type CoreDrawingUnit = CoreUnit & { facies: Facies };
@@ -35,7 +36,7 @@ export type CoreDrawingProps = {
 const INK = CHART_COLOURS.text;
 const MUTED = CHART_COLOURS.mutedText;
 const TOP = 52;
-const LEGEND_HEIGHT = 44;
+const LEGEND_ROW = 18;
 const BOTTOM = 14;
 const X = {
   horizonLabel: 66,
@@ -57,7 +58,7 @@ const HALO = { stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' } as cons
 function unitWord(unit: CoreDrawingUnit): string {
   if (unit.facies === 'TURBIDITE') return 'bed';
   if (unit.facies === 'HEMIPELAGIC_MUD') return 'mud';
-  return truncateLabel(unit.name, 8);
+  return truncateLabel(unit.name.trim().split(/\s+/)[0] ?? '', 9);
 }
 const FONT = 10;
 
@@ -74,6 +75,29 @@ function zigzag(x0: number, x1: number, y: number): string {
   return path;
 }
 
+/** The swatch of one legend entry: a facies tile, or the mark it explains. */
+function LegendSwatch({ entry, idPrefix }: { entry: string; idPrefix: string }) {
+  switch (entry) {
+    case 'erosion':
+      return <path d={zigzag(0, 16, 5)} fill="none" stroke={INK} strokeWidth={1.3} />;
+    case 'horizon':
+      return <path d="M4,1 L12,5 L4,9 Z" fill={INK} />;
+    case 'level':
+      return <path d="M8,1 L12,5 L8,9 L4,5 Z" fill={CHART_COLOURS.likelihoodBelow} />;
+    case 'link':
+      return <line x1={0} x2={16} y1={1} y2={9} stroke={CHART_COLOURS.axis} strokeWidth={0.6} strokeDasharray="2 2" />;
+    default: {
+      const facies = entry as Facies;
+      return (
+        <>
+          <rect x={0} y={0} width={16} height={11} fill={faciesGroundFill(idPrefix, facies)} />
+          <rect x={0} y={0} width={16} height={11} fill={`url(#${faciesPatternId(idPrefix, facies)})`} stroke={CHART_COLOURS.axis} strokeWidth={0.5} />
+        </>
+      );
+    }
+  }
+}
+
 /**
  * A turbidite core drawn to depth: the column on true depth with its beds and hemipelagic mud
  * (each by tone, texture and legend), erosion at bed bases as a zigzag with its thickness, the
@@ -87,14 +111,29 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
   if (!scale) return null;
   const lengthM = scale.baseDepthM - scale.topDepthM;
   const plotHeight = coreDrawingHeight(lengthM);
-  const height = TOP + plotHeight + BOTTOM + LEGEND_HEIGHT;
+  const erosions = erosionMarks(scale);
   const width = X.logs + (traces.length > 0 ? traces.length * (LOG_WIDTH + LOG_GAP) : 0) + 8;
+  const faciesPresent = FACIES_ORDER.filter((facies) => units.some((unit) => unit.facies === facies));
+  const legend = flowLegend(
+    [
+      ...faciesPresent.map((facies) => ({
+        key: facies,
+        label: facies === 'TURBIDITE' ? 'turbidite bed (removed from event-free depth)' : FACIES_STYLES[facies].label.toLowerCase(),
+      })),
+      ...(erosions.length > 0 ? [{ key: 'erosion', label: 'eroded base' }] : []),
+      { key: 'horizon', label: 'event horizon' },
+      { key: 'level', label: 'dated level' },
+      { key: 'link', label: 'same level on both depths' },
+    ],
+    width - 16,
+  );
+  const legendRows = Math.max(1, ...legend.map((entry) => entry.row + 1));
+  const height = TOP + plotHeight + BOTTOM + legendRows * LEGEND_ROW + 10;
   const yTrue = scaleLinear().domain([scale.topDepthM, scale.baseDepthM]).range([TOP, TOP + plotHeight]);
   const yEventFree = (eventFreeM: number) => yTrue(scale.topDepthM + eventFreeM);
   const trueTicks = yTrue.ticks(Math.max(4, Math.round(plotHeight / 60)));
   const efTicks = scaleLinear().domain([0, scale.eventFreeLengthM]).ticks(Math.max(3, Math.round((yEventFree(scale.eventFreeLengthM) - TOP) / 60)));
   const links = depthLinks(scale, trueTicks);
-  const erosions = erosionMarks(scale);
   const erosionByUnit = new Map(erosions.map((mark) => [mark.unitId, mark]));
   const unitsById = new Map(units.map((unit) => [unit.id, unit]));
   const trueRight = X.trueColumn + X.trueWidth;
@@ -134,7 +173,7 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         event-free
       </text>
       <text x={X.efColumn + X.efWidth / 2} y={27} textAnchor="middle" fill={MUTED}>
-        m, beds removed
+        {bedSegments.length > 0 ? 'm, beds removed' : 'm, no beds here'}
       </text>
 
       {/* links between the two depths: beds as wedges that close to a line, round depths as thin lines */}
@@ -301,22 +340,16 @@ export function CoreDrawing({ units, horizons, levels, traces = [], logsOn = 'TR
         );
       })}
 
-      {/* legend */}
+      {/* legend: the facies present, then the marks */}
       <g transform={`translate(8,${TOP + plotHeight + BOTTOM + 6})`} fontSize={9.5}>
-        <rect x={0} y={0} width={16} height={11} fill={faciesGroundFill(idPrefix, 'TURBIDITE')} />
-        <rect x={0} y={0} width={16} height={11} fill={`url(#${faciesPatternId(idPrefix, 'TURBIDITE')})`} stroke={CHART_COLOURS.axis} strokeWidth={0.5} />
-        <text x={21} y={9}>turbidite bed (graded, dotted)</text>
-        <rect x={180} y={0} width={16} height={11} fill={faciesGroundFill(idPrefix, 'HEMIPELAGIC_MUD')} />
-        <rect x={180} y={0} width={16} height={11} fill={`url(#${faciesPatternId(idPrefix, 'HEMIPELAGIC_MUD')})`} stroke={CHART_COLOURS.axis} strokeWidth={0.5} />
-        <text x={201} y={9}>hemipelagic mud (dashed)</text>
-        <path d={zigzag(0, 16, 24)} fill="none" stroke={INK} strokeWidth={1.3} />
-        <text x={21} y={27}>eroded base</text>
-        <path d="M92,20 L100,24 L92,28 Z" fill={INK} />
-        <text x={104} y={27}>event horizon</text>
-        <path d="M184,20 L188,24 L184,28 L180,24 Z" fill={CHART_COLOURS.likelihoodBelow} />
-        <text x={193} y={27}>dated level</text>
-        <line x1={262} x2={280} y1={20} y2={28} stroke={CHART_COLOURS.axis} strokeWidth={0.6} strokeDasharray="2 2" />
-        <text x={284} y={27}>same level on both depths</text>
+        {legend.map((entry) => (
+          <g key={entry.key} transform={`translate(${entry.x},${entry.row * LEGEND_ROW})`}>
+            <LegendSwatch entry={entry.key} idPrefix={idPrefix} />
+            <text x={LEGEND_SWATCH} y={9}>
+              {entry.label}
+            </text>
+          </g>
+        ))}
       </g>
     </svg>
   );
