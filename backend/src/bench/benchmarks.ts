@@ -88,7 +88,7 @@ export const BENCHMARKS: Benchmark[] = [
     },
   },
   {
-    name: 'joint age model coverage',
+    name: 'joint coverage',
     run: () => {
       const r = validateJointModel(JOINT_VALIDATION_BENCH);
       const pct = (x: number) => round(100 * x, 1);
