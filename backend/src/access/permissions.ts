@@ -2,8 +2,9 @@
  * Authorization: one permission enum and one role-to-permission table. Services ask for a
  * permission through `AccessService.requireAccess`; no role strings anywhere else.
  */
-export type Role = 'ADMIN' | 'RESEARCHER' | 'CORRELATOR' | 'ANALYST' | 'VIEWER';
-export const ROLES: readonly Role[] = ['ADMIN', 'RESEARCHER', 'CORRELATOR', 'ANALYST', 'VIEWER'];
+import { ROLES, type Role } from '../database/schema/enums';
+
+export { ROLES, type Role };
 
 export enum Permission {
   /** Read everything in the project. */

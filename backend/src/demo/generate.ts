@@ -17,6 +17,7 @@
  * then exactly the right model for these ages. Luminescence ages count years back from the
  * measurement year, not from 1950 [common practice].
  */
+import type { AgeRelation, DatingMethod, Facies, SampleMaterial } from '../database/schema/enums';
 import { CalibrationCurve } from '../chronology/calibration/curve';
 import { SeededRandom } from '../chronology/common/random';
 import {
@@ -54,27 +55,8 @@ import {
 /** The seed the shipped demo is built from. */
 export const DEMO_SEED = 4219;
 
-export type Facies =
-  | 'SOIL'
-  | 'COLLUVIUM'
-  | 'PEAT'
-  | 'TIDAL_MUD'
-  | 'SAND_SHEET'
-  | 'TURBIDITE'
-  | 'HEMIPELAGIC_MUD'
-  | 'TEPHRA'
-  | 'OTHER';
-export type DatingMethod = 'RADIOCARBON' | 'LUMINESCENCE' | 'HISTORICAL' | 'TEPHRA';
-export type SampleMaterial =
-  | 'DETRITAL_CHARCOAL'
-  | 'IN_SITU_PLANT'
-  | 'PLANT_MACROFOSSIL'
-  | 'PLANKTIC_FORAMS'
-  | 'BENTHIC_FORAMS'
-  | 'SHELL'
-  | 'BULK_SEDIMENT'
-  | 'OTHER';
-export type AgeRelation = 'DATES_DEPOSIT' | 'OLDER_THAN_DEPOSIT' | 'YOUNGER_THAN_DEPOSIT';
+// The vocabularies are the database's (types only: the generator stays free of the database).
+export type { AgeRelation, DatingMethod, Facies, SampleMaterial } from '../database/schema/enums';
 export type BuiltInCurveCode = 'INTCAL20' | 'MARINE20';
 /** 1 is certain, 4 possible (horizons); 1 is the strongest tie. */
 export type Rank = 1 | 2 | 3 | 4;

@@ -4,8 +4,10 @@
  * collide with codes that radiocarbon and luminescence laboratories publish under.
  */
 
-export type ProjectRole = 'ADMIN' | 'RESEARCHER' | 'CORRELATOR' | 'ANALYST' | 'VIEWER';
-export type TectonicSetting = 'SUBDUCTION_INTERFACE' | 'CRUSTAL';
+import type { Role, TectonicSetting } from '../database/schema/enums';
+
+export type ProjectRole = Role;
+export type { TectonicSetting };
 
 export interface DemoPerson {
   readonly name: string;

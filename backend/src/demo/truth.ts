@@ -10,7 +10,9 @@
  * with what really happened; the seed only changes the noise of the field and lab measurements.
  */
 
-export type SiteKind = 'TRENCH' | 'CORE' | 'OUTCROP' | 'MARSH' | 'LAKE';
+import type { SiteKind } from '../database/schema/enums';
+
+export type { SiteKind } from '../database/schema/enums';
 
 /** A fault or subduction-zone segment with its along-strike extent. */
 export interface DemoSegment {

@@ -17,14 +17,10 @@ export const BUNDLE_VERSION = 2;
 export const READABLE_BUNDLE_VERSIONS = [1, 2] as const;
 export type BundleVersion = (typeof READABLE_BUNDLE_VERSIONS)[number];
 
-export const SITE_KINDS = ['TRENCH', 'CORE', 'OUTCROP', 'MARSH', 'LAKE'] as const;
-export const FACIES = ['SOIL', 'COLLUVIUM', 'PEAT', 'TIDAL_MUD', 'SAND_SHEET', 'TURBIDITE', 'HEMIPELAGIC_MUD', 'TEPHRA', 'OTHER'] as const;
-export const DATING_METHODS = ['RADIOCARBON', 'LUMINESCENCE', 'HISTORICAL', 'TEPHRA'] as const;
-export const SAMPLE_MATERIALS = [
-  'DETRITAL_CHARCOAL', 'IN_SITU_PLANT', 'PLANT_MACROFOSSIL', 'PLANKTIC_FORAMS', 'BENTHIC_FORAMS', 'SHELL', 'BULK_SEDIMENT', 'OTHER',
-] as const;
-export const AGE_RELATIONS = ['DATES_DEPOSIT', 'OLDER_THAN_DEPOSIT', 'YOUNGER_THAN_DEPOSIT'] as const;
-export const TECTONIC_SETTINGS = ['SUBDUCTION_INTERFACE', 'CRUSTAL'] as const;
+// The bundle's vocabularies are the database's (one definition in database/schema/enums.ts).
+import { AGE_RELATIONS, DATING_METHODS, FACIES, SAMPLE_MATERIALS, SITE_KINDS, TECTONIC_SETTINGS } from '../database/schema/enums';
+
+export { AGE_RELATIONS, DATING_METHODS, FACIES, SAMPLE_MATERIALS, SITE_KINDS, TECTONIC_SETTINGS };
 
 export interface BundleProject {
   name: string;

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { and, eq, inArray, lt, sql } from 'drizzle-orm';
 import type { PgColumn, PgTable, PgUpdateSetSource } from 'drizzle-orm/pg-core';
 import { DatabaseService, Executor } from '../database/database.service';
+import type { JobStatus } from '../database/schema/enums';
 
 /** A table whose rows are runs: an `id`, the `runState` columns and `updated_at`. */
 export type RunTable = PgTable & {
@@ -19,7 +20,7 @@ export type RunTable = PgTable & {
 export type RunRow<Table extends RunTable> = Table['$inferSelect'];
 /** Values to write to a run row. */
 export type RunValues<Table extends RunTable> = Partial<Table['$inferInsert']>;
-export type RunStatus = 'QUEUED' | 'RUNNING' | 'SUCCEEDED' | 'FAILED' | 'CANCELLED';
+export type RunStatus = JobStatus;
 
 /**
  * The lifecycle every kind of run shares, for any run table: claim, progress (the heartbeat),

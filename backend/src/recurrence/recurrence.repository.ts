@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { and, desc, eq } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
 import { eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, sites, ties, units } from '../database/schema';
+import type { TectonicSetting } from '../database/schema/enums';
 import { RunsRepository } from '../jobs/runs.repository';
 
 export type RecurrenceAnalysisRow = typeof recurrenceAnalyses.$inferSelect;
@@ -84,7 +85,7 @@ export class RecurrenceRepository {
     return row;
   }
 
-  async tectonicSetting(projectId: string, executor: Executor = this.database.db): Promise<'SUBDUCTION_INTERFACE' | 'CRUSTAL'> {
+  async tectonicSetting(projectId: string, executor: Executor = this.database.db): Promise<TectonicSetting> {
     const [row] = await executor.select({ setting: projects.tectonicSetting }).from(projects).where(eq(projects.id, projectId));
     return row?.setting ?? 'SUBDUCTION_INTERFACE';
   }

@@ -4,14 +4,9 @@
  * values and word their refusals the same way.
  */
 
-export const DATING_METHODS = ['RADIOCARBON', 'LUMINESCENCE', 'HISTORICAL', 'TEPHRA'] as const;
-export const SAMPLE_MATERIALS = [
-  'DETRITAL_CHARCOAL', 'IN_SITU_PLANT', 'PLANT_MACROFOSSIL', 'PLANKTIC_FORAMS', 'BENTHIC_FORAMS', 'SHELL', 'BULK_SEDIMENT', 'OTHER',
-] as const;
-export const AGE_RELATIONS = ['DATES_DEPOSIT', 'OLDER_THAN_DEPOSIT', 'YOUNGER_THAN_DEPOSIT'] as const;
+import { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS, type AgeRelation, type SampleMaterial } from '../database/schema/enums';
 
-export type SampleMaterial = (typeof SAMPLE_MATERIALS)[number];
-export type AgeRelation = (typeof AGE_RELATIONS)[number];
+export { AGE_RELATIONS, DATING_METHODS, SAMPLE_MATERIALS, type AgeRelation, type SampleMaterial };
 
 /**
  * Bounds of a sample's own inheritance (or intrusion) scale, years: below a year the offset is no

@@ -1,4 +1,5 @@
 import { IsIn, IsOptional, IsString, Length } from 'class-validator';
+import { TECTONIC_SETTINGS, type TectonicSetting } from '../../database/schema/enums';
 
 export class CreateProjectInput {
   @IsString()
@@ -11,6 +12,6 @@ export class CreateProjectInput {
   description?: string;
 
   @IsOptional()
-  @IsIn(['SUBDUCTION_INTERFACE', 'CRUSTAL'])
-  tectonicSetting?: 'SUBDUCTION_INTERFACE' | 'CRUSTAL';
+  @IsIn(TECTONIC_SETTINGS)
+  tectonicSetting?: TectonicSetting;
 }

@@ -1,8 +1,9 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsIn, IsNumber, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
 
-export const SITE_KINDS = ['TRENCH', 'CORE', 'OUTCROP', 'MARSH', 'LAKE'] as const;
-export type SiteKind = (typeof SITE_KINDS)[number];
+import { SITE_KINDS, type SiteKind } from '../../database/schema/enums';
+
+export { SITE_KINDS, type SiteKind };
 
 const finite = { allowNaN: false, allowInfinity: false };
 

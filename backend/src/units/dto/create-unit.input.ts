@@ -1,10 +1,9 @@
 import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
 
-export const FACIES = [
-  'SOIL', 'COLLUVIUM', 'PEAT', 'TIDAL_MUD', 'SAND_SHEET', 'TURBIDITE', 'HEMIPELAGIC_MUD', 'TEPHRA', 'OTHER',
-] as const;
-export type Facies = (typeof FACIES)[number];
+import { FACIES, type Facies } from '../../database/schema/enums';
+
+export { FACIES, type Facies };
 
 const finite = { allowNaN: false, allowInfinity: false };
 

@@ -1,4 +1,5 @@
 import type { Facies } from '@/gql/graphql';
+import { valuesOf } from '@/modules/api/utils/vocabulary';
 
 /**
  * How each facies is drawn in a column: a ground tone from the sediment itself and a texture
@@ -14,18 +15,6 @@ export type FaciesStyle = {
   gradedTo?: string;
 };
 
-export const FACIES_ORDER: readonly Facies[] = [
-  'SOIL',
-  'COLLUVIUM',
-  'PEAT',
-  'TIDAL_MUD',
-  'SAND_SHEET',
-  'TURBIDITE',
-  'HEMIPELAGIC_MUD',
-  'TEPHRA',
-  'OTHER',
-];
-
 export const FACIES_STYLES: Record<Facies, FaciesStyle> = {
   SOIL: { label: 'Soil', ground: '#8a6a48', ink: '#5c4329', labelInk: '#fbf6ee' },
   COLLUVIUM: { label: 'Colluvium', ground: '#c29a68', ink: '#7d5c38', labelInk: '#2b2118' },
@@ -37,6 +26,9 @@ export const FACIES_STYLES: Record<Facies, FaciesStyle> = {
   TEPHRA: { label: 'Tephra', ground: '#e9e4d8', ink: '#958c7b', labelInk: '#2a2620' },
   OTHER: { label: 'Other', ground: '#c7c3bb', ink: '#9a958c', labelInk: '#26241f' },
 };
+
+/** Every facies, in the order the styles are written (the server's order). */
+export const FACIES_ORDER = valuesOf(FACIES_STYLES);
 
 export const FACIES_OPTIONS = FACIES_ORDER.map((facies) => ({ value: facies, label: FACIES_STYLES[facies].label }));
 

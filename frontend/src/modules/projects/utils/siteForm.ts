@@ -1,4 +1,5 @@
 import type { CreateSiteInput, SiteKind } from '@/gql/graphql';
+import { valuesOf } from '@/modules/api/utils/vocabulary';
 import { FieldReader, numberText, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
 
 export type SiteFormValues = {
@@ -27,8 +28,6 @@ export const SITE_FORM_FIELDS: readonly SiteFormField[] = [
   'notes',
 ];
 
-export const SITE_KINDS: readonly SiteKind[] = ['TRENCH', 'CORE', 'OUTCROP', 'MARSH', 'LAKE'];
-
 export const SITE_KIND_LABELS: Record<SiteKind, string> = {
   TRENCH: 'Trench',
   CORE: 'Core',
@@ -36,6 +35,8 @@ export const SITE_KIND_LABELS: Record<SiteKind, string> = {
   MARSH: 'Marsh',
   LAKE: 'Lake',
 };
+
+export const SITE_KINDS = valuesOf(SITE_KIND_LABELS);
 
 export const EMPTY_SITE_FORM: SiteFormValues = {
   name: '',

@@ -1,6 +1,5 @@
 import type { AgeRelation, CurveCode, DatingMethod, SampleMaterial } from '@/gql/graphql';
-
-export const DATING_METHODS: readonly DatingMethod[] = ['RADIOCARBON', 'LUMINESCENCE', 'HISTORICAL', 'TEPHRA'];
+import { valuesOf } from '@/modules/api/utils/vocabulary';
 
 export const DATING_METHOD_LABELS: Record<DatingMethod, string> = {
   RADIOCARBON: 'Radiocarbon',
@@ -9,16 +8,7 @@ export const DATING_METHOD_LABELS: Record<DatingMethod, string> = {
   TEPHRA: 'Tephra',
 };
 
-export const SAMPLE_MATERIALS: readonly SampleMaterial[] = [
-  'DETRITAL_CHARCOAL',
-  'IN_SITU_PLANT',
-  'PLANT_MACROFOSSIL',
-  'PLANKTIC_FORAMS',
-  'BENTHIC_FORAMS',
-  'SHELL',
-  'BULK_SEDIMENT',
-  'OTHER',
-];
+export const DATING_METHODS = valuesOf(DATING_METHOD_LABELS);
 
 export const SAMPLE_MATERIAL_LABELS: Record<SampleMaterial, string> = {
   DETRITAL_CHARCOAL: 'Detrital charcoal',
@@ -31,7 +21,7 @@ export const SAMPLE_MATERIAL_LABELS: Record<SampleMaterial, string> = {
   OTHER: 'Other',
 };
 
-export const AGE_RELATIONS: readonly AgeRelation[] = ['DATES_DEPOSIT', 'OLDER_THAN_DEPOSIT', 'YOUNGER_THAN_DEPOSIT'];
+export const SAMPLE_MATERIALS = valuesOf(SAMPLE_MATERIAL_LABELS);
 
 export const AGE_RELATION_LABELS: Record<AgeRelation, string> = {
   DATES_DEPOSIT: 'Dates the deposit',
@@ -39,13 +29,15 @@ export const AGE_RELATION_LABELS: Record<AgeRelation, string> = {
   YOUNGER_THAN_DEPOSIT: 'Younger than the deposit (roots, burrows)',
 };
 
-export const CURVE_CODES: readonly CurveCode[] = ['INTCAL20', 'MARINE20', 'SHCAL20'];
+export const AGE_RELATIONS = valuesOf(AGE_RELATION_LABELS);
 
 export const CURVE_LABELS: Record<CurveCode, string> = {
   INTCAL20: 'IntCal20',
   MARINE20: 'Marine20',
   SHCAL20: 'SHCal20',
 };
+
+export const CURVE_CODES = valuesOf(CURVE_LABELS);
 
 /** Curves for marine carbon, which take a local reservoir offset Delta-R. */
 export function isMarineCurve(curve: CurveCode | null | undefined): boolean {

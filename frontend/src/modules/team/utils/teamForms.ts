@@ -1,4 +1,6 @@
 import type { Role } from '@/gql/graphql';
+import { valuesOf } from '@/modules/api/utils/vocabulary';
+import { ROLE_LABELS } from '@/modules/auth/utils/permissions';
 import { FieldReader, type FormResult } from '@/modules/ui/utils/formFields';
 
 /** The server's minimum (backend auth/passwords.ts), checked here so the form answers at once. */
@@ -41,5 +43,5 @@ export function landingProjectId(memberships: readonly { project: { id: string }
   return memberships.length === 1 ? (memberships[0]?.project.id ?? null) : null;
 }
 
-/** Every role, most rights first, in the order the role menus list them. */
-export const ROLES: readonly Role[] = ['ADMIN', 'RESEARCHER', 'CORRELATOR', 'ANALYST', 'VIEWER'];
+/** Every role, most rights first, in the order the role menus list them (that of ROLE_LABELS). */
+export const ROLES = valuesOf(ROLE_LABELS);
