@@ -278,6 +278,33 @@ describe('exports', () => {
     expect(bundle.recurrenceAnalyses[0].results.analysis.id).toBe(pinned);
     expect(bundle.recurrenceAnalyses[0].events.inputs).toContainEqual({ field: 'seed', value: 5 });
     expect(bundle.ageModelRuns.map((t: { inputs: { field: string; value: unknown }[] }) => t.inputs.find((i) => i.field === 'age model run id')?.value)).toEqual([site.C.run]);
+
+    // Every table also as CSV naming its inputs and seed; its numbers read back equal the JSON's.
+    type CsvFile = { name: string; table: string; content: string };
+    const csvFiles = bundle.csvFiles as CsvFile[];
+    expect(csvFiles.map((f) => f.table).sort()).toEqual(['analysis events', 'analysis results', 'event ages']);
+    for (const file of csvFiles) expect(file.content, file.name).toMatch(/\r\nseed,5\r\n|\r\nseed,11\r\n/);
+    const runCsv = Papa.parse<string[]>(csvFiles.find((f) => f.table === 'event ages')!.content.trim()).data;
+    const header = runCsv.findIndex((row) => row[0] === 'site' && row[1] === 'event');
+    const csvRows = runCsv.slice(header + 1).map((row) => Object.fromEntries(runCsv[header].map((title, i) => [title, row[i]])));
+    const jsonRows = bundle.ageModelRuns[0].rows as { event: string; medianCalBp: number; hpd95: { olderCalBp: number; youngerCalBp: number }[] }[];
+    expect(csvRows.map((r) => r.event)).toEqual(jsonRows.map((r) => r.event));
+    csvRows.forEach((row, i) => {
+      expect(Number(row['median (cal BP)'])).toBe(jsonRows[i].medianCalBp);
+      expect(parseRangesCalBp(row['95.4 % range (cal BP)'])).toEqual(jsonRows[i].hpd95.map((r) => [r.olderCalBp, r.youngerCalBp]));
+    });
+
+    // A figure per table, drawn from its rows: the medians it marks are the table's.
+    type Figure = { name: string; table: string; mediaType: string; svg: string };
+    const figures = bundle.figures as Figure[];
+    expect(figures.map((f) => f.table).sort()).toEqual(['analysis events', 'event ages']);
+    const medians = (svg: string) => [...svg.matchAll(/data-median-cal-bp="([-\d.]+)"/g)].map((m) => Number(m[1]));
+    const runFigure = figures.find((f) => f.table === 'event ages')!;
+    expect(runFigure).toMatchObject({ mediaType: 'image/svg+xml', name: expect.stringMatching(/^age-model-run-sedge-bank-[0-9a-f]{8}\.svg$/) });
+    expect(runFigure.svg).toContain('Age (cal BP');
+    expect(medians(runFigure.svg)).toEqual(jsonRows.map((r) => r.medianCalBp));
+    const analysisRows = bundle.recurrenceAnalyses[0].events.rows as { medianCalBp: number }[];
+    expect(medians(figures.find((f) => f.table === 'analysis events')!.svg)).toEqual(analysisRows.map((r) => r.medianCalBp));
     expect((await download(clients.OUTSIDER, `/api/releases/${createRelease.id}/bundle.json`)).status).toBe(404);
   });
 });

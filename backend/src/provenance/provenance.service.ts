@@ -104,6 +104,11 @@ export class ProvenanceService {
     return [...new Set((await this.repository.runInputs(runIds)).map((r) => r.siteId))];
   }
 
+  /** A project's name (for the names beside ids in exports). */
+  async projectName(projectId: string): Promise<string | null> {
+    return (await this.repository.projectOf(projectId))?.name ?? null;
+  }
+
   segmentName(segmentId: string): Promise<string | null> {
     return this.repository.segmentName(segmentId);
   }

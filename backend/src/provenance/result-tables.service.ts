@@ -14,7 +14,8 @@ import { RecurrenceService, type RecurrenceInputSnapshot } from '../recurrence/r
 import { SitesService } from '../sites/sites.service';
 import { ProvenanceRepository } from './provenance.repository';
 import { ProvenanceService } from './provenance.service';
-import { AGE_COLUMNS, ageCells, type ResultTable, type TableInput, tableJson } from './result-tables';
+import { type BundleFigure, eventAgeFigureSvg, figureEventsOf } from './result-figures';
+import { AGE_COLUMNS, ageCells, type ResultTable, type TableInput, tableCsv, tableJson } from './result-tables';
 import { resultKey } from './staleness';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -212,24 +213,39 @@ export class ResultTablesService {
   }
 
   /**
-   * A release as one JSON download: its frozen data, and every analysis pinned to it with its
-   * results, its event table and the event tables of the age model runs it used.
+   * A release as one JSON download: its frozen data, every analysis pinned to it with its results,
+   * its event table and the event tables of the age model runs it used, each table also as CSV
+   * (naming its inputs and seed), and an event-age figure (SVG) drawn from each table's rows.
    */
   async releaseBundle(user: AuthUser, releaseId: string) {
     const release = await this.releases.get(user, releaseId);
     const project = await this.repository.projectOf(release.projectId);
     const pinned = await this.repository.analysesOfRelease(release.id);
     const analyses = [];
-    const runTables = new Map<string, ReturnType<typeof tableJson>>();
-    for (const { id, status } of pinned) {
+    const runTables = new Map<string, ResultTable>();
+    const figures: BundleFigure[] = [];
+    const csvFiles: { name: string; table: string; content: string }[] = [];
+    for (const [index, { id, status }] of pinned.entries()) {
       if (status !== 'SUCCEEDED') continue;
-      const { json } = await this.recurrence.exportOf(user, id);
-      analyses.push({ results: json, events: tableJson(await this.analysisEvents(user, id)) });
+      const { json, csv } = await this.recurrence.exportOf(user, id);
+      const events = await this.analysisEvents(user, id);
+      analyses.push({ results: json, events: tableJson(events) });
+      const name = `analysis-${index + 1}`;
+      csvFiles.push({ name: `${name}-results.csv`, table: 'analysis results', content: csv }, { name: `${name}-events.csv`, table: events.table, content: tableCsv(events) });
+      const segment = this.inputValue(events, 'segment');
+      const title = segment ? `Events of the analysis of segment ${segment}` : 'Events of the site analysis';
+      figures.push(this.figureOf(`${name}-events.svg`, title, events, (row) => String(row.members)));
       for (const input of await this.provenance.inputsOf({ kind: 'recurrenceAnalysis', id })) {
         if (input.kind !== 'ageModelRun' || runTables.has(input.id)) continue;
         const run = await this.runs.findById(input.id);
-        if (run?.status === 'SUCCEEDED') runTables.set(input.id, tableJson(await this.runEventsTable(run)));
+        if (run?.status === 'SUCCEEDED') runTables.set(input.id, await this.runEventsTable(run));
       }
+    }
+    for (const [runId, table] of runTables) {
+      const site = String(this.inputValue(table, 'site') ?? runId);
+      const name = `age-model-run-${fileSafe(site)}-${runId.slice(0, 8)}`;
+      csvFiles.push({ name: `${name}.csv`, table: table.table, content: tableCsv(table) });
+      figures.push(this.figureOf(`${name}.svg`, `Event ages at ${site}`, table, (row) => String(row.event)));
     }
     return {
       format: 'stratochron-release-bundle',
@@ -238,10 +254,28 @@ export class ResultTablesService {
       caution: RECURRENCE_CAUTION,
       data: release.snapshot,
       recurrenceAnalyses: analyses,
-      ageModelRuns: [...runTables.values()],
-      figures: [] as unknown[],
-      note: 'Age model runs and analyses are computed results, not frozen data: those listed here are the analyses pinned to this release (pinned only while the live data were exactly as released) and the runs they used.',
+      ageModelRuns: [...runTables.values()].map(tableJson),
+      csvFiles,
+      figures,
+      note: 'Age model runs and analyses are computed results, not frozen data: those listed here are the analyses pinned to this release (pinned only while the live data were exactly as released) and the runs they used. Each figure is drawn from the rows of the table it names.',
     };
+  }
+
+  /** An event-age figure of a table's rows, subtitled with the table's run or analysis and seed. */
+  private figureOf(name: string, title: string, table: ResultTable, labelOf: (row: Record<string, unknown>) => string): BundleFigure {
+    const seed = this.inputValue(table, 'seed');
+    const source = this.inputValue(table, 'age model run id') ?? this.inputValue(table, 'recurrence analysis id');
+    return {
+      name,
+      title,
+      table: table.table,
+      mediaType: 'image/svg+xml',
+      svg: eventAgeFigureSvg({ title, subtitle: `${table.table} of ${source ?? 'a result'}, seed ${seed ?? 'n/a'}`, events: figureEventsOf(table.rows, labelOf) }),
+    };
+  }
+
+  private inputValue(table: ResultTable, field: string) {
+    return table.inputs.find((i) => i.field === field)?.value ?? null;
   }
 
   private async memberNames(ids: readonly string[]): Promise<Map<string, string>> {
@@ -251,4 +285,9 @@ export class ResultTablesService {
 
 function numberOrNull(value: unknown): number | null {
   return typeof value === 'number' ? value : null;
+}
+
+/** A name as part of a file name: letters, digits and dashes. */
+function fileSafe(name: string): string {
+  return name.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').toLowerCase() || 'site';
 }

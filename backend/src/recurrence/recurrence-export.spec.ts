@@ -42,6 +42,19 @@ describe(recurrenceExportCsv.name, () => {
     expect(csv).toContain('hypothesis version,3');
   });
 
+  it('puts names first and keeps the ids on their own lines', () => {
+    const named = recurrenceExportCsv(
+      { ...HEADER, names: { project: 'Invented margin', segment: 'North', site: null, hypothesis: 'One-to-one', ageModelRuns: ['Tarn Flat', null] } },
+      RESULTS,
+    ).split('\r\n');
+    expect(named).toContain('project,Invented margin');
+    expect(named).toContain(`project id,${HEADER.projectId}`);
+    expect(named).toContain('hypothesis,One-to-one');
+    expect(named).toContain('age model runs,Tarn Flat (r1); r2');
+    expect(named).toContain('age model run ids,r1 r2');
+    expect(named).toContain('seed,5');
+  });
+
   it('starts no text cell with a formula character (negative numbers stay numbers)', () => {
     for (const line of lines) {
       for (const cell of line.split(',')) if (!Number.isFinite(Number(cell))) expect(cell).not.toMatch(/^[=+\-@]/);

@@ -24,6 +24,15 @@ export interface RecurrenceExportHeader {
   draws: number;
   createdAt: string;
   finishedAt: string | null;
+  /** The names beside the ids above, for people reading the CSV (issue 15: names, not UUIDs). */
+  names?: {
+    project: string | null;
+    segment: string | null;
+    site: string | null;
+    hypothesis: string | null;
+    /** Per entry of ageModelRunIds: the run's site. */
+    ageModelRuns: (string | null)[];
+  };
 }
 
 export interface RecurrenceExport {
@@ -125,12 +134,17 @@ export function recurrenceExportCsv(
     ['analysis'],
     ['field', 'value'],
     ['id', header.id],
-    ['project', header.projectId],
-    ['segment', header.segmentId],
-    ['site', header.siteId],
-    ['hypothesis', header.hypothesisId],
+    ['project', header.names?.project ?? header.projectId],
+    ['project id', header.projectId],
+    ['segment', header.names?.segment ?? header.segmentId],
+    ['segment id', header.segmentId],
+    ['site', header.names?.site ?? header.siteId],
+    ['site id', header.siteId],
+    ['hypothesis', header.names?.hypothesis ?? header.hypothesisId],
+    ['hypothesis id', header.hypothesisId],
     ['hypothesis version', header.hypothesisVersion],
-    ['age model runs', header.ageModelRunIds.join(' ')],
+    ['age model runs', header.ageModelRunIds.map((id, i) => (header.names?.ageModelRuns[i] ? `${header.names.ageModelRuns[i]} (${id})` : id)).join('; ')],
+    ['age model run ids', header.ageModelRunIds.join(' ')],
     ['seed', header.seed],
     ['forecast start year (CE)', header.forecastStartYear],
     ['windows (years)', header.windowsYears.join(' ')],

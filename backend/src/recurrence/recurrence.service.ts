@@ -266,6 +266,9 @@ export class RecurrenceService {
     const results = analysis.results as StoredRecurrenceResults | null;
     if (analysis.status !== 'SUCCEEDED' || !results) throw conflict(`the analysis has no results to export (${analysis.status})`);
     const settings = analysis.settings as { ageModelRunIds?: string[] };
+    const ageModelRunIds = settings.ageModelRunIds ?? [];
+    const recorded = await this.provenance.inputsOf({ kind: 'recurrenceAnalysis', id: analysis.id });
+    const runName = new Map(recorded.filter((i) => i.kind === 'ageModelRun').map((i) => [i.id, i.name]));
     const header: RecurrenceExportHeader = {
       id: analysis.id,
       projectId: analysis.projectId,
@@ -273,13 +276,20 @@ export class RecurrenceService {
       siteId: analysis.siteId,
       hypothesisId: analysis.hypothesisId,
       hypothesisVersion: analysis.hypothesisVersion,
-      ageModelRunIds: settings.ageModelRunIds ?? [],
+      ageModelRunIds,
       seed: analysis.seed,
       forecastStartYear: analysis.forecastStartYear,
       windowsYears: analysis.windowsYears,
       draws: analysis.draws,
       createdAt: analysis.createdAt.toISOString(),
       finishedAt: analysis.finishedAt?.toISOString() ?? null,
+      names: {
+        project: await this.provenance.projectName(analysis.projectId),
+        segment: (await this.segmentOf(analysis))?.name ?? null,
+        site: (await this.siteOf(analysis))?.name ?? null,
+        hypothesis: recorded.find((i) => i.kind === 'hypothesis')?.name ?? null,
+        ageModelRuns: ageModelRunIds.map((id) => runName.get(id) ?? null),
+      },
     };
     const table = eventTableOf(analysis);
     return { json: recurrenceExport(header, results, table), csv: recurrenceExportCsv(header, results, table) };
