@@ -2389,7 +2389,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromArea?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromDisplacement?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -2419,6 +2419,13 @@ export type SetPreferredHypothesisMutationVariables = Exact<{
 
 export type SetPreferredHypothesisMutation = { __typename?: 'Mutation', setPreferredHypothesis: { __typename?: 'Hypothesis', id: string, preferred: boolean } };
 
+export type HypothesisSizeProfilesQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type HypothesisSizeProfilesQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, sizeProfile: Array<{ __typename?: 'SizeEvidencePoint', alongStrikeKm?: number | null, subsidenceM?: number | null, subsidenceErrorM?: number | null, displacementM?: number | null, displacementErrorM?: number | null, bedThicknessM?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, site: { __typename?: 'Site', id: string, name: string } }> }> } };
+
 export type ImportSamplesMutationVariables = Exact<{
   input: ImportSamplesInput;
 }>;
@@ -2436,7 +2443,7 @@ export type ProjectOverviewQueryVariables = Exact<{
 }>;
 
 
-export type ProjectOverviewQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, myPermissions: Array<Permission>, segments: Array<{ __typename?: 'Segment', id: string, version: number, name: string, startKm: number, endKm: number, notes?: string | null }>, sites: Array<{ __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, segment?: { __typename?: 'Segment', id: string, name: string } | null, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string }>, samples: Array<{ __typename?: 'Sample', id: string }> }> } };
+export type ProjectOverviewQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, name: string, description?: string | null, tectonicSetting: TectonicSetting, myRole: Role, myPermissions: Array<Permission>, segments: Array<{ __typename?: 'Segment', id: string, version: number, name: string, startKm: number, endKm: number, notes?: string | null, downDipWidthKm?: number | null }>, sites: Array<{ __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, segment?: { __typename?: 'Segment', id: string, name: string } | null, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string }>, samples: Array<{ __typename?: 'Sample', id: string }> }> } };
 
 export type CreateSegmentMutationVariables = Exact<{
   input: CreateSegmentInput;
@@ -2614,7 +2621,7 @@ export type SiteQueryVariables = Exact<{
 }>;
 
 
-export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, deltaRSource?: string | null, inheritanceScaleYears?: number | null, inheritanceScaleDefaultYears: number, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
+export type SiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, version: number, name: string, kind: SiteKind, latitude: number, longitude: number, alongStrikeKm: number, elevationM?: number | null, waterDepthM?: number | null, notes?: string | null, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, units: Array<{ __typename?: 'Unit', id: string, version: number, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null, notes?: string | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, version: number, name: string, quality: number, evidence: Array<string>, notes?: string | null, subsidenceM?: number | null, subsidenceErrorM?: number | null, displacementM?: number | null, displacementErrorM?: number | null, bedThicknessM?: number | null, unitBelow: { __typename?: 'Unit', id: string }, unitAbove: { __typename?: 'Unit', id: string } }>, samples: Array<{ __typename?: 'Sample', id: string, version: number, labCode: string, method: DatingMethod, material: SampleMaterial, depthM?: number | null, ageRelation: AgeRelation, c14Age?: number | null, c14Error?: number | null, delta13C?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, deltaRSource?: string | null, inheritanceScaleYears?: number | null, inheritanceScaleDefaultYears: number, calendarAgeBp?: number | null, calendarErrorYears?: number | null, measurementYear?: number | null, excluded: boolean, exclusionReason?: string | null, notes?: string | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> } | null }> } };
 
 export type CreateUnitMutationVariables = Exact<{
   input: CreateUnitInput;
@@ -3306,6 +3313,16 @@ export const HypothesisDocument = new TypedDocumentString(`
         sigma
         relation
       }
+      magnitudeFromArea {
+        mw
+        sigma
+        relation
+      }
+      magnitudeFromDisplacement {
+        mw
+        sigma
+        relation
+      }
     }
     orderConflicts {
       message
@@ -3351,6 +3368,37 @@ export const SetPreferredHypothesisDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<SetPreferredHypothesisMutation, SetPreferredHypothesisMutationVariables>;
+export const HypothesisSizeProfilesDocument = new TypedDocumentString(`
+    query HypothesisSizeProfiles($id: ID!) {
+  hypothesis(id: $id) {
+    id
+    regionalEvents {
+      id
+      combinedMedianCalBp
+      members {
+        id
+        name
+      }
+      sizeProfile {
+        eventHorizon {
+          id
+          name
+        }
+        site {
+          id
+          name
+        }
+        alongStrikeKm
+        subsidenceM
+        subsidenceErrorM
+        displacementM
+        displacementErrorM
+        bedThicknessM
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<HypothesisSizeProfilesQuery, HypothesisSizeProfilesQueryVariables>;
 export const ImportSamplesDocument = new TypedDocumentString(`
     mutation ImportSamples($input: ImportSamplesInput!) {
   importSamples(input: $input) {
@@ -3412,6 +3460,7 @@ export const ProjectOverviewDocument = new TypedDocumentString(`
       startKm
       endKm
       notes
+      downDipWidthKm
     }
     sites {
       id
@@ -4089,6 +4138,11 @@ export const SiteDocument = new TypedDocumentString(`
       quality
       evidence
       notes
+      subsidenceM
+      subsidenceErrorM
+      displacementM
+      displacementErrorM
+      bedThicknessM
       unitBelow {
         id
       }

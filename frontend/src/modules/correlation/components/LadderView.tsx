@@ -11,6 +11,7 @@ import { FigureExportButtons } from '@/modules/correlation/components/FigureExpo
 import { HypothesisDialog, type HypothesisValues } from '@/modules/correlation/components/HypothesisDialog';
 import { RegionalEventsPanel } from '@/modules/correlation/components/RegionalEventsPanel';
 import { SpaceTimeChart } from '@/modules/correlation/components/SpaceTimeChart';
+import { SizeProfileChart } from '@/modules/correlation/components/SizeProfileChart';
 import { TieDialog, type TieValues } from '@/modules/correlation/components/TieDialog';
 import { TiesList } from '@/modules/correlation/components/TiesList';
 import { AddTieDocument, CreateHypothesisDocument, RemoveTieDocument, SetPreferredHypothesisDocument } from '@/modules/correlation/graphql/ladder';
@@ -196,23 +197,26 @@ export function LadderView({ projectId }: LadderViewProps) {
         <NonIdealState icon={IconNames.TIMELINE_EVENTS} title="No sites yet" description="Add sites and run their age models to fill the ladder." />
       ) : (
         <div className="sc-ladder-layout">
-          <div className={secondId ? 'sc-ladder-pair' : undefined}>
-            <section>
-              <div className="sc-figure-head">
-                <strong>{hypothesis?.name ?? 'No hypothesis'}</strong>
-                <FigureExportButtons figure={primaryFigure} title={figureTitle(hypothesis?.name)} />
-              </div>
-              {renderFigure(hypothesis, primaryFigure)}
-            </section>
-            {secondId && (
+          <div className="sc-ladder-main">
+            <div className={secondId ? 'sc-ladder-pair' : undefined}>
               <section>
                 <div className="sc-figure-head">
-                  <strong>{second?.name ?? '…'}</strong>
-                  <FigureExportButtons figure={secondFigure} title={figureTitle(second?.name)} />
+                  <strong>{hypothesis?.name ?? 'No hypothesis'}</strong>
+                  <FigureExportButtons figure={primaryFigure} title={figureTitle(hypothesis?.name)} />
                 </div>
-                {renderFigure(second, secondFigure)}
+                {renderFigure(hypothesis, primaryFigure)}
               </section>
-            )}
+              {secondId && (
+                <section>
+                  <div className="sc-figure-head">
+                    <strong>{second?.name ?? '…'}</strong>
+                    <FigureExportButtons figure={secondFigure} title={figureTitle(second?.name)} />
+                  </div>
+                  {renderFigure(second, secondFigure)}
+                </section>
+              )}
+            </div>
+            {mode !== 'ladder' && hypothesis && <SizeProfileChart projectId={projectId} hypothesisId={hypothesis.id} columns={columns} />}
           </div>
           <aside>
             {hypothesis ? (

@@ -10,6 +10,24 @@ export type RegionalEventsPanelProps = {
   eventLabels: ReadonlyMap<string, string>;
 };
 
+type Magnitude = { mw: number; sigma: number; relation: string } | null | undefined;
+
+/** An Mw with its relation's sigma and name; a lower bound says so, as its length is a minimum. */
+function MagnitudeValue({ magnitude, lowerBound = false, empty = '–' }: { magnitude: Magnitude; lowerBound?: boolean; empty?: string }) {
+  if (!magnitude) return <span className="sc-chart-legend">{empty}</span>;
+  return (
+    <>
+      <span className="num">
+        {magnitude.mw.toFixed(1)} ± {magnitude.sigma.toFixed(2)}
+      </span>{' '}
+      <span className="sc-chart-legend">
+        {magnitude.relation}
+        {lowerBound ? '; from the site span, a lower bound' : ''}
+      </span>
+    </>
+  );
+}
+
 /**
  * The regional events of a hypothesis, youngest first: combined age, concordance, the
  * Ward & Wilson (1978) same-age test in words, rupture length and magnitude; order conflicts on top.
@@ -72,20 +90,21 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
                   '–'
                 )}
               </dd>
-              <dt>Rupture</dt>
-              <dd className="num">{regional.ruptureLengthKm === null || regional.ruptureLengthKm === undefined ? '–' : `${regional.ruptureLengthKm.toFixed(0)} km`}</dd>
-              <dt>Mw</dt>
+              <dt title="Along-strike span of the member sites: the rupture was at least this long">Minimum rupture length</dt>
+              <dd className="num">
+                {regional.ruptureLengthKm === null || regional.ruptureLengthKm === undefined ? '–' : `≥ ${regional.ruptureLengthKm.toFixed(0)} km (site span)`}
+              </dd>
+              <dt title="From the minimum rupture length, so a lower bound">Mw from minimum length</dt>
               <dd>
-                {regional.magnitude ? (
-                  <>
-                    <span className="num">
-                      {regional.magnitude.mw.toFixed(1)} ± {regional.magnitude.sigma.toFixed(2)}
-                    </span>{' '}
-                    <span className="sc-chart-legend">{regional.magnitude.relation}</span>
-                  </>
-                ) : (
-                  '–'
-                )}
+                <MagnitudeValue magnitude={regional.magnitude} lowerBound />
+              </dd>
+              <dt title="Site span times the segment's down-dip width">Mw from area</dt>
+              <dd>
+                <MagnitudeValue magnitude={regional.magnitudeFromArea} lowerBound empty="– (no down-dip width on the segment)" />
+              </dd>
+              <dt title="Mean measured displacement of the members">Mw from displacement</dt>
+              <dd>
+                <MagnitudeValue magnitude={regional.magnitudeFromDisplacement} empty="– (no measured displacement)" />
               </dd>
             </dl>
             {regional.warnings.map((warning) => (

@@ -114,6 +114,16 @@ export const HypothesisDocument = graphql(`
           sigma
           relation
         }
+        magnitudeFromArea {
+          mw
+          sigma
+          relation
+        }
+        magnitudeFromDisplacement {
+          mw
+          sigma
+          relation
+        }
       }
       orderConflicts {
         message
@@ -160,6 +170,39 @@ export const SetPreferredHypothesisDocument = graphql(`
     setPreferredHypothesis(id: $id) {
       id
       preferred
+    }
+  }
+`);
+
+/** Each regional event's measured size at its member sites, for the along-strike size profile. */
+export const HypothesisSizeProfilesDocument = graphql(`
+  query HypothesisSizeProfiles($id: ID!) {
+    hypothesis(id: $id) {
+      id
+      regionalEvents {
+        id
+        combinedMedianCalBp
+        members {
+          id
+          name
+        }
+        sizeProfile {
+          eventHorizon {
+            id
+            name
+          }
+          site {
+            id
+            name
+          }
+          alongStrikeKm
+          subsidenceM
+          subsidenceErrorM
+          displacementM
+          displacementErrorM
+          bedThicknessM
+        }
+      }
     }
   }
 `);

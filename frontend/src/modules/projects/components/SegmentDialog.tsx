@@ -24,7 +24,7 @@ export type SegmentDialogProps = {
   onClose: () => void;
 };
 
-/** Add or edit a segment: its name and along-strike extent. */
+/** Add or edit a segment: its name, along-strike extent and, optionally, its down-dip width. */
 export function SegmentDialog({ projectId, segment, onClose }: SegmentDialogProps) {
   const [values, setValues] = useState<SegmentFormValues>(segment ? segmentFormFrom(segment) : EMPTY_SEGMENT_FORM);
   const [errors, setErrors] = useState<FieldErrors<SegmentFormField>>({});
@@ -72,6 +72,16 @@ export function SegmentDialog({ projectId, segment, onClose }: SegmentDialogProp
         <NumberField name="startKm" label="Starts at" unit="km" value={values.startKm} onValueChange={set('startKm')} error={errorOf('startKm')} />
         <NumberField name="endKm" label="Ends at" unit="km" value={values.endKm} onValueChange={set('endKm')} error={errorOf('endKm')} />
       </div>
+      <NumberField
+        name="downDipWidthKm"
+        label="Down-dip width"
+        labelInfo="(optional)"
+        unit="km"
+        value={values.downDipWidthKm}
+        onValueChange={set('downDipWidthKm')}
+        error={errorOf('downDipWidthKm')}
+        helperText="With a width, a regional event also gets Mw from rupture area (site span × width) beside Mw from the minimum rupture length."
+      />
       <TextAreaField name="notes" label="Notes" value={values.notes} onValueChange={set('notes')} error={errorOf('notes')} />
     </FormDialog>
   );

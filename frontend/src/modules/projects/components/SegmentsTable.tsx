@@ -55,6 +55,7 @@ export function SegmentsTable({ segments, sites, canEdit, onEdit, onDelete }: Se
           <SortableColumnHeader sortKey="startKm" sort={sort} onSort={handleSort} numeric>From km</SortableColumnHeader>
           <SortableColumnHeader sortKey="endKm" sort={sort} onSort={handleSort} numeric>To km</SortableColumnHeader>
           <SortableColumnHeader sortKey="lengthKm" sort={sort} onSort={handleSort} numeric>Length km</SortableColumnHeader>
+          <th className="num">Down-dip width km</th>
           <SortableColumnHeader sortKey="sites" sort={sort} onSort={handleSort} numeric>Sites</SortableColumnHeader>
           {canEdit && <th className="sc-actions-cell"><span className={Classes.TEXT_MUTED}>Edit</span></th>}
         </tr>
@@ -66,6 +67,7 @@ export function SegmentsTable({ segments, sites, canEdit, onEdit, onDelete }: Se
             <td className="num sc-numeric">{formatKm(segment.startKm)}</td>
             <td className="num sc-numeric">{formatKm(segment.endKm)}</td>
             <td className="num sc-numeric">{formatKm(segment.endKm - segment.startKm)}</td>
+            <td className="num sc-numeric">{segment.downDipWidthKm == null ? '–' : formatKm(segment.downDipWidthKm)}</td>
             <td className="num sc-numeric">{siteCounts.get(segment.id) ?? 0}</td>
             {canEdit && (
               <td className="sc-actions-cell">

@@ -29,6 +29,7 @@ export const ProjectOverviewDocument = graphql(`
         startKm
         endKm
         notes
+        downDipWidthKm
       }
       sites {
         id

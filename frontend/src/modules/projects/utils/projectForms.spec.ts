@@ -7,14 +7,26 @@ import { EMPTY_SITE_FORM, readSiteForm } from './siteForm';
 
 describe(readSegmentForm.name, () => {
   it('builds a segment input', () => {
-    expect(readSegmentForm({ name: 'North', startKm: '0', endKm: '210', notes: '' })).toEqual({
+    expect(readSegmentForm({ name: 'North', startKm: '0', endKm: '210', downDipWidthKm: '', notes: '' })).toEqual({
       ok: true,
-      input: { name: 'North', startKm: 0, endKm: 210, notes: null },
+      input: { name: 'North', startKm: 0, endKm: 210, downDipWidthKm: null, notes: null },
     });
   });
 
+  it('takes a down-dip width above 0 and at most 1,000 km (the server rule)', () => {
+    expect(readSegmentForm({ name: 'North', startKm: '0', endKm: '210', downDipWidthKm: '85', notes: '' })).toMatchObject({
+      ok: true,
+      input: { downDipWidthKm: 85 },
+    });
+    expect(readSegmentForm({ name: 'North', startKm: '0', endKm: '210', downDipWidthKm: '0', notes: '' })).toMatchObject({
+      ok: false,
+      errors: { downDipWidthKm: 'must be greater than 0' },
+    });
+    expect(readSegmentForm({ name: 'North', startKm: '0', endKm: '210', downDipWidthKm: '1200', notes: '' })).toMatchObject({ ok: false });
+  });
+
   it('asks for an extent that ends after it starts', () => {
-    expect(readSegmentForm({ name: 'North', startKm: '210', endKm: '0', notes: '' })).toEqual({
+    expect(readSegmentForm({ name: 'North', startKm: '210', endKm: '0', downDipWidthKm: '', notes: '' })).toEqual({
       ok: false,
       errors: { endKm: 'must be greater than the start' },
     });

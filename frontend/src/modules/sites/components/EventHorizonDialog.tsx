@@ -17,7 +17,7 @@ import {
 } from '@/modules/sites/utils/eventHorizonForm';
 import type { EventHorizonRow, UnitRow } from '@/modules/sites/utils/siteTypes';
 import { FormDialog } from '@/modules/ui/components/FormDialog';
-import { SelectField, TextAreaField, TextField } from '@/modules/ui/components/FormFields';
+import { NumberField, SelectField, TextAreaField, TextField } from '@/modules/ui/components/FormFields';
 import type { FieldErrors } from '@/modules/ui/utils/formFields';
 
 export type EventHorizonDialogProps = {
@@ -31,7 +31,7 @@ export type EventHorizonDialogProps = {
 
 const QUALITY_OPTIONS = ([1, 2, 3, 4] as const).map((quality) => ({ value: String(quality), label: QUALITY_LABELS[quality] }));
 
-/** Add or edit an event horizon: the units on either side, a quality rank and evidence tags. */
+/** Add or edit an event horizon: the units on either side, a quality rank, evidence tags and any measured size. */
 export function EventHorizonDialog({ projectId, siteId, units, eventHorizon, onClose }: EventHorizonDialogProps) {
   const [values, setValues] = useState<EventHorizonFormValues>(
     eventHorizon
@@ -136,6 +136,41 @@ export function EventHorizonDialog({ projectId, siteId, units, eventHorizon, onC
               <Button key={tag} size="small" variant="minimal" icon={IconNames.PLUS} text={tag} onClick={() => handleAddSuggestion(tag)} />
             ))}
           </div>
+        )}
+      </FormGroup>
+      <FormGroup label="Measured size" helperText="Optional; each with its 1σ error. They feed the along-strike size profile and Mw from displacement.">
+        <div className="sc-field-row">
+          <NumberField
+            name="subsidenceM"
+            label="Coseismic subsidence"
+            labelInfo="(negative for uplift)"
+            unit="m"
+            value={values.subsidenceM}
+            onValueChange={set('subsidenceM')}
+            error={errorOf('subsidenceM')}
+          />
+          <NumberField name="subsidenceErrorM" label="± 1σ" unit="m" value={values.subsidenceErrorM} onValueChange={set('subsidenceErrorM')} error={errorOf('subsidenceErrorM')} />
+        </div>
+        <div className="sc-field-row">
+          <NumberField
+            name="displacementM"
+            label="Coseismic displacement (slip)"
+            unit="m"
+            value={values.displacementM}
+            onValueChange={set('displacementM')}
+            error={errorOf('displacementM')}
+          />
+          <NumberField
+            name="displacementErrorM"
+            label="± 1σ"
+            unit="m"
+            value={values.displacementErrorM}
+            onValueChange={set('displacementErrorM')}
+            error={errorOf('displacementErrorM')}
+          />
+        </div>
+        {eventHorizon?.bedThicknessM != null && (
+          <p className="sc-chart-legend">Event bed thickness from the unit above: {eventHorizon.bedThicknessM.toFixed(2)} m.</p>
         )}
       </FormGroup>
       <TextAreaField name="notes" label="Notes" value={values.notes} onValueChange={set('notes')} error={errorOf('notes')} />

@@ -41,6 +41,11 @@ export const SiteDocument = graphql(`
         quality
         evidence
         notes
+        subsidenceM
+        subsidenceErrorM
+        displacementM
+        displacementErrorM
+        bedThicknessM
         unitBelow {
           id
         }

@@ -72,12 +72,50 @@ describe(emptyEventHorizonForm.name, () => {
 });
 
 describe(readEventHorizonForm.name, () => {
-  const form = { name: 'E3', unitBelowId: 'u1', unitAboveId: 'u2', quality: '1', evidence: [' buried soil', 'buried soil', ''], notes: '' };
+  const form = {
+    name: 'E3',
+    unitBelowId: 'u1',
+    unitAboveId: 'u2',
+    quality: '1',
+    evidence: [' buried soil', 'buried soil', ''],
+    notes: '',
+    subsidenceM: '',
+    subsidenceErrorM: '',
+    displacementM: '',
+    displacementErrorM: '',
+  };
 
   it('builds the horizon input with trimmed, unique evidence tags', () => {
     expect(readEventHorizonForm(form, units)).toEqual({
       ok: true,
-      input: { name: 'E3', unitBelowId: 'u1', unitAboveId: 'u2', quality: 1, evidence: ['buried soil'], notes: null },
+      input: {
+        name: 'E3',
+        unitBelowId: 'u1',
+        unitAboveId: 'u2',
+        quality: 1,
+        evidence: ['buried soil'],
+        notes: null,
+        subsidenceM: null,
+        subsidenceErrorM: null,
+        displacementM: null,
+        displacementErrorM: null,
+      },
+    });
+  });
+
+  it('reads measured sizes: subsidence may be negative (uplift), errors above 0 and only with their value', () => {
+    expect(readEventHorizonForm({ ...form, subsidenceM: '-0.4', subsidenceErrorM: '0.15', displacementM: '2.5', displacementErrorM: '0.5' }, units)).toMatchObject({
+      ok: true,
+      input: { subsidenceM: -0.4, subsidenceErrorM: 0.15, displacementM: 2.5, displacementErrorM: 0.5 },
+    });
+    expect(readEventHorizonForm({ ...form, subsidenceM: '0.8', subsidenceErrorM: '0' }, units)).toMatchObject({
+      ok: false,
+      errors: { subsidenceErrorM: 'must be greater than 0' },
+    });
+    expect(readEventHorizonForm({ ...form, displacementM: '-1' }, units)).toMatchObject({ ok: false, errors: { displacementM: 'must be at least 0' } });
+    expect(readEventHorizonForm({ ...form, displacementErrorM: '0.3' }, units)).toMatchObject({
+      ok: false,
+      errors: { displacementM: 'give the displacement its error belongs to' },
     });
   });
 

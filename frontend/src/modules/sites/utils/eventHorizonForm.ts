@@ -1,5 +1,5 @@
 import type { CreateEventHorizonInput } from '@/gql/graphql';
-import { FieldReader, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
+import { FieldReader, numberText, optionalText, type FormResult } from '@/modules/ui/utils/formFields';
 
 export type EventHorizonFormValues = {
   name: string;
@@ -8,6 +8,12 @@ export type EventHorizonFormValues = {
   quality: string;
   evidence: string[];
   notes: string;
+  /** Coseismic subsidence, m (negative for uplift), with its 1-sigma error. */
+  subsidenceM: string;
+  subsidenceErrorM: string;
+  /** Coseismic displacement (slip), m, with its 1-sigma error. */
+  displacementM: string;
+  displacementErrorM: string;
 };
 
 export type EventHorizonFormField = keyof EventHorizonFormValues;
@@ -19,6 +25,10 @@ export const EVENT_HORIZON_FORM_FIELDS: readonly EventHorizonFormField[] = [
   'quality',
   'evidence',
   'notes',
+  'subsidenceM',
+  'subsidenceErrorM',
+  'displacementM',
+  'displacementErrorM',
 ];
 
 /** Quality ranks as the trade reads them. */
@@ -43,7 +53,18 @@ export const EVIDENCE_SUGGESTIONS: readonly string[] = [
   'diatom shift',
 ];
 
-type StoredHorizon = { name: string; unitBelowId: string; unitAboveId: string; quality: number; evidence: readonly string[]; notes?: string | null };
+type StoredHorizon = {
+  name: string;
+  unitBelowId: string;
+  unitAboveId: string;
+  quality: number;
+  evidence: readonly string[];
+  notes?: string | null;
+  subsidenceM?: number | null;
+  subsidenceErrorM?: number | null;
+  displacementM?: number | null;
+  displacementErrorM?: number | null;
+};
 type UnitOrder = { id: string; position: number };
 
 /** A new horizon between the two youngest units, when there are two. */
@@ -56,6 +77,10 @@ export function emptyEventHorizonForm(units: readonly UnitOrder[]): EventHorizon
     quality: '2',
     evidence: [],
     notes: '',
+    subsidenceM: '',
+    subsidenceErrorM: '',
+    displacementM: '',
+    displacementErrorM: '',
   };
 }
 
@@ -67,6 +92,10 @@ export function eventHorizonFormFrom(horizon: StoredHorizon): EventHorizonFormVa
     quality: String(horizon.quality),
     evidence: [...horizon.evidence],
     notes: horizon.notes ?? '',
+    subsidenceM: numberText(horizon.subsidenceM),
+    subsidenceErrorM: numberText(horizon.subsidenceErrorM),
+    displacementM: numberText(horizon.displacementM),
+    displacementErrorM: numberText(horizon.displacementErrorM),
   };
 }
 
@@ -90,6 +119,13 @@ export function readEventHorizonForm(
   }
   const quality = reader.number('quality', values.quality, { required: true, integer: true, min: 1, max: 4 });
   const evidence = [...new Set(values.evidence.map((tag) => tag.trim()).filter((tag) => tag !== ''))];
+  // Sizes are optional (blank clears them); an error needs its value, and errors are above 0.
+  const subsidenceM = reader.number('subsidenceM', values.subsidenceM, { min: -100, max: 100 });
+  const subsidenceErrorM = reader.number('subsidenceErrorM', values.subsidenceErrorM, { above: 0, max: 100 });
+  const displacementM = reader.number('displacementM', values.displacementM, { min: 0, max: 200 });
+  const displacementErrorM = reader.number('displacementErrorM', values.displacementErrorM, { above: 0, max: 200 });
+  if (subsidenceErrorM !== null && subsidenceM === null && values.subsidenceM.trim() === '') reader.fail('subsidenceM', 'give the subsidence its error belongs to');
+  if (displacementErrorM !== null && displacementM === null && values.displacementM.trim() === '') reader.fail('displacementM', 'give the displacement its error belongs to');
   return reader.result({
     name,
     unitBelowId: values.unitBelowId,
@@ -97,5 +133,9 @@ export function readEventHorizonForm(
     quality: quality ?? 0,
     evidence,
     notes: optionalText(values.notes),
+    subsidenceM,
+    subsidenceErrorM,
+    displacementM,
+    displacementErrorM,
   });
 }
