@@ -26,6 +26,7 @@ import { EventHorizonsModule } from './event-horizons/event-horizons.module';
 import { HealthModule } from './health/health.module';
 import { CoreLogsModule } from './core-logs/core-logs.module';
 import { CorrelationModule } from './correlation/correlation.module';
+import { JointRunsApiModule } from './correlation/joint-runs/joint-runs-api.module';
 import { JobsModule } from './jobs/jobs.module';
 import { LoadersModule } from './loaders/loaders.module';
 import { RequestLoadersFactory } from './loaders/request-loaders';
@@ -91,6 +92,7 @@ import { ReleasesModule } from './releases/releases.module';
     RecurrenceModule,
     SizeEvidenceModule,
     CorrelationModule,
+    JointRunsApiModule,
     CoreLogsModule,
     AttachmentsModule,
     ExchangeModule,

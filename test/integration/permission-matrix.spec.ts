@@ -327,6 +327,19 @@ const CASES: Record<string, MatrixCase> = {
       return { id: addTie.id };
     },
   },
+  // The tied run site has no dated samples, so an allowed caller passes the access check and is
+  // refused on the columns (BAD_USER_INPUT): nothing is queued.
+  startJointAgeModelRun: { access: correlation, allowedError: 'BAD_USER_INPUT', variables: async () => ({ input: { hypothesisId, chains: 2, iterations: 500 } }) },
+  cancelJointAgeModelRun: {
+    access: correlation,
+    variables: async () => {
+      const [run] = await sql<{ id: string }>(
+        `insert into joint_age_model_runs (project_id, hypothesis_id, hypothesis_version, seed, settings, input_snapshot) values ($1, $2, 1, 3, '{}'::jsonb, '{}'::jsonb) returning id`,
+        [fixture.projectId, hypothesisId],
+      );
+      return { id: run.id };
+    },
+  },
 
   startRecurrenceAnalysis: { access: recurrence, variables: async () => ({ input: { siteId: runSiteId, draws: 100, seed: 11 } }) },
   cancelRecurrenceAnalysis: {

@@ -125,11 +125,12 @@ export class AgeModelsService {
   }
 
   /**
-   * The model input of a site's current column (sample densities recomputed), with its fingerprint.
-   * Each sample's offset scale is its own, else the run's `inheritanceScaleYears` when the run gives
-   * one, else the default for its material (`DEFAULT_INHERITANCE_SCALE_YEARS`).
+   * The model input of a site's current column (sample densities recomputed), with its fingerprint;
+   * joint runs build theirs with it too. Each sample's offset scale is its own, else the run's
+   * `inheritanceScaleYears` when the run gives one, else the default for its material
+   * (`DEFAULT_INHERITANCE_SCALE_YEARS`).
    */
-  private async columnOf(site: SiteRow, runInheritanceScale: number | null): Promise<{ model: AgeModelInput; fingerprint: string }> {
+  async columnOf(site: SiteRow, runInheritanceScale: number | null): Promise<{ model: AgeModelInput; fingerprint: string }> {
     const [units, eventHorizons, samples, fingerprints] = await Promise.all([
       this.units.listForSite(site.id),
       this.eventHorizons.listForSite(site.id),

@@ -63,6 +63,19 @@ export const FIELD_WEIGHTS: Readonly<Record<string, number>> = {
   'Query.releaseDiff': 2_000,
   'Mutation.startAgeModelRun': 500,
   'Mutation.startRecurrenceAnalysis': 500,
+  // a joint run reads and calibrates every tied site's column and checks the hypothesis
+  'Mutation.startJointAgeModelRun': 5_000,
+  'JointAgeModelRun.regionalEvents': 50,
+  'JointAgeModelRun.siteEvents': 50,
+  'JointAgeModelRun.samples': 50,
+  'JointRegionalEventPosterior.density': 50,
+  // the fresh joint run of the hypothesis (one per request) and its staleness
+  'RegionalEvent.jointMedianCalBp': 5,
+  'RegionalEvent.jointHpd95': 5,
+  'RegionalEvent.jointRun': 5,
+  'RegionalEvent.ageShown': 5,
+  'Hypothesis.latestJointRun': 20,
+  'JointAgeModelRun.stale': 20,
   'Mutation.inviteMember': 500,
 };
 
@@ -75,6 +88,10 @@ const LIST_LENGTHS: Readonly<Record<string, number>> = {
   'EventPosterior.density': 1,
   'LadderEvent.density': 1,
   'RegionalEvent.combinedDensity': 1,
+  'JointRegionalEventPosterior.density': 1,
+  'JointAgeModelRun.samples': 50,
+  'JointAgeModelRun.siteEvents': 50,
+  'JointAgeModelRun.regionalEvents': 30,
   'ModelCurves.density': 1,
   'ModelCurves.hazard': 1,
   'ModelCurves.survival': 1,
@@ -98,6 +115,7 @@ export const FIELD_CAPS: Readonly<Record<string, number>> = {
   'Mutation.importSamples': 1,
   'Mutation.installCalibrationCurve': 1,
   'Mutation.createRelease': 1,
+  'Mutation.startJointAgeModelRun': 1,
   'Query.calibrate': 5,
   'Query.calibrateLuminescence': 10,
   'Query.fitRenewal': 3,

@@ -21,6 +21,8 @@ import { HypothesesRepository, type HypothesisRow, type TieView } from './hypoth
 /** `RegionalEvent` as the API shows it. */
 export interface RegionalEventView {
   id: string;
+  /** The hypothesis it is a regional event of (for the joint run's ages beside it). */
+  hypothesisId: string;
   members: EventHorizonRow[];
   combinedMedianCalBp: number | null;
   combinedHpd95: readonly HpdRange[];
@@ -273,17 +275,18 @@ export class HypothesesService {
     const check = correlationInput('hypothesisId', () =>
       checkProjectHypothesis(projectEvents(data), ties.map(asTie), project.tectonicSetting),
     );
-    return toView(check, data, ties);
+    return toView(hypothesis.id, check, data, ties);
   }
 }
 
-function toView(check: HypothesisCheck, data: ProjectCorrelationData, ties: readonly TieView[]): HypothesisChecksView {
+function toView(hypothesisId: string, check: HypothesisCheck, data: ProjectCorrelationData, ties: readonly TieView[]): HypothesisChecksView {
   const horizons = new Map(data.events.map((event) => [event.eventHorizon.id, event.eventHorizon]));
   const tiesById = new Map(ties.map((tie) => [tie.id, tie]));
   const sitesById = new Map(data.sites.map((site) => [site.id, site]));
   return {
     regionalEvents: check.regionalEvents.map((regional) => ({
       id: regional.id,
+      hypothesisId,
       members: regional.memberIds.map((id) => horizons.get(id) as EventHorizonRow),
       combinedMedianCalBp: regional.combined?.medianCalBp ?? null,
       combinedHpd95: regional.combined?.hpd95 ?? [],

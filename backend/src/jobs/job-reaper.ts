@@ -37,6 +37,7 @@ export class JobReaper {
       for (const run of abandoned) {
         if (run.attempts >= kind.maxAttempts) {
           await this.runs.fail(kind.table, run.id, `the worker stopped during the run ${run.attempts} times; the run was given up`);
+          await kind.afterFinish?.(run.id, 'FAILED').catch(() => undefined);
           this.logger.warn(`${kind.label} ${run.id} failed after ${run.attempts} lost attempts`);
         } else if (await this.runs.requeue(kind.table, run.id, kind.requeueMessage)) {
           await this.jobs.send(kind, { runId: run.id });

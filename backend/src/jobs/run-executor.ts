@@ -22,6 +22,7 @@ export class RunExecutor {
     const run = await this.runs.claim(kind.table, runId);
     if (!run) return; // cancelled, or already taken by another worker
     let lastWrite = 0;
+    let ended: 'SUCCEEDED' | 'FAILED';
     try {
       const input = await kind.input(run);
       const output = await runInThread(kind.compute, input, {
@@ -35,10 +36,15 @@ export class RunExecutor {
         shouldCancel: async () => (await this.runs.statusOf(kind.table, runId)) === 'CANCELLED',
       });
       await this.runs.finish(kind.table, runId, 'SUCCEEDED', { progress: 1, ...kind.succeeded(output, run) } as RunValues<T>);
+      ended = 'SUCCEEDED';
     } catch (error) {
       if (error instanceof ComputeCancelled) return;
       this.logger.warn(`${kind.label} ${runId} failed: ${error instanceof Error ? error.message : String(error)}`);
       await this.runs.finish(kind.table, runId, 'FAILED', { message: kind.failureMessage(error) } as RunValues<T>);
+      ended = 'FAILED';
     }
+    await kind.afterFinish?.(runId, ended).catch((error: unknown) =>
+      this.logger.warn(`${kind.label} ${runId}: after it ended: ${error instanceof Error ? error.message : String(error)}`),
+    );
   }
 }

@@ -49,6 +49,12 @@ export interface RunKind<Table extends RunTable = RunTable, Input = unknown, Out
   succeeded(output: Output, run: RunRow<Table>): RunValues<Table>;
   /** The message of a run whose input or computation threw `error`. */
   failureMessage(error: unknown): string;
+  /**
+   * Optional: called once the run has ended SUCCEEDED or FAILED (stored by its worker, or given
+   * up by the reaper), for kinds whose rows are parts of a larger whole (a joint run's chains).
+   * It must be safe to call again; an error is logged, not stored.
+   */
+  afterFinish?(runId: string, status: 'SUCCEEDED' | 'FAILED'): Promise<void>;
 }
 
 /** Any registered kind of job. */

@@ -28,8 +28,15 @@ export type RecurrenceSource =
       /** Each event's probability of being in a draw's record, young to old like `densities`; absent: all 1. */
       readonly inclusionProbabilities?: readonly number[];
     }
-  /** A site age model's joint draws, row-major drawCount x eventCount. */
-  | { readonly kind: 'joint-draws'; readonly eventCount: number; readonly drawCount: number; readonly draws: ArrayLike<number> };
+  /** A site age model's (or a joint run's regional) joint draws, row-major drawCount x eventCount. */
+  | {
+      readonly kind: 'joint-draws';
+      readonly eventCount: number;
+      readonly drawCount: number;
+      readonly draws: ArrayLike<number>;
+      /** Each event's probability of being in a draw's record, oldest first (a segment's joint-run draws); absent: all 1. */
+      readonly inclusionProbabilities?: readonly number[];
+    };
 
 export interface RecurrenceComputeSettings {
   readonly forecastStartYearCe: number;
@@ -200,7 +207,10 @@ export function computeRecurrence(
           // The engine reads draws oldest first; the densities run young to old.
           ...(source.inclusionProbabilities ? { inclusionProbabilities: [...source.inclusionProbabilities].reverse(), inclusionSeed: settings.seed + 1 } : {}),
         })
-      : summariseRecurrence(selectJointDraws(source, settings.drawCount, settings.seed), options);
+      : summariseRecurrence(selectJointDraws(source, settings.drawCount, settings.seed), {
+          ...options,
+          ...(source.inclusionProbabilities ? { inclusionProbabilities: source.inclusionProbabilities, inclusionSeed: settings.seed + 1 } : {}),
+        });
   return storeSummary(summary, settings.curvePoints ?? 200);
 }
 

@@ -10,6 +10,9 @@ import { recurrenceCompute, RecurrenceComputeInput } from './recurrence.compute'
 import { RecurrenceSource, StoredRecurrenceResults } from './recurrence-results';
 import { RecurrenceAnalysisRow } from './recurrence.repository';
 import type { RecurrenceInputSnapshot } from './recurrence.service';
+import { JointRunsRepository } from '../correlation/joint-runs/joint-runs.repository';
+import type { StoredJointResults } from '../correlation/joint-runs/joint-run-storage';
+import { jointSegmentDraws } from './joint-run-source';
 
 /** Most attempts an analysis gets when its worker dies under it. */
 export const RECURRENCE_MAX_ATTEMPTS = 2;
@@ -31,6 +34,7 @@ export class RecurrenceJob implements RunKind<RecurrenceTable, RecurrenceCompute
   constructor(
     private readonly registry: JobRegistry,
     private readonly ageModelRuns: AgeModelRunsRepository,
+    private readonly jointRuns: JointRunsRepository,
   ) {}
 
   onModuleInit(): void {
@@ -58,9 +62,20 @@ export class RecurrenceJob implements RunKind<RecurrenceTable, RecurrenceCompute
     return error instanceof RecurrenceInputError ? message : `the computation failed: ${message}`;
   }
 
+  /** The segment's regional events drawn jointly from the joint run it was queued on. */
+  private async jointSourceOf(jointRunId: string, regionalEvents: { id: string; inclusionProbability?: number }[]): Promise<RecurrenceSource> {
+    const stored = (await this.jointRuns.regionalDraws(jointRunId)) as StoredJointResults['regionalEventDraws'] | null;
+    const draws = stored ? jointSegmentDraws({ regionalEventDraws: stored }, regionalEvents.map((event) => event.id)) : null;
+    if (!draws) throw new RecurrenceInputError('hypothesisId', 'the joint age model run this analysis used no longer exists');
+    // The events run young to old; inclusion is read oldest first (each draw's k-th oldest age).
+    const inclusion = regionalEvents.map((event) => event.inclusionProbability ?? 1);
+    return { kind: 'joint-draws', ...draws, ...(inclusion.some((p) => p < 1) ? { inclusionProbabilities: [...inclusion].reverse() } : {}) };
+  }
+
   /** The event ages the analysis was queued with: stored regional densities, or the cited age model run's draws. */
   private async sourceOf(analysis: RecurrenceAnalysisRow): Promise<RecurrenceSource> {
     const snapshot = analysis.inputSnapshot as RecurrenceInputSnapshot;
+    if (snapshot.kind === 'segment' && snapshot.jointRunId) return this.jointSourceOf(snapshot.jointRunId, snapshot.regionalEvents);
     if (snapshot.kind === 'segment') {
       return {
         kind: 'ordered-densities',

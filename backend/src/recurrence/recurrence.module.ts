@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { JointRunsModule } from '../correlation/joint-runs/joint-runs.module';
 import { ProvenanceModule } from '../provenance/provenance.module';
 import { ReleasesModule } from '../releases/releases.module';
 import { AgeModelsModule } from '../age-models/age-models.module';
@@ -9,12 +10,13 @@ import { RecurrenceJob } from './recurrence.job';
 import { RecurrenceRepository } from './recurrence.repository';
 import { ProjectRecurrenceResolver, RecurrenceResolver } from './recurrence.resolver';
 import { RecurrenceService } from './recurrence.service';
+import { RecurrenceSourceResolver } from './recurrence-source.resolver';
 
 /** Recurrence analyses of a segment or site: renewal fits, conditional probabilities, exports, and their job. */
 @Module({
-  imports: [SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule, ProvenanceModule],
+  imports: [SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule, ProvenanceModule, JointRunsModule],
   controllers: [RecurrenceExportController],
-  providers: [RecurrenceRepository, RecurrenceService, RecurrenceJob, RecurrenceResolver, ProjectRecurrenceResolver],
+  providers: [RecurrenceRepository, RecurrenceService, RecurrenceJob, RecurrenceResolver, ProjectRecurrenceResolver, RecurrenceSourceResolver],
   exports: [RecurrenceJob, RecurrenceRepository, RecurrenceService],
 })
 export class RecurrenceModule {}

@@ -34,6 +34,8 @@ import { checkForecastStart, hypothesisOnSegment, MINIMUM_EVENTS, segmentRegiona
 import { compareAnalyses, ComparedSide, RecurrenceComparison, recurrenceComparisonCsv } from './recurrence-comparison';
 import { CountingRuleInput, countingRuleOf, inclusionOf, segmentEventTable, StoredEventTable } from './segment-event-table';
 import { SegmentEventTableInput } from './dto/segment-event-table.input';
+import { FreshJointRunsService } from '../correlation/joint-runs/fresh-joint-runs.service';
+import { EventAgeSource, jointSegmentDraws } from './joint-run-source';
 import { StoredRecurrenceResults } from './recurrence-results';
 import { HypothesisRow, RecurrenceAnalysisRow, RecurrenceRepository, ReleaseRow } from './recurrence.repository';
 
@@ -67,6 +69,10 @@ export type RecurrenceInputSnapshot =
       orderConflictCount: number;
       /** The event table the analysis used, with its rule; absent in analyses stored before it. */
       eventTable?: StoredEventTable;
+      /** The fresh joint run whose regional draws the ages come from (source JOINT_RUN); absent otherwise. */
+      jointRunId?: string;
+      /** Its joint draws available for these events. */
+      availableDraws?: number;
     };
 
 /** The analysis as the API serves it: the row, its stored results spread in, and the caution. */
@@ -93,6 +99,7 @@ export class RecurrenceService {
     private readonly audit: AuditService,
     private readonly releases: ReleasesService,
     private readonly provenance: ProvenanceService,
+    private readonly freshJointRuns: FreshJointRunsService,
   ) {}
 
   /** Conditional probability of one renewal model in a window, beside the Poisson figure, and the hazard at the elapsed time. */
@@ -179,7 +186,10 @@ export class RecurrenceService {
       }
       releaseId = release.id;
     }
-    const draws = prepared.snapshot.kind === 'site' ? Math.min(drawsRequested, prepared.snapshot.availableDraws) : drawsRequested;
+    const available = prepared.snapshot.availableDraws;
+    const draws = available !== undefined ? Math.min(drawsRequested, available) : drawsRequested;
+    const source: EventAgeSource = prepared.snapshot.kind === 'site' ? 'SITE_RUN' : prepared.snapshot.jointRunId ? 'JOINT_RUN' : 'COMBINED_DENSITIES';
+    const jointRunId = prepared.snapshot.kind === 'segment' ? prepared.snapshot.jointRunId : undefined;
     const settings = {
       source: prepared.snapshot.kind,
       drawsRequested,
@@ -203,6 +213,7 @@ export class RecurrenceService {
           windowsYears,
           draws,
           settings,
+          source,
           inputSnapshot: prepared.snapshot,
           message: prepared.message,
         },
@@ -216,9 +227,9 @@ export class RecurrenceService {
         objectId: row.id,
         after: { segmentId: row.segmentId, siteId: row.siteId, hypothesisId: row.hypothesisId, hypothesisVersion: row.hypothesisVersion, seed, forecastStartYear, windowsYears, draws, settings },
       });
-      // Provenance: the runs whose ages it used and the hypothesis version, for `stale` and refresh.
+      // Provenance: the runs whose ages it used (site runs, or the joint run) and the hypothesis version, for `stale` and refresh.
       await this.provenance.record(tx, row.projectId, { kind: 'recurrenceAnalysis', id: row.id }, [
-        ...settings.ageModelRunIds.map((id) => ({ kind: 'ageModelRun' as const, id })),
+        ...(jointRunId ? [{ kind: 'jointRun' as const, id: jointRunId }] : settings.ageModelRunIds.map((id) => ({ kind: 'ageModelRun' as const, id }))),
         ...(row.hypothesisId && row.hypothesisVersion !== null ? [{ kind: 'hypothesis' as const, id: row.hypothesisId, revision: row.hypothesisVersion }] : []),
       ]);
       return row;
@@ -404,6 +415,7 @@ export class RecurrenceService {
       skippedTieIds: [...chosen.skippedTieIds],
       orderConflictCount: chosen.orderConflictCount,
       eventTable: table,
+      ...(await this.jointSource(hypothesis.id, chosen.regionalEvents.map((event) => event.id))),
     };
     const warnings = [
       chosen.skippedTieIds.length > 0 ? `${chosen.skippedTieIds.length} ties were left out because an event has no age model yet` : null,
@@ -467,6 +479,13 @@ export class RecurrenceService {
       }),
     );
     return { segment, hypothesis, eventsInput, onSegment, table, posteriors };
+  }
+
+  /** The hypothesis' fresh joint run when it modelled every chosen regional event (source JOINT_RUN); nothing otherwise. */
+  private async jointSource(hypothesisId: string, regionalEventIds: string[]): Promise<{ jointRunId?: string; availableDraws?: number }> {
+    const fresh = await this.freshJointRuns.forHypothesis(hypothesisId);
+    const draws = fresh ? jointSegmentDraws(fresh.results, regionalEventIds) : null;
+    return fresh && draws ? { jointRunId: fresh.run.id, availableDraws: draws.drawCount } : {};
   }
 
   private async chooseHypothesis(projectId: string, hypothesisId: string | null): Promise<HypothesisRow> {

@@ -10,6 +10,7 @@ export * from './samples';
 export * from './audit-records';
 export * from './calibration-curves';
 export * from './age-model-runs';
+export * from './joint-age-model-runs';
 export * from './hypotheses';
 export * from './ties';
 export * from './releases';

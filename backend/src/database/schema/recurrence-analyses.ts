@@ -24,6 +24,12 @@ export const recurrenceAnalyses = pgTable(
     windowsYears: doublePrecision('windows_years').array().notNull(),
     draws: integer('draws').notNull(),
     settings: jsonb('settings').notNull(),
+    /**
+     * Where the event ages came from: JOINT_RUN (a joint age model run's regional draws),
+     * COMBINED_DENSITIES (each regional event's product of member posteriors) or SITE_RUN (a
+     * site run's joint draws). Null in analyses made before it was recorded (read from the snapshot).
+     */
+    source: text('source'),
     inputSnapshot: jsonb('input_snapshot').notNull(),
     results: jsonb('results'),
     ...runState(),

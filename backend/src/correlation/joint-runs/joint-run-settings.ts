@@ -1,0 +1,62 @@
+/**
+ * A joint run's settings: the site model's chain settings (chronology/age-model defaults), the
+ * number of chains and how many joint draws of the regional events are kept. Pure.
+ */
+import { DEFAULT_AGE_MODEL_SETTINGS } from '../../chronology/age-model/age-model';
+import type { JointChainSettings } from '../../chronology/joint-age-model/types';
+
+/** Bounds of the start mutation's numbers (BAD_USER_INPUT outside them, naming the field). */
+export const JOINT_RUN_LIMITS = {
+  chains: { min: 2, max: 16, default: 4 },
+  iterations: { min: 500, max: 200_000, default: 20_000 },
+} as const;
+
+/** Regional-event joint draws kept for recurrence analyses (evenly thinned over the chains). */
+export const JOINT_MAX_STORED_DRAWS = 4_000;
+
+export interface JointRunSettings {
+  chains: number;
+  iterations: number;
+  burnIn: number;
+  thin: number;
+  outlierPrior: number;
+  outlierShiftScaleYears: number;
+  inheritanceScaleYears: number;
+  windowMarginYears: number;
+  maxStoredDraws: number;
+}
+
+/**
+ * Settings for `iterations` sweeps per chain after burn-in. Burn-in is the site model's (4,000
+ * sweeps) or a fifth of the kept sweeps when that is less, at least 500 [common practice: a
+ * burn-in of 10-50 % of the kept length]; thinning keeps about 2,000 draws per chain.
+ */
+export function jointRunSettings(chains: number, iterations: number): JointRunSettings {
+  const d = DEFAULT_AGE_MODEL_SETTINGS;
+  return {
+    chains,
+    iterations,
+    burnIn: Math.min(d.burnIn, Math.max(500, Math.round(iterations / 5))),
+    thin: Math.max(1, Math.floor(iterations / 2_000)),
+    outlierPrior: d.outlierPrior,
+    outlierShiftScaleYears: d.outlierShiftScaleYears,
+    inheritanceScaleYears: d.inheritanceScaleYears,
+    windowMarginYears: d.windowMarginYears,
+    maxStoredDraws: JOINT_MAX_STORED_DRAWS,
+  };
+}
+
+/** One chain's settings from the run's. */
+export function chainSettings(settings: JointRunSettings, seed: number, chainIndex: number): JointChainSettings {
+  return {
+    iterations: settings.iterations,
+    burnIn: settings.burnIn,
+    thin: settings.thin,
+    outlierPrior: settings.outlierPrior,
+    outlierShiftScaleYears: settings.outlierShiftScaleYears,
+    inheritanceScaleYears: settings.inheritanceScaleYears,
+    windowMarginYears: settings.windowMarginYears,
+    seed,
+    chainIndex,
+  };
+}
