@@ -576,6 +576,10 @@ export type Hypothesis = {
   createdAt: Scalars['DateTime']['output'];
   description?: Maybe<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
+  /** Its joint age model runs, newest first (at most 20). */
+  jointRuns: Array<JointAgeModelRun>;
+  /** The newest joint age model run of the hypothesis, whatever its status. */
+  latestJointRun?: Maybe<JointAgeModelRun>;
   name: Scalars['String']['output'];
   /** Every minimal order loop of the hypothesis, of any length (at most 200 are listed). */
   orderConflicts: Array<OrderConflict>;
@@ -721,10 +725,81 @@ export type JobStatus =
   | 'RUNNING'
   | 'SUCCEEDED';
 
+/** One chain of a joint age model run. */
+export type JointAgeModelChain = {
+  __typename?: 'JointAgeModelChain';
+  /** 0-based; the chain's random numbers come from the run's seed and this index. */
+  index: Scalars['Int']['output'];
+  message?: Maybe<Scalars['String']['output']>;
+  progress: Scalars['Float']['output'];
+  status: JobStatus;
+};
+
+/**
+ * A joint age model run of a hypothesis: every site with a tied event, every regional event with a
+ * member there (an untied event there is a regional event of one). Its status follows its chains:
+ * RUNNING once one starts, SUCCEEDED when all have and their draws are summarised, FAILED with the
+ * first failed chain's message, CANCELLED with all of them.
+ */
+export type JointAgeModelRun = {
+  __typename?: 'JointAgeModelRun';
+  chains: Array<JointAgeModelChain>;
+  createdAt: Scalars['DateTime']['output'];
+  depthModels: Array<JointSiteDepthModel>;
+  /** R-hat and ESS over every regional event, site event and sample. */
+  diagnostics?: Maybe<AgeModelDiagnostics>;
+  finishedAt?: Maybe<Scalars['DateTime']['output']>;
+  hypothesis: Hypothesis;
+  /** The hypothesis version it modelled. */
+  hypothesisVersion: Scalars['Int']['output'];
+  id: Scalars['ID']['output'];
+  message?: Maybe<Scalars['String']['output']>;
+  /** The mean of its chains' progress (1 once the results are stored). */
+  progress: Scalars['Float']['output'];
+  /** Every regional event's joint posterior (empty until it succeeds). */
+  regionalEvents: Array<JointRegionalEventPosterior>;
+  /** Every modelled sample's outlier probability and deposit age. */
+  samples: Array<SamplePosterior>;
+  seed: Scalars['Int']['output'];
+  settings: Scalars['JSON']['output'];
+  /** Every event horizon's posterior at the modelled sites. */
+  siteEvents: Array<EventPosterior>;
+  /** The sites it modelled, along strike. */
+  sites: Array<Site>;
+  /** True when the hypothesis or a modelled site's column changed after this run was queued. */
+  stale: Scalars['Boolean']['output'];
+  /** What changed since; empty while it is up to date. */
+  staleReasons: Array<StaleReason>;
+  status: JobStatus;
+};
+
+/** The joint posterior age of one regional event: one age shared by every member. */
+export type JointRegionalEventPosterior = {
+  __typename?: 'JointRegionalEventPosterior';
+  density: Array<DensityPoint>;
+  ess: Scalars['Float']['output'];
+  hpd68: Array<HpdRange>;
+  hpd95: Array<HpdRange>;
+  /** As RegionalEvent.id: the sorted member ids. */
+  id: Scalars['ID']['output'];
+  meanCalBp: Scalars['Float']['output'];
+  medianCalBp: Scalars['Float']['output'];
+  members: Array<EventHorizon>;
+  rhat: Scalars['Float']['output'];
+};
+
 /** A joint age model run named as an input (its details are on the joint run itself). */
 export type JointRunReference = {
   __typename?: 'JointRunReference';
   id: Scalars['ID']['output'];
+};
+
+/** The depth model a joint run gave one site (its latest site run's, or for a core without one the hemipelagic model when its column fits). */
+export type JointSiteDepthModel = {
+  __typename?: 'JointSiteDepthModel';
+  depthModel: DepthModel;
+  siteId: Scalars['ID']['output'];
+  siteName: Scalars['String']['output'];
 };
 
 /** What one header of a lab sheet holds. */
@@ -811,6 +886,8 @@ export type Mutation = {
   acceptInvitation: AuthPayload;
   addTie: Tie;
   cancelAgeModelRun: AgeModelRun;
+  /** Stop a queued or running joint run and all its chains (CORRELATOR, ADMIN). */
+  cancelJointAgeModelRun: JointAgeModelRun;
   cancelRecurrenceAnalysis: RecurrenceAnalysis;
   createEventHorizon: EventHorizon;
   createHypothesis: Hypothesis;
@@ -847,6 +924,8 @@ export type Mutation = {
   /** Sign in with e-mail and password; returns a bearer token. */
   signIn: AuthPayload;
   startAgeModelRun: AgeModelRun;
+  /** Queue a joint age model run of a hypothesis (CORRELATOR, ADMIN): one job per chain. */
+  startJointAgeModelRun: JointAgeModelRun;
   startRecurrenceAnalysis: RecurrenceAnalysis;
   updateEventHorizon: EventHorizon;
   updateHypothesis: Hypothesis;
@@ -870,6 +949,11 @@ export type MutationAddTieArgs = {
 
 
 export type MutationCancelAgeModelRunArgs = {
+  id: Scalars['ID']['input'];
+};
+
+
+export type MutationCancelJointAgeModelRunArgs = {
   id: Scalars['ID']['input'];
 };
 
@@ -1023,6 +1107,11 @@ export type MutationSignInArgs = {
 
 export type MutationStartAgeModelRunArgs = {
   input: StartAgeModelRunInput;
+};
+
+
+export type MutationStartJointAgeModelRunArgs = {
+  input: StartJointAgeModelRunInput;
 };
 
 
@@ -1204,6 +1293,7 @@ export type Query = {
   hypothesis: Hypothesis;
   /** What an invitation link can still do, asked before its form is shown (public: the token is the key). */
   invitationLink: InvitationLink;
+  jointAgeModelRun: JointAgeModelRun;
   /** The signed-in user. */
   me: User;
   project: Project;
@@ -1272,6 +1362,11 @@ export type QueryHypothesisArgs = {
 
 export type QueryInvitationLinkArgs = {
   token: Scalars['String']['input'];
+};
+
+
+export type QueryJointAgeModelRunArgs = {
+  id: Scalars['ID']['input'];
 };
 
 
@@ -1403,6 +1498,8 @@ export type RecurrenceAnalysis = {
   segment?: Maybe<Segment>;
   settings: Scalars['JSON']['output'];
   site?: Maybe<Site>;
+  /** Where its event ages came from (the joint run, if any, is in inputs.jointRun). */
+  source: RecurrenceSource;
   /** True when any input changed after the analysis was queued, directly or through the runs it used. */
   stale: Scalars['Boolean']['output'];
   /** Why it is stale; empty while it is up to date. */
@@ -1439,6 +1536,18 @@ export type RecurrenceInputs = {
   /** Every recorded input, with the revision or version read and its name. */
   recorded: Array<RecordedInput>;
 };
+
+/** Where a recurrence analysis' event ages come from. */
+export type RecurrenceSource =
+  /** A segment analysis without a fresh joint run: each regional event drawn from its combined density (the product of its members' site posteriors), in median order. */
+  | 'COMBINED_DENSITIES'
+  /**
+   * A segment analysis under a hypothesis with a fresh joint age model run: each draw is one joint
+   * draw of the regional events from that run, so their order and correlation are kept.
+   */
+  | 'JOINT_RUN'
+  /** A site analysis: the joint event draws of the site's age model run. */
+  | 'SITE_RUN';
 
 /**
  * One refresh of a project's stale results: the whole plan in dependency order (steps: queued now,
@@ -1525,6 +1634,8 @@ export type RefreshStep = {
 /** A connected group of tied events: one inferred earthquake. */
 export type RegionalEvent = {
   __typename?: 'RegionalEvent';
+  /** JOINT_RUN when a fresh joint run dates it (then its joint age is the one to show), else COMBINED_DENSITIES. */
+  ageShown: RegionalEventAgeSource;
   chiSquare?: Maybe<ChiSquareTest>;
   combinedDensity: Array<DensityPoint>;
   combinedHpd95: Array<HpdRange>;
@@ -1539,6 +1650,12 @@ export type RegionalEvent = {
    */
   concordanceThreshold?: Maybe<Scalars['Float']['output']>;
   id: Scalars['ID']['output'];
+  /** The 95.4 % HPD ranges of its joint age; empty without a fresh joint run. */
+  jointHpd95: Array<HpdRange>;
+  /** The median of its joint age in the hypothesis' fresh joint run; null without one. */
+  jointMedianCalBp?: Maybe<Scalars['Float']['output']>;
+  /** The fresh joint run the joint age comes from; null without one. */
+  jointRun?: Maybe<JointAgeModelRun>;
   /** Mw from the minimum rupture length (the site span), so a lower bound. */
   magnitude?: Maybe<MagnitudeEstimate>;
   /**
@@ -1556,6 +1673,13 @@ export type RegionalEvent = {
   sizeProfile: Array<SizeEvidencePoint>;
   warnings: Array<Scalars['String']['output']>;
 };
+
+/** Which age of a regional event is shown as its age. */
+export type RegionalEventAgeSource =
+  /** The normalised product of the members' site posteriors (combinedMedianCalBp, combinedHpd95). */
+  | 'COMBINED_DENSITIES'
+  /** The hypothesis' fresh joint age model run (succeeded, nothing changed since). */
+  | 'JOINT_RUN';
 
 /** A frozen, numbered snapshot of a project's data for citation. */
 export type Release = {
@@ -2066,6 +2190,16 @@ export type StartAgeModelRunInput = {
   siteId: Scalars['ID']['input'];
 };
 
+export type StartJointAgeModelRunInput = {
+  /** Chains, each a job of its own so several workers run them at once: 2 to 16 (default 4). */
+  chains?: InputMaybe<Scalars['Int']['input']>;
+  /** The hypothesis whose tied sites are modelled together; refused while it has an order loop (Hypothesis.orderConflicts). */
+  hypothesisId: Scalars['ID']['input'];
+  /** Sweeps per chain after burn-in: 500 to 200,000 (default 20,000). Burn-in is a fifth of this, from 500 to 4,000. */
+  iterations?: InputMaybe<Scalars['Int']['input']>;
+  seed?: InputMaybe<Scalars['Int']['input']>;
+};
+
 export type StartRecurrenceAnalysisInput = {
   /** Which of the segment's events count (segment analyses only; refused for a site). */
   countingRule?: InputMaybe<CountingRuleInput>;
@@ -2377,6 +2511,27 @@ export type DeleteCoreLogMutationVariables = Exact<{
 
 export type DeleteCoreLogMutation = { __typename?: 'Mutation', deleteCoreLog: boolean };
 
+export type JointRunQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type JointRunQuery = { __typename?: 'Query', jointAgeModelRun: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, hypothesisVersion: number, createdAt: string, finishedAt?: string | null, stale: boolean, staleReasons: Array<{ __typename?: 'StaleReason', message: string }>, chains: Array<{ __typename?: 'JointAgeModelChain', index: number, status: JobStatus, progress: number, message?: string | null }>, depthModels: Array<{ __typename?: 'JointSiteDepthModel', siteId: string, siteName: string, depthModel: DepthModel }>, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, regionalEvents: Array<{ __typename?: 'JointRegionalEventPosterior', id: string, medianCalBp: number, rhat: number, ess: number, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }> }> } };
+
+export type StartJointAgeModelRunMutationVariables = Exact<{
+  input: StartJointAgeModelRunInput;
+}>;
+
+
+export type StartJointAgeModelRunMutation = { __typename?: 'Mutation', startJointAgeModelRun: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus } };
+
+export type CancelJointAgeModelRunMutationVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type CancelJointAgeModelRunMutation = { __typename?: 'Mutation', cancelJointAgeModelRun: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus } };
+
 export type EventLadderQueryVariables = Exact<{
   projectId: Scalars['ID']['input'];
 }>;
@@ -2389,7 +2544,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromArea?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromDisplacement?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, latestJointRun?: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus } | null, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, jointMedianCalBp?: number | null, ageShown: RegionalEventAgeSource, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, jointHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromArea?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromDisplacement?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string }> }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -3202,6 +3357,72 @@ export const DeleteCoreLogDocument = new TypedDocumentString(`
   deleteCoreLog(id: $id)
 }
     `) as unknown as TypedDocumentString<DeleteCoreLogMutation, DeleteCoreLogMutationVariables>;
+export const JointRunDocument = new TypedDocumentString(`
+    query JointRun($id: ID!) {
+  jointAgeModelRun(id: $id) {
+    id
+    status
+    progress
+    message
+    seed
+    hypothesisVersion
+    createdAt
+    finishedAt
+    stale
+    staleReasons {
+      message
+    }
+    chains {
+      index
+      status
+      progress
+      message
+    }
+    depthModels {
+      siteId
+      siteName
+      depthModel
+    }
+    diagnostics {
+      converged
+      maxRhat
+      minEss
+      message
+    }
+    regionalEvents {
+      id
+      medianCalBp
+      rhat
+      ess
+      members {
+        id
+        name
+      }
+      hpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<JointRunQuery, JointRunQueryVariables>;
+export const StartJointAgeModelRunDocument = new TypedDocumentString(`
+    mutation StartJointAgeModelRun($input: StartJointAgeModelRunInput!) {
+  startJointAgeModelRun(input: $input) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<StartJointAgeModelRunMutation, StartJointAgeModelRunMutationVariables>;
+export const CancelJointAgeModelRunDocument = new TypedDocumentString(`
+    mutation CancelJointAgeModelRun($id: ID!) {
+  cancelJointAgeModelRun(id: $id) {
+    id
+    status
+  }
+}
+    `) as unknown as TypedDocumentString<CancelJointAgeModelRunMutation, CancelJointAgeModelRunMutationVariables>;
 export const EventLadderDocument = new TypedDocumentString(`
     query EventLadder($projectId: ID!) {
   eventLadder(projectId: $projectId) {
@@ -3285,9 +3506,20 @@ export const HypothesisDocument = new TypedDocumentString(`
         name
       }
     }
+    latestJointRun {
+      id
+      status
+    }
     regionalEvents {
       id
       combinedMedianCalBp
+      jointMedianCalBp
+      jointHpd95 {
+        olderCalBp
+        youngerCalBp
+        probability
+      }
+      ageShown
       concordance
       concordanceThreshold
       concordanceLow

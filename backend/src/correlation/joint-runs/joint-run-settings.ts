@@ -29,7 +29,7 @@ export interface JointRunSettings {
 /**
  * Settings for `iterations` sweeps per chain after burn-in. Burn-in is the site model's (4,000
  * sweeps) or a fifth of the kept sweeps when that is less, at least 500 [common practice: a
- * burn-in of 10-50 % of the kept length]; thinning keeps about 2,000 draws per chain.
+ * burn-in of 10-50 % of the kept length]; thinning keeps about 1,000 draws per chain (each chain stores them until the run is summarised).
  */
 export function jointRunSettings(chains: number, iterations: number): JointRunSettings {
   const d = DEFAULT_AGE_MODEL_SETTINGS;
@@ -37,7 +37,7 @@ export function jointRunSettings(chains: number, iterations: number): JointRunSe
     chains,
     iterations,
     burnIn: Math.min(d.burnIn, Math.max(500, Math.round(iterations / 5))),
-    thin: Math.max(1, Math.floor(iterations / 2_000)),
+    thin: Math.max(1, Math.floor(iterations / 1_000)),
     outlierPrior: d.outlierPrior,
     outlierShiftScaleYears: d.outlierShiftScaleYears,
     inheritanceScaleYears: d.inheritanceScaleYears,

@@ -9,6 +9,7 @@ import { allows } from '@/modules/auth/utils/permissions';
 import { EventLadderChart, type LadderColumn } from '@/modules/correlation/components/EventLadderChart';
 import { FigureExportButtons } from '@/modules/correlation/components/FigureExportButtons';
 import { HypothesisDialog, type HypothesisValues } from '@/modules/correlation/components/HypothesisDialog';
+import { JointRunPanel } from '@/modules/correlation/components/JointRunPanel';
 import { RegionalEventsPanel } from '@/modules/correlation/components/RegionalEventsPanel';
 import { SpaceTimeChart } from '@/modules/correlation/components/SpaceTimeChart';
 import { SizeProfileChart } from '@/modules/correlation/components/SizeProfileChart';
@@ -222,6 +223,11 @@ export function LadderView({ projectId }: LadderViewProps) {
             {hypothesis ? (
               <Tabs id="ladder-side" renderActiveTabPanelOnly>
                 <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel hypothesis={hypothesis} eventLabels={eventNames} />} />
+                <Tab
+                  id="joint"
+                  title={hypothesis.latestJointRun ? `Joint run (${hypothesis.latestJointRun.status.toLowerCase()})` : 'Joint run'}
+                  panel={<JointRunPanel projectId={projectId} hypothesis={hypothesis} canRun={canEdit} eventLabels={eventNames} />}
+                />
                 <Tab
                   id="ties"
                   title={`Ties (${hypothesis.ties.length})`}

@@ -1,7 +1,8 @@
 import { Callout, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
-import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
+import { RegionalEventAges } from '@/modules/correlation/components/RegionalEventAges';
+import { shownMedian } from '@/modules/correlation/utils/jointRun';
 import { sameAgeVerdict } from '@/modules/correlation/utils/sameAge';
 
 export type RegionalEventsPanelProps = {
@@ -29,13 +30,11 @@ function MagnitudeValue({ magnitude, lowerBound = false, empty = '–' }: { magn
 }
 
 /**
- * The regional events of a hypothesis, youngest first: combined age, concordance, the
+ * The regional events of a hypothesis, youngest first: joint and independent ages side by side, concordance, the
  * Ward & Wilson (1978) same-age test in words, rupture length and magnitude; order conflicts on top.
  */
 export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
-  const regionalEvents = [...hypothesis.regionalEvents].sort(
-    (a, b) => (a.combinedMedianCalBp ?? Infinity) - (b.combinedMedianCalBp ?? Infinity),
-  );
+  const regionalEvents = [...hypothesis.regionalEvents].sort((a, b) => shownMedian(a) - shownMedian(b));
   return (
     <div className="sc-side-list">
       {hypothesis.orderConflicts.length > 0 && (
@@ -54,15 +53,8 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
           <div key={regional.id} className="sc-regional-card">
             <strong>Regional event {index + 1}</strong> <Tag minimal>{regional.members.length} sites</Tag>
             <div>{regional.members.map((member) => eventLabels.get(member.id) ?? member.name).join(' · ')}</div>
+            <RegionalEventAges event={regional} />
             <dl>
-              <dt>Median</dt>
-              <dd>
-                <AgeValue calBp={regional.combinedMedianCalBp} />
-              </dd>
-              <dt>95.4 %</dt>
-              <dd>
-                <AgeRangesValue ranges={regional.combinedHpd95} />
-              </dd>
               <dt>Concordance</dt>
               <dd>
                 <span className="num">{regional.concordance === null || regional.concordance === undefined ? '–' : regional.concordance.toFixed(2)}</span>{' '}

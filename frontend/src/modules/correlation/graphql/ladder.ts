@@ -86,9 +86,20 @@ export const HypothesisDocument = graphql(`
           name
         }
       }
+      latestJointRun {
+        id
+        status
+      }
       regionalEvents {
         id
         combinedMedianCalBp
+        jointMedianCalBp
+        jointHpd95 {
+          olderCalBp
+          youngerCalBp
+          probability
+        }
+        ageShown
         concordance
         concordanceThreshold
         concordanceLow
