@@ -34,8 +34,11 @@ describe('stored chains and inputs', () => {
       sampleDraws: new Float64Array(0),
       outlierShare: new Float64Array(0),
       acceptance: { shift: 0.25 },
+      siteEventDensities: [{ startCalBp: 999, probabilities: Float64Array.of(0.25, 0.5, 0.25) }],
     };
     const back = loadChainDraws(JSON.parse(JSON.stringify(storeChainDraws(draws))));
+    expect(back.siteEventDensities?.[0].startCalBp).toBe(999);
+    expect(Array.from(back.siteEventDensities![0].probabilities)).toEqual([0.25, 0.5, 0.25]);
     expect(Array.from(back.regionalEvents)).toEqual([1000, 1000]);
     expect(back.siteEvents).toEqual(draws.siteEvents);
     expect(back.acceptance).toEqual({ shift: 0.25 });

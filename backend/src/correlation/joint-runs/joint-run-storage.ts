@@ -4,7 +4,7 @@
  * to plain arrays, ages to a tenth of a year, joint draws row-major. Pure functions, shared by the
  * API and workers.
  */
-import { loadInput, storeDensity, storeInput, type StoredAgeModelInput, type StoredDensity, type StoredEventPosterior, type StoredSamplePosterior } from '../../age-models/age-model-results';
+import { loadDensity, loadInput, storeDensity, storeInput, type StoredAgeModelInput, type StoredDensity, type StoredEventPosterior, type StoredSamplePosterior } from '../../age-models/age-model-results';
 import type { DensitySummary } from '../../chronology/common/density';
 import type { JointAgeModelResult, JointChainDraws, JointDepthModel, JointModelInput } from '../../chronology/joint-age-model/types';
 
@@ -24,6 +24,8 @@ export interface StoredJointChainDraws {
   sampleDraws: number[];
   outlierShare: number[];
   acceptance: Record<string, number>;
+  /** The chain's Rao-Blackwellised density of each site event, when the computation gave them (trimmed as site runs store densities). */
+  siteEventDensities?: StoredDensity[];
 }
 
 export interface StoredRegionalPosterior {
@@ -73,12 +75,15 @@ export function storeChainDraws(draws: JointChainDraws): StoredJointChainDraws {
     sampleDraws: tenth(draws.sampleDraws),
     outlierShare: Array.from(draws.outlierShare),
     acceptance: { ...draws.acceptance },
+    ...(draws.siteEventDensities ? { siteEventDensities: draws.siteEventDensities.map(storeDensity) } : {}),
   };
 }
 
 export function loadChainDraws(stored: StoredJointChainDraws): JointChainDraws {
+  const { siteEventDensities, ...rest } = stored;
   return {
-    ...stored,
+    ...rest,
+    ...(siteEventDensities ? { siteEventDensities: siteEventDensities.map(loadDensity) } : {}),
     regionalEvents: Float64Array.from(stored.regionalEvents),
     siteEventDraws: Float64Array.from(stored.siteEventDraws),
     sampleDraws: Float64Array.from(stored.sampleDraws),
