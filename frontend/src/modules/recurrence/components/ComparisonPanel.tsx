@@ -100,7 +100,7 @@ export function ComparisonPanel({ projectId, analysisAId, analysisBId }: Compari
       <div className="sc-ladder-toolbar">
         <Button small icon={IconNames.DOWNLOAD} text="Comparison CSV" onClick={() => download('csv')} />
         <Button small icon={IconNames.DOWNLOAD} text="Comparison JSON" onClick={() => download('json')} />
-        <span className="sc-chart-legend">{changed === 0 ? 'The same events count in both.' : `${changed} events differ between the tables.`}</span>
+        <span className="sc-chart-legend">{changed === 0 ? 'The same events count in both.' : `${changed} ${changed === 1 ? 'event differs' : 'events differ'} between the tables.`}</span>
       </div>
       <HTMLTable compact className="sc-table">
         <thead>
