@@ -492,6 +492,54 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   await card.scrollIntoViewIfNeeded();
   log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');
+  await correlatorSeesOrderLoop(page, baseUrl, shot);
+}
+
+/** The correlator's API token and the demo project's id, for setting up what a screen then shows. */
+async function correlatorApi(baseUrl) {
+  const signedIn = await graphql(baseUrl, 'mutation ($email: String!, $password: String!) { signIn(email: $email, password: $password) { token } }', {
+    email: 'correlator@demo.test',
+    password: PASSWORD,
+  });
+  const token = signedIn.data?.signIn?.token;
+  check(token, `the correlator cannot sign in over GraphQL: ${JSON.stringify(signedIn.errors)}`);
+  const projects = await graphql(baseUrl, '{ projects { id name } }', {}, token);
+  const projectId = projects.data?.projects?.find((project) => project.name === 'Velmora Margin')?.id;
+  check(projectId, 'the correlator does not see the demo project over GraphQL');
+  return { token, projectId, call: (query, variables) => graphql(baseUrl, query, variables, token) };
+}
+
+/**
+ * A hypothesis with two crossing ties (the younger event of one site tied to the older of another
+ * and the other way round) has one order loop; picking it in the callout draws its loop on the
+ * ladder in the loop pattern.
+ */
+async function correlatorSeesOrderLoop(page, baseUrl, shot) {
+  const api = await correlatorApi(baseUrl);
+  const ladder = await api.call('query ($id: ID!) { eventLadder(projectId: $id) { columns { site { id } events { medianCalBp eventHorizon { id } } } } }', { id: api.projectId });
+  const [siteA, siteB] = (ladder.data?.eventLadder?.columns ?? [])
+    .map((column) => column.events.filter((event) => event.medianCalBp !== null).sort((a, b) => a.medianCalBp - b.medianCalBp))
+    .filter((events) => events.length >= 2);
+  check(siteA && siteB, 'the demo ladder has no two columns with two dated events each');
+  const name = `E2E crossing ${Date.now()}`;
+  const created = await api.call('mutation ($input: CreateHypothesisInput!) { createHypothesis(input: $input) { id } }', { input: { projectId: api.projectId, name } });
+  const hypothesisId = created.data?.createHypothesis?.id;
+  check(hypothesisId, `the crossing hypothesis was not created: ${JSON.stringify(created.errors)}`);
+  for (const [a, b] of [
+    [siteA[0], siteB[1]],
+    [siteA[1], siteB[0]],
+  ]) {
+    const tie = await api.call('mutation ($input: AddTieInput!) { addTie(input: $input) { id } }', {
+      input: { hypothesisId, eventAId: a.eventHorizon.id, eventBId: b.eventHorizon.id, confidence: 3, evidence: ['age overlap'] },
+    });
+    check(tie.data?.addTie?.id, `a crossing tie was refused: ${JSON.stringify(tie.errors)}`);
+  }
+  await page.reload();
+  await page.getByLabel('Hypothesis', { exact: true }).selectOption({ label: name });
+  await page.getByRole('button', { name: 'loop 1' }).click();
+  const drawn = await waitForCount(page.locator('[data-overlay="order-loops"] [data-selected] line'), (count) => count >= 4, 'lines of the chosen order loop');
+  log(`ladder: a crossing pair of ties is drawn as loop 1 (${drawn} lines with its halo)`);
+  await shot('order-loop');
 }
 
 async function analystRunsRecurrence(page, { baseUrl, shot, round }) {

@@ -1,5 +1,5 @@
 import { area, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform } from 'd3';
-import { useEffect, useId, useMemo, useRef, useState, type RefObject } from 'react';
+import { useEffect, useId, useMemo, useRef, useState, type ReactNode, type RefObject } from 'react';
 import type { HypothesisQuery } from '@/gql/graphql';
 import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { TimeGridTicks } from '@/modules/ages/components/TimeGridTicks';
@@ -18,6 +18,7 @@ import {
   tieSegments,
   zoomedTimeWindow,
 } from '@/modules/correlation/utils/ladderLayout';
+import type { LadderGeometry } from '@/modules/correlation/utils/ladderOverlays';
 import { useParentSize } from '@/modules/ui/hooks/useParentSize';
 
 const MARGIN = { top: 84, right: 16, bottom: 16, left: 64 };
@@ -37,6 +38,8 @@ export type EventLadderChartProps = {
   selectedEventIds: readonly string[];
   onSelectEvent: (eventId: string) => void;
   figure: RefObject<SVGSVGElement | null>;
+  /** Drawn over the ties with the chart's current scales (order loops, suggestions, core logs). */
+  overlay?: (geometry: LadderGeometry) => ReactNode;
 };
 
 type Hover = { x: number; y: number; siteName: string; event: LadderColumn['events'][number] };
@@ -46,7 +49,7 @@ type Hover = { x: number; y: number; siteName: string; event: LadderColumn['even
  * one-sided shape off its column's axis (scaled to its own peak), ties between medians,
  * regional events as faint bands. The wheel zooms and dragging pans the time axis.
  */
-export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSelectEvent, figure }: EventLadderChartProps) {
+export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSelectEvent, figure, overlay }: EventLadderChartProps) {
   const { ref, width, height } = useParentSize();
   const { age, range, scale } = useAgeScale();
   const clipId = useId().replace(/:/g, '');
@@ -183,6 +186,7 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
                 pointerEvents="none"
               />
             ))}
+            {overlay?.({ time, columnScale, anchors, top: MARGIN.top, bottom })}
           </g>
           <text x={8} y={MARGIN.top - 6} fontSize={10} fill={CHART_COLOURS.mutedText}>
             {ageAxisTitle(scale)} · younger ↑

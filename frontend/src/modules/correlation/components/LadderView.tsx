@@ -10,6 +10,8 @@ import { EventLadderChart, type LadderColumn } from '@/modules/correlation/compo
 import { FigureExportButtons } from '@/modules/correlation/components/FigureExportButtons';
 import { HypothesisDialog, type HypothesisValues } from '@/modules/correlation/components/HypothesisDialog';
 import { JointRunPanel } from '@/modules/correlation/components/JointRunPanel';
+import { OrderLoopsCallout } from '@/modules/correlation/components/OrderLoopsCallout';
+import { OrderLoopsOverlay } from '@/modules/correlation/components/OrderLoopsOverlay';
 import { RegionalEventsPanel } from '@/modules/correlation/components/RegionalEventsPanel';
 import { SpaceTimeChart } from '@/modules/correlation/components/SpaceTimeChart';
 import { SizeProfileChart } from '@/modules/correlation/components/SizeProfileChart';
@@ -46,6 +48,7 @@ export function LadderView({ projectId }: LadderViewProps) {
   const [tieOpen, setTieOpen] = useState(false);
   const [hypothesisOpen, setHypothesisOpen] = useState(false);
   const [removingTieId, setRemovingTieId] = useState<string | null>(null);
+  const [selectedLoopKey, setSelectedLoopKey] = useState<string | null>(null);
   const primaryFigure = useRef<SVGSVGElement | null>(null);
   const secondFigure = useRef<SVGSVGElement | null>(null);
   const { scale } = useAgeScale();
@@ -128,7 +131,18 @@ export function LadderView({ projectId }: LadderViewProps) {
   const figureTitle = (name: string | undefined) => `${mode === 'ladder' ? 'Event ladder' : 'Space-time'} ${project.name} ${name ?? ''}`;
   const renderFigure = (shown: typeof hypothesis, figure: typeof primaryFigure) =>
     mode === 'ladder' ? (
-      <EventLadderChart columns={columns} hypothesis={shown} selectedEventIds={selection} onSelectEvent={handleSelectEvent} figure={figure} />
+      <EventLadderChart
+        columns={columns}
+        hypothesis={shown}
+        selectedEventIds={selection}
+        onSelectEvent={handleSelectEvent}
+        figure={figure}
+        overlay={(geometry) => (
+          <>
+            <OrderLoopsOverlay geometry={geometry} loops={shown?.orderConflicts ?? []} selectedKey={shown === hypothesis ? selectedLoopKey : null} />
+          </>
+        )}
+      />
     ) : (
       <SpaceTimeChart columns={columns} hypothesis={shown} figure={figure} />
     );
@@ -189,6 +203,7 @@ export function LadderView({ projectId }: LadderViewProps) {
           {stale > 0 && `${stale} site(s) changed since their last age model run: their ages are out of date.`}
         </Callout>
       )}
+      {hypothesis && <OrderLoopsCallout loops={hypothesis.orderConflicts} selectedKey={selectedLoopKey} onSelect={setSelectedLoopKey} />}
       {(removeTie.error || setPreferred.error) && (
         <Callout intent={Intent.DANGER} icon={IconNames.ERROR} className="sc-form-callout">
           {(removeTie.error ?? setPreferred.error)?.message}
@@ -248,7 +263,7 @@ export function LadderView({ projectId }: LadderViewProps) {
             )}
             <p className="sc-chart-legend">
               Wheel to zoom the time axis, drag to pan, double-click to reset. Shapes are scaled to their own peak; bands span the combined 95.4 %
-              range. Dashed orange ties cross another tie's order. Ages in {ageScaleLabel(scale)}.
+              range. Dashed orange ties cross another tie's order; an order loop is drawn in a long-short dash with its label. Ages in {ageScaleLabel(scale)}.
             </p>
           </aside>
         </div>

@@ -31,21 +31,13 @@ function MagnitudeValue({ magnitude, lowerBound = false, empty = '–' }: { magn
 
 /**
  * The regional events of a hypothesis, youngest first: joint and independent ages side by side, concordance, the
- * Ward & Wilson (1978) same-age test in words, rupture length and magnitude; order conflicts on top.
+ * Ward & Wilson (1978) same-age test in words, rupture length and magnitude. Order loops are
+ * listed above the ladder (OrderLoopsCallout).
  */
 export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
   const regionalEvents = [...hypothesis.regionalEvents].sort((a, b) => shownMedian(a) - shownMedian(b));
   return (
     <div className="sc-side-list">
-      {hypothesis.orderConflicts.length > 0 && (
-        <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN} title={`${hypothesis.orderConflicts.length} order loop(s): these ties cannot all hold`}>
-          <ul>
-            {hypothesis.orderConflicts.map((conflict) => (
-              <li key={conflict.regionalEventIds.join('>')}>{conflict.message}</li>
-            ))}
-          </ul>
-        </Callout>
-      )}
       {regionalEvents.length === 0 && <p>No ties yet: every site event stands alone.</p>}
       {regionalEvents.map((regional, index) => {
         const low = regional.concordanceLow;

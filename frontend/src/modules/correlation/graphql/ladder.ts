@@ -146,6 +146,23 @@ export const HypothesisDocument = graphql(`
         }
         ties {
           id
+          eventA {
+            id
+          }
+          eventB {
+            id
+          }
+        }
+        steps {
+          site {
+            id
+          }
+          older {
+            id
+          }
+          younger {
+            id
+          }
         }
         regionalEventIds
       }
