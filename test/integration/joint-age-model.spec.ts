@@ -23,12 +23,22 @@ const DOUBLE = vi.hoisted(() => ({
   /** Each regional event's age in the double: 3,000 cal BP for the oldest member order, 700 years apart. */
   ageOf: (orderFromBase: number) => 3000 - 700 * orderFromBase,
   drawsPerChain: 60,
+  /** Runs with this seed use the real computation. */
+  realSeed: 4242,
 }));
 
-vi.mock('../../backend/src/chronology/joint-age-model/joint-age-model', () => ({
-  runJointChain: testDoubleRunJointChain,
-  summariseJointChains: testDoubleSummariseJointChains,
-}));
+// The double stands in for the computation except for runs seeded `DOUBLE.realSeed`, which run the
+// real one (the last test), so the plumbing is also checked with the real chains' output.
+vi.mock('../../backend/src/chronology/joint-age-model/joint-age-model', async (importOriginal) => {
+  const real = await importOriginal<typeof import('../../backend/src/chronology/joint-age-model/joint-age-model')>();
+  return {
+    ...real,
+    runJointChain: ((input, settings, hooks) =>
+      settings.seed === DOUBLE.realSeed ? real.runJointChain(input, settings, hooks) : testDoubleRunJointChain(input, settings, hooks)) as typeof real.runJointChain,
+    summariseJointChains: ((input, chains, options) =>
+      chains.every((c) => c.acceptance.testDouble === 1) ? testDoubleSummariseJointChains(input, chains, options) : real.summariseJointChains(input, chains, options)) as typeof real.summariseJointChains,
+  };
+});
 
 /** TEST DOUBLE of `RunJointChain`: each regional event at a fixed age by its members' order in their columns, plus noise of sd 20 years. */
 function testDoubleRunJointChain(input: JointModelInput, settings: JointChainSettings, hooks?: { onProgress?: (f: number) => void }): JointChainDraws {
@@ -65,7 +75,7 @@ function testDoubleRunJointChain(input: JointModelInput, settings: JointChainSet
     samples,
     sampleDraws: new Float64Array(n * samples.length).fill(2000),
     outlierShare: new Float64Array(samples.length).fill(0.05),
-    acceptance: { shift: 0.4 },
+    acceptance: { testDouble: 1 },
   };
 }
 
@@ -374,6 +384,29 @@ describe('refresh of a joint run after a hypothesis change', () => {
       [step.freshId],
     );
     expect(row).toEqual({ seed: 21, chains: 2, iterations: 700 });
+  });
+});
+
+describe('with the real computation', () => {
+  it('runs the one-to-one hypothesis end to end, each regional event between the calibrated ages of the dated units around it', async () => {
+    const runId = await startJoint({ seed: DOUBLE.realSeed, chains: 2, iterations: 1000 });
+    await executeChains(runId, true);
+    const run = await runOf(runId);
+    expect(run.status, run.message).toBe('SUCCEEDED');
+    expect(run.regionalEvents).toHaveLength(3);
+    expect(run.diagnostics.maxRhat).toBeGreaterThan(0.99);
+    // Superposition (the model's definition, checked from the samples' own calibrations): event k
+    // lies above unit k's dated sample and below unit k+1's, at both sites.
+    const { site: a } = await clients.VIEWER.ok(`query($id: ID!) { site(id: $id) { samples { labCode calibration { medianCalBp } } } }`, { id: site.A.id });
+    const calibrated = new Map(a.samples.map((x: { labCode: string; calibration: { medianCalBp: number } }) => [x.labCode, x.calibration.medianCalBp]));
+    for (const k of [0, 1, 2]) {
+      const regional = run.regionalEvents.find((r: { members: { id: string }[] }) => r.members.some((m) => m.id === site.A.events[k]));
+      expect(regional.medianCalBp).toBeLessThan(calibrated.get(`A-J${k + 1}`) as number);
+      expect(regional.medianCalBp).toBeGreaterThan(calibrated.get(`A-J${k + 2}`) as number);
+    }
+    const ordered = [0, 1, 2].map((k) => run.regionalEvents.find((r: { members: { id: string }[] }) => r.members.some((m) => m.id === site.A.events[k])).medianCalBp);
+    expect(ordered[0]).toBeGreaterThan(ordered[1]);
+    expect(ordered[1]).toBeGreaterThan(ordered[2]);
   });
 });
 

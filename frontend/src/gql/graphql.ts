@@ -2195,7 +2195,7 @@ export type StartJointAgeModelRunInput = {
   chains?: InputMaybe<Scalars['Int']['input']>;
   /** The hypothesis whose tied sites are modelled together; refused while it has an order loop (Hypothesis.orderConflicts). */
   hypothesisId: Scalars['ID']['input'];
-  /** Sweeps per chain after burn-in: 500 to 200,000 (default 20,000). Burn-in is a fifth of this, from 500 to 4,000. */
+  /** Sweeps per chain after burn-in: 500 to 200,000 (default 3,000). Burn-in is a third of this, from 500 to 4,000; about 1,000 draws per chain are kept. */
   iterations?: InputMaybe<Scalars['Int']['input']>;
   seed?: InputMaybe<Scalars['Int']['input']>;
 };

@@ -2,13 +2,13 @@
  * A joint run's settings: the site model's chain settings (chronology/age-model defaults), the
  * number of chains and how many joint draws of the regional events are kept. Pure.
  */
-import { DEFAULT_AGE_MODEL_SETTINGS } from '../../chronology/age-model/age-model';
+import { DEFAULT_JOINT_CHAIN_SETTINGS } from '../../chronology/joint-age-model/joint-age-model';
 import type { JointChainSettings } from '../../chronology/joint-age-model/types';
 
 /** Bounds of the start mutation's numbers (BAD_USER_INPUT outside them, naming the field). */
 export const JOINT_RUN_LIMITS = {
   chains: { min: 2, max: 16, default: 4 },
-  iterations: { min: 500, max: 200_000, default: 20_000 },
+  iterations: { min: 500, max: 200_000, default: DEFAULT_JOINT_CHAIN_SETTINGS.iterations },
 } as const;
 
 /** Regional-event joint draws kept for recurrence analyses (evenly thinned over the chains). */
@@ -27,16 +27,17 @@ export interface JointRunSettings {
 }
 
 /**
- * Settings for `iterations` sweeps per chain after burn-in. Burn-in is the site model's (4,000
- * sweeps) or a fifth of the kept sweeps when that is less, at least 500 [common practice: a
- * burn-in of 10-50 % of the kept length]; thinning keeps about 1,000 draws per chain (each chain stores them until the run is summarised).
+ * Settings for `iterations` sweeps per chain after burn-in, scaled from the computation's defaults
+ * (1,000 + 3,000 sweeps kept every 3rd, `DEFAULT_JOINT_CHAIN_SETTINGS`): burn-in a third of the
+ * kept sweeps, from 500 to 4,000 [common practice: a burn-in of 10-50 % of the kept length];
+ * thinning keeps about 1,000 draws per chain (each chain stores them until the run is summarised).
  */
 export function jointRunSettings(chains: number, iterations: number): JointRunSettings {
-  const d = DEFAULT_AGE_MODEL_SETTINGS;
+  const d = DEFAULT_JOINT_CHAIN_SETTINGS;
   return {
     chains,
     iterations,
-    burnIn: Math.min(d.burnIn, Math.max(500, Math.round(iterations / 5))),
+    burnIn: Math.min(4_000, Math.max(500, Math.round(iterations / 3))),
     thin: Math.max(1, Math.floor(iterations / 1_000)),
     outlierPrior: d.outlierPrior,
     outlierShiftScaleYears: d.outlierShiftScaleYears,

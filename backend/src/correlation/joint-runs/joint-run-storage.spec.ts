@@ -62,9 +62,11 @@ describe('stored chains and inputs', () => {
 });
 
 describe('settings and progress', () => {
-  it('burn-in is a fifth of the kept sweeps within 500-4000, and about 1000 draws are kept per chain', () => {
+  it('burn-in is a third of the kept sweeps within 500-4000, and about 1000 draws are kept per chain', () => {
     expect(jointRunSettings(4, 500)).toMatchObject({ burnIn: 500, thin: 1 });
-    expect(jointRunSettings(4, 10_000)).toMatchObject({ burnIn: 2000, thin: 10 });
+    // The computation's own defaults: 1,000 + 3,000 sweeps kept every 3rd.
+    expect(jointRunSettings(4, 3_000)).toMatchObject({ burnIn: 1000, thin: 3 });
+    expect(jointRunSettings(4, 10_000)).toMatchObject({ burnIn: 3333, thin: 10 });
     expect(jointRunSettings(4, 200_000)).toMatchObject({ burnIn: 4000, thin: 200 });
     expect(chainSettings(jointRunSettings(4, 10_000), 9, 3)).toMatchObject({ seed: 9, chainIndex: 3, iterations: 10_000 });
   });

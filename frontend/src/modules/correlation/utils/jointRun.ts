@@ -8,8 +8,8 @@ export type JointRunField = 'seed' | 'chains' | 'iterations';
 export type JointRunForm = Record<JointRunField, string>;
 export type JointRunInput = { seed: number | null; chains: number | null; iterations: number | null };
 
-/** The server's defaults (4 chains of 20,000 sweeps) and a blank seed (random). */
-export const DEFAULT_JOINT_RUN_FORM: JointRunForm = { seed: '', chains: '4', iterations: '20000' };
+/** The server's defaults (4 chains of 3,000 sweeps after burn-in) and a blank seed (random). */
+export const DEFAULT_JOINT_RUN_FORM: JointRunForm = { seed: '', chains: '4', iterations: '3000' };
 
 /** Whole numbers within the server's bounds: chains 2-16, iterations 500-200,000; blank is the default. */
 export function readJointRunForm(form: JointRunForm): FormResult<JointRunInput, JointRunField> {
