@@ -52,6 +52,8 @@ export type CountingRulePanelProps = {
   projectId: string;
   segmentId: string;
   hypothesisId: string;
+  /** A second hypothesis whose table is shown beside the first, under the same rule. */
+  secondHypothesisId?: string | null;
   form: CountingRuleForm;
   onChange: (form: CountingRuleForm) => void;
 };
@@ -60,20 +62,12 @@ export type CountingRulePanelProps = {
  * Which of the segment's events count, chosen before the analysis runs, with the event table
  * the analysis would use under the chosen hypothesis and rule.
  */
-export function CountingRulePanel({ projectId, segmentId, hypothesisId, form, onChange }: CountingRulePanelProps) {
+export function CountingRulePanel({ projectId, segmentId, hypothesisId, secondHypothesisId = null, form, onChange }: CountingRulePanelProps) {
   const read = readCountingRule(form);
   const errors = read.ok ? {} : read.errors;
   const rule: CountingRuleInput | null = read.ok ? read.input : null;
-  const request = useSettled(JSON.stringify({ segmentId, hypothesisId, rule }), PREVIEW_DELAY_MS);
-  const parsed = JSON.parse(request) as { segmentId: string; hypothesisId: string; rule: CountingRuleInput | null };
-  const tableQuery = useQuery({
-    queryKey: [...recurrenceQueries.all(projectId), 'event-table', request] as const,
-    queryFn: async () =>
-      (await graphqlRequest(SegmentEventTableDocument, { input: { segmentId: parsed.segmentId, hypothesisId: parsed.hypothesisId, countingRule: parsed.rule } }))
-        .segmentEventTable,
-    enabled: parsed.segmentId !== '' && parsed.hypothesisId !== '' && parsed.rule !== null,
-    placeholderData: (previous) => previous,
-  });
+  const tableQuery = useEventTable(projectId, segmentId, hypothesisId, rule);
+  const secondQuery = useEventTable(projectId, segmentId, secondHypothesisId ?? '', rule);
   const handleUntied = (event: ChangeEvent<HTMLInputElement>) => onChange({ ...form, includeUntied: event.target.checked });
   const handleWeighted = (event: ChangeEvent<HTMLInputElement>) => onChange({ ...form, weighted: event.target.checked });
   const handleShare = (value: string) => onChange({ ...form, spanSharePercent: value });
@@ -115,15 +109,36 @@ export function CountingRulePanel({ projectId, segmentId, hypothesisId, form, on
           </p>
         </>
       )}
-      {tableQuery.isError ? (
-        <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN}>
-          {tableQuery.error.message}
-        </Callout>
-      ) : tableQuery.data ? (
-        <EventTable table={tableQuery.data} caption="The events this analysis would use" />
-      ) : tableQuery.isFetching ? (
-        <LoadingState label="Reading the segment's events" />
-      ) : null}
+      <div className={secondHypothesisId ? 'sc-recurrence-compare' : undefined}>
+        <TablePreview query={tableQuery} caption={secondHypothesisId ? 'The events this analysis would use (A)' : 'The events this analysis would use'} />
+        {secondHypothesisId && <TablePreview query={secondQuery} caption="Under the second hypothesis (B)" />}
+      </div>
     </div>
   );
+}
+
+/** The event table of a segment under a hypothesis and rule, asked again once typing settles. */
+function useEventTable(projectId: string, segmentId: string, hypothesisId: string, rule: CountingRuleInput | null) {
+  const request = useSettled(JSON.stringify({ segmentId, hypothesisId, rule }), PREVIEW_DELAY_MS);
+  const parsed = JSON.parse(request) as { segmentId: string; hypothesisId: string; rule: CountingRuleInput | null };
+  return useQuery({
+    queryKey: [...recurrenceQueries.all(projectId), 'event-table', request] as const,
+    queryFn: async () =>
+      (await graphqlRequest(SegmentEventTableDocument, { input: { segmentId: parsed.segmentId, hypothesisId: parsed.hypothesisId, countingRule: parsed.rule } }))
+        .segmentEventTable,
+    enabled: parsed.segmentId !== '' && parsed.hypothesisId !== '' && parsed.rule !== null,
+    placeholderData: (previous) => previous,
+  });
+}
+
+function TablePreview({ query, caption }: { query: ReturnType<typeof useEventTable>; caption: string }) {
+  if (query.isError) {
+    return (
+      <Callout intent={Intent.WARNING} icon={IconNames.WARNING_SIGN}>
+        {query.error.message}
+      </Callout>
+    );
+  }
+  if (query.data) return <EventTable table={query.data} caption={caption} />;
+  return query.isFetching ? <LoadingState label="Reading the segment's events" /> : null;
 }

@@ -24,8 +24,12 @@ export type RecurrenceSetupFormProps = {
   project: RecurrenceSetupQuery['project'];
   starting: boolean;
   error: string | null;
-  onStart: (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }) => void;
+  /** `compareHypothesisId`: run the same setting (same seed) on this hypothesis too, to compare. */
+  onStart: (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }, compareHypothesisId: string | null) => void;
 };
+
+/** A second hypothesis is optional. */
+const NO_SECOND = '';
 
 /** Settings of a new recurrence analysis and the button that starts it. */
 export function RecurrenceSetupForm({ project, starting, error, onStart }: RecurrenceSetupFormProps) {
@@ -36,6 +40,7 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
   }));
   const [errors, setErrors] = useState<FieldErrors<RecurrenceSettingsField>>({});
   const [rule, setRule] = useState<CountingRuleForm>(defaultCountingRule);
+  const [secondHypothesisId, setSecondHypothesisId] = useState<string>(NO_SECOND);
   const change = (field: RecurrenceSettingsField) => (value: string) => setValues((previous) => ({ ...previous, [field]: value }));
   const handleTargetChange = (value: string) => setValues((previous) => ({ ...previous, target: value as RecurrenceTarget }));
   const handleSubmit = (event: FormEvent<HTMLFormElement>) => {
@@ -48,11 +53,17 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
     }
     // The rule's own fields show their problems in the panel.
     if (values.target === 'segment' && !countingRule.ok) return;
+    const second = values.target === 'segment' && secondHypothesisId !== NO_SECOND && secondHypothesisId !== values.hypothesisId ? secondHypothesisId : null;
     setErrors({});
-    onStart(values.target === 'segment' && countingRule.ok ? { ...result.input, countingRule: countingRule.input } : result.input);
+    onStart(values.target === 'segment' && countingRule.ok ? { ...result.input, countingRule: countingRule.input } : result.input, second);
   };
   const segmentOptions = project.segments.map((segment) => ({ value: segment.id, label: segment.name }));
   const hypothesisOptions = project.hypotheses.map((hypothesis) => ({ value: hypothesis.id, label: `${hypothesis.name}${hypothesis.preferred ? ' (preferred)' : ''}` }));
+  const secondOptions = [
+    { value: NO_SECOND, label: 'No second hypothesis' },
+    ...hypothesisOptions.filter((option) => option.value !== values.hypothesisId),
+  ];
+  const second = secondHypothesisId !== values.hypothesisId && secondHypothesisId !== NO_SECOND ? secondHypothesisId : null;
   const siteOptions = project.sites.map((site) => ({ value: site.id, label: `${site.name} (${site.kind.toLowerCase()})` }));
   return (
     <form onSubmit={handleSubmit} noValidate>
@@ -67,6 +78,15 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
           <>
             <SelectField name="segmentId" label="Segment" value={values.segmentId} options={segmentOptions} onValueChange={change('segmentId')} error={errors.segmentId} fill />
             <SelectField name="hypothesisId" label="Hypothesis" value={values.hypothesisId} options={hypothesisOptions} onValueChange={change('hypothesisId')} error={errors.hypothesisId} fill />
+            <SelectField
+              name="secondHypothesisId"
+              label="Also run on"
+              labelInfo="(to compare)"
+              value={second ?? NO_SECOND}
+              options={secondOptions}
+              onValueChange={setSecondHypothesisId}
+              fill
+            />
           </>
         ) : (
           <SelectField name="siteId" label="Site" value={values.siteId} options={siteOptions} onValueChange={change('siteId')} error={errors.siteId} fill />
@@ -77,7 +97,14 @@ export function RecurrenceSetupForm({ project, starting, error, onStart }: Recur
         <NumberField name="seed" label="Seed" labelInfo="(blank: random)" value={values.seed} onValueChange={change('seed')} error={errors.seed} />
       </div>
       {values.target === 'segment' && (
-        <CountingRulePanel projectId={project.id} segmentId={values.segmentId} hypothesisId={values.hypothesisId} form={rule} onChange={setRule} />
+        <CountingRulePanel
+          projectId={project.id}
+          segmentId={values.segmentId}
+          hypothesisId={values.hypothesisId}
+          secondHypothesisId={second}
+          form={rule}
+          onChange={setRule}
+        />
       )}
       <Button type="submit" intent={Intent.PRIMARY} icon={IconNames.PLAY} text="Start analysis" loading={starting} />
     </form>

@@ -20,6 +20,11 @@ import '@/modules/correlation/components/charts.css';
 
 export type RecurrenceViewProps = { projectId: string };
 
+/** A seed both analyses of a comparison share when none was typed. */
+function randomSeed(): number {
+  return Math.floor(Math.random() * 2_147_483_647);
+}
+
 type AnalysisPanelProps = { projectId: string; analysisId: string; canRun: boolean; sharedAxes?: SharedRecurrenceAxes };
 
 function AnalysisPanel({ projectId, analysisId, canRun, sharedAxes }: AnalysisPanelProps) {
@@ -76,8 +81,28 @@ export function RecurrenceView({ projectId }: RecurrenceViewProps) {
   const analysisId = chosenId ?? analyses[0]?.id ?? null;
   const secondId = comparing ? (compareId ?? analyses.find((entry) => entry.id !== analysisId)?.id ?? null) : null;
 
-  const handleStart = (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }) =>
-    start.mutate({ input }, { onSuccess: ({ startRecurrenceAnalysis }) => setChosenId(startRecurrenceAnalysis.id) });
+  // With a second hypothesis, both analyses share every setting and the seed, then open side by side.
+  const handleStart = (input: RecurrenceSettingsInput & { countingRule?: CountingRuleInput | null }, compareHypothesisId: string | null) => {
+    const shared = compareHypothesisId && input.seed === null ? { ...input, seed: randomSeed() } : input;
+    start.mutate(
+      { input: shared },
+      {
+        onSuccess: ({ startRecurrenceAnalysis: first }) => {
+          setChosenId(first.id);
+          if (!compareHypothesisId) return;
+          start.mutate(
+            { input: { ...shared, hypothesisId: compareHypothesisId } },
+            {
+              onSuccess: ({ startRecurrenceAnalysis: second }) => {
+                setCompareId(second.id);
+                setComparing(true);
+              },
+            },
+          );
+        },
+      },
+    );
+  };
   const handleChoose = (event: ChangeEvent<HTMLSelectElement>) => setChosenId(event.target.value);
   const handleCompare = (event: ChangeEvent<HTMLSelectElement>) => setCompareId(event.target.value);
   const handleComparing = () => setComparing((previous) => !previous);
