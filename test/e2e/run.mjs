@@ -387,9 +387,16 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   await page.locator('#seed').fill(seed);
   await shot('settings');
   const before = await page.locator('tr').count();
+  const shownEvents = page.locator('table', { has: page.locator('th', { hasText: '95.4 % range' }) }).first().locator('tbody tr');
+  const eventsBefore = await shownEvents.count();
   await page.getByRole('button', { name: 'Start run' }).click();
   // The demo's own run (another seed) already shows as succeeded: wait for this run, by its seed.
-  await page.locator('.sc-run-status-line').filter({ hasText: new RegExp(`succeeded\\s*seed\\s*${seed}\\b`) }).waitFor({ timeout: 90_000 });
+  // Until it has finished, the demo run's event table stays on the page (results no longer vanish while a run works).
+  const finishedLine = page.locator('.sc-run-status-line').filter({ hasText: new RegExp(`succeeded\\s*seed\\s*${seed}\\b`) });
+  for (const deadline = Date.now() + 90_000; (await finishedLine.count()) === 0; await sleep(200)) {
+    check(Date.now() < deadline, `the run with seed ${seed} did not finish in 90 s`);
+    if (eventsBefore > 0 && (await finishedLine.count()) === 0) check((await shownEvents.count()) > 0, 'the earlier results vanished while the new run works');
+  }
   const eventTable = page.locator('table', { has: page.locator('th', { hasText: '95.4 % range' }) }).first();
   await eventTable.waitFor();
   const rows = eventTable.locator('tbody tr');
@@ -399,6 +406,10 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   // A single-year sliver of probability is not listed as a range ("490–490 cal BP").
   check(!/\b(\d+)–\1 cal BP/.test(firstRange), `the first event lists a zero-width range: "${firstRange}"`);
   log(`age model: ${await rows.count()} events (table rows before ${before}), first range ${firstRange.replace(/\s+/g, ' ')}`);
+  // The run history lists this run with its seed as the one the ladder uses, beside the demo's run.
+  const historyRows = page.getByRole('table', { name: 'Run history' }).locator('tbody tr');
+  await waitForCount(historyRows, (count) => count >= 2, 'two or more runs in the run history');
+  await historyRows.filter({ hasText: new RegExp(`seed ${seed}\\b`) }).filter({ hasText: 'ladder, regional events, recurrence' }).waitFor();
   await shot('run-finished');
   // A demo core's Logs tab draws the core on true and event-free depth.
   await page.goto(`${baseUrl}/projects`);

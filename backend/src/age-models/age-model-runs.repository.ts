@@ -10,6 +10,27 @@ export type AgeModelRunRow = typeof ageModelRuns.$inferSelect;
 /** md5 of the empty string: the fingerprint of a column with nothing in it. */
 export const EMPTY_COLUMN_FINGERPRINT = 'd41d8cd98f00b204e9800998ecf8427e';
 
+/** Every column of a run but the input snapshot, with `results` without its joint event draws. */
+const DISPLAY_COLUMNS = {
+  id: ageModelRuns.id,
+  siteId: ageModelRuns.siteId,
+  requestedById: ageModelRuns.requestedById,
+  status: ageModelRuns.status,
+  progress: ageModelRuns.progress,
+  message: ageModelRuns.message,
+  seed: ageModelRuns.seed,
+  settings: ageModelRuns.settings,
+  inputFingerprint: ageModelRuns.inputFingerprint,
+  columnRevision: ageModelRuns.columnRevision,
+  diagnostics: ageModelRuns.diagnostics,
+  results: sql<unknown>`${ageModelRuns.results} - 'eventDraws'`,
+  attempts: ageModelRuns.attempts,
+  startedAt: ageModelRuns.startedAt,
+  finishedAt: ageModelRuns.finishedAt,
+  createdAt: ageModelRuns.createdAt,
+  updatedAt: ageModelRuns.updatedAt,
+};
+
 @Injectable()
 export class AgeModelRunsRepository {
   constructor(
@@ -27,8 +48,10 @@ export class AgeModelRunsRepository {
     return row;
   }
 
-  listForSite(siteId: string, executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
-    return executor.select().from(ageModelRuns).where(eq(ageModelRuns.siteId, siteId)).orderBy(desc(ageModelRuns.createdAt)).limit(50);
+  /** A site's newest 50 runs, read as `runsForDisplay` reads them (no input snapshot, no joint draws). */
+  async listForSite(siteId: string, executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
+    const rows = await executor.select(DISPLAY_COLUMNS).from(ageModelRuns).where(eq(ageModelRuns.siteId, siteId)).orderBy(desc(ageModelRuns.createdAt)).limit(50);
+    return rows.map((row) => ({ ...row, inputSnapshot: null }));
   }
 
   async latestForSite(siteId: string, executor: Executor = this.database.db): Promise<AgeModelRunRow | undefined> {
@@ -98,25 +121,7 @@ export class AgeModelRunsRepository {
   async runsForDisplay(runIds: string[], executor: Executor = this.database.db): Promise<AgeModelRunRow[]> {
     if (runIds.length === 0) return [];
     const rows = await executor
-      .select({
-        id: ageModelRuns.id,
-        siteId: ageModelRuns.siteId,
-        requestedById: ageModelRuns.requestedById,
-        status: ageModelRuns.status,
-        progress: ageModelRuns.progress,
-        message: ageModelRuns.message,
-        seed: ageModelRuns.seed,
-        settings: ageModelRuns.settings,
-        inputFingerprint: ageModelRuns.inputFingerprint,
-        columnRevision: ageModelRuns.columnRevision,
-        diagnostics: ageModelRuns.diagnostics,
-        results: sql<unknown>`${ageModelRuns.results} - 'eventDraws'`,
-        attempts: ageModelRuns.attempts,
-        startedAt: ageModelRuns.startedAt,
-        finishedAt: ageModelRuns.finishedAt,
-        createdAt: ageModelRuns.createdAt,
-        updatedAt: ageModelRuns.updatedAt,
-      })
+      .select(DISPLAY_COLUMNS)
       .from(ageModelRuns)
       .where(inArray(ageModelRuns.id, runIds));
     return rows.map((row) => ({ ...row, inputSnapshot: null }));

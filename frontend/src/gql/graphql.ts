@@ -2410,7 +2410,7 @@ export type AgeModelSiteQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null } };
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, seed: number, settings: unknown, depthModel: DepthModel, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number } | null }> } };
 
 export type StartAgeModelRunMutationVariables = Exact<{
   input: StartAgeModelRunInput;
@@ -3082,6 +3082,22 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
       id
       status
       stale
+    }
+    ageModelRuns {
+      id
+      status
+      progress
+      seed
+      settings
+      depthModel
+      stale
+      createdAt
+      finishedAt
+      diagnostics {
+        converged
+        maxRhat
+        minEss
+      }
     }
   }
 }

@@ -1,4 +1,4 @@
-import { Callout, H2, HTMLTable, Intent, NonIdealState, Tag } from '@blueprintjs/core';
+import { Button, Callout, H2, HTMLTable, Intent, NonIdealState, ProgressBar, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState } from 'react';
@@ -8,6 +8,7 @@ import type { AgeModelRunQuery } from '@/gql/graphql';
 import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
 import { bracketingSamples, eventChartWindow, formatOffset, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, RUN_SETTINGS_FIELDS, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
+import { newestFirst, runsToShow } from '@/modules/age-model/utils/runHistory';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { fieldErrorsOf, formErrorOf } from '@/modules/api/utils/apiError';
@@ -19,6 +20,7 @@ import { LoadingState } from '@/modules/ui/components/LoadingState';
 import { CompactSiteLadder } from './CompactSiteLadder';
 import { EventPosteriorChart, type LikelihoodOutline } from './EventPosteriorChart';
 import { RunDiagnostics } from './RunDiagnostics';
+import { RunHistory } from './RunHistory';
 import { RunSettingsForm } from './RunSettingsForm';
 import { RunStatusPanel } from './RunStatusPanel';
 import '@/modules/correlation/components/charts.css';
@@ -33,23 +35,29 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
   const queryClient = useQueryClient();
   const siteQuery = useQuery(ageModelQueries.site(projectId, siteId));
   const [startedRunId, setStartedRunId] = useState<string | null>(null);
-  const runId = startedRunId ?? siteQuery.data?.latestAgeModelRun?.id ?? null;
-  const runQuery = useQuery({ ...ageModelQueries.run(projectId, runId ?? ''), enabled: runId !== null });
+  const [selectedRunId, setSelectedRunId] = useState<string | null>(null);
+  const history = useMemo(() => newestFirst(siteQuery.data?.ageModelRuns ?? []), [siteQuery.data]);
+  const { shownId, activeId } = runsToShow(history, selectedRunId, startedRunId);
+  const runQuery = useQuery({ ...ageModelQueries.run(projectId, shownId ?? ''), enabled: shownId !== null });
+  // The run in progress is polled on its own; the results above stay those of `shownId`.
+  const activeQuery = useQuery({ ...ageModelQueries.run(projectId, activeId ?? ''), enabled: activeId !== null && activeId !== shownId });
   const invalidates = [ageModelQueries.all(projectId)];
   const start = useGraphqlMutation(StartAgeModelRunDocument, { invalidates });
   const cancel = useGraphqlMutation(CancelAgeModelRunDocument, { invalidates });
 
-  // A run that has just finished changes every event's age in the project: refresh it all.
-  const run = runQuery.data;
-  const wasActive = useRef(false);
+  // A run that has just finished changes every event's age in the project: refresh it all
+  // (the history with it, which then shows the finished run's results).
+  // A run so quick that it had ended at its first poll counts too: the history still calls it active.
+  const activeRun = activeQuery.data;
+  const refreshedFor = useRef<string | null>(null);
   useEffect(() => {
-    if (!run) return;
-    const active = isRunActive(run.status);
-    if (wasActive.current && !active) void queryClient.invalidateQueries({ queryKey: projectQueries.detail(projectId) });
-    wasActive.current = active;
-  }, [run, projectId, queryClient]);
+    if (!activeRun || isRunActive(activeRun.status) || refreshedFor.current === activeRun.id) return;
+    refreshedFor.current = activeRun.id;
+    void queryClient.invalidateQueries({ queryKey: projectQueries.detail(projectId) });
+  }, [activeRun, projectId, queryClient]);
 
   const site = siteQuery.data;
+  const run = runQuery.data;
   const events = useMemo(() => {
     if (!site || !run) return [];
     const horizons = new Map(site.eventHorizons.map((horizon) => [horizon.id, horizon]));
@@ -75,17 +83,22 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
   }
   const loadedSite = siteQuery.data;
   const mayRun = allows(loadedSite.project, 'AGE_MODEL_RUN');
-  const busy = run ? isRunActive(run.status) : false;
+  const busy = activeId !== null || (run ? isRunActive(run.status) : false);
+  // Downstream screens read the site's newest successful run.
+  const downstreamId = history.find((entry) => entry.status === 'SUCCEEDED')?.id ?? null;
 
   const handleStart = (settings: RunSettingsInput) => {
     start.mutate(
       { input: { siteId, ...settings } },
-      { onSuccess: ({ startAgeModelRun }) => setStartedRunId(startAgeModelRun.id) },
+      {
+        onSuccess: ({ startAgeModelRun }) => {
+          setStartedRunId(startAgeModelRun.id);
+          setSelectedRunId(null);
+        },
+      },
     );
   };
-  const handleCancel = () => {
-    if (run) cancel.mutate({ id: run.id });
-  };
+  const handleCancel = (id: string) => cancel.mutate({ id });
 
   return (
     <div className="sc-age-model">
@@ -111,12 +124,24 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
         </section>
       )}
 
-      {runId === null ? (
-        <NonIdealState
-          icon={IconNames.TIMELINE_EVENTS}
-          title="No age model yet"
-          description={mayRun ? 'Start a run to model this column.' : 'A researcher or admin can start a run for this site.'}
+      {activeId !== null && activeId !== shownId && (
+        <RunInProgress
+          run={activeRun}
+          shownCreatedAt={run?.createdAt ?? null}
+          canCancel={mayRun}
+          cancelling={cancel.isPending}
+          onCancel={() => handleCancel(activeId)}
         />
+      )}
+
+      {shownId === null ? (
+        activeId === null && (
+          <NonIdealState
+            icon={IconNames.TIMELINE_EVENTS}
+            title="No age model yet"
+            description={mayRun ? 'Start a run to model this column.' : 'A researcher or admin can start a run for this site.'}
+          />
+        )
       ) : runQuery.isPending ? (
         <LoadingState label="Loading the run" />
       ) : runQuery.isError ? (
@@ -124,17 +149,50 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
           {runQuery.error.message}
         </Callout>
       ) : (
-        <RunResults
-          run={runQuery.data}
-          events={events}
-          canCancel={mayRun}
-          cancelling={cancel.isPending}
-          onCancel={handleCancel}
-        />
+        <>
+          {selectedRunId !== null && (
+            <Callout icon={IconNames.HISTORY} className="sc-run-in-progress" title={`An earlier run: queued ${new Date(runQuery.data.createdAt).toLocaleString()}`}>
+              {shownId === downstreamId ? 'The ladder, regional events and recurrence use this run.' : 'The ladder, regional events and recurrence use the newest successful run, not this one.'}{' '}
+              <Button size="small" variant="minimal" intent={Intent.PRIMARY} text="Show the newest results" onClick={() => setSelectedRunId(null)} />
+            </Callout>
+          )}
+          <RunResults run={runQuery.data} events={events} canCancel={mayRun} cancelling={cancel.isPending} onCancel={() => handleCancel(runQuery.data.id)} />
+        </>
       )}
 
       {run?.status === 'SUCCEEDED' && run.depthModel === 'HEMIPELAGIC_RATE' && <CoreSection projectId={projectId} siteId={siteId} ageDepth={run.ageDepth} />}
+
+      {history.length > 0 && <RunHistory runs={history} shownId={shownId} downstreamId={downstreamId} onShow={setSelectedRunId} />}
     </div>
+  );
+}
+
+type ActiveRun = AgeModelRunQuery['ageModelRun'] | undefined;
+
+type RunInProgressProps = {
+  run: ActiveRun;
+  /** When the run whose results are shown was queued; null when none is shown. */
+  shownCreatedAt: string | null;
+  canCancel: boolean;
+  cancelling: boolean;
+  onCancel: () => void;
+};
+
+/** The banner of a run that is queued or working, above the results of the last finished one. */
+function RunInProgress({ run, shownCreatedAt, canCancel, cancelling, onCancel }: RunInProgressProps) {
+  return (
+    <Callout intent={Intent.PRIMARY} icon={IconNames.REFRESH} title="A new run is in progress" className="sc-run-in-progress" role="status">
+      {run ? (
+        <RunStatusPanel status={run.status} progress={run.progress} message={run.message} seed={run.seed} stale={false} canCancel={canCancel} cancelling={cancelling} onCancel={onCancel} />
+      ) : (
+        <ProgressBar className="sc-run-progress" intent={Intent.PRIMARY} />
+      )}
+      <div>
+        {shownCreatedAt
+          ? `Until it finishes, the results below are those of the run queued ${new Date(shownCreatedAt).toLocaleString()}.`
+          : 'Its results appear here when it finishes.'}
+      </div>
+    </Callout>
   );
 }
 

@@ -68,7 +68,7 @@ export const AgeModelRunDocument = graphql(`
   }
 `);
 
-/** The site's column with every sample's calibrated likelihood, and the id of its latest run. */
+/** The site's column with every sample's calibrated likelihood, its latest run and its run history (newest 50). */
 export const AgeModelSiteDocument = graphql(`
   query AgeModelSite($id: ID!) {
     site(id: $id) {
@@ -131,6 +131,22 @@ export const AgeModelSiteDocument = graphql(`
         id
         status
         stale
+      }
+      ageModelRuns {
+        id
+        status
+        progress
+        seed
+        settings
+        depthModel
+        stale
+        createdAt
+        finishedAt
+        diagnostics {
+          converged
+          maxRhat
+          minEss
+        }
       }
     }
   }
