@@ -504,6 +504,7 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');
   await correlatorSeesOrderLoop(page, baseUrl, shot);
+  await correlatorAcceptsProposedTie(page, baseUrl, shot);
 }
 
 /** The correlator's API token and the demo project's id, for setting up what a screen then shows. */
@@ -767,3 +768,64 @@ const failed = await main().catch((error) => {
   return 1;
 });
 process.exit(failed > 0 ? 1 : 0);
+
+/**
+ * A susceptibility log for a demo core, every 2 cm: 20 in mud and, in the n-th bed from the top,
+ * a pulse whose place in the bed depends on n, so the same bed order gives matching signatures.
+ */
+function demoCoreLogCsv(units) {
+  const beds = units.filter((unit) => unit.facies === 'TURBIDITE').sort((a, b) => a.topDepthM - b.topDepthM);
+  const base = Math.max(...units.map((unit) => unit.baseDepthM));
+  const rows = ['depth (m),magnetic susceptibility (SI 1e-5)'];
+  for (let depth = 0; depth <= base; depth += 0.02) {
+    const index = beds.findIndex((bed) => depth >= bed.topDepthM && depth < bed.baseDepthM);
+    let value = 20;
+    if (index >= 0) {
+      const bed = beds[index];
+      const x = (depth - bed.topDepthM) / (bed.baseDepthM - bed.topDepthM);
+      value += 60 * Math.exp(-0.5 * ((x - (0.2 + 0.6 * ((index * 0.37) % 1))) / 0.15) ** 2);
+    }
+    rows.push(`${depth.toFixed(2)},${value.toFixed(2)}`);
+  }
+  return rows.join('\n');
+}
+
+/** Two demo cores get a log (as the researcher); the correlator sees proposed ties and accepts one. */
+async function correlatorAcceptsProposedTie(page, baseUrl, shot) {
+  const api = await correlatorApi(baseUrl);
+  const researcher = await graphql(baseUrl, 'mutation ($email: String!, $password: String!) { signIn(email: $email, password: $password) { token } }', {
+    email: 'researcher@demo.test',
+    password: PASSWORD,
+  });
+  const researcherToken = researcher.data?.signIn?.token;
+  const ladder = await api.call('query ($id: ID!) { eventLadder(projectId: $id) { columns { site { id name kind } events { eventHorizon { id } } } } }', { id: api.projectId });
+  const cores = (ladder.data?.eventLadder?.columns ?? []).filter((column) => column.site.kind === 'CORE' && column.events.length >= 2).slice(0, 2);
+  check(cores.length === 2, 'the demo ladder has no two cores with events');
+  for (const core of cores) {
+    const site = await graphql(baseUrl, 'query ($id: ID!) { site(id: $id) { units { topDepthM baseDepthM facies } } }', { id: core.site.id }, researcherToken);
+    const uploaded = await graphql(
+      baseUrl,
+      'mutation ($input: UploadCoreLogInput!) { uploadCoreLog(input: $input) { id } }',
+      { input: { siteId: core.site.id, name: `E2E MS ${Date.now()}`, csv: demoCoreLogCsv(site.data?.site?.units ?? []) } },
+      researcherToken,
+    );
+    check(uploaded.data?.uploadCoreLog?.id, `the researcher could not upload a log to ${core.site.name}: ${JSON.stringify(uploaded.errors)}`);
+  }
+  const name = `E2E proposals ${Date.now()}`;
+  await api.call('mutation ($input: CreateHypothesisInput!) { createHypothesis(input: $input) { id } }', { input: { projectId: api.projectId, name } });
+  await page.reload();
+  await page.getByLabel('Hypothesis', { exact: true }).selectOption({ label: name });
+  await page.getByRole('tab', { name: 'Proposals' }).click();
+  await page.getByLabel('First core').selectOption({ label: cores[0].site.name });
+  await page.getByLabel('Second core').selectOption({ label: cores[1].site.name });
+  const accept = page.getByRole('button', { name: /^Accept the tie / });
+  const proposed = await waitForCount(accept, (count) => count >= 1, 'proposed ties between the two cores');
+  const drawn = await page.locator('[data-overlay="tie-suggestions"] line').count();
+  check(drawn === proposed, `${proposed} proposals listed but ${drawn} drawn on the ladder`);
+  await shot('tie-proposals');
+  await accept.first().click();
+  await page.waitForFunction(() => [...document.querySelectorAll('[role="tab"]')].some((tab) => tab.textContent?.includes('Ties (1)')), null, { timeout: STEP_TIMEOUT_MS });
+  await page.getByRole('tab', { name: /Ties/ }).click();
+  await page.getByRole('cell', { name: 'log match' }).first().waitFor();
+  log(`ladder: ${proposed} proposed ties between ${cores[0].site.name} and ${cores[1].site.name}; one accepted as a "log match" tie`);
+}

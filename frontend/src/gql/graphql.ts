@@ -2581,6 +2581,13 @@ export type HypothesisSizeProfilesQueryVariables = Exact<{
 
 export type HypothesisSizeProfilesQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, sizeProfile: Array<{ __typename?: 'SizeEvidencePoint', alongStrikeKm?: number | null, subsidenceM?: number | null, subsidenceErrorM?: number | null, displacementM?: number | null, displacementErrorM?: number | null, bedThicknessM?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, site: { __typename?: 'Site', id: string, name: string } }> }> } };
 
+export type TieSuggestionsQueryVariables = Exact<{
+  input: TieSuggestionsInput;
+}>;
+
+
+export type TieSuggestionsQuery = { __typename?: 'Query', tieSuggestions: Array<{ __typename?: 'TieSuggestion', score: number, tied: boolean, channels: Array<string>, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }> };
+
 export type ImportSamplesMutationVariables = Exact<{
   input: ImportSamplesInput;
 }>;
@@ -3664,6 +3671,23 @@ export const HypothesisSizeProfilesDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<HypothesisSizeProfilesQuery, HypothesisSizeProfilesQueryVariables>;
+export const TieSuggestionsDocument = new TypedDocumentString(`
+    query TieSuggestions($input: TieSuggestionsInput!) {
+  tieSuggestions(input: $input) {
+    eventA {
+      id
+      name
+    }
+    eventB {
+      id
+      name
+    }
+    score
+    tied
+    channels
+  }
+}
+    `) as unknown as TypedDocumentString<TieSuggestionsQuery, TieSuggestionsQueryVariables>;
 export const ImportSamplesDocument = new TypedDocumentString(`
     mutation ImportSamples($input: ImportSamplesInput!) {
   importSamples(input: $input) {

@@ -17,6 +17,9 @@ import { SpaceTimeChart } from '@/modules/correlation/components/SpaceTimeChart'
 import { SizeProfileChart } from '@/modules/correlation/components/SizeProfileChart';
 import { TieDialog, type TieValues } from '@/modules/correlation/components/TieDialog';
 import { TiesList } from '@/modules/correlation/components/TiesList';
+import { TieSuggestionsOverlay } from '@/modules/correlation/components/TieSuggestionsOverlay';
+import { TieSuggestionsPanel } from '@/modules/correlation/components/TieSuggestionsPanel';
+import { useTieSuggestions } from '@/modules/correlation/hooks/useTieSuggestions';
 import { AddTieDocument, CreateHypothesisDocument, RemoveTieDocument, SetPreferredHypothesisDocument } from '@/modules/correlation/graphql/ladder';
 import { ladderQueries } from '@/modules/correlation/hooks/ladderQueries';
 import { conflictingTieIds, eventAnchors } from '@/modules/correlation/utils/ladderData';
@@ -59,6 +62,7 @@ export function LadderView({ projectId }: LadderViewProps) {
   const secondId = comparing ? (compareHypothesisId ?? hypotheses.find((entry) => entry.id !== hypothesisId)?.id ?? null) : null;
 
   const hypothesisQuery = useQuery({ ...ladderQueries.hypothesis(projectId, hypothesisId ?? ''), enabled: hypothesisId !== null });
+  const suggestions = useTieSuggestions(projectId, hypothesisId);
   const secondQuery = useQuery({ ...ladderQueries.hypothesis(projectId, secondId ?? ''), enabled: secondId !== null });
 
   const invalidates = [ladderQueries.all(projectId)];
@@ -140,6 +144,7 @@ export function LadderView({ projectId }: LadderViewProps) {
         overlay={(geometry) => (
           <>
             <OrderLoopsOverlay geometry={geometry} loops={shown?.orderConflicts ?? []} selectedKey={shown === hypothesis ? selectedLoopKey : null} />
+            {canEdit && shown === hypothesis && <TieSuggestionsOverlay geometry={geometry} suggestions={suggestions.suggestions} />}
           </>
         )}
       />
@@ -257,6 +262,19 @@ export function LadderView({ projectId }: LadderViewProps) {
                     />
                   }
                 />
+                {canEdit && (
+                  <Tab
+                    id="suggestions"
+                    title="Proposals"
+                    panel={
+                      <TieSuggestionsPanel
+                        cores={columns.filter((column) => column.site.kind === 'CORE').map((column) => column.site)}
+                        state={suggestions}
+                        eventLabels={eventNames}
+                      />
+                    }
+                  />
+                )}
               </Tabs>
             ) : (
               <p>Choose or create a hypothesis to see its regional events.</p>

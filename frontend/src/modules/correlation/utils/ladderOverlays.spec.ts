@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { EventAnchor } from './ladderLayout';
-import { orderLoopKey, orderLoopMarks } from './ladderOverlays';
+import { orderLoopKey, orderLoopMarks, suggestionKey, suggestionMarks } from './ladderOverlays';
 
 // Three columns at 100, 200 and 300 px; 0-2000 cal BP over 400 px, so 5 years a pixel.
 const columnX = (id: string) => ({ A: 100, B: 200, C: 300 })[id];
@@ -68,5 +68,29 @@ describe(orderLoopMarks.name, () => {
 describe(orderLoopKey.name, () => {
   it('joins the regional events in loop order', () => {
     expect(orderLoopKey({ regionalEventIds: ['a', 'b'] })).toBe('a>b');
+  });
+});
+
+describe(suggestionMarks.name, () => {
+  const anchors = new Map<string, EventAnchor>([anchor('a1', 'A', 600), anchor('a2', 'A', 1500), anchor('c1', 'C', 900), anchor('c2', 'C', 1200), anchor('c3', 'C', null)]);
+  const suggestion = (a: string, b: string, score: number, tied = false) => ({ eventA: { id: a }, eventB: { id: b }, score, tied });
+
+  it('joins the untied proposals left to right and writes the score a third or two thirds along', () => {
+    const marks = suggestionMarks([suggestion('c1', 'a1', 0.8134), suggestion('a1', 'c1', 0.9, true), suggestion('a2', 'c2', 0.5)], anchors, columnX, time);
+    // a1 at (100, 120) and c1 at (300, 180): a third along is (166.67, 140).
+    expect(marks[0]).toMatchObject({ key: 'c1+a1', score: 0.8134, x1: 100, y1: 120, x2: 300, y2: 180 });
+    expect(marks[0]!.label.x).toBeCloseTo(166.667, 3);
+    expect(marks[0]!.label.y).toBeCloseTo(140, 9);
+    expect(marks[0]!.label.text).toBe('0.81');
+    // The tied pair is skipped; a2 (100, 300) to c2 (300, 240), two thirds along: (233.33, 260).
+    expect(marks).toHaveLength(2);
+    expect(marks[1]!.label.x).toBeCloseTo(233.333, 3);
+    expect(marks[1]!.label.y).toBeCloseTo(260, 9);
+    expect(marks[1]!.label.text).toBe('0.50');
+  });
+
+  it('skips proposals whose events have no median or are off the ladder', () => {
+    expect(suggestionMarks([suggestion('a1', 'c3', 0.7), suggestion('a1', 'zz', 0.7)], anchors, columnX, time)).toEqual([]);
+    expect(suggestionKey(suggestion('x', 'y', 1))).toBe('x+y');
   });
 });

@@ -92,3 +92,47 @@ export function orderLoopMarks(
     return { key: orderLoopKey(loop), number: index + 1, ties, steps, label };
   });
 }
+
+/** A proposed tie as the API sends it. */
+export type TieSuggestionLike = { eventA: { id: string }; eventB: { id: string }; score: number; tied: boolean };
+
+/** A proposed tie placed on the ladder: a segment between medians and its score's label. */
+export type SuggestionMark = OverlaySegment & { key: string; score: number; label: { x: number; y: number; text: string } };
+
+/** The key of a proposed tie: its two events. */
+export function suggestionKey(suggestion: Pick<TieSuggestionLike, 'eventA' | 'eventB'>): string {
+  return `${suggestion.eventA.id}+${suggestion.eventB.id}`;
+}
+
+/**
+ * The proposals not yet tied, each as a segment between its two events' medians on their column
+ * axes (left event first). The score is written on the segment, a third of the way along it for
+ * the 1st, 3rd, ... proposal and two thirds for the 2nd, 4th, ..., so labels of neighbouring
+ * proposals between the same two columns do not sit on one another.
+ */
+export function suggestionMarks(
+  suggestions: readonly TieSuggestionLike[],
+  anchors: ReadonlyMap<string, EventAnchor>,
+  columnX: (columnId: string) => number | undefined,
+  time: (calBp: number) => number,
+): SuggestionMark[] {
+  const marks: SuggestionMark[] = [];
+  for (const suggestion of suggestions) {
+    if (suggestion.tied) continue;
+    const a = anchorPoint(suggestion.eventA.id, anchors, columnX, time);
+    const b = anchorPoint(suggestion.eventB.id, anchors, columnX, time);
+    if (!a || !b) continue;
+    const [left, right] = a.x <= b.x ? [a, b] : [b, a];
+    const along = marks.length % 2 === 0 ? 1 / 3 : 2 / 3;
+    marks.push({
+      key: suggestionKey(suggestion),
+      score: suggestion.score,
+      x1: left.x,
+      y1: left.y,
+      x2: right.x,
+      y2: right.y,
+      label: { x: left.x + (right.x - left.x) * along, y: left.y + (right.y - left.y) * along, text: suggestion.score.toFixed(2) },
+    });
+  }
+  return marks;
+}
