@@ -263,6 +263,16 @@ describe('starting and reading a joint run', () => {
     const joint = (await clients.VIEWER.ok(ANALYSIS, { id: startRecurrenceAnalysis.id })).recurrenceAnalysis;
     expect(joint).toMatchObject({ status: 'SUCCEEDED', source: 'JOINT_RUN', eventCount: 3, draws: 100, inputs: { jointRun: { id: runId }, ageModelRuns: [] } });
 
+    // The analysis' event table gives the ages it drew from: the joint run's (the double's ages), young to old.
+    const download = async (path: string) =>
+      (await fetch(`${server.url}${path}`, { headers: { authorization: `Bearer ${clients.VIEWER.token}` } })).json();
+    const events = await download(`/api/recurrence-analyses/${startRecurrenceAnalysis.id}/events.json`);
+    expect(events.inputs).toContainEqual({ field: 'ages drawn from', value: expect.stringContaining('joint age model run') });
+    expect(events.rows.map((row: { medianCalBp: number }) => Math.round(row.medianCalBp / 100) * 100)).toEqual([1600, 2300, 3000]);
+    const regional = await download(`/api/hypotheses/${hypothesisId}/regional-events.json`);
+    for (const row of regional.rows) expect(row.ageShown).toBe('joint run');
+    expect(regional.rows.map((row: { jointMedianCalBp: number }) => Math.round(row.jointMedianCalBp / 100) * 100)).toEqual([1600, 2300, 3000]);
+
     const site = await clients.ANALYST.ok(START_ANALYSIS, { i: { siteId: siteIdOf('A'), draws: 100, seed: 5, forecastStartYear: 2030 } });
     expect((await clients.VIEWER.ok(ANALYSIS, { id: site.startRecurrenceAnalysis.id })).recurrenceAnalysis.source).toBe('SITE_RUN');
   });

@@ -8,6 +8,9 @@ import { summarise } from '../chronology/common/density';
 import { conflict, notFound } from '../common/errors/domain-error';
 import { checkProjectHypothesis } from '../correlation/correlation-adapter';
 import { CorrelationDataService, projectEvents } from '../correlation/correlation-data.service';
+import { FreshJointRunsService } from '../correlation/joint-runs/fresh-joint-runs.service';
+import type { StoredJointResults } from '../correlation/joint-runs/joint-run-storage';
+import { JointRunsRepository } from '../correlation/joint-runs/joint-runs.repository';
 import { ReleasesService } from '../releases/releases.service';
 import { RECURRENCE_CAUTION } from '../recurrence/recurrence-caution';
 import { RecurrenceService, type RecurrenceInputSnapshot } from '../recurrence/recurrence.service';
@@ -15,7 +18,7 @@ import { SitesService } from '../sites/sites.service';
 import { ProvenanceRepository } from './provenance.repository';
 import { ProvenanceService } from './provenance.service';
 import { type BundleFigure, eventAgeFigureSvg, figureEventsOf } from './result-figures';
-import { AGE_COLUMNS, ageCells, type ResultTable, type TableInput, tableCsv, tableJson } from './result-tables';
+import { AGE_COLUMNS, ageCells, rangesCalBp, type ResultTable, type TableInput, tableCsv, tableJson } from './result-tables';
 import { resultKey } from './staleness';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -32,6 +35,8 @@ export class ResultTablesService {
     private readonly correlationData: CorrelationDataService,
     private readonly recurrence: RecurrenceService,
     private readonly releases: ReleasesService,
+    private readonly freshJointRuns: FreshJointRunsService,
+    private readonly jointRuns: JointRunsRepository,
   ) {}
 
   /** A site run's event ages, oldest first (CONFLICT while the run has no results). */
@@ -104,6 +109,9 @@ export class ResultTablesService {
     const runsUsed = [...data.runsBySite.entries()].filter(([siteId]) => check.regionalEvents.some((r) => r.siteIds.includes(siteId)));
     const staleness = await this.provenance.staleness(runsUsed.map(([, run]) => ({ kind: 'ageModelRun' as const, id: run.row.id })));
     const siteName = new Map(data.sites.map((s) => [s.id, s.name]));
+    // The hypothesis' fresh joint run (succeeded, nothing changed since): its ages beside the independent ones.
+    const joint = await this.freshJointRuns.forHypothesis(hypothesis.id);
+    const jointOf = new Map((joint?.results.regionalEvents ?? []).map((r) => [r.regionalEventId, r.summary]));
     const inputs: TableInput[] = [
       { field: 'hypothesis', value: hypothesis.name },
       { field: 'hypothesis id', value: hypothesis.id },
@@ -115,6 +123,7 @@ export class ResultTablesService {
         value: `${run.row.id} (seed ${run.row.seed}${(staleness.get(resultKey('ageModelRun', run.row.id)) ?? []).length > 0 ? ', stale' : ''})`,
       })),
       { field: 'order conflicts', value: check.orderConflicts.length },
+      { field: 'joint age model run', value: joint ? `${joint.run.id} (seed ${joint.run.seed}, hypothesis version ${joint.run.hypothesisVersion})` : 'none up to date: only the independent ages' },
     ];
     return {
       table: 'regional events',
@@ -124,6 +133,9 @@ export class ResultTablesService {
         { key: 'members', title: 'members (site: event)' },
         { key: 'siteCount', title: 'sites' },
         ...AGE_COLUMNS,
+        { key: 'jointMedianCalBp', title: 'joint run median (cal BP)' },
+        { key: 'jointHpd95CalBp', title: 'joint run 95.4 % (cal BP)' },
+        { key: 'ageShown', title: 'age shown' },
         { key: 'concordance', title: 'age concordance' },
         { key: 'chiSquareT', title: 'chi-square T' },
         { key: 'chiSquareDf', title: 'chi-square df' },
@@ -141,6 +153,9 @@ export class ResultTablesService {
         members: r.memberIds.map((id) => `${events.get(id)?.site.name}: ${events.get(id)?.eventHorizon.name}`).join('; '),
         siteCount: r.siteIds.length,
         ...ageCells(r.combined),
+        jointMedianCalBp: jointOf.get(r.id)?.medianCalBp ?? null,
+        jointHpd95CalBp: jointOf.has(r.id) ? rangesCalBp(jointOf.get(r.id)!.hpd95) : null,
+        ageShown: jointOf.has(r.id) ? 'joint run' : 'independent (product of member posteriors)',
         concordance: r.concordance,
         chiSquareT: r.chiSquare?.t ?? null,
         chiSquareDf: r.chiSquare?.df ?? null,
@@ -184,6 +199,10 @@ export class ResultTablesService {
     ];
     if (snapshot.kind === 'segment') {
       const names = await this.memberNames(snapshot.regionalEvents.flatMap((e) => e.memberIds));
+      // A JOINT_RUN analysis drew its ages from the joint run: its regional posteriors are the ages it used.
+      const jointRun = snapshot.jointRunId ? await this.jointRuns.findRun(snapshot.jointRunId) : undefined;
+      const jointOf = new Map(((jointRun?.results as StoredJointResults | null)?.regionalEvents ?? []).map((r) => [r.regionalEventId, r.summary]));
+      inputs.push({ field: 'ages drawn from', value: snapshot.jointRunId ? 'the joint age model run (each draw one joint draw of the regional events)' : "each regional event's combined density (product of member posteriors)" });
       return {
         table: 'analysis events',
         caution: RECURRENCE_CAUTION,
@@ -192,7 +211,7 @@ export class ResultTablesService {
         rows: snapshot.regionalEvents.map((e, i) => ({
           number: i + 1,
           members: e.memberIds.map((id) => names.get(id) ?? 'a deleted event').join('; '),
-          ...ageCells(summarise(loadDensity(e.density as StoredDensity))),
+          ...ageCells(jointOf.get(e.id) ?? summarise(loadDensity(e.density as StoredDensity))),
           memberIds: e.memberIds.join(' '),
           inclusionProbability: e.inclusionProbability ?? 1,
         })),
