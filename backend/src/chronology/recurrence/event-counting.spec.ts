@@ -139,6 +139,18 @@ describe('inclusion probabilities in the Monte Carlo', () => {
     expect(summary.eventMedianAgesCalBp).toHaveLength(5);
   });
 
+  it('draws a record again while it holds fewer than three events [analytic: three events at 0.5 are always all kept]', () => {
+    const three = draws.slice(0, 50).map((draw) => draw.slice(2));
+    const weighted = summariseRecurrence(three, { ...options, models: ['POISSON'], inclusionProbabilities: [0.5, 0.5, 0.5] });
+    const plain = summariseRecurrence(three, { ...options, models: ['POISSON'] });
+    expect(weighted.recordEvents).toEqual({ median: 3, low95: 3, high95: 3 });
+    expect(weighted.meanRecurrence).toEqual(plain.meanRecurrence);
+    // Two certain events and three at 0.5: every kept set holds 3 to 5 events.
+    const summary = summariseRecurrence(draws.slice(0, 200), { ...options, models: ['POISSON'], inclusionProbabilities: [1, 0.5, 0.5, 0.5, 1] });
+    expect(summary.recordEvents.low95).toBe(3);
+    expect(summary.recordEvents.high95).toBe(5);
+  });
+
   it('refuses probabilities outside (0, 1] or of the wrong count', () => {
     expect(() => summariseRecurrence(draws.slice(0, 10), { ...options, inclusionProbabilities: [1, 1, 0, 1, 1] })).toThrow(RecurrenceInputError);
     expect(() => summariseRecurrence(draws.slice(0, 10), { ...options, inclusionProbabilities: [1, 1, 1] })).toThrow(RecurrenceInputError);
