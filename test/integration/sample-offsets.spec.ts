@@ -120,3 +120,44 @@ describe('SamplePosterior.offset', () => {
     }
   });
 });
+
+describe('AgeModelRun.reservoirOffsets', () => {
+  const RESERVOIRS = `query($id: ID!) { ageModelRun(id: $id) { status
+    reservoirOffsets { source named priorMeanYears priorSdYears medianYears low95Years high95Years samples { labCode } } } }`;
+
+  it('shares one offset among the marine samples naming one source and reports its posterior', async () => {
+    const researcher = clients.RESEARCHER;
+    const marineSite = (await researcher.ok(CREATE_SITE, {
+      i: { projectId: fixture.projectId, name: 'Invented lagoon', kind: 'MARSH', latitude: 40, longitude: -124, alongStrikeKm: 20 },
+    })).createSite.id;
+    const lower = (await researcher.ok(CREATE_UNIT, { i: { siteId: marineSite, position: 1, name: 'Shell bed', topDepthM: 1, baseDepthM: 2, facies: 'TIDAL_MUD' } })).createUnit;
+    const upper = (await researcher.ok(CREATE_UNIT, { i: { siteId: marineSite, position: 2, name: 'Sand', topDepthM: 0, baseDepthM: 1, facies: 'SAND_SHEET' } })).createUnit;
+    await researcher.ok(CREATE_HORIZON, { i: { siteId: marineSite, name: 'L1', unitBelowId: lower.id, unitAboveId: upper.id, quality: 1 } });
+    const shell = (labCode: string, unitId: string, c14Age: number, extra: Record<string, unknown> = {}) => ({
+      siteId: marineSite, unitId, labCode, method: 'RADIOCARBON', material: 'SHELL', ageRelation: 'DATES_DEPOSIT', c14Age, c14Error: 25,
+      curve: 'MARINE20', deltaR: 120, deltaRError: 50, deltaRSource: 'Invented bay', ...extra,
+    });
+    await researcher.ok(CREATE_SAMPLE, { i: shell('SH-A', lower.id, 2400) });
+    await researcher.ok(CREATE_SAMPLE, { i: shell('SH-B', lower.id, 2420) });
+    const odd = (await researcher.ok(CREATE_SAMPLE, { i: shell('SH-C', upper.id, 2100, { deltaR: 90 }) })).createSample;
+    // One source, two Delta-R values: refused on deltaRSource, naming both samples.
+    const refused = await researcher.errorOf(START, { i: { siteId: marineSite, seed: 1, iterations: 2000 } });
+    expect(refused.code).toBe('BAD_USER_INPUT');
+    expect(refused.field).toBe('deltaRSource');
+    expect(refused.message).toMatch(/SH-C/);
+    await researcher.ok(UPDATE_SAMPLE, { id: odd.id, v: odd.version, i: { deltaR: 120 } });
+
+    const { startAgeModelRun } = await researcher.ok(START, { i: { siteId: marineSite, seed: 4, iterations: 4000 } });
+    await server.app.get(RunExecutor).execute(server.app.get(AgeModelJob), startAgeModelRun.id);
+    const run = (await clients.VIEWER.ok(RESERVOIRS, { id: startAgeModelRun.id })).ageModelRun;
+    expect(run.status).toBe('SUCCEEDED');
+    expect(run.reservoirOffsets).toHaveLength(1);
+    const [offset] = run.reservoirOffsets;
+    expect(offset).toMatchObject({ source: 'Invented bay', named: true, priorMeanYears: 120, priorSdYears: 50 });
+    expect(offset.samples.map((s: { labCode: string }) => s.labCode).sort()).toEqual(['SH-A', 'SH-B', 'SH-C']);
+    // Three dates cannot learn a local offset against nothing else: the posterior stays near the prior.
+    expect(offset.low95Years).toBeLessThan(offset.medianYears);
+    expect(offset.high95Years).toBeGreaterThan(offset.medianYears);
+    expect(Math.abs(offset.medianYears - 120)).toBeLessThan(60);
+  });
+});

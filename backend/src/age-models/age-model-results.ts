@@ -6,6 +6,7 @@ import { AgeModelResult } from '../chronology/age-model/age-model';
 import { AgeModelInput } from '../chronology/age-model/column';
 import { AgeDepthPoint, HemipelagicSummary } from '../chronology/age-model/hemipelagic/hemipelagic-model';
 import { CalendarDensity, DensitySummary, normalise, trim } from '../chronology/common/density';
+import { ReservoirOffsetPosterior, ReservoirSource } from '../chronology/age-model/reservoir-offsets';
 
 export interface StoredDensity {
   startCalBp: number;
@@ -15,8 +16,12 @@ export interface StoredDensity {
 export interface StoredAgeModelInput {
   units: AgeModelInput['units'];
   eventHorizons: AgeModelInput['eventHorizons'];
-  samples: (Omit<AgeModelInput['samples'][number], 'likelihood'> & { likelihood: StoredDensity })[];
+  samples: (Omit<AgeModelInput['samples'][number], 'likelihood' | 'reservoir'> & {
+    likelihood: StoredDensity;
+    reservoir?: { sourceKey: string; gridLikelihoods: StoredDensity[] };
+  })[];
   orderSamplesByDepth: boolean;
+  reservoirSources?: ReservoirSource[];
 }
 
 export interface StoredEventPosterior {
@@ -43,6 +48,8 @@ export interface StoredAgeModelResults {
   /** HEMIPELAGIC_RATE runs only. */
   ageDepth?: AgeDepthPoint[];
   hemipelagic?: HemipelagicSummary;
+  /** Runs with marine samples sharing a Delta-R source. */
+  reservoirOffsets?: ReservoirOffsetPosterior[];
 }
 
 /** A density trimmed of its negligible tails (below 1e-6 of the mass per year) and renormalised to unit mass. */
@@ -59,13 +66,25 @@ export function storeInput(input: AgeModelInput): StoredAgeModelInput {
   return {
     units: input.units,
     eventHorizons: input.eventHorizons,
-    samples: input.samples.map((s) => ({ ...s, likelihood: { startCalBp: s.likelihood.startCalBp, probabilities: Array.from(s.likelihood.probabilities) } })),
+    samples: input.samples.map(({ reservoir, ...s }) => ({
+      ...s,
+      likelihood: { startCalBp: s.likelihood.startCalBp, probabilities: Array.from(s.likelihood.probabilities) },
+      ...(reservoir ? { reservoir: { sourceKey: reservoir.sourceKey, gridLikelihoods: reservoir.gridLikelihoods.map((d) => storeDensity(d)) } } : {}),
+    })),
     orderSamplesByDepth: input.orderSamplesByDepth ?? false,
+    ...(input.reservoirSources && input.reservoirSources.length > 0 ? { reservoirSources: [...input.reservoirSources] } : {}),
   };
 }
 
 export function loadInput(stored: StoredAgeModelInput): AgeModelInput {
-  return { ...stored, samples: stored.samples.map((s) => ({ ...s, likelihood: loadDensity(s.likelihood) })) };
+  return {
+    ...stored,
+    samples: stored.samples.map(({ reservoir, ...s }) => ({
+      ...s,
+      likelihood: loadDensity(s.likelihood),
+      ...(reservoir ? { reservoir: { sourceKey: reservoir.sourceKey, gridLikelihoods: reservoir.gridLikelihoods.map(loadDensity) } } : {}),
+    })),
+  };
 }
 
 export function storeResults(result: AgeModelResult & { ageDepth?: AgeDepthPoint[]; hemipelagic?: HemipelagicSummary }): StoredAgeModelResults {
@@ -79,6 +98,7 @@ export function storeResults(result: AgeModelResult & { ageDepth?: AgeDepthPoint
         }
       : {}),
     ...(result.hemipelagic ? { hemipelagic: result.hemipelagic } : {}),
+    ...(result.reservoirOffsets ? { reservoirOffsets: result.reservoirOffsets.map((r) => ({ ...r, sampleIds: [...r.sampleIds] })) } : {}),
     events: result.events.map((e) => ({
       eventHorizonId: e.eventHorizonId,
       summary: e.summary,

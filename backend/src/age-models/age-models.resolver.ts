@@ -71,6 +71,23 @@ export class AgeModelsResolver {
     return (run.results as StoredAgeModelResults | null)?.ageDepth ?? [];
   }
 
+  @ResolveField('reservoirOffsets')
+  async reservoirOffsets(@Parent() run: AgeModelRunRow) {
+    const offsets = (run.results as StoredAgeModelResults | null)?.reservoirOffsets ?? [];
+    if (offsets.length === 0) return [];
+    const rows = new Map((await this.samples.listForSite(run.siteId)).map((s) => [s.id, s]));
+    return offsets.map((o) => ({
+      source: o.label,
+      named: o.named,
+      priorMeanYears: o.priorMeanYears,
+      priorSdYears: o.priorSdYears,
+      medianYears: o.medianYears,
+      low95Years: o.low95Years,
+      high95Years: o.high95Years,
+      samples: o.sampleIds.filter((id) => rows.has(id)).map((id) => rows.get(id) as SampleRow),
+    }));
+  }
+
   @ResolveField('samples')
   async samplesOf(@Parent() run: AgeModelRunRow) {
     const results = run.results as StoredAgeModelResults | null;

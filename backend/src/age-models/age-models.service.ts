@@ -13,7 +13,8 @@ import { DatabaseService } from '../database/database.service';
 import { EventHorizonsRepository } from '../event-horizons/event-horizons.repository';
 import { JobQueueService } from '../jobs/job-queue.service';
 import { DEFAULT_INHERITANCE_SCALE_YEARS } from '../samples/sample-rules';
-import { SamplesRepository } from '../samples/samples.repository';
+import { SampleRow, SamplesRepository } from '../samples/samples.repository';
+import { ReservoirSource, reservoirSources } from '../chronology/age-model/reservoir-offsets';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
@@ -138,6 +139,14 @@ export class AgeModelsService {
       this.runs.columnFingerprints([site.id]),
     ]);
     const fingerprint = fingerprints.get(site.id)!;
+    const marineCurves = new Set((await this.calibration.listCurves()).filter((c) => c.marine).map((c) => c.code));
+    const isMarineCurveCode = (code: string) => marineCurves.has(code);
+    const grouping = reservoirSources(
+      samples
+        .filter((s) => s.calibration && !s.excluded && s.method === 'RADIOCARBON' && s.curve !== null && isMarineCurveCode(s.curve) && s.deltaR !== null)
+        .map((s) => ({ id: s.id, name: s.labCode, deltaR: s.deltaR!, deltaRError: s.deltaRError ?? 0, source: s.deltaRSource ?? null })),
+    );
+    if (grouping.problems.length > 0) throw badInput('deltaRSource', grouping.problems.join('; '), { problems: grouping.problems });
     const model: AgeModelInput = {
       units: units.map((u) => ({
         id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM, facies: u.facies, basalErosionM: u.basalErosionM,
@@ -147,6 +156,7 @@ export class AgeModelsService {
         samples
           .filter((s) => s.calibration)
           .map(async (s) => ({
+            ...(await this.reservoirOf(s, grouping.keyOf, grouping.sources)),
             id: s.id,
             name: s.labCode,
             unitId: s.unitId,
@@ -158,7 +168,20 @@ export class AgeModelsService {
           })),
       ),
       orderSamplesByDepth: site.kind === 'CORE',
+      ...(grouping.sources.length > 0 ? { reservoirSources: grouping.sources } : {}),
     };
     return { model, fingerprint };
+  }
+
+  /**
+   * A marine sample's part in its source's shared offset: its calibration at each Delta-R of the
+   * source's grid, with no Delta-R error (the offset carries it).
+   */
+  private async reservoirOf(sample: SampleRow, keyOf: Map<string, string>, sources: readonly ReservoirSource[]) {
+    const key = keyOf.get(sample.id);
+    const source = key === undefined ? undefined : sources.find((s) => s.key === key);
+    if (!source || sample.excluded) return {};
+    const grid = await this.calibration.reservoirGridOfSample(sample, source.grid);
+    return { reservoir: { sourceKey: source.key, gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => g.logMass) } };
   }
 }

@@ -68,6 +68,18 @@ export class CalibrationService {
     return asUserInput(() => calibrationForSample(dating, lookup)).density;
   }
 
+  /**
+   * A marine sample calibrated at each Delta-R of a grid with no Delta-R error: each density
+   * (normalised) with the log of its likelihood's mass, for a shared reservoir offset.
+   */
+  async reservoirGridOfSample(dating: SampleDating, deltaRs: readonly number[]): Promise<{ density: CalendarDensity; logMass: number }[]> {
+    const lookup = await this.registry.lookup();
+    return deltaRs.map((deltaR) => {
+      const result = asUserInput(() => calibrationForSample({ ...dating, deltaR, deltaRError: 0 }, lookup));
+      return { density: result.density, logMass: Math.log(result.likelihoodMass ?? 1) };
+    });
+  }
+
   /** A stored sample's calibration as the API shows it: the stored summaries plus the recomputed density. */
   async viewOfSample(stored: StoredCalibration, dating: SampleDating): Promise<CalibrationView> {
     return { ...stored, density: densityPoints(await this.densityOfSample(dating)) };

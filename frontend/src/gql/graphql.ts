@@ -75,6 +75,12 @@ export type AgeModelRun = {
   id: Scalars['ID']['output'];
   message?: Maybe<Scalars['String']['output']>;
   progress: Scalars['Float']['output'];
+  /**
+   * One shared reservoir offset per Delta-R source of the site's marine samples (samples naming one
+   * deltaRSource, or naming none with identical deltaR and deltaRError): drawn once per state of the
+   * chain for all its samples. Empty when no marine sample has a Delta-R error.
+   */
+  reservoirOffsets: Array<ReservoirOffsetPosterior>;
   samples: Array<SamplePosterior>;
   seed: Scalars['Int']['output'];
   settings: Scalars['JSON']['output'];
@@ -1867,6 +1873,24 @@ export type RenewalProbabilityInput = {
   windowYears: Scalars['Float']['input'];
 };
 
+/** The posterior of one Delta-R source's local offset, 14C years. */
+export type ReservoirOffsetPosterior = {
+  __typename?: 'ReservoirOffsetPosterior';
+  high95Years: Scalars['Float']['output'];
+  /** Central 95 % range (2.5 % and 97.5 % quantiles). */
+  low95Years: Scalars['Float']['output'];
+  medianYears: Scalars['Float']['output'];
+  /** True when the samples name the source (Sample.deltaRSource). */
+  named: Scalars['Boolean']['output'];
+  /** The prior: the entry's Delta-R and its 1-sigma error. */
+  priorMeanYears: Scalars['Float']['output'];
+  priorSdYears: Scalars['Float']['output'];
+  /** The samples that share the offset. */
+  samples: Array<Sample>;
+  /** The source's name, or its Delta-R and error when the samples name none. */
+  source: Scalars['String']['output'];
+};
+
 export type ResetPasswordInput = {
   password: Scalars['String']['input'];
   token: Scalars['String']['input'];
@@ -2403,7 +2427,7 @@ export type AgeModelRunQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, offset?: { __typename?: 'SampleOffsetPosterior', scaleYears: number, medianYears: number, low95Years: number, high95Years: number } | null }> } };
+export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, offset?: { __typename?: 'SampleOffsetPosterior', scaleYears: number, medianYears: number, low95Years: number, high95Years: number } | null }>, reservoirOffsets: Array<{ __typename?: 'ReservoirOffsetPosterior', source: string, named: boolean, priorMeanYears: number, priorSdYears: number, medianYears: number, low95Years: number, high95Years: number, samples: Array<{ __typename?: 'Sample', id: string, labCode: string }> }> } };
 
 export type AgeModelSiteQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -3018,6 +3042,19 @@ export const AgeModelRunDocument = new TypedDocumentString(`
         medianYears
         low95Years
         high95Years
+      }
+    }
+    reservoirOffsets {
+      source
+      named
+      priorMeanYears
+      priorSdYears
+      medianYears
+      low95Years
+      high95Years
+      samples {
+        id
+        labCode
       }
     }
   }

@@ -20,6 +20,7 @@ import { AgeModelInput, AgeRelation, buildOrderGraph, ColumnSample, OrderGraph }
 import { chainDiagnostics } from './convergence';
 import { CalendarWindow, depositLikelihood, MixtureLikelihoods, modelWindow, yearOf } from './likelihood';
 import { OffsetPosterior, offsetPosterior } from './offset-posterior';
+import { ReservoirOffsetPosterior, SharedOffsets } from './reservoir-offsets';
 import { firstDepositNode, OrderChain, PosteriorAccumulator } from './sampler';
 
 export interface AgeModelSettings {
@@ -203,6 +204,8 @@ export interface AgeModelResult {
   /** The calendar years (cal BP) the model's ages may take. */
   readonly window: CalendarWindow;
   readonly settings: AgeModelSettings;
+  /** One posterior per Delta-R source shared by marine samples (`reservoir-offsets.ts`). */
+  readonly reservoirOffsets?: ReservoirOffsetPosterior[];
 }
 
 /** Sweeps between polls of `shouldCancel` and progress reports. */
@@ -329,7 +332,11 @@ export function runAgeModel(
   const deposits = graph.samples.map((sample) => depositLikelihood(sample.likelihood, sample.ageRelation, scaleOf(sample)));
   const window = modelWindow(deposits, own, resolved.windowMarginYears);
   const likelihoods = new MixtureLikelihoods(deposits, window, resolved.outlierPrior, resolved.outlierShiftScaleYears);
-  const model = { graph, likelihoods };
+  const shared =
+    input.reservoirSources && input.reservoirSources.length > 0
+      ? new SharedOffsets(graph, input.reservoirSources, window, resolved.outlierPrior, resolved.outlierShiftScaleYears, scaleOf)
+      : undefined;
+  const model = { graph, likelihoods, shared: shared && shared.count > 0 ? shared : undefined };
 
   const keptPerChain = Math.floor(resolved.iterations / resolved.thin);
   if (graph.nodeCount * keptPerChain * resolved.chains > MAX_KEPT_VALUES) {
@@ -370,19 +377,29 @@ export function runAgeModel(
     return { eventHorizonId: horizon.id, density, summary: summariseReadable(density), rhat, ess };
   });
   const firstDeposit = firstDepositNode(graph);
+  const integratedLikelihoods = new Map<number, MixtureLikelihoods>();
+  for (const j of model.shared?.depositSums.keys() ?? []) {
+    integratedLikelihoods.set(j, new MixtureLikelihoods([deposits[j]], window, resolved.outlierPrior, resolved.outlierShiftScaleYears));
+  }
   const samples: SamplePosterior[] = graph.samples.map((sample, j) => {
-    const density = densityFromDifferences(
-      accumulator.depositDifferences[j],
-      accumulator.depositDirect[j],
-      accumulator.depositOpen[j],
-      window.youngCalBp,
-      (calBp) => likelihoods.mixture(j, calBp),
-    );
+    const sharedSums = model.shared?.depositSums.get(j);
+    const density = sharedSums
+      ? normalise(trim({ startCalBp: window.youngCalBp, probabilities: sharedSums }, 1e-7))
+      : densityFromDifferences(
+          accumulator.depositDifferences[j],
+          accumulator.depositDirect[j],
+          accumulator.depositOpen[j],
+          window.youngCalBp,
+          (calBp) => likelihoods.mixture(j, calBp),
+        );
     const summary = summariseReadable(density);
     const { rhat, ess } = chainDiagnostics(series(firstDeposit + j));
     const q = resolved.outlierPrior;
+    // A shared sample's likelihood moves with its offset; its offset from the deposit is read with
+    // the Delta-R error integrated out (its own likelihood), an approximation.
+    const integrated = sharedSums ? integratedLikelihoods.get(j) : undefined;
     const offset = offsetPosterior(sample.likelihood, sample.ageRelation, scaleOf(sample), density, (calBp) => {
-      const mixed = likelihoods.mixture(j, calBp);
+      const mixed = integrated ? integrated.mixture(0, calBp) : likelihoods.mixture(j, calBp);
       return mixed > 0 ? (1 - q) / mixed : 0;
     });
     return {
@@ -444,6 +461,7 @@ export function runAgeModel(
     ...(allDraws ? { allDraws } : {}),
     window,
     settings: resolved,
+    ...(model.shared ? { reservoirOffsets: model.shared.posteriors() } : {}),
   };
 }
 
@@ -453,7 +471,7 @@ export function runAgeModel(
  * the old end of the column so that their starts are dispersed.
  */
 function runChains(
-  model: { graph: OrderGraph; likelihoods: MixtureLikelihoods },
+  model: { graph: OrderGraph; likelihoods: MixtureLikelihoods; shared?: SharedOffsets },
   settings: AgeModelSettings,
   keptPerChain: number,
   accumulator: PosteriorAccumulator,
@@ -478,6 +496,9 @@ function runChains(
   let lastReported = -1;
 
   for (let c = 0; c < settings.chains; c++) {
+    // Shared offsets start at their prior means, before the chain draws its starting ages.
+    const offsets = model.shared?.start(model.likelihoods);
+    const offsetRandom = new SeededRandom(chainSeeds[c] ^ 0x5bd1e995);
     const chain = new OrderChain(model, chainSeeds[c], c % 2 === 0);
     const impossible = chain.impossibleDeposits();
     if (impossible.length > 0) {
@@ -501,10 +522,12 @@ function runChains(
       chain.sweep(sweep % 2 === 0);
       for (let b = 0; b < blockShiftsPerSweep; b++) chain.blockShift();
       if (sweep % PATH_UPDATE_PERIOD === 0 && chain.hasPaths) chain.pathUpdate();
+      if (offsets) model.shared!.update(model.likelihoods, offsets, chain.state, offsetRandom);
       const after = sweep - settings.burnIn + 1;
       if (after > 0 && after % settings.thin === 0 && keptCount < keptPerChain) {
         values.set(chain.state, keptCount * graph.nodeCount);
         chain.accumulate(accumulator);
+        model.shared?.accumulate(chain.state, model.likelihoods);
         keptCount++;
       }
     }

@@ -10,6 +10,7 @@
  * the column is a core (`orderSamplesByDepth`), where a deeper sample is older.
  */
 import { CalendarDensity } from '../common/density';
+import type { ReservoirSource, SampleReservoir } from './reservoir-offsets';
 
 /** How a dated sample's age relates to the time its unit was deposited. */
 export type AgeRelation = 'DATES_DEPOSIT' | 'OLDER_THAN_DEPOSIT' | 'YOUNGER_THAN_DEPOSIT';
@@ -53,6 +54,12 @@ export interface ColumnSample {
    * run's `inheritanceScaleYears`. Ignored for DATES_DEPOSIT.
    */
   readonly offsetScaleYears?: number | null;
+  /**
+   * Marine samples whose Delta-R they share with others of the site: the source and the sample's
+   * likelihood at each value of its offset's grid (`reservoir-offsets.ts`). `likelihood` is then
+   * the likelihood with the Delta-R error integrated out (for starting values and the window).
+   */
+  readonly reservoir?: SampleReservoir;
 }
 
 export interface AgeModelInput {
@@ -64,6 +71,8 @@ export interface AgeModelInput {
    * older. Trench and outcrop depths are taken at different places on a wall and are not ordered.
    */
   readonly orderSamplesByDepth?: boolean;
+  /** The Delta-R sources the samples' `reservoir` name; absent when no sample shares an offset. */
+  readonly reservoirSources?: readonly ReservoirSource[];
 }
 
 export type ColumnProblemCode =

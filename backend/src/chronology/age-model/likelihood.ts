@@ -274,6 +274,21 @@ export class MixtureLikelihoods {
     this.shiftedCumulative = this.shiftedValues.map(cumulative);
   }
 
+  /**
+   * Take another set's likelihood of `fromSample` (on the same window) as this set's `sample`: how a
+   * shared reservoir offset switches a sample to its likelihood at another offset
+   * (`reservoir-offsets.ts`). The arrays are shared, not copied.
+   */
+  adopt(sample: number, from: MixtureLikelihoods, fromSample: number): void {
+    if (from.youngCalBp !== this.youngCalBp || from.width !== this.width) throw new Error('adopt needs likelihoods on the same window');
+    this.plainValues[sample] = from.plainValues[fromSample];
+    this.shiftedValues[sample] = from.shiftedValues[fromSample];
+    this.mixed[sample] = from.mixed[fromSample];
+    this.mixedCumulative[sample] = from.mixedCumulative[fromSample];
+    this.plainCumulative[sample] = from.plainCumulative[fromSample];
+    this.shiftedCumulative[sample] = from.shiftedCumulative[fromSample];
+  }
+
   /** L(y) without the outlier term, for a whole year y (0 outside the window). */
   plain(sample: number, year: number): number {
     const i = year - this.youngCalBp;

@@ -31,6 +31,12 @@ export interface CalibrationResult {
   readonly hpd95: HpdRange[];
   /** Things the researcher should know about the result; never a substitute for an error. */
   readonly warnings: string[];
+  /**
+   * Radiocarbon only: the sum over years of the unnormalised likelihood (Gaussian densities of the
+   * 14C age, up to a constant) before normalising, so likelihoods at different Delta-R values can
+   * be weighed against each other (shared reservoir offsets).
+   */
+  readonly likelihoodMass?: number;
 }
 
 export interface RadiocarbonInput {
@@ -319,7 +325,8 @@ export function calibrateRadiocarbon(input: RadiocarbonInput): CalibrationResult
         'so its calibrated ranges may be wrong.',
     );
   }
-  const result = calibrationResult(density, warnings);
+  const likelihoodMass = totalMass(density);
+  const result = { ...calibrationResult(density, warnings), likelihoodMass };
   if (result.hpd95.some((range) => range.youngerCalBp <= curve.startCalBp)) {
     warnings.push(
       `The 95.4 % range reaches ${formatYears(curve.startCalBp)} cal BP, the young end of ${curve.name}: ` +

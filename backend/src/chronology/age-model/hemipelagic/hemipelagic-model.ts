@@ -52,7 +52,8 @@ import { LATEST_CAL_BP } from '../likelihood';
 import { offsetPosterior } from '../offset-posterior';
 import { AdaptiveMetropolis } from './adaptive-metropolis';
 import { coreDepthScale, CoreDepthScale, hemipelagicProblems } from './core-depth';
-import { GridLevelLikelihoods, LevelLikelihoods } from './levels';
+import { summariseOffset } from '../reservoir-offsets';
+import { GridLevelLikelihoods, LevelLikelihoods, SharedLevelLikelihoods } from './levels';
 
 export interface HemipelagicSettings {
   /**
@@ -314,6 +315,8 @@ class HemipelagicPosterior {
   readonly rates: Float64Array;
   readonly cumulative: Float64Array;
   readonly gapYears: Float64Array;
+  /** The levels' ages of the state last expanded by `logDensity` (shared offsets only). */
+  readonly levelAges: Float64Array;
   private readonly memoryIndex: number;
   private readonly gapIndex: number;
 
@@ -329,6 +332,7 @@ class HemipelagicPosterior {
     this.rates = new Float64Array(structure.sections);
     this.cumulative = new Float64Array(structure.sections + 1);
     this.gapYears = new Float64Array(structure.gaps.length + 1);
+    this.levelAges = new Float64Array(structure.levelProbes.length);
   }
 
   memory(x: Float64Array): number {
@@ -381,6 +385,10 @@ class HemipelagicPosterior {
       lp += logGammaKernel(e, s.erosionShape, gaps[g].estimateM) + x[this.gapIndex + g];
     }
     this.expand(x);
+    if (this.levels.jointLogLikelihood) {
+      for (let j = 0; j < levelProbes.length; j++) this.levelAges[j] = this.ageAt(levelProbes[j]);
+      return lp + this.levels.jointLogLikelihood(this.levelAges);
+    }
     for (let j = 0; j < levelProbes.length; j++) lp += this.levels.logLikelihood(j, this.ageAt(levelProbes[j]));
     return lp;
   };
@@ -506,7 +514,17 @@ export function runHemipelagicModel(
         prior: settings.outlierPrior,
         shiftScaleYears: settings.outlierShiftScaleYears,
       });
-  const levels = makeLevels?.(modelled, settings) ?? gridLevels!;
+  const sources = input.reservoirSources ?? [];
+  const sharedLevels =
+    gridLevels && sources.length > 0 && modelled.some((sample) => sample.reservoir)
+      ? new SharedLevelLikelihoods(gridLevels, modelled, sources, settings.inheritanceScaleYears, {
+          prior: settings.outlierPrior,
+          shiftScaleYears: settings.outlierShiftScaleYears,
+        })
+      : undefined;
+  const levels: LevelLikelihoods = makeLevels?.(modelled, settings) ?? sharedLevels ?? gridLevels!;
+  const offsetSums = sharedLevels ? Array.from({ length: sharedLevels.sourceCount }, (_, i) => new Float64Array(sources.length > 0 ? sharedLevels.offsetWeights(new Float64Array(modelled.length), i).length : 0)) : [];
+  const levelAges = new Float64Array(modelled.length);
 
   const measured = measuredYearsPerMetre(levels, structure);
   let meanYearsPerMetre: number;
@@ -595,8 +613,14 @@ export function runHemipelagicModel(
         for (let j = 0; j < S; j++) {
           const age = posterior.ageAt(structure.levelProbes[j]);
           out[row + E + j] = age;
+          levelAges[j] = age;
           outlierSums[j] += levels.outlierShare(j, age);
         }
+        // Rao-Blackwellised: each kept state adds each shared offset's conditional over its grid.
+        offsetSums.forEach((sums, i) => {
+          const w = sharedLevels!.offsetWeights(levelAges, i);
+          for (let k = 0; k < w.length; k++) sums[k] += w[k];
+        });
         for (let p = 0; p < P; p++) out[row + E + S + p] = posterior.ageAt(structure.curve[p].probe);
         out[row + E + S + P] = chain.state[0];
         out[row + E + S + P + 1] = posterior.ageAt(basePoint);
@@ -687,6 +711,16 @@ export function runHemipelagicModel(
     eventDraws: { eventHorizonIds: structure.events.map((e) => e.id), drawCount: stored, draws: eventDraws },
     window: { youngCalBp: young, oldCalBp: old },
     settings,
+    ...(sharedLevels
+      ? {
+          reservoirOffsets: offsetSums.map((sums, i) => {
+            const levelsOf = sharedLevels.levelsOf(i);
+            const key = modelled[levelsOf[0]].reservoir!.sourceKey;
+            const source = sources.find((candidate) => candidate.key === key)!;
+            return summariseOffset(source, sums, levelsOf.map((j) => modelled[j].id));
+          }),
+        }
+      : {}),
     ageDepth,
     hemipelagic: {
       rateMeanCmPerKyr: 100_000 / meanYearsPerMetre,

@@ -9,6 +9,7 @@
 import { CalendarDensity } from '../../common/density';
 import { ColumnSample } from '../column';
 import { CalendarWindow, depositLikelihood, DepositLikelihood, outlierShiftLikelihood } from '../likelihood';
+import { logGridPrior, ReservoirSource } from '../reservoir-offsets';
 
 /** What the hemipelagic sampler needs of the dated levels. */
 export interface LevelLikelihoods {
@@ -21,6 +22,11 @@ export interface LevelLikelihoods {
   centreCalBp(level: number): number;
   /** Standard deviation of the level's own deposit-age likelihood, years. */
   spreadYears(level: number): number;
+  /**
+   * When levels share reservoir offsets, log of the joint likelihood of all levels at their ages
+   * (the offsets summed out); the model then uses it instead of summing `logLikelihood`.
+   */
+  jointLogLikelihood?(ages: Float64Array): number;
 }
 
 export interface OutlierModel {
@@ -107,6 +113,11 @@ export class GridLevelLikelihoods implements LevelLikelihoods {
     return this.read(this.shiftedValues[level], level, calBp);
   }
 
+  /** The whole years on which level j's likelihood is held. */
+  windowOf(level: number): CalendarWindow {
+    return { youngCalBp: this.starts[level], oldCalBp: this.starts[level] + this.plainValues[level].length - 1 };
+  }
+
   /** L_q(t) = (1 - q) L(t) + q O(t). */
   mixture(level: number, calBp: number): number {
     const q = this.outliers.prior;
@@ -148,4 +159,144 @@ export function levelDensity(levels: GridLevelLikelihoods, level: number, youngC
   const probabilities = new Float64Array(oldCalBp - youngCalBp + 1);
   for (let i = 0; i < probabilities.length; i++) probabilities[i] = Math.exp(levels.logLikelihood(level, youngCalBp + i));
   return { startCalBp: youngCalBp, probabilities };
+}
+
+/**
+ * Levels of which some share reservoir offsets (`../reservoir-offsets.ts`). Each source's offset
+ * takes the values of its grid with the prior weights pi_k, and is summed out exactly:
+ *
+ *   L(ages) = prod_(levels not shared) L_q,j(t_j) prod_s sum_k pi_k prod_(j in s) L_q,j^(k)(t_j),
+ *
+ * L_q,j^(k) the level's likelihood (outlier mixture included) with its source's Delta-R at grid
+ * value k. The per-level methods (outlier share, centre, spread) read the likelihoods with the
+ * Delta-R error integrated out (`base`), as starting values and the Rao-Blackwellised outlier
+ * probability need one likelihood per level; for a shared level the outlier share is then an
+ * approximation. `offsetWeights` gives each source's conditional over its grid at given ages,
+ * which averaged over the draws is the offset's posterior.
+ */
+export class SharedLevelLikelihoods implements LevelLikelihoods {
+  readonly count: number;
+  private readonly shared: {
+    readonly levels: Int32Array;
+    readonly logPrior: Float64Array;
+    /** Per grid value, per level of the source: log L_q on whole years from `starts[k][level]` (read between years linearly in the log). */
+    readonly values: Float32Array[][];
+    readonly starts: Int32Array[];
+  }[];
+  private readonly plainLevels: Int32Array;
+
+  constructor(
+    private readonly base: GridLevelLikelihoods,
+    samples: readonly Pick<ColumnSample, 'ageRelation' | 'offsetScaleYears' | 'reservoir'>[],
+    sources: readonly ReservoirSource[],
+    inheritanceScaleYears: number,
+    outliers: OutlierModel,
+  ) {
+    this.count = base.count;
+    const inShared = new Set<number>();
+    this.shared = [];
+    for (const source of sources) {
+      const levels: number[] = [];
+      samples.forEach((sample, j) => {
+        if (sample.reservoir?.sourceKey === source.key) levels.push(j);
+      });
+      if (levels.length === 0) continue;
+      levels.forEach((j) => inShared.add(j));
+      const starts: Int32Array[] = [];
+      const values = source.grid.map((_, k) => {
+        const grid = new GridLevelLikelihoods(
+          levels.map((j) => ({ ...samples[j], likelihood: samples[j].reservoir!.gridLikelihoods[k] })),
+          inheritanceScaleYears,
+          outliers,
+        );
+        starts.push(Int32Array.from(levels, (_, local) => grid.windowOf(local).youngCalBp));
+        return levels.map((_, local) => {
+          const window = grid.windowOf(local);
+          return Float32Array.from({ length: window.oldCalBp - window.youngCalBp + 1 }, (_, i) => {
+            const value = grid.mixture(local, window.youngCalBp + i);
+            return value > 0 ? Math.log(value) : LOG_FLOOR;
+          });
+        });
+      });
+      this.shared.push({ levels: Int32Array.from(levels), logPrior: logGridPrior(source, levels.map((j) => samples[j].reservoir)), values, starts });
+    }
+    this.plainLevels = Int32Array.from({ length: this.count }, (_, j) => j).filter((j) => !inShared.has(j));
+  }
+
+  private sharedLogValue(s: number, k: number, local: number, calBp: number): number {
+    const values = this.shared[s].values[k][local];
+    const x = calBp - this.shared[s].starts[k][local];
+    if (!(x >= 0 && x <= values.length - 1)) return LOG_FLOOR;
+    const i = Math.floor(x);
+    const f = x - i;
+    return i + 1 < values.length ? values[i] * (1 - f) + values[i + 1] * f : values[i];
+  }
+
+  /** Each source's log weights over its grid at the given ages (unnormalised), into `out[s]`. */
+  private logWeights(ages: Float64Array, s: number, out: Float64Array): void {
+    const src = this.shared[s];
+    for (let k = 0; k < src.values.length; k++) {
+      let lw = src.logPrior[k];
+      for (let local = 0; local < src.levels.length; local++) {
+        lw += this.sharedLogValue(s, k, local, ages[src.levels[local]]);
+      }
+      out[k] = lw;
+    }
+  }
+
+  private readonly scratch = new Float64Array(64);
+
+  jointLogLikelihood(ages: Float64Array): number {
+    let lp = 0;
+    for (const j of this.plainLevels) lp += this.base.logLikelihood(j, ages[j]);
+    for (let s = 0; s < this.shared.length; s++) {
+      const w = this.scratch;
+      this.logWeights(ages, s, w);
+      const n = this.shared[s].values.length;
+      let top = -Infinity;
+      for (let k = 0; k < n; k++) top = Math.max(top, w[k]);
+      let sum = 0;
+      for (let k = 0; k < n; k++) sum += Math.exp(w[k] - top);
+      lp += top + Math.log(sum);
+    }
+    return lp;
+  }
+
+  /** Number of sources, and each one's conditional weights over its grid (normalised) at `ages`. */
+  get sourceCount(): number {
+    return this.shared.length;
+  }
+
+  offsetWeights(ages: Float64Array, s: number): Float64Array {
+    const n = this.shared[s].values.length;
+    const w = new Float64Array(n);
+    this.logWeights(ages, s, w);
+    let top = -Infinity;
+    for (let k = 0; k < n; k++) top = Math.max(top, w[k]);
+    let sum = 0;
+    for (let k = 0; k < n; k++) sum += w[k] = Math.exp(w[k] - top);
+    for (let k = 0; k < n; k++) w[k] /= sum;
+    return w;
+  }
+
+  /** The levels (indices) of source s. */
+  levelsOf(s: number): readonly number[] {
+    return [...this.shared[s].levels];
+  }
+
+  logLikelihood(level: number, calBp: number): number {
+    return this.base.logLikelihood(level, calBp);
+  }
+
+  outlierShare(level: number, calBp: number): number {
+    return this.base.outlierShare(level, calBp);
+  }
+
+  centreCalBp(level: number): number {
+    return this.base.centreCalBp(level);
+  }
+
+  spreadYears(level: number): number {
+    return this.base.spreadYears(level);
+  }
 }

@@ -13,6 +13,7 @@ import { calibrateRadiocarbon } from '../../calibration/calibrate';
 import { CalibrationCurve } from '../../calibration/curve';
 import { SeededRandom } from '../../common/random';
 import { AgeModelInput, ColumnEventHorizon, ColumnSample, ColumnUnit } from '../column';
+import { reservoirSources } from '../reservoir-offsets';
 
 export interface SimulatedCoreOptions {
   readonly seed: number;
@@ -31,6 +32,11 @@ export interface SimulatedCoreOptions {
   /** Delta-R the researcher enters (mean, sd); the core's true Delta-R is one draw from it. */
   readonly deltaR: number;
   readonly deltaRError: number;
+  /**
+   * Tell the model the levels share one Delta-R source (`reservoir-offsets.ts`), as they do in the
+   * generator; false calibrates each level with its own Delta-R error, as if independent.
+   */
+  readonly sharedDeltaR?: boolean;
 }
 
 export const DEFAULT_SIMULATED_CORE: Omit<SimulatedCoreOptions, 'seed'> = {
@@ -140,6 +146,8 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
   }
 
   const samples: ColumnSample[] = [];
+  const shared = options.sharedDeltaR !== false && options.deltaRError > 0;
+  const { sources } = reservoirSources(shared ? [{ id: 'all', name: 'all', deltaR: options.deltaR, deltaRError: options.deltaRError, source: 'Simulated shelf' }] : []);
   const trueLevelAges = new Map<string, number>();
   for (let s = 0; s < options.levels; s++) {
     // Levels spread over the core: the s-th level in the s-th share of the mud intervals.
@@ -168,11 +176,21 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
         deltaR: options.deltaR,
         deltaRError: options.deltaRError,
       }).density,
+      ...(shared
+        ? {
+            reservoir: {
+              sourceKey: sources[0].key,
+              ...((grid) => ({ gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => Math.log(g.likelihoodMass!)) }))(
+                sources[0].grid.map((deltaR) => calibrateRadiocarbon({ c14Age, c14Error: options.labErrorC14, curve: marineCurve, deltaR, deltaRError: 0 })),
+              ),
+            },
+          }
+        : {}),
     });
     trueLevelAges.set(id, age);
   }
   return {
-    input: { units, eventHorizons, samples, orderSamplesByDepth: true },
+    input: { units, eventHorizons, samples, orderSamplesByDepth: true, ...(shared ? { reservoirSources: sources } : {}) },
     trueEventAges,
     trueErosionM,
     trueRatesCmPerKyr: rates,

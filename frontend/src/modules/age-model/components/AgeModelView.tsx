@@ -332,6 +332,38 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
                 ))}
               </tbody>
             </HTMLTable>
+            {run.reservoirOffsets.length > 0 && (
+              <>
+                <h3>Reservoir offsets</h3>
+                <p className="sc-chart-legend">One local Delta-R per source, shared by its marine samples (14C yr).</p>
+                <HTMLTable compact striped className="sc-table">
+                  <thead>
+                    <tr>
+                      <th>Source</th>
+                      <th>Prior</th>
+                      <th>Posterior median</th>
+                      <th>95 % range</th>
+                      <th>Samples</th>
+                    </tr>
+                  </thead>
+                  <tbody>
+                    {run.reservoirOffsets.map((offset) => (
+                      <tr key={offset.source}>
+                        <td>{offset.source}</td>
+                        <td className="num">
+                          {Math.round(offset.priorMeanYears)} ± {Math.round(offset.priorSdYears)}
+                        </td>
+                        <td className="num">{Math.round(offset.medianYears)}</td>
+                        <td className="num">
+                          {Math.round(offset.low95Years)} to {Math.round(offset.high95Years)}
+                        </td>
+                        <td className="num">{offset.samples.map((sample) => sample.labCode).join(', ')}</td>
+                      </tr>
+                    ))}
+                  </tbody>
+                </HTMLTable>
+              </>
+            )}
           </aside>
         </div>
       )}

@@ -64,6 +64,19 @@ export const AgeModelRunDocument = graphql(`
           high95Years
         }
       }
+      reservoirOffsets {
+        source
+        named
+        priorMeanYears
+        priorSdYears
+        medianYears
+        low95Years
+        high95Years
+        samples {
+          id
+          labCode
+        }
+      }
     }
   }
 `);
