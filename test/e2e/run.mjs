@@ -828,4 +828,10 @@ async function correlatorAcceptsProposedTie(page, baseUrl, shot) {
   await page.getByRole('tab', { name: /Ties/ }).click();
   await page.getByRole('cell', { name: 'log match' }).first().waitFor();
   log(`ladder: ${proposed} proposed ties between ${cores[0].site.name} and ${cores[1].site.name}; one accepted as a "log match" tie`);
+  // The cores' logs beside their columns, each bed placed at its event's median age, said in a caption.
+  await page.getByRole('checkbox', { name: 'Core logs' }).check({ force: true });
+  const beds = await waitForCount(page.locator('[data-overlay="core-logs"] polyline'), (count) => count >= 2, 'beds drawn with their log on the ladder');
+  await page.getByText(/bed's base at its event's median age/).waitFor();
+  log(`ladder: core logs on, ${beds} beds drawn with their readings`);
+  await shot('ladder-core-logs');
 }

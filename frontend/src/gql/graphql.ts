@@ -2605,6 +2605,13 @@ export type HypothesisSizeProfilesQueryVariables = Exact<{
 
 export type HypothesisSizeProfilesQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, sizeProfile: Array<{ __typename?: 'SizeEvidencePoint', alongStrikeKm?: number | null, subsidenceM?: number | null, subsidenceErrorM?: number | null, displacementM?: number | null, displacementErrorM?: number | null, bedThicknessM?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, site: { __typename?: 'Site', id: string, name: string } }> }> } };
 
+export type LadderCoreLogsQueryVariables = Exact<{
+  id: Scalars['ID']['input'];
+}>;
+
+
+export type LadderCoreLogsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, unitAbove: { __typename?: 'Unit', id: string } }>, coreLogs: Array<{ __typename?: 'CoreLog', id: string, name: string, channels: Array<string>, units: Array<string>, traces: Array<{ __typename?: 'CoreLogTrace', channel: string, unit: string, depthsM: Array<number>, values: Array<number> }> }> } };
+
 export type TieSuggestionsQueryVariables = Exact<{
   input: TieSuggestionsInput;
 }>;
@@ -3708,6 +3715,39 @@ export const HypothesisSizeProfilesDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<HypothesisSizeProfilesQuery, HypothesisSizeProfilesQueryVariables>;
+export const LadderCoreLogsDocument = new TypedDocumentString(`
+    query LadderCoreLogs($id: ID!) {
+  site(id: $id) {
+    id
+    units {
+      id
+      position
+      name
+      topDepthM
+      baseDepthM
+      facies
+    }
+    eventHorizons {
+      id
+      unitAbove {
+        id
+      }
+    }
+    coreLogs {
+      id
+      name
+      channels
+      units
+      traces(maxPoints: 400) {
+        channel
+        unit
+        depthsM
+        values
+      }
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<LadderCoreLogsQuery, LadderCoreLogsQueryVariables>;
 export const TieSuggestionsDocument = new TypedDocumentString(`
     query TieSuggestions($input: TieSuggestionsInput!) {
   tieSuggestions(input: $input) {

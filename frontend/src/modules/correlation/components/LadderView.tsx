@@ -6,6 +6,8 @@ import { useAgeScale } from '@/modules/ages/hooks/useAgeScale';
 import { ageScaleLabel } from '@/modules/ages/utils/formatAge';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { allows } from '@/modules/auth/utils/permissions';
+import { CoreLogsCaption, CoreLogsToggle } from '@/modules/correlation/components/CoreLogsControls';
+import { CoreLogsOverlay } from '@/modules/correlation/components/CoreLogsOverlay';
 import { EventLadderChart, type LadderColumn } from '@/modules/correlation/components/EventLadderChart';
 import { FigureExportButtons } from '@/modules/correlation/components/FigureExportButtons';
 import { HypothesisDialog, type HypothesisValues } from '@/modules/correlation/components/HypothesisDialog';
@@ -20,6 +22,8 @@ import { TiesList } from '@/modules/correlation/components/TiesList';
 import { TieSuggestionsOverlay } from '@/modules/correlation/components/TieSuggestionsOverlay';
 import { TieSuggestionsPanel } from '@/modules/correlation/components/TieSuggestionsPanel';
 import { useTieSuggestions } from '@/modules/correlation/hooks/useTieSuggestions';
+import { useLadderCoreLogs } from '@/modules/correlation/hooks/useLadderCoreLogs';
+import { bedPixelsPerMetre } from '@/modules/correlation/utils/ladderCoreLogs';
 import { AddTieDocument, CreateHypothesisDocument, RemoveTieDocument, SetPreferredHypothesisDocument } from '@/modules/correlation/graphql/ladder';
 import { ladderQueries } from '@/modules/correlation/hooks/ladderQueries';
 import { conflictingTieIds, eventAnchors } from '@/modules/correlation/utils/ladderData';
@@ -73,6 +77,9 @@ export function LadderView({ projectId }: LadderViewProps) {
 
   const columns = useMemo<LadderColumn[]>(() => orderAlongStrike(ladderQuery.data?.eventLadder.columns ?? []), [ladderQuery.data]);
   const anchors = useMemo(() => eventAnchors(columns), [columns]);
+  const coreSites = useMemo(() => columns.filter((column) => column.site.kind === 'CORE').map((column) => column.site), [columns]);
+  const coreLogs = useLadderCoreLogs(projectId, coreSites);
+  const logPixelsPerMetre = useMemo(() => bedPixelsPerMetre(coreLogs.coreLogs), [coreLogs.coreLogs]);
   const eventNames = useMemo(() => {
     const names = new Map<string, string>();
     for (const column of columns) for (const event of column.events) names.set(event.eventHorizon.id, `${event.eventHorizon.name} at ${column.site.name}`);
@@ -143,6 +150,7 @@ export function LadderView({ projectId }: LadderViewProps) {
         figure={figure}
         overlay={(geometry) => (
           <>
+            <CoreLogsOverlay geometry={geometry} cores={coreLogs.coreLogs} pixelsPerMetre={logPixelsPerMetre} />
             <OrderLoopsOverlay geometry={geometry} loops={shown?.orderConflicts ?? []} selectedKey={shown === hypothesis ? selectedLoopKey : null} />
             {canEdit && shown === hypothesis && <TieSuggestionsOverlay geometry={geometry} suggestions={suggestions.suggestions} />}
           </>
@@ -159,6 +167,7 @@ export function LadderView({ projectId }: LadderViewProps) {
       </header>
       <div className="sc-ladder-toolbar">
         <SegmentedControl size="small" options={VIEW_OPTIONS} value={mode} onValueChange={handleModeChange} aria-label="View" />
+        {mode === 'ladder' && <CoreLogsToggle state={coreLogs} coreCount={coreSites.length} />}
         {hypotheses.length > 0 ? (
           <HTMLSelect value={hypothesisId ?? ''} onChange={handleHypothesisChange} aria-label="Hypothesis">
             {hypotheses.map((entry) => (
@@ -202,6 +211,7 @@ export function LadderView({ projectId }: LadderViewProps) {
           </span>
         )}
       </div>
+      {mode === 'ladder' && <CoreLogsCaption state={coreLogs} pixelsPerMetre={logPixelsPerMetre} />}
       {(unmodelled > 0 || stale > 0) && (
         <Callout intent={Intent.WARNING} icon={IconNames.OUTDATED} className="sc-form-callout">
           {unmodelled > 0 && `${unmodelled} site(s) have no age model yet and show no events. `}
@@ -268,7 +278,7 @@ export function LadderView({ projectId }: LadderViewProps) {
                     title="Proposals"
                     panel={
                       <TieSuggestionsPanel
-                        cores={columns.filter((column) => column.site.kind === 'CORE').map((column) => column.site)}
+                        cores={coreSites}
                         state={suggestions}
                         eventLabels={eventNames}
                       />
