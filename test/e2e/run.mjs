@@ -323,7 +323,7 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
   await importDialog.getByRole('button', { name: 'Check sheet' }).click();
   const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
   await problemRow.waitFor();
-  check((await problemRow.locator('td').first().innerText()).trim() === '2', 'the c14Error problem is not reported on row 2');
+  check((await problemRow.locator('td').first().innerText()).trim() === 'Row 2', 'the c14Error problem is not reported on row 2');
   await shot('import-row-error');
   await importDialog.locator('#import-csv').fill(sheet(25));
   await importDialog.getByRole('button', { name: 'Check sheet' }).click();

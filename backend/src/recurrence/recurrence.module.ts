@@ -1,5 +1,7 @@
 import { Module } from '@nestjs/common';
 import { JointRunsModule } from '../correlation/joint-runs/joint-runs.module';
+import { IntervalNamesService } from './interval-names.service';
+import { EventHorizonsModule } from '../event-horizons/event-horizons.module';
 import { ProvenanceModule } from '../provenance/provenance.module';
 import { ReleasesModule } from '../releases/releases.module';
 import { AgeModelsModule } from '../age-models/age-models.module';
@@ -14,9 +16,9 @@ import { RecurrenceSourceResolver } from './recurrence-source.resolver';
 
 /** Recurrence analyses of a segment or site: renewal fits, conditional probabilities, exports, and their job. */
 @Module({
-  imports: [SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule, ProvenanceModule, JointRunsModule],
+  imports: [EventHorizonsModule, SegmentsModule, SitesModule, AgeModelsModule, ReleasesModule, ProvenanceModule, JointRunsModule],
   controllers: [RecurrenceExportController],
-  providers: [RecurrenceRepository, RecurrenceService, RecurrenceJob, RecurrenceResolver, ProjectRecurrenceResolver, RecurrenceSourceResolver],
+  providers: [IntervalNamesService, RecurrenceRepository, RecurrenceService, RecurrenceJob, RecurrenceResolver, ProjectRecurrenceResolver, RecurrenceSourceResolver],
   exports: [RecurrenceJob, RecurrenceRepository, RecurrenceService],
 })
 export class RecurrenceModule {}

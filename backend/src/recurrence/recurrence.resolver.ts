@@ -7,12 +7,16 @@ import { SiteRow } from '../sites/sites.repository';
 import { FitRenewalInput, RenewalForecastInput, RenewalProbabilityInput } from './dto/renewal.input';
 import { StartRecurrenceAnalysisInput } from './dto/start-recurrence-analysis.input';
 import { SegmentEventTableInput } from './dto/segment-event-table.input';
+import { IntervalNamesService } from './interval-names.service';
 import { HypothesisRow, RecurrenceAnalysisRow, ReleaseRow } from './recurrence.repository';
 import { RecurrenceAnalysisView, RecurrenceService } from './recurrence.service';
 
 @Resolver('RecurrenceAnalysis')
 export class RecurrenceResolver {
-  constructor(private readonly recurrence: RecurrenceService) {}
+  constructor(
+    private readonly recurrence: RecurrenceService,
+    private readonly intervalNames: IntervalNamesService,
+  ) {}
 
   @Query('renewalProbability')
   renewalProbability(@Args('input') input: RenewalProbabilityInput) {
@@ -52,6 +56,12 @@ export class RecurrenceResolver {
   @Mutation('cancelRecurrenceAnalysis')
   cancel(@CurrentUser() user: AuthUser, @Args('id') id: string): Promise<RecurrenceAnalysisView> {
     return this.recurrence.cancel(user, id);
+  }
+
+  /** Each interval with the names of the events at its ends. */
+  @ResolveField('intervals')
+  intervals(@Parent() analysis: RecurrenceAnalysisView) {
+    return this.intervalNames.namedIntervals(analysis);
   }
 
   @ResolveField('segment')

@@ -684,8 +684,12 @@ export type IntervalEstimate = {
   index: Scalars['Int']['output'];
   low95: Scalars['Float']['output'];
   medianYears: Scalars['Float']['output'];
+  /** The older event's name, as youngerEvent. */
+  olderEvent?: Maybe<Scalars['String']['output']>;
   /** With inclusion weights: share of draws holding the interval (its younger event kept with an older one before it); null without weights. */
   shareOfDraws?: Maybe<Scalars['Float']['output']>;
+  /** The younger event's name (a site's event horizon; a regional event's members as "Site E3 + Core T2"); null when the record varies between draws (weighted counting rule). */
+  youngerEvent?: Maybe<Scalars['String']['output']>;
 };
 
 export type Invitation = {
@@ -2561,7 +2565,7 @@ export type EventLadderQueryVariables = Exact<{
 }>;
 
 
-export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid?: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } | null }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission>, tectonicSetting: TectonicSetting, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
+export type EventLadderQuery = { __typename?: 'Query', eventLadder: { __typename?: 'EventLadder', columns: Array<{ __typename?: 'LadderColumn', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, alongStrikeKm: number, segment?: { __typename?: 'Segment', id: string, name: string } | null }, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, stale: boolean } | null, events: Array<{ __typename?: 'LadderEvent', medianCalBp?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string, quality: number }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid?: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } | null }> }> }, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission>, tectonicSetting: TectonicSetting, segments: Array<{ __typename?: 'Segment', id: string, name: string, startKm: number, endKm: number }>, hypotheses: Array<{ __typename?: 'Hypothesis', id: string, name: string, preferred: boolean, version: number }> } };
 
 export type HypothesisQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2720,7 +2724,7 @@ export type RecurrenceAnalysisQueryVariables = Exact<{
 }>;
 
 
-export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, stale: boolean, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, staleReasons: Array<{ __typename?: 'StaleReason', message: string, via: Array<string> }>, inputs: { __typename?: 'RecurrenceInputs', hypothesisVersion?: number | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string, name: string } }> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
+export type RecurrenceAnalysisQuery = { __typename?: 'Query', recurrenceAnalysis: { __typename?: 'RecurrenceAnalysis', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, forecastStartYear: number, windowsYears: Array<number>, draws: number, createdAt: string, finishedAt?: string | null, hypothesisVersion?: number | null, stale: boolean, eventCount?: number | null, lastEventMedianCalBp?: number | null, parameterNote?: string | null, modelComparisonNote?: string | null, caution: string, staleReasons: Array<{ __typename?: 'StaleReason', message: string, via: Array<string> }>, inputs: { __typename?: 'RecurrenceInputs', hypothesisVersion?: number | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string, name: string } }> }, segment?: { __typename?: 'Segment', id: string, name: string } | null, site?: { __typename?: 'Site', id: string, name: string } | null, hypothesis?: { __typename?: 'Hypothesis', id: string, name: string } | null, openInterval?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, intervals: Array<{ __typename?: 'IntervalEstimate', index: number, medianYears: number, low95: number, high95: number, youngerEvent?: string | null, olderEvent?: string | null }>, meanRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, medianRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, sdRecurrence?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, aperiodicity?: { __typename?: 'RangeEstimate', median: number, low95: number, high95: number } | null, poisson: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number }>, models: Array<{ __typename?: 'ModelResult', model: RenewalModel, aic: number, deltaAic: number, aicc?: number | null, deltaAicc?: number | null, akaikeWeight: number, meanRecurrenceYears: number, aperiodicity: number, logLikelihood: number, meanRecurrenceRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, aperiodicityRange?: { __typename?: 'ParameterRange', median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null } | null, probabilities: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }> }>, modelAveraged: Array<{ __typename?: 'WindowProbability', windowYears: number, median: number, low95: number, high95: number, datingOnlyLow95?: number | null, datingOnlyHigh95?: number | null }>, curves: Array<{ __typename?: 'ModelCurves', model: RenewalModel, density: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, hazard: Array<{ __typename?: 'CurvePoint', years: number, value: number }>, survival: Array<{ __typename?: 'CurvePoint', years: number, value: number }> }>, histogram: Array<{ __typename?: 'HistogramBin', fromYears: number, toYears: number, count: number }> } };
 
 export type StartRecurrenceAnalysisMutationVariables = Exact<{
   input: StartRecurrenceAnalysisInput;
@@ -3534,6 +3538,12 @@ export const EventLadderDocument = new TypedDocumentString(`
     myRole
     myPermissions
     tectonicSetting
+    segments {
+      id
+      name
+      startKm
+      endKm
+    }
     hypotheses {
       id
       name
@@ -4180,6 +4190,8 @@ export const RecurrenceAnalysisDocument = new TypedDocumentString(`
       medianYears
       low95
       high95
+      youngerEvent
+      olderEvent
     }
     meanRecurrence {
       median

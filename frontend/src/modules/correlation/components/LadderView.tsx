@@ -26,7 +26,7 @@ import { useLadderCoreLogs } from '@/modules/correlation/hooks/useLadderCoreLogs
 import { bedPixelsPerMetre } from '@/modules/correlation/utils/ladderCoreLogs';
 import { AddTieDocument, CreateHypothesisDocument, RemoveTieDocument, SetPreferredHypothesisDocument } from '@/modules/correlation/graphql/ladder';
 import { ladderQueries } from '@/modules/correlation/hooks/ladderQueries';
-import { conflictingTieIds, eventAnchors } from '@/modules/correlation/utils/ladderData';
+import { conflictingTieIds, eventAnchors, tieDifferences } from '@/modules/correlation/utils/ladderData';
 import { canTieEvents, nextEventSelection, orderAlongStrike } from '@/modules/correlation/utils/ladderLayout';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
 import '@/modules/correlation/components/charts.css';
@@ -139,7 +139,17 @@ export function LadderView({ projectId }: LadderViewProps) {
   };
   const handleClearSelection = () => setSelection([]);
 
-  const figureTitle = (name: string | undefined) => `${mode === 'ladder' ? 'Event ladder' : 'Space-time'} ${project.name} ${name ?? ''}`;
+  const figureTitle = (name: string | undefined) => `${mode === 'ladder' ? 'Event ladder' : 'Regional events in space and time'} · ${project.name}${name ? ` · ${name}` : ''}`;
+  const figureCaption =
+    mode === 'ladder'
+      ? `Sites in along-strike order, calendar time down (${ageScaleLabel(scale)}). Each shape is a site event's modelled age density, scaled to its own peak, with its median; lines are ties of the hypothesis; bands are regional events (R1 youngest) over their combined 95.4 % range; a hatched band marked ✕ fails a check (concordance, same age or order).`
+      : `Distance along strike (km) across, calendar time down (${ageScaleLabel(scale)}). Each bar is a regional event (R1 youngest) over its sites' along-strike extent and combined 95.4 % range, with its combined median; dashed lines are segment boundaries; a hatched bar marked ✕ fails a check.`;
+  // Side by side: the ties each hypothesis has and the other lacks, marked on its chart and listed.
+  const differences = secondId && hypothesis && second ? tieDifferences(hypothesis.ties, second.ties) : null;
+  const differingIn = (shown: typeof hypothesis) =>
+    !differences || !shown ? undefined : new Set((shown.id === hypothesis?.id ? differences.onlyFirst : differences.onlySecond).map((tie) => tie.id));
+  const tieLabel = (tie: { eventA: { id: string; name: string }; eventB: { id: string; name: string } }) =>
+    `${eventNames.get(tie.eventA.id) ?? tie.eventA.name} – ${eventNames.get(tie.eventB.id) ?? tie.eventB.name}`;
   const renderFigure = (shown: typeof hypothesis, figure: typeof primaryFigure) =>
     mode === 'ladder' ? (
       <EventLadderChart
@@ -155,9 +165,10 @@ export function LadderView({ projectId }: LadderViewProps) {
             {canEdit && shown === hypothesis && <TieSuggestionsOverlay geometry={geometry} suggestions={suggestions.suggestions} />}
           </>
         )}
+        differingTieIds={differingIn(shown)}
       />
     ) : (
-      <SpaceTimeChart columns={columns} hypothesis={shown} figure={figure} />
+      <SpaceTimeChart columns={columns} hypothesis={shown} segments={project.segments} figure={figure} />
     );
 
   return (
@@ -224,16 +235,42 @@ export function LadderView({ projectId }: LadderViewProps) {
           {(removeTie.error ?? setPreferred.error)?.message}
         </Callout>
       )}
+      {differences && hypothesis && second && (
+        <Callout icon={IconNames.CHANGES} className="sc-form-callout sc-ladder-differences" data-testid="ladder-differences">
+          {differences.onlyFirst.length + differences.onlySecond.length === 0 ? (
+            <>The two hypotheses tie the same events; their regional events are the same.</>
+          ) : (
+            <>
+              <strong>What differs:</strong> {differences.onlyFirst.length} {differences.onlyFirst.length === 1 ? 'tie' : 'ties'} only in {hypothesis.name},{' '}
+              {differences.onlySecond.length} only in {second.name}; regional events {hypothesis.regionalEvents.length} against {second.regionalEvents.length}.
+              Ties marked ◇ on each chart are the ones the other lacks.
+              <ul className="sc-difference-list">
+                {differences.onlyFirst.slice(0, 4).map((tie) => (
+                  <li key={tie.id}>
+                    only in {hypothesis.name}: {tieLabel(tie)}
+                  </li>
+                ))}
+                {differences.onlySecond.slice(0, 4).map((tie) => (
+                  <li key={tie.id}>
+                    only in {second.name}: {tieLabel(tie)}
+                  </li>
+                ))}
+                {differences.onlyFirst.length + differences.onlySecond.length > 8 && <li>… and the rest in each hypothesis's Ties tab</li>}
+              </ul>
+            </>
+          )}
+        </Callout>
+      )}
       {columns.length === 0 ? (
         <NonIdealState icon={IconNames.TIMELINE_EVENTS} title="No sites yet" description="Add sites and run their age models to fill the ladder." />
       ) : (
-        <div className="sc-ladder-layout">
+        <div className={secondId ? 'sc-ladder-layout sc-ladder-layout-pair' : 'sc-ladder-layout'}>
           <div className="sc-ladder-main">
             <div className={secondId ? 'sc-ladder-pair' : undefined}>
               <section>
                 <div className="sc-figure-head">
                   <strong>{hypothesis?.name ?? 'No hypothesis'}</strong>
-                  <FigureExportButtons figure={primaryFigure} title={figureTitle(hypothesis?.name)} />
+                  <FigureExportButtons figure={primaryFigure} title={figureTitle(hypothesis?.name)} caption={figureCaption} />
                 </div>
                 {renderFigure(hypothesis, primaryFigure)}
               </section>
@@ -241,7 +278,7 @@ export function LadderView({ projectId }: LadderViewProps) {
                 <section>
                   <div className="sc-figure-head">
                     <strong>{second?.name ?? '…'}</strong>
-                    <FigureExportButtons figure={secondFigure} title={figureTitle(second?.name)} />
+                    <FigureExportButtons figure={secondFigure} title={figureTitle(second?.name)} caption={figureCaption} />
                   </div>
                   {renderFigure(second, secondFigure)}
                 </section>
@@ -264,6 +301,7 @@ export function LadderView({ projectId }: LadderViewProps) {
                   panel={
                     <TiesList
                       hypothesis={hypothesis}
+                      eventLabels={eventNames}
                       conflictingTieIds={conflictingTieIds(hypothesis.orderConflicts)}
                       selectedEventIds={selection}
                       canEdit={canEdit}
@@ -289,9 +327,10 @@ export function LadderView({ projectId }: LadderViewProps) {
             ) : (
               <p>Choose or create a hypothesis to see its regional events.</p>
             )}
-            <p className="sc-chart-legend">
-              Wheel to zoom the time axis, drag to pan, double-click to reset. Shapes are scaled to their own peak; bands span the combined 95.4 %
-              range. Dashed orange ties cross another tie's order; an order loop is drawn in a long-short dash with its label. Ages in {ageScaleLabel(scale)}.
+            <p className="sc-chart-legend sc-ladder-footnote">
+              Wheel to zoom the time axis, drag to pan, double-click to reset. Keyboard: Tab to an event, arrow keys to move between events,
+              Enter to select it for a tie. Shapes are scaled to their own peak; bands span the combined 95.4 % range; a hatched band marked ✕
+              fails a check; an order loop is drawn in a long-short dash with its label. Ages in {ageScaleLabel(scale)}.
             </p>
           </aside>
         </div>

@@ -3,6 +3,7 @@ import { IconNames } from '@blueprintjs/icons';
 import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
 import { RegionalEventAges } from '@/modules/correlation/components/RegionalEventAges';
 import { shownMedian } from '@/modules/correlation/utils/jointRun';
+import { loopRegionalEventIds, regionalEventFailures } from '@/modules/correlation/utils/ladderData';
 import { sameAgeVerdict } from '@/modules/correlation/utils/sameAge';
 
 export type RegionalEventsPanelProps = {
@@ -36,6 +37,7 @@ function MagnitudeValue({ magnitude, lowerBound = false, empty = '–' }: { magn
  */
 export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
   const regionalEvents = [...hypothesis.regionalEvents].sort((a, b) => shownMedian(a) - shownMedian(b));
+  const loops = loopRegionalEventIds(hypothesis.orderConflicts);
   return (
     <div className="sc-side-list">
       {regionalEvents.length === 0 && <p>No ties yet: every site event stands alone.</p>}
@@ -43,7 +45,15 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
         const low = regional.concordanceLow;
         return (
           <div key={regional.id} className="sc-regional-card">
-            <strong>Regional event {index + 1}</strong> <Tag minimal>{regional.members.length} sites</Tag>
+            <strong>Regional event R{index + 1}</strong> <Tag minimal>{regional.members.length} sites</Tag>{' '}
+            {(() => {
+              const failures = regionalEventFailures(regional, loops);
+              return failures.length > 0 ? (
+                <Tag minimal intent={Intent.DANGER} icon={IconNames.CROSS}>
+                  fails: {failures.join(', ')}
+                </Tag>
+              ) : null;
+            })()}
             <div>{regional.members.map((member) => eventLabels.get(member.id) ?? member.name).join(' · ')}</div>
             <RegionalEventAges event={regional} />
             <dl>

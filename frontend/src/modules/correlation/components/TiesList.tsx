@@ -4,6 +4,8 @@ import type { LadderHypothesis } from '@/modules/correlation/components/EventLad
 
 export type TiesListProps = {
   hypothesis: LadderHypothesis;
+  /** "E3 at Core A" by event id, so each tie names its sites. */
+  eventLabels: ReadonlyMap<string, string>;
   conflictingTieIds: ReadonlySet<string>;
   /** Selected events: their ties are listed first. */
   selectedEventIds: readonly string[];
@@ -13,7 +15,7 @@ export type TiesListProps = {
 };
 
 /** The ties of a hypothesis, with the ones touching the selection first and a remove button. */
-export function TiesList({ hypothesis, conflictingTieIds, selectedEventIds, canEdit, removingTieId, onRemove }: TiesListProps) {
+export function TiesList({ hypothesis, eventLabels, conflictingTieIds, selectedEventIds, canEdit, removingTieId, onRemove }: TiesListProps) {
   const touches = (tie: LadderHypothesis['ties'][number]) => selectedEventIds.includes(tie.eventA.id) || selectedEventIds.includes(tie.eventB.id);
   const ties = [...hypothesis.ties].sort((a, b) => Number(touches(b)) - Number(touches(a)));
   if (ties.length === 0) return <p>This hypothesis has no ties yet.</p>;
@@ -33,7 +35,7 @@ export function TiesList({ hypothesis, conflictingTieIds, selectedEventIds, canE
           return (
             <tr key={tie.id} className={touches(tie) ? 'sc-row-selected' : undefined}>
               <td>
-                {tie.eventA.name} – {tie.eventB.name}{' '}
+                {eventLabels.get(tie.eventA.id) ?? tie.eventA.name} – {eventLabels.get(tie.eventB.id) ?? tie.eventB.name}{' '}
                 {conflictingTieIds.has(tie.id) && (
                   <Tag minimal intent={Intent.WARNING} icon={IconNames.WARNING_SIGN}>
                     order

@@ -45,6 +45,12 @@ export const EventLadderDocument = graphql(`
       myRole
       myPermissions
       tectonicSetting
+      segments {
+        id
+        name
+        startKm
+        endKm
+      }
       hypotheses {
         id
         name

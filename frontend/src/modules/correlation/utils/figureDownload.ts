@@ -1,4 +1,4 @@
-import { figureFileName, svgDocumentText } from '@/modules/correlation/utils/figureExport';
+import { figureDocument, figureFileName } from '@/modules/correlation/utils/figureExport';
 
 function downloadBlob(fileName: string, blob: Blob): void {
   const url = URL.createObjectURL(blob);
@@ -9,15 +9,20 @@ function downloadBlob(fileName: string, blob: Blob): void {
   setTimeout(() => URL.revokeObjectURL(url), 0);
 }
 
-function svgText(svg: SVGSVGElement, title: string): { text: string; width: number; height: number } {
+function svgText(svg: SVGSVGElement, title: string, caption?: string): { text: string; width: number; height: number } {
   const { width, height } = svg.getBoundingClientRect();
-  const size = { width: Math.round(width), height: Math.round(height) };
-  return { text: svgDocumentText(svg.outerHTML, { ...size, title }), ...size };
+  let drawn: { x: number; y: number; width: number; height: number } | null = null;
+  try {
+    drawn = svg.getBBox();
+  } catch {
+    drawn = null; // not rendered (hidden): keep the chart's own size
+  }
+  return figureDocument(svg.outerHTML, { width: Math.round(width), height: Math.round(height), title, caption, drawn });
 }
 
-/** Save a chart as an SVG file. */
-export function downloadSvgFigure(svg: SVGSVGElement, title: string): void {
-  const { text } = svgText(svg, title);
+/** Save a chart as an SVG file: title above, caption (units, marks) beneath, nothing cut. */
+export function downloadSvgFigure(svg: SVGSVGElement, title: string, caption?: string): void {
+  const { text } = svgText(svg, title, caption);
   downloadBlob(figureFileName(title, 'svg'), new Blob([text], { type: 'image/svg+xml;charset=utf-8' }));
 }
 
@@ -25,8 +30,8 @@ export function downloadSvgFigure(svg: SVGSVGElement, title: string): void {
  * Save a chart as a PNG: the serialised SVG is drawn on a canvas at `pixelRatio` times its
  * size (2 gives print-friendly sharpness) and the canvas encoded.
  */
-export async function downloadPngFigure(svg: SVGSVGElement, title: string, pixelRatio = 2): Promise<void> {
-  const { text, width, height } = svgText(svg, title);
+export async function downloadPngFigure(svg: SVGSVGElement, title: string, caption?: string, pixelRatio = 2): Promise<void> {
+  const { text, width, height } = svgText(svg, title, caption);
   const url = URL.createObjectURL(new Blob([text], { type: 'image/svg+xml;charset=utf-8' }));
   try {
     const image = new Image();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { figureFileName, svgDocumentText } from './figureExport';
+import { figureDocument, figureFileName, svgDocumentText, wrapWords } from './figureExport';
 
 describe(svgDocumentText.name, () => {
   const markup = '<svg width="640" height="400" class="sc-chart" role="img"><g><path d="M0 0L1 1" fill="#8a6d4b"></path></g></svg>';
@@ -41,5 +41,34 @@ describe(figureFileName.name, () => {
   it('turns a title into a safe file name', () => {
     expect(figureFileName('Event ladder — Velmora Margin (Hypothèse 2)', 'png')).toBe('event-ladder-velmora-margin-hypothese-2.png');
     expect(figureFileName('***', 'svg')).toBe('figure.svg');
+  });
+});
+
+describe(figureDocument.name, () => {
+  const chart = '<svg width="300" height="200" role="img"><text x="280" y="10">Eastern trench</text></svg>';
+
+  it('puts the title above the chart and the caption, wrapped, beneath it', () => {
+    const { text, width, height } = figureDocument(chart, {
+      width: 300, height: 200, title: 'Event ladder · Demo', caption: 'Ages in cal BP (before 1950 CE). Bands: combined 95.4 % ranges of regional events.',
+    });
+    expect(width).toBe(316);
+    expect(text).toContain('font-weight="600" fill="#1c2127">Event ladder · Demo</text>');
+    const captions = [...text.matchAll(/font-size="11" fill="#5f6b7c">([^<]*)</g)].map((m) => m[1]);
+    expect(captions.join(' ')).toBe('Ages in cal BP (before 1950 CE). Bands: combined 95.4 % ranges of regional events.');
+    expect(captions.length).toBeGreaterThan(1);
+    expect(height).toBeGreaterThan(200 + 30 + captions.length * 14);
+  });
+
+  it('grows the frame to hold a label drawn past the right edge, so it is not cut', () => {
+    const { text } = figureDocument(chart, { width: 300, height: 200, title: 'T', drawn: { x: 0, y: 0, width: 352, height: 200 } });
+    const inner = /<svg x="8" y="30" width="(\d+)" height="(\d+)" viewBox="([^"]+)"/.exec(text);
+    expect(Number(inner![1])).toBeGreaterThanOrEqual(352);
+    expect(inner![3]!.split(' ').map(Number)[2]).toBeGreaterThanOrEqual(352);
+  });
+});
+
+describe(wrapWords.name, () => {
+  it('breaks at word boundaries within the limit', () => {
+    expect(wrapWords('one two three four', 9)).toEqual(['one two', 'three', 'four']);
   });
 });

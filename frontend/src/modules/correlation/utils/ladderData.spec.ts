@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { conflictingTieIds, eventAnchors, gridToDensity } from './ladderData';
+import { conflictingTieIds, eventAnchors, gridToDensity, loopRegionalEventIds, regionalEventFailures, regionalEventNumbers, tieDifferences } from './ladderData';
 
 describe(gridToDensity.name, () => {
   it('places value i at startCalBp + i x step', () => {
@@ -29,5 +29,29 @@ describe(conflictingTieIds.name, () => {
   it('collects every tie of a loop of three', () => {
     const loop = { tieA: { id: 'x' }, tieB: { id: 'y' }, ties: [{ id: 'x' }, { id: 'y' }, { id: 'z' }] };
     expect([...conflictingTieIds([loop])].sort()).toEqual(['x', 'y', 'z']);
+  });
+});
+
+describe(regionalEventNumbers.name, () => {
+  it('numbers youngest first, events without a median last', () => {
+    const numbers = regionalEventNumbers([{ id: 'old', combinedMedianCalBp: 2000 }, { id: 'none', combinedMedianCalBp: null }, { id: 'young', combinedMedianCalBp: 300 }]);
+    expect([...numbers]).toEqual([['young', 1], ['old', 2], ['none', 3]]);
+  });
+});
+
+describe(regionalEventFailures.name, () => {
+  it('names every failed check and none for a passing event', () => {
+    const loops = loopRegionalEventIds([{ regionalEventIds: ['r2', 'r3'] }]);
+    expect(regionalEventFailures({ id: 'r1', concordanceLow: false, chiSquare: { passes: true } }, loops)).toEqual([]);
+    expect(regionalEventFailures({ id: 'r2', concordanceLow: true, chiSquare: { passes: false } }, loops)).toEqual(['low concordance', 'not one age', 'in an order loop']);
+  });
+});
+
+describe(tieDifferences.name, () => {
+  it('matches ties by their two events in either order', () => {
+    const tie = (id: string, a: string, b: string) => ({ id, eventA: { id: a }, eventB: { id: b } });
+    const { onlyFirst, onlySecond } = tieDifferences([tie('1', 'x', 'y'), tie('2', 'x', 'z')], [tie('3', 'y', 'x'), tie('4', 'z', 'w')]);
+    expect(onlyFirst.map((t) => t.id)).toEqual(['2']);
+    expect(onlySecond.map((t) => t.id)).toEqual(['4']);
   });
 });

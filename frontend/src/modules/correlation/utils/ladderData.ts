@@ -58,3 +58,56 @@ export function gridToDensity(grid: DensityGridLike | null | undefined): Density
   if (!grid) return [];
   return grid.values.map((probability, index) => ({ calBp: grid.startCalBp + index * grid.stepYears, probability }));
 }
+
+export type RegionalCheckLike = {
+  id: string;
+  combinedMedianCalBp?: number | null;
+  concordanceLow?: boolean | null;
+  chiSquare?: { passes: boolean } | null;
+};
+
+/**
+ * The number each regional event is shown with, youngest first (by combined median; those without
+ * one last), so the list, the ladder's bands and the space-time bars name them alike ("R3").
+ */
+export function regionalEventNumbers<T extends RegionalCheckLike>(
+  regionalEvents: readonly T[],
+  medianOf: (regional: T) => number = (regional) => regional.combinedMedianCalBp ?? Infinity,
+): Map<string, number> {
+  const ordered = [...regionalEvents].sort((a, b) => medianOf(a) - medianOf(b));
+  return new Map(ordered.map((regional, index) => [regional.id, index + 1]));
+}
+
+/**
+ * Why a regional event fails its checks, in words, or an empty list: low concordance of its
+ * members' ages, members not of one age by the same-age test, or a place in an order loop.
+ */
+export function regionalEventFailures(regional: RegionalCheckLike, loopRegionalEventIds: ReadonlySet<string>): string[] {
+  const reasons: string[] = [];
+  if (regional.concordanceLow) reasons.push('low concordance');
+  if (regional.chiSquare && !regional.chiSquare.passes) reasons.push('not one age');
+  if (loopRegionalEventIds.has(regional.id)) reasons.push('in an order loop');
+  return reasons;
+}
+
+/** Ids of the regional events on any order loop. */
+export function loopRegionalEventIds(conflicts: readonly { regionalEventIds: readonly string[] }[]): Set<string> {
+  return new Set(conflicts.flatMap((conflict) => conflict.regionalEventIds));
+}
+
+export type TieKeyLike = { id: string; eventA: { id: string }; eventB: { id: string } };
+
+/** A tie's identity across hypotheses: its two events, in either order. */
+export function tiePairKey(tie: TieKeyLike): string {
+  return [tie.eventA.id, tie.eventB.id].sort().join('+');
+}
+
+/** What two hypotheses tie differently: the ties each has that the other lacks (by event pair). */
+export function tieDifferences<T extends TieKeyLike>(first: readonly T[], second: readonly T[]): { onlyFirst: T[]; onlySecond: T[] } {
+  const firstKeys = new Set(first.map(tiePairKey));
+  const secondKeys = new Set(second.map(tiePairKey));
+  return {
+    onlyFirst: first.filter((tie) => !secondKeys.has(tiePairKey(tie))),
+    onlySecond: second.filter((tie) => !firstKeys.has(tiePairKey(tie))),
+  };
+}

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { scaleBand, scaleLinear, zoomIdentity } from 'd3';
 import {
+  eventInDirection,
   canTieEvents,
-  columnLabel,
   createColumnScale,
   createTimeScale,
   hpdExtent,
@@ -188,16 +188,28 @@ describe(zoomedTimeWindow.name, () => {
   });
 });
 
-describe(columnLabel.name, () => {
-  it('alternates rows and keeps a name that fits two column steps', () => {
-    expect(columnLabel('Skarrow Marsh', 0, 60)).toEqual({ text: 'Skarrow Marsh', row: 0 });
-    expect(columnLabel('Skarrow Marsh', 1, 60).row).toBe(1);
+describe(eventInDirection.name, () => {
+  const event = (id: string, medianCalBp: number | null) => ({ eventHorizon: { id }, medianCalBp });
+  const columns = [
+    { site: { id: 'a' }, events: [event('a2', 900), event('a1', 300)] },
+    { site: { id: 'empty' }, events: [] },
+    { site: { id: 'b' }, events: [event('b1', 350), event('b2', 820), event('b3', 1500)] },
+  ];
+
+  it('moves up to younger and down to older events of the column, and stops at the ends', () => {
+    expect(eventInDirection(columns, 'a1', 'ArrowDown')).toBe('a2');
+    expect(eventInDirection(columns, 'a2', 'ArrowUp')).toBe('a1');
+    expect(eventInDirection(columns, 'a1', 'ArrowUp')).toBeNull();
+    expect(eventInDirection(columns, 'b3', 'ArrowDown')).toBeNull();
   });
 
-  it('cuts a name longer than two column steps with an ellipsis', () => {
-    const { text } = columnLabel('Hallow Channel core VR17-04PC', 0, 40);
-    // 2 x 40 px at 6.6 px a character is 12 characters; one is kept free as a gap, one is the ellipsis.
-    expect(text).toBe('Hallow Cha…');
-    expect(text.length).toBe(11);
+  it('moves across to the nearest-in-age event of the next column with events', () => {
+    expect(eventInDirection(columns, 'a2', 'ArrowRight')).toBe('b2');
+    expect(eventInDirection(columns, 'b1', 'ArrowLeft')).toBe('a1');
+    expect(eventInDirection(columns, 'a1', 'ArrowLeft')).toBeNull();
+  });
+
+  it('starts at the youngest event of the first column', () => {
+    expect(eventInDirection(columns, null, 'ArrowRight')).toBe('a1');
   });
 });

@@ -220,15 +220,34 @@ export function zoomedTimeWindow(
   return [invert(top), invert(bottom)];
 }
 
-/** Average advance of a 12 px UI-face character, for fitting labels without measuring text. */
-const LABEL_CHAR_PX = 6.6;
+export type KeyboardColumn = { site: { id: string }; events: readonly { eventHorizon: { id: string }; medianCalBp?: number | null }[] };
 
 /**
- * Column headers alternate between two rows so that neighbouring names do not overlap; each
- * name may use the width of two column steps and is cut with an ellipsis beyond that.
+ * The event the arrow keys move to from `eventId` on the ladder: up and down to the next younger
+ * and older event of the same column, left and right to the nearest-in-age event of the nearest
+ * column that has events. Without a current event any arrow starts at the youngest event of the
+ * first column. Returns null when there is nowhere to go.
  */
-export function columnLabel(name: string, index: number, step: number): { text: string; row: 0 | 1 } {
-  const maxChars = Math.max(4, Math.floor((2 * step) / LABEL_CHAR_PX) - 1);
-  const text = name.length > maxChars ? `${name.slice(0, maxChars - 1).trimEnd()}…` : name;
-  return { text, row: (index % 2) as 0 | 1 };
+export function eventInDirection(
+  columns: readonly KeyboardColumn[],
+  eventId: string | null,
+  key: 'ArrowUp' | 'ArrowDown' | 'ArrowLeft' | 'ArrowRight',
+): string | null {
+  const byAge = (column: KeyboardColumn) =>
+    [...column.events].sort((a, b) => (a.medianCalBp ?? Infinity) - (b.medianCalBp ?? Infinity));
+  const filled = columns.filter((column) => column.events.length > 0);
+  if (filled.length === 0) return null;
+  const columnIndex = eventId === null ? -1 : filled.findIndex((column) => column.events.some((event) => event.eventHorizon.id === eventId));
+  if (columnIndex === -1) return byAge(filled[0]!)[0]!.eventHorizon.id;
+  const events = byAge(filled[columnIndex]!);
+  const at = events.findIndex((event) => event.eventHorizon.id === eventId);
+  if (key === 'ArrowUp') return at > 0 ? events[at - 1]!.eventHorizon.id : null;
+  if (key === 'ArrowDown') return at < events.length - 1 ? events[at + 1]!.eventHorizon.id : null;
+  const target = filled[columnIndex + (key === 'ArrowLeft' ? -1 : 1)];
+  if (!target) return null;
+  const median = events[at]!.medianCalBp ?? 0;
+  const nearest = [...target.events].sort(
+    (a, b) => Math.abs((a.medianCalBp ?? Infinity) - median) - Math.abs((b.medianCalBp ?? Infinity) - median),
+  )[0]!;
+  return nearest.eventHorizon.id;
 }

@@ -390,7 +390,7 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
             <HTMLTable compact striped className="sc-table">
               <thead>
                 <tr>
-                  <th>Between events (1 = youngest)</th>
+                  <th>Between events (older → younger)</th>
                   <th className="num">Median, yr</th>
                   <th className="num">95 % range, yr</th>
                 </tr>
@@ -398,8 +398,8 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
               <tbody>
                 {analysis.intervals.map((interval) => (
                   <tr key={interval.index}>
-                    <td className="num">
-                      {interval.index + 2} → {interval.index + 1}
+                    <td>
+                      {intervalLabel(interval)}
                     </td>
                     <td className="num">{interval.medianYears.toFixed(0)}</td>
                     <td className="num">
@@ -414,4 +414,14 @@ export function RecurrenceResults({ analysis, canCancel, cancelling, onCancel, s
       )}
     </div>
   );
+}
+
+/**
+ * An interval's ends by name ("E3 → E2", oldest first as time runs), with the events' places in
+ * the record (1 = youngest) when the analysis could not name them (weights vary the record).
+ */
+export function intervalLabel(interval: { index: number; youngerEvent?: string | null; olderEvent?: string | null }): string {
+  const older = interval.olderEvent ? `${interval.olderEvent} (${interval.index + 2})` : `event ${interval.index + 2}`;
+  const younger = interval.youngerEvent ? `${interval.youngerEvent} (${interval.index + 1})` : `event ${interval.index + 1}`;
+  return `${older} → ${younger}`;
 }

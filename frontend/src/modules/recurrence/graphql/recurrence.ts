@@ -102,6 +102,8 @@ export const RecurrenceAnalysisDocument = graphql(`
         medianYears
         low95
         high95
+        youngerEvent
+        olderEvent
       }
       meanRecurrence {
         median
