@@ -21,7 +21,7 @@ describe('joint age model on simulated multi-site records', () => {
     }
   });
 
-  it('covers the true regional-event ages near the nominal rates, no wider than the product of marginals', () => {
+  it('covers most true regional-event ages, with ranges about as wide as the product of marginals', () => {
     const f = validateJointModel({ records: 2, firstSeed: 300, siteCount: 4, eventCount: 5, iterations: 1_200, burnIn: 400, thin: 2 });
     expect(f.joint.events).toBeGreaterThanOrEqual(7);
     expect(f.joint.coverage95).toBeGreaterThanOrEqual(0.8);

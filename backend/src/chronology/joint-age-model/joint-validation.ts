@@ -6,6 +6,15 @@
  * `combineAges`). For every regional event: whether its 95.4 % and 68.3 % HPD ranges cover the
  * true age, and the total length of its 95.4 % ranges. A well-calibrated model covers the truth at
  * about the nominal rates [analytic]. Used by the spec (a few records) and the bench (100+ events).
+ *
+ * Measured when written (24 records, seeds 1000-1023, 140 regional events, 446 site events):
+ * joint 95.4 % ranges cover 86.4 %, 68.3 % ranges 60.7 % (mean 95.4 % width 291 years); the
+ * product of marginals 85.0 % / 60.7 % (280 years); each site's own model on the same columns
+ * 92.8 % / 70.2 % (679 years). The joint model is the intended one (it matches the exact sums of
+ * joint-exact.spec.ts), so the shortfall is the model's misfit to this generator growing as sites
+ * are combined: standardised errors (mean - truth) / sd of the regional events have rms about 1.18
+ * with or without erosion, outliers or offset samples in the generator (12 records each), i.e.
+ * ranges some 15-20 % too narrow. Not yet explained; see the report of the change.
  */
 import { runAgeModel } from '../age-model/age-model';
 import { CalendarDensity, HpdRange, summariseReadable } from '../common/density';
@@ -56,6 +65,10 @@ export interface JointValidationFigures {
   readonly productEmpty: number;
   /** Site events tied into no regional event, by the joint model. */
   readonly untied: CoverageFigures;
+  /** Every site event by its own site's age model alone (the generator against the site model). */
+  readonly siteAlone: CoverageFigures;
+  /** Every site event by the joint model (a tied one through its regional event). */
+  readonly siteJoint: CoverageFigures;
   /** Largest split R-hat and smallest ESS of the joint runs. */
   readonly maxRhat: number;
   readonly minEss: number;
@@ -101,6 +114,8 @@ export function validateJointModel(options: JointValidationOptions): JointValida
   const joint = new Tally();
   const product = new Tally();
   const untied = new Tally();
+  const siteAlone = new Tally();
+  const siteJoint = new Tally();
   let productEmpty = 0;
   let maxRhat = 1;
   let minEss = Infinity;
@@ -126,12 +141,17 @@ export function validateJointModel(options: JointValidationOptions): JointValida
     for (const event of result.siteEvents) {
       const key = `${event.siteId}/${event.eventHorizonId}`;
       if (!tied.has(key)) untied.add(event.summary, siteEventTruth.get(key) as number);
+      siteJoint.add(event.summary, siteEventTruth.get(key) as number);
     }
     // The current method: each site alone, then the product of the members' posteriors.
     const siteDensities = new Map<string, CalendarDensity>();
     input.sites.forEach((site, s) => {
       const run = runAgeModel(site.column, { seed: seed * 31 + s, iterations: options.iterations, burnIn: options.burnIn, thin: options.thin, maxStoredDraws: 10 });
-      for (const event of run.events) siteDensities.set(`${site.siteId}/${event.eventHorizonId}`, event.density);
+      for (const event of run.events) {
+        const key = `${site.siteId}/${event.eventHorizonId}`;
+        siteDensities.set(key, event.density);
+        siteAlone.add(event.summary, siteEventTruth.get(key) as number);
+      }
     });
     for (const regional of input.regionalEvents) {
       const truth = regionalTruth.get(regional.regionalEventId) as number;
@@ -147,6 +167,8 @@ export function validateJointModel(options: JointValidationOptions): JointValida
     product: product.figures(),
     productEmpty,
     untied: untied.figures(),
+    siteAlone: siteAlone.figures(),
+    siteJoint: siteJoint.figures(),
     maxRhat,
     minEss,
   };

@@ -25,6 +25,11 @@ export interface SimulatedRecordOptions {
   readonly eventCount: number;
   /** Probability that a site records an event (default 0.75). */
   readonly recordProbability?: number;
+  /** Share of units below an event whose top is eroded (default 1/3). */
+  readonly erosionShare?: number;
+  /** Share of gross outliers (default 0.04) and of samples offset from their deposit (default 0.33). */
+  readonly outlierShare?: number;
+  readonly offsetShare?: number;
 }
 
 export interface SimulatedRecord {
@@ -41,7 +46,12 @@ function gamma2(random: SeededRandom, mean: number): number {
 }
 
 /** One site's column recording `ages` (oldest first), with its samples. */
-function siteColumn(random: SeededRandom, siteId: string, ages: readonly number[]): AgeModelInput {
+function siteColumn(
+  random: SeededRandom,
+  siteId: string,
+  ages: readonly number[],
+  shares: { erosion: number; outlier: number; offset: number },
+): AgeModelInput {
   const units: ColumnUnit[] = [];
   const eventHorizons: ColumnEventHorizon[] = [];
   const samples: ColumnSample[] = [];
@@ -49,7 +59,7 @@ function siteColumn(random: SeededRandom, siteId: string, ages: readonly number[
   for (let u = 0; u <= n; u++) {
     const older = u === 0 ? ages[0] + 200 + 200 * random.uniform() : ages[u - 1];
     let younger = u === n ? Math.max(0, ages[n - 1] - 200 - 200 * random.uniform()) : ages[u];
-    if (u < n && random.uniform() < 1 / 3) younger += (older - younger) * (0.2 + 0.3 * random.uniform());
+    if (u < n && random.uniform() < shares.erosion) younger += (older - younger) * (0.2 + 0.3 * random.uniform());
     const unitId = `${siteId}-u${u + 1}`;
     units.push({ id: unitId, name: `Unit ${u + 1}`, position: u + 1, topDepthM: null, baseDepthM: null });
     const power = Math.exp(0.8 * random.normal());
@@ -59,7 +69,7 @@ function siteColumn(random: SeededRandom, siteId: string, ages: readonly number[
       const deposit = younger + (older - younger) * random.uniform() ** power;
       let material = deposit;
       let ageRelation: AgeRelation = 'DATES_DEPOSIT';
-      const kind = random.uniform();
+      const kind = random.uniform() * (0.33 / Math.max(1e-9, shares.offset));
       if (kind < 0.25) {
         ageRelation = 'OLDER_THAN_DEPOSIT';
         material = deposit + gamma2(random, 60);
@@ -67,7 +77,7 @@ function siteColumn(random: SeededRandom, siteId: string, ages: readonly number[
         ageRelation = 'YOUNGER_THAN_DEPOSIT';
         material = deposit - gamma2(random, 40);
       }
-      if (random.uniform() < 0.04) material += (random.uniform() < 0.5 ? -1 : 1) * (300 + 1200 * random.uniform());
+      if (random.uniform() < shares.outlier) material += (random.uniform() < 0.5 ? -1 : 1) * (300 + 1200 * random.uniform());
       const error = 30 + 30 * random.uniform();
       samples.push({
         id: `${siteId}-s${u + 1}-${s + 1}`,
@@ -85,8 +95,22 @@ function siteColumn(random: SeededRandom, siteId: string, ages: readonly number[
   return { units, eventHorizons, samples };
 }
 
+/**
+ * A well-spread 32-bit seed from a small one (the murmur3 finaliser, Appleby 2011 [memory]):
+ * xoroshiro128+ seeded with neighbouring small integers gives nearly equal first draws (the first
+ * uniform is about 1 for every seed below a few thousand), so records of seeds 1000, 1001, ...
+ * would share their oldest event's age.
+ */
+function spreadSeed(seed: number): number {
+  let h = seed | 0;
+  h = Math.imul(h ^ (h >>> 16), 0x85ebca6b);
+  h = Math.imul(h ^ (h >>> 13), 0xc2b2ae35);
+  return (h ^ (h >>> 16)) | 0;
+}
+
 export function simulateRecord(options: SimulatedRecordOptions): SimulatedRecord {
-  const random = new SeededRandom(options.seed);
+  const random = new SeededRandom(spreadSeed(options.seed));
+  for (let i = 0; i < 16; i++) random.uniform();
   const p = options.recordProbability ?? 0.75;
   const ages: number[] = [3_000 + 2_000 * random.uniform()];
   for (let k = 1; k < options.eventCount; k++) ages.push(ages[k - 1] - 400 * Math.exp(0.5 * random.normal()));
@@ -97,7 +121,11 @@ export function simulateRecord(options: SimulatedRecordOptions): SimulatedRecord
     const siteId = `site${s + 1}`;
     let recorded: number[] = [];
     while (recorded.length < 2) recorded = ages.map((_, k) => k).filter(() => random.uniform() < p);
-    const column = siteColumn(random, siteId, recorded.map((k) => ages[k]));
+    const column = siteColumn(random, siteId, recorded.map((k) => ages[k]), {
+      erosion: options.erosionShare ?? 1 / 3,
+      outlier: options.outlierShare ?? 0.04,
+      offset: options.offsetShare ?? 0.33,
+    });
     column.eventHorizons.forEach((horizon, i) => {
       members[recorded[i]].push({ siteId, eventHorizonId: horizon.id });
       siteEventTruth.set(`${siteId}/${horizon.id}`, ages[recorded[i]]);
