@@ -121,6 +121,20 @@ afterAll(async () => {
 });
 
 describe('provenance of recurrence analyses', () => {
+  it("names the runs each regional event's ages came from", async () => {
+    const { hypothesis } = await clients.VIEWER.ok(`query($id: ID!) { hypothesis(id: $id) { regionalEvents { members { id } ageModelRuns { id site { name } } } } }`, { id: hypothesisId });
+    type Regional = { members: { id: string }[]; ageModelRuns: { id: string; site: { name: string } }[] };
+    const tied = (hypothesis.regionalEvents as Regional[]).filter((r) => r.members.length === 2);
+    expect(tied).toHaveLength(3);
+    for (const regional of tied) {
+      expect(regional.ageModelRuns.map((r) => r.id).sort()).toEqual([site.A.run, site.B.run].sort());
+      expect(regional.ageModelRuns.map((r) => r.site.name).sort()).toEqual(['Tarn Flat', 'Wren Core']);
+    }
+    // An untied event of site C stands alone, its age from C's run.
+    const alone = (hypothesis.regionalEvents as Regional[]).find((r) => r.members[0].id === site.C.events[0])!;
+    expect(alone.ageModelRuns.map((r) => r.id)).toEqual([site.C.run]);
+  });
+
   it('names the runs and hypothesis version a segment analysis used, and the run a site analysis used', async () => {
     const segment = await analysisOf(analyses.segment);
     expect(segment.status).toBe('SUCCEEDED');

@@ -1,3 +1,4 @@
+import type { AgeModelRunRow } from '../age-models/age-model-runs.repository';
 import { Injectable } from '@nestjs/common';
 import { AccessService } from '../access/access.service';
 import { Permission } from '../access/permissions';
@@ -34,6 +35,8 @@ export interface RegionalEventView {
   chiSquare: { t: number; df: number; critical5: number; passes: boolean } | null;
   ruptureLengthKm: number | null;
   magnitude: { mw: number; sigma: number; relation: string } | null;
+  /** The runs its members' ages came from: each member site's newest successful run. */
+  ageModelRuns: AgeModelRunRow[];
 }
 
 /** `OrderConflict` as the API shows it. */
@@ -300,6 +303,10 @@ function toView(hypothesisId: string, check: HypothesisCheck, data: ProjectCorre
         : null,
       ruptureLengthKm: regional.ruptureLengthKm,
       magnitude: regional.magnitude ? { mw: regional.magnitude.mw, sigma: regional.magnitude.sigma, relation: regional.magnitude.relation } : null,
+      ageModelRuns: regional.siteIds.flatMap((siteId) => {
+        const run = data.runsBySite.get(siteId);
+        return run ? [run.row] : [];
+      }),
     })),
     orderConflicts: check.orderConflicts.map((conflict) => ({
       tieA: tiesById.get(conflict.tieAId) as TieView,

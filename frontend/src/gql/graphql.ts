@@ -1644,6 +1644,8 @@ export type RefreshStep = {
 /** A connected group of tied events: one inferred earthquake. */
 export type RegionalEvent = {
   __typename?: 'RegionalEvent';
+  /** The age model runs its members' ages came from: each member site's newest successful run (stale ones say so). */
+  ageModelRuns: Array<AgeModelRun>;
   /** JOINT_RUN when a fresh joint run dates it (then its joint age is the one to show), else COMBINED_DENSITIES. */
   ageShown: RegionalEventAgeSource;
   chiSquare?: Maybe<ChiSquareTest>;
@@ -2431,7 +2433,7 @@ export type AgeModelRunQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, offset?: { __typename?: 'SampleOffsetPosterior', scaleYears: number, medianYears: number, low95Years: number, high95Years: number } | null }>, reservoirOffsets: Array<{ __typename?: 'ReservoirOffsetPosterior', source: string, named: boolean, priorMeanYears: number, priorSdYears: number, medianYears: number, low95Years: number, high95Years: number, samples: Array<{ __typename?: 'Sample', id: string, labCode: string }> }> } };
+export type AgeModelRunQuery = { __typename?: 'Query', ageModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, message?: string | null, seed: number, settings: unknown, stale: boolean, createdAt: string, finishedAt?: string | null, depthModel: DepthModel, staleReasons: Array<{ __typename?: 'StaleReason', message: string }>, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number, message: string } | null, events: Array<{ __typename?: 'EventPosterior', medianCalBp: number, meanCalBp: number, rhat?: number | null, ess?: number | null, eventHorizon: { __typename?: 'EventHorizon', id: string, name: string }, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> }>, ageDepth: Array<{ __typename?: 'AgeDepthPoint', depthM: number, eventFreeDepthM: number, medianCalBp: number, low95CalBp: number, high95CalBp: number }>, samples: Array<{ __typename?: 'SamplePosterior', outlierProbability: number, medianCalBp: number, sample: { __typename?: 'Sample', id: string, labCode: string }, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, offset?: { __typename?: 'SampleOffsetPosterior', scaleYears: number, medianYears: number, low95Years: number, high95Years: number } | null }>, reservoirOffsets: Array<{ __typename?: 'ReservoirOffsetPosterior', source: string, named: boolean, priorMeanYears: number, priorSdYears: number, medianYears: number, low95Years: number, high95Years: number, samples: Array<{ __typename?: 'Sample', id: string, labCode: string }> }> } };
 
 export type AgeModelSiteQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -2572,7 +2574,7 @@ export type HypothesisQueryVariables = Exact<{
 }>;
 
 
-export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, latestJointRun?: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus } | null, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, jointMedianCalBp?: number | null, ageShown: RegionalEventAgeSource, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, jointHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromArea?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromDisplacement?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string, eventA: { __typename?: 'EventHorizon', id: string }, eventB: { __typename?: 'EventHorizon', id: string } }>, steps: Array<{ __typename?: 'OrderStep', site: { __typename?: 'Site', id: string }, older: { __typename?: 'EventHorizon', id: string }, younger: { __typename?: 'EventHorizon', id: string } }> }> } };
+export type HypothesisQuery = { __typename?: 'Query', hypothesis: { __typename?: 'Hypothesis', id: string, name: string, description?: string | null, preferred: boolean, version: number, author?: { __typename?: 'User', id: string, displayName: string } | null, copiedFrom?: { __typename?: 'Hypothesis', id: string, name: string } | null, ties: Array<{ __typename?: 'Tie', id: string, confidence: number, evidence: Array<string>, note?: string | null, eventA: { __typename?: 'EventHorizon', id: string, name: string }, eventB: { __typename?: 'EventHorizon', id: string, name: string } }>, latestJointRun?: { __typename?: 'JointAgeModelRun', id: string, status: JobStatus } | null, regionalEvents: Array<{ __typename?: 'RegionalEvent', id: string, combinedMedianCalBp?: number | null, jointMedianCalBp?: number | null, ageShown: RegionalEventAgeSource, concordance?: number | null, concordanceThreshold?: number | null, concordanceLow: boolean, warnings: Array<string>, ruptureLengthKm?: number | null, jointHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, members: Array<{ __typename?: 'EventHorizon', id: string, name: string }>, combinedHpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, chiSquare?: { __typename?: 'ChiSquareTest', t: number, df: number, critical5: number, passes: boolean } | null, magnitude?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromArea?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, magnitudeFromDisplacement?: { __typename?: 'MagnitudeEstimate', mw: number, sigma: number, relation: string } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, seed: number, stale: boolean, site: { __typename?: 'Site', id: string, name: string } }> }>, orderConflicts: Array<{ __typename?: 'OrderConflict', message: string, regionalEventIds: Array<string>, tieA: { __typename?: 'Tie', id: string }, tieB: { __typename?: 'Tie', id: string }, ties: Array<{ __typename?: 'Tie', id: string, eventA: { __typename?: 'EventHorizon', id: string }, eventB: { __typename?: 'EventHorizon', id: string } }>, steps: Array<{ __typename?: 'OrderStep', site: { __typename?: 'Site', id: string }, older: { __typename?: 'EventHorizon', id: string }, younger: { __typename?: 'EventHorizon', id: string } }> }> } };
 
 export type AddTieMutationVariables = Exact<{
   input: AddTieInput;
@@ -3002,6 +3004,9 @@ export const AgeModelRunDocument = new TypedDocumentString(`
     seed
     settings
     stale
+    staleReasons {
+      message
+    }
     createdAt
     finishedAt
     diagnostics {
@@ -3631,6 +3636,15 @@ export const HypothesisDocument = new TypedDocumentString(`
         mw
         sigma
         relation
+      }
+      ageModelRuns {
+        id
+        seed
+        stale
+        site {
+          id
+          name
+        }
       }
     }
     orderConflicts {

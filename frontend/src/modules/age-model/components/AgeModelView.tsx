@@ -1,7 +1,7 @@
 import { Button, Callout, H2, HTMLTable, Intent, NonIdealState, ProgressBar, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
@@ -22,6 +22,7 @@ import { EventPosteriorChart, type LikelihoodOutline } from './EventPosteriorCha
 import { RunDiagnostics } from './RunDiagnostics';
 import { RunHistory } from './RunHistory';
 import { RunSettingsForm } from './RunSettingsForm';
+import { RunProvenance } from './RunProvenance';
 import { RunStatusPanel } from './RunStatusPanel';
 import '@/modules/correlation/components/charts.css';
 
@@ -156,7 +157,10 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
               <Button size="small" variant="minimal" intent={Intent.PRIMARY} text="Show the newest results" onClick={() => setSelectedRunId(null)} />
             </Callout>
           )}
-          <RunResults run={runQuery.data} events={events} canCancel={mayRun} cancelling={cancel.isPending} onCancel={() => handleCancel(runQuery.data.id)} />
+          <RunResults
+            run={runQuery.data}
+            provenance={<RunProvenance projectId={projectId} siteId={siteId} siteName={loadedSite.name} run={runQuery.data} />}
+            events={events} canCancel={mayRun} cancelling={cancel.isPending} onCancel={() => handleCancel(runQuery.data.id)} />
         </>
       )}
 
@@ -200,13 +204,15 @@ type RunData = AgeModelRunQuery['ageModelRun'];
 
 type RunResultsProps = {
   run: RunData;
+  /** Where its ages came from, with links. */
+  provenance: ReactNode;
   events: { posterior: RunData['events'][number]; likelihoods: LikelihoodOutline[] }[];
   canCancel: boolean;
   cancelling: boolean;
   onCancel: () => void;
 };
 
-function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResultsProps) {
+function RunResults({ run, provenance, events, canCancel, cancelling, onCancel }: RunResultsProps) {
   const compactEvents = useMemo(
     () =>
       events.map(({ posterior }) => ({
@@ -228,10 +234,12 @@ function RunResults({ run, events, canCancel, cancelling, onCancel }: RunResults
         message={run.message}
         seed={run.seed}
         stale={run.stale}
+        staleReasons={run.staleReasons.map((reason) => reason.message)}
         canCancel={canCancel}
         cancelling={cancelling}
         onCancel={onCancel}
       />
+      {provenance}
       {run.diagnostics && <RunDiagnostics {...run.diagnostics} />}
       {run.status === 'SUCCEEDED' && (
         <div className="sc-age-model-results">

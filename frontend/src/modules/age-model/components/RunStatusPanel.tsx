@@ -17,13 +17,15 @@ export type RunStatusPanelProps = {
   message: string | null | undefined;
   seed: number;
   stale: boolean;
+  /** What changed since the run was queued, in words (from the server). */
+  staleReasons?: readonly string[];
   canCancel: boolean;
   cancelling: boolean;
   onCancel: () => void;
 };
 
 /** A run's state: progress while it works, the failure message, and a warning when out of date. */
-export function RunStatusPanel({ status, progress, message, seed, stale, canCancel, cancelling, onCancel }: RunStatusPanelProps) {
+export function RunStatusPanel({ status, progress, message, seed, stale, staleReasons = [], canCancel, cancelling, onCancel }: RunStatusPanelProps) {
   const active = isRunActive(status);
   return (
     <div className="sc-run-status">
@@ -50,6 +52,13 @@ export function RunStatusPanel({ status, progress, message, seed, stale, canCanc
       {stale && (
         <Callout intent={Intent.WARNING} icon={IconNames.OUTDATED} title="Out of date">
           The column or its samples changed after this run was started. Start a new run to bring the ages up to date.
+          {staleReasons.length > 0 && (
+            <ul>
+              {staleReasons.map((reason) => (
+                <li key={reason}>{reason}</li>
+              ))}
+            </ul>
+          )}
         </Callout>
       )}
     </div>

@@ -11,6 +11,9 @@ export const AgeModelRunDocument = graphql(`
       seed
       settings
       stale
+      staleReasons {
+        message
+      }
       createdAt
       finishedAt
       diagnostics {

@@ -289,7 +289,7 @@ export function LadderView({ projectId }: LadderViewProps) {
           <aside>
             {hypothesis ? (
               <Tabs id="ladder-side" renderActiveTabPanelOnly>
-                <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel hypothesis={hypothesis} eventLabels={eventNames} />} />
+                <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel projectId={projectId} hypothesis={hypothesis} eventLabels={eventNames} />} />
                 <Tab
                   id="joint"
                   title={hypothesis.latestJointRun ? `Joint run (${hypothesis.latestJointRun.status.toLowerCase()})` : 'Joint run'}

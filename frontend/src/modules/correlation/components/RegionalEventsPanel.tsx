@@ -1,5 +1,10 @@
-import { Callout, Intent, Tag } from '@blueprintjs/core';
+import { Button, Callout, Classes, Intent, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
+import { useState } from 'react';
+import { Link } from 'react-router';
+import { paths } from '@/app/paths';
+import { useSession } from '@/modules/auth/hooks/useSession';
+import { downloadWithToken } from '@/modules/correlation/utils/figureDownload';
 import type { LadderHypothesis } from '@/modules/correlation/components/EventLadderChart';
 import { RegionalEventAges } from '@/modules/correlation/components/RegionalEventAges';
 import { shownMedian } from '@/modules/correlation/utils/jointRun';
@@ -7,6 +12,7 @@ import { loopRegionalEventIds, regionalEventFailures } from '@/modules/correlati
 import { sameAgeVerdict } from '@/modules/correlation/utils/sameAge';
 
 export type RegionalEventsPanelProps = {
+  projectId: string;
   hypothesis: LadderHypothesis;
   /** "E3 at Core A" by event id, so members read with their sites. */
   eventLabels: ReadonlyMap<string, string>;
@@ -35,11 +41,26 @@ function MagnitudeValue({ magnitude, lowerBound = false, empty = '–' }: { magn
  * Ward & Wilson (1978) same-age test in words, rupture length and magnitude. Order loops are
  * listed above the ladder (OrderLoopsCallout).
  */
-export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsPanelProps) {
+export function RegionalEventsPanel({ projectId, hypothesis, eventLabels }: RegionalEventsPanelProps) {
+  const session = useSession();
+  const [downloadError, setDownloadError] = useState<string | null>(null);
   const regionalEvents = [...hypothesis.regionalEvents].sort((a, b) => shownMedian(a) - shownMedian(b));
   const loops = loopRegionalEventIds(hypothesis.orderConflicts);
+  const handleDownload = (format: 'csv' | 'json') => () => {
+    setDownloadError(null);
+    downloadWithToken(`/api/hypotheses/${encodeURIComponent(hypothesis.id)}/regional-events.${format}`, `regional events ${hypothesis.name} v${hypothesis.version}.${format}`, session?.token).catch(
+      (error: unknown) => setDownloadError(error instanceof Error ? error.message : 'the download failed'),
+    );
+  };
   return (
     <div className="sc-side-list">
+      {regionalEvents.length > 0 && (
+        <div>
+          <Button small minimal icon={IconNames.DOWNLOAD} text="Regional events CSV" onClick={handleDownload('csv')} />
+          <Button small minimal icon={IconNames.DOWNLOAD} text="JSON" onClick={handleDownload('json')} />
+          {downloadError && <span className={Classes.INTENT_DANGER}> {downloadError}</span>}
+        </div>
+      )}
       {regionalEvents.length === 0 && <p>No ties yet: every site event stands alone.</p>}
       {regionalEvents.map((regional, index) => {
         const low = regional.concordanceLow;
@@ -99,6 +120,22 @@ export function RegionalEventsPanel({ hypothesis, eventLabels }: RegionalEventsP
               <dt title="Mean measured displacement of the members">Mw from displacement</dt>
               <dd>
                 <MagnitudeValue magnitude={regional.magnitudeFromDisplacement} empty="– (no measured displacement)" />
+              </dd>
+              <dt title="Each member site's newest successful age model run">Ages from</dt>
+              <dd>
+                {regional.ageModelRuns.length === 0
+                  ? '–'
+                  : regional.ageModelRuns.map((run, i) => (
+                      <span key={run.id}>
+                        {i > 0 && ' · '}
+                        <Link to={paths.ageModel(projectId, run.site.id)}>{run.site.name}</Link> <span className="num">seed {run.seed}</span>
+                        {run.stale && (
+                          <Tag minimal intent={Intent.WARNING}>
+                            out of date
+                          </Tag>
+                        )}
+                      </span>
+                    ))}
               </dd>
             </dl>
             {regional.warnings.map((warning) => (

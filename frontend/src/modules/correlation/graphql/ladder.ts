@@ -141,6 +141,15 @@ export const HypothesisDocument = graphql(`
           sigma
           relation
         }
+        ageModelRuns {
+          id
+          seed
+          stale
+          site {
+            id
+            name
+          }
+        }
       }
       orderConflicts {
         message
