@@ -160,7 +160,11 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
           <RunResults
             run={runQuery.data}
             provenance={<RunProvenance projectId={projectId} siteId={siteId} siteName={loadedSite.name} run={runQuery.data} />}
-            events={events} canCancel={mayRun} cancelling={cancel.isPending} onCancel={() => handleCancel(runQuery.data.id)} />
+            events={events}
+            canCancel={mayRun}
+            cancelling={cancel.isPending}
+            onCancel={() => handleCancel(runQuery.data.id)}
+          />
         </>
       )}
 

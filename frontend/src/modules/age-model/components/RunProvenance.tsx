@@ -38,8 +38,8 @@ export function RunProvenance({ projectId, siteId, siteName, run }: RunProvenanc
       .{' '}
       {run.status === 'SUCCEEDED' && (
         <>
-          <Button small minimal icon={IconNames.DOWNLOAD} text="Event ages CSV" onClick={handleDownload('csv')} />
-          <Button small minimal icon={IconNames.DOWNLOAD} text="JSON" onClick={handleDownload('json')} />
+          <Button size="small" variant="minimal" icon={IconNames.DOWNLOAD} text="Event ages CSV" onClick={handleDownload('csv')} />
+          <Button size="small" variant="minimal" icon={IconNames.DOWNLOAD} text="JSON" onClick={handleDownload('json')} />
         </>
       )}
       {error && <span className={Classes.INTENT_DANGER}> {error}</span>}

@@ -56,8 +56,8 @@ export function RegionalEventsPanel({ projectId, hypothesis, eventLabels }: Regi
     <div className="sc-side-list">
       {regionalEvents.length > 0 && (
         <div>
-          <Button small minimal icon={IconNames.DOWNLOAD} text="Regional events CSV" onClick={handleDownload('csv')} />
-          <Button small minimal icon={IconNames.DOWNLOAD} text="JSON" onClick={handleDownload('json')} />
+          <Button size="small" variant="minimal" icon={IconNames.DOWNLOAD} text="Regional events CSV" onClick={handleDownload('csv')} />
+          <Button size="small" variant="minimal" icon={IconNames.DOWNLOAD} text="JSON" onClick={handleDownload('json')} />
           {downloadError && <span className={Classes.INTENT_DANGER}> {downloadError}</span>}
         </div>
       )}

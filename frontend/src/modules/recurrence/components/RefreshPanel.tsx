@@ -53,7 +53,7 @@ export function RefreshPanel({ projectId, canConfigure, onShowAnalysis }: Refres
     }
     if (step.kind === 'recurrenceAnalysis' && onShowAnalysis && step.status === 'SUCCEEDED') {
       return (
-        <Button minimal small text="show fresh analysis" onClick={() => onShowAnalysis(step.freshId!)} />
+        <Button size="small" variant="minimal" text="show fresh analysis" onClick={() => onShowAnalysis(step.freshId!)} />
       );
     }
     return null;
