@@ -14,7 +14,7 @@ import { EventHorizonsRepository } from '../event-horizons/event-horizons.reposi
 import { JobQueueService } from '../jobs/job-queue.service';
 import { DEFAULT_INHERITANCE_SCALE_YEARS } from '../samples/sample-rules';
 import { SampleRow, SamplesRepository } from '../samples/samples.repository';
-import { ReservoirSource, reservoirSources } from '../chronology/age-model/reservoir-offsets';
+import { calibratedGrid, ReservoirSource, reservoirSources, SampleReservoir } from '../chronology/age-model/reservoir-offsets';
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
@@ -147,6 +147,7 @@ export class AgeModelsService {
         .map((s) => ({ id: s.id, name: s.labCode, deltaR: s.deltaR!, deltaRError: s.deltaRError ?? 0, source: s.deltaRSource ?? null })),
     );
     if (grouping.problems.length > 0) throw badInput('deltaRSource', grouping.problems.join('; '), { problems: grouping.problems });
+    const reservoirs = await this.reservoirsOf(samples, grouping.keyOf, grouping.sources);
     const model: AgeModelInput = {
       units: units.map((u) => ({
         id: u.id, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM, facies: u.facies, basalErosionM: u.basalErosionM,
@@ -156,7 +157,7 @@ export class AgeModelsService {
         samples
           .filter((s) => s.calibration)
           .map(async (s) => ({
-            ...(await this.reservoirOf(s, grouping.keyOf, grouping.sources)),
+            ...(reservoirs.bySample.has(s.id) ? { reservoir: reservoirs.bySample.get(s.id)! } : {}),
             id: s.id,
             name: s.labCode,
             unitId: s.unitId,
@@ -168,20 +169,31 @@ export class AgeModelsService {
           })),
       ),
       orderSamplesByDepth: site.kind === 'CORE',
-      ...(grouping.sources.length > 0 ? { reservoirSources: grouping.sources } : {}),
+      ...(reservoirs.sources.length > 0 ? { reservoirSources: reservoirs.sources } : {}),
     };
     return { model, fingerprint };
   }
 
   /**
-   * A marine sample's part in its source's shared offset: its calibration at each Delta-R of the
-   * source's grid, with no Delta-R error (the offset carries it).
+   * Each marine sample's part in its source's shared offset: its calibration at each Delta-R of the
+   * source's grid with no Delta-R error (the offset carries it), the grid kept to the values at
+   * which every sample of the source calibrates (`calibratedGrid`).
    */
-  private async reservoirOf(sample: SampleRow, keyOf: Map<string, string>, sources: readonly ReservoirSource[]) {
-    const key = keyOf.get(sample.id);
-    const source = key === undefined ? undefined : sources.find((s) => s.key === key);
-    if (!source || sample.excluded) return {};
-    const grid = await this.calibration.reservoirGridOfSample(sample, source.grid);
-    return { reservoir: { sourceKey: source.key, gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => g.logMass) } };
+  private async reservoirsOf(samples: readonly SampleRow[], keyOf: Map<string, string>, sources: readonly ReservoirSource[]) {
+    const bySample = new Map<string, SampleReservoir>();
+    const kept: ReservoirSource[] = [];
+    for (const source of sources) {
+      const members = samples.filter((s) => keyOf.get(s.id) === source.key);
+      if (members.length === 0) continue;
+      const grids = await Promise.all(members.map((s) => this.calibration.reservoirGridOfSample(s, source.grid)));
+      const restricted = calibratedGrid(source, grids);
+      if (restricted.source.grid.length < 2) continue;
+      kept.push(restricted.source);
+      members.forEach((s, i) => {
+        const grid = restricted.perSample[i];
+        bySample.set(s.id, { sourceKey: source.key, gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => g.logMass) });
+      });
+    }
+    return { bySample, sources: kept };
   }
 }

@@ -72,11 +72,17 @@ export class CalibrationService {
    * A marine sample calibrated at each Delta-R of a grid with no Delta-R error: each density
    * (normalised) with the log of its likelihood's mass, for a shared reservoir offset.
    */
-  async reservoirGridOfSample(dating: SampleDating, deltaRs: readonly number[]): Promise<{ density: CalendarDensity; logMass: number }[]> {
+  async reservoirGridOfSample(dating: SampleDating, deltaRs: readonly number[]): Promise<({ density: CalendarDensity; logMass: number } | null)[]> {
     const lookup = await this.registry.lookup();
     return deltaRs.map((deltaR) => {
-      const result = asUserInput(() => calibrationForSample({ ...dating, deltaR, deltaRError: 0 }, lookup));
-      return { density: result.density, logMass: Math.log(result.likelihoodMass ?? 1) };
+      try {
+        const result = calibrationForSample({ ...dating, deltaR, deltaRError: 0 }, lookup);
+        return { density: result.density, logMass: Math.log(result.likelihoodMass ?? 1) };
+      } catch (error) {
+        // Beyond the curve at this offset: no likelihood there (see calibratedGrid).
+        if (error instanceof CalibrationInputError) return null;
+        throw error;
+      }
     });
   }
 

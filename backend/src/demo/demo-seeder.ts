@@ -92,7 +92,7 @@ export class DemoSeeder {
       for (const unit of site.units) {
         const [row] = await tx
           .insert(schema.units)
-          .values({ siteId: siteRow.id, position: unit.position, name: unit.name, topDepthM: unit.topDepthM, baseDepthM: unit.baseDepthM, facies: unit.facies, notes: unit.notes ?? null })
+          .values({ siteId: siteRow.id, position: unit.position, name: unit.name, topDepthM: unit.topDepthM, baseDepthM: unit.baseDepthM, facies: unit.facies, basalErosionM: unit.basalErosionM, notes: unit.notes ?? null })
           .returning({ id: schema.units.id });
         unitIds.set(unit.key, row.id);
       }

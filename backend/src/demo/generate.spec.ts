@@ -213,8 +213,10 @@ describe(generateDemoScenario.name, () => {
         expect(younger.length, `${site.key} ${h.name} above`).toBeGreaterThan(0);
         for (const x of older) expect(x.truth.calBp).toBeGreaterThanOrEqual(eventCalBp);
         for (const x of younger) expect(x.truth.calBp).toBeLessThanOrEqual(eventCalBp);
-        // The sample just below dates the pre-event surface closely (slow trench soils less so).
-        const gap = Math.min(...older.map((x) => x.truth.calBp)) - eventCalBp;
+        // The sample just below dates the pre-event surface closely (slow trench soils less so); in a
+        // core that surface is the top of the mud the bed's base left, older than the event by the scour.
+        const surfaceCalBp = site.kind === 'CORE' ? unitOf(site, h.unitBelowKey).truth.topCalBp : eventCalBp;
+        const gap = Math.min(...older.map((x) => x.truth.calBp)) - surfaceCalBp;
         expect(gap, `${site.key} ${h.name}`).toBeLessThan(site.kind === 'TRENCH' ? 250 : 100);
       });
     }
@@ -317,6 +319,29 @@ describe(generateDemoScenario.name, () => {
         expect(Math.abs(u.baseDepthM - u.topDepthM - expected), `${site.key} ${u.key}`).toBeLessThanOrEqual(0.0011);
       }
       for (const u of site.units.filter((x) => x.facies === 'TURBIDITE')) expect(u.truth.topCalBp).toBe(u.truth.baseCalBp);
+    }
+  });
+
+  it('records each core turbidite\'s true basal erosion, logged with error or missed when thin, and no erosion elsewhere', () => {
+    const units = scenario.sites.flatMap((site) => site.units.map((unit) => ({ site, unit })));
+    const eroding = units.filter(({ unit }) => unit.truth.erodedM > 0);
+    expect(eroding.length).toBeGreaterThan(3);
+    for (const { site, unit } of eroding) {
+      expect(site.kind).toBe('CORE');
+      expect(unit.facies).toBe('TURBIDITE');
+      expect(unit.truth.erodedM).toBeGreaterThanOrEqual(0.003);
+      expect(unit.truth.erodedM).toBeLessThanOrEqual(0.03);
+      if (unit.truth.erodedM < 0.005) expect(unit.basalErosionM).toBeNull();
+      // A lognormal logging error of sd 0.35: within a factor of 3 (over 3 sd) of the truth.
+      if (unit.basalErosionM !== null) expect(Math.abs(Math.log(unit.basalErosionM / unit.truth.erodedM))).toBeLessThan(Math.log(3));
+    }
+    for (const { unit } of units.filter(({ unit }) => unit.truth.erodedM === 0)) expect(unit.basalErosionM).toBeNull();
+    // The mud under an eroding bed lost its top: its top age is older than the event the bed records.
+    for (const site of scenario.sites.filter((s) => s.kind === 'CORE')) {
+      const byPosition = [...site.units].sort((a, b) => a.position - b.position);
+      byPosition.forEach((unit, i) => {
+        if (unit.truth.erodedM > 0) expect(byPosition[i - 1].truth.topCalBp).toBeGreaterThan(unit.truth.baseCalBp);
+      });
     }
   });
 

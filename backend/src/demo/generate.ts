@@ -75,8 +75,13 @@ export interface DemoUnit {
   readonly baseDepthM: number;
   readonly facies: Facies;
   readonly notes: string;
-  /** True ages of the unit's top and base (equal for an instantaneous bed), and the event it is the first deposit of. */
-  readonly truth: { readonly topCalBp: number; readonly baseCalBp: number; readonly trueEventKey: string | null };
+  /** The researcher's logged thickness (m) of mud this unit's base eroded, or null (a core's turbidites only). */
+  readonly basalErosionM: number | null;
+  /**
+   * True ages of the unit's top and base (equal for an instantaneous bed), the event it is the first
+   * deposit of, and the true thickness (m) of mud its base eroded (0 when none).
+   */
+  readonly truth: { readonly topCalBp: number; readonly baseCalBp: number; readonly trueEventKey: string | null; readonly erodedM: number };
 }
 
 export interface DemoEventHorizon {
@@ -295,6 +300,8 @@ interface Span {
   readonly notes: string;
   /** Set when this deposit is the first one laid down after an earthquake. */
   readonly event?: EventMark;
+  /** A turbidite's erosion of the mud below it: the true thickness removed and the logged estimate (null when missed). */
+  readonly erosion?: { readonly trueM: number; readonly loggedM: number | null };
 }
 
 /** Thinnest unit the generator writes, m: thinner beds would vanish when depths are logged to the millimetre. */
@@ -401,6 +408,8 @@ function eventBedSpans(
       }
     : { facies: 'OTHER' as Facies, label: 'Gyttja', notes: 'Dark brown organic lake mud (gyttja), faintly laminated.' };
   const rate = layout.accumulationMmPerYr;
+  // Erosion draws come from their own stream, so the rest of the scenario is unchanged by them.
+  const erosionRng = new SeededRandom(seedOf(`erosion:${layout.key}`));
   const firstEventCalBp = eventsOldFirst.length > 0 ? eventsOldFirst[0].calBp : layout.recordYoungCalBp;
   const spans: Span[] = [background(mud.facies, mud.label, layout.recordOldCalBp, firstEventCalBp, rate, 0.01, mud.notes)];
   eventsOldFirst.forEach((event, i) => {
@@ -427,6 +436,7 @@ function eventBedSpans(
         ? 'Sandy base fining up to silt and a pale clay cap; sharp base.'
         : 'Graded silt bed with plant debris; sharp base.';
     }
+    const erosion = core ? basalErosion(erosionRng, spans, rate) : undefined;
     spans.push({
       facies: bedFacies,
       label: bedFacies === 'SAND_SHEET' ? 'Sand bed' : 'Turbidite',
@@ -435,10 +445,39 @@ function eventBedSpans(
       thicknessM,
       notes: bedNotes,
       event: { trueEventKey: event.key, evidence, quality, bedThicknessM: thicknessM },
+      ...(erosion ? { erosion } : {}),
     });
     spans.push(background(mud.facies, mud.label, event.calBp, nextCalBp, rate, 0.008, mud.notes));
   });
   return spans;
+}
+
+/** A whole-number seed from a text (FNV-1a). */
+function seedOf(text: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
+  return h | 0;
+}
+
+/**
+ * A turbidity current scours the top of the mud below it: in about half the beds, 3-30 mm (never
+ * more than half the mud's thickness) [common practice: basal scour of distal turbidites is
+ * millimetres to a few centimetres]. The mud below loses that thickness from its top, so its top
+ * age grows older; the researcher logs the scour with a lognormal error of about 35 % and misses
+ * it under 5 mm.
+ */
+function basalErosion(rng: SeededRandom, spans: Span[], mmPerYr: number): Span['erosion'] {
+  const below = spans[spans.length - 1];
+  const fullM = ((below.baseCalBp - below.topCalBp) * mmPerYr) / 1000;
+  if (rng.uniform() >= 0.5 || below.facies !== 'HEMIPELAGIC_MUD' || below.thicknessM > fullM + 1e-9) return undefined;
+  const trueM = Math.min(uniformBetween(rng, 0.003, 0.03), 0.5 * below.thicknessM);
+  const loggedEstimate = trueM * Math.exp(0.35 * rng.normal());
+  spans[spans.length - 1] = {
+    ...below,
+    thicknessM: below.thicknessM - trueM,
+    topCalBp: below.topCalBp + (trueM * 1000) / mmPerYr,
+  };
+  return { trueM, loggedM: trueM >= 0.005 ? Math.round(loggedEstimate * 1000) / 1000 : null };
 }
 
 /**
@@ -605,7 +644,8 @@ function assembleColumn(kind: SiteKind, spans: readonly Span[]): { units: DemoUn
     baseDepthM: bases[i],
     facies: span.facies,
     notes: span.notes,
-    truth: { topCalBp: span.topCalBp, baseCalBp: span.baseCalBp, trueEventKey: span.event?.trueEventKey ?? null },
+    basalErosionM: span.erosion?.loggedM ?? null,
+    truth: { topCalBp: span.topCalBp, baseCalBp: span.baseCalBp, trueEventKey: span.event?.trueEventKey ?? null, erodedM: span.erosion?.trueM ?? 0 },
   }));
 
   const horizons: DemoEventHorizon[] = horizonIndices.map((i) => {

@@ -38,7 +38,9 @@ export async function seedDemoIfEmpty(app: INestApplicationContext): Promise<voi
   const runIds: string[] = [];
   for (const siteId of siteIds) {
     const site = await sites.findById(siteId);
-    if (site) runIds.push((await ageModels.queue(site, { seed: DEMO_RUN_SEED }, null)).id);
+    // Cores are dated through their hemipelagic mud (issue 12); other sites by the ordering model.
+    const depthModel = site?.kind === 'CORE' ? 'HEMIPELAGIC_RATE' : 'ORDER_ONLY';
+    if (site) runIds.push((await ageModels.queue(site, { seed: DEMO_RUN_SEED, depthModel }, null)).id);
   }
   logger.log(`queued ${runIds.length} age model runs`);
   queueAnalysisWhenRunsEnd(app, projectId, runIds, logger);

@@ -377,3 +377,17 @@ export function reservoirSources(entries: readonly MarineEntry[]): {
   }
   return { sources, keyOf, problems };
 }
+
+/**
+ * A source's grid kept to the values at which every one of its samples can be calibrated: at an
+ * offset that puts a 14C age beyond the curve, the measurement's likelihood is taken as zero and the
+ * grid value dropped (only the far tails of the prior, at a curve's ends). `perSample[i][k]` is
+ * sample i's calibration at grid value k, or null when it cannot be calibrated there.
+ */
+export function calibratedGrid<T>(source: ReservoirSource, perSample: readonly (readonly (T | null)[])[]): { source: ReservoirSource; perSample: T[][] } {
+  const keep = source.grid.map((_, k) => perSample.every((row) => row[k] !== null));
+  return {
+    source: { ...source, grid: source.grid.filter((_, k) => keep[k]) },
+    perSample: perSample.map((row) => row.filter((_, k) => keep[k]) as T[]),
+  };
+}

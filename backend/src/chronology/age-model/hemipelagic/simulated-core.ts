@@ -9,11 +9,12 @@
  * some levels are reworked (older by hundreds of years) or burrowed in (younger) without the
  * researcher knowing. Names and ids are invented.
  */
-import { calibrateRadiocarbon } from '../../calibration/calibrate';
+import { calibrateRadiocarbon, CalibrationResult } from '../../calibration/calibrate';
+import { CalibrationInputError } from '../../calibration/errors';
 import { CalibrationCurve } from '../../calibration/curve';
 import { SeededRandom } from '../../common/random';
 import { AgeModelInput, ColumnEventHorizon, ColumnSample, ColumnUnit } from '../column';
-import { reservoirSources } from '../reservoir-offsets';
+import { calibratedGrid, reservoirSources } from '../reservoir-offsets';
 
 export interface SimulatedCoreOptions {
   readonly seed: number;
@@ -147,7 +148,8 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
 
   const samples: ColumnSample[] = [];
   const shared = options.sharedDeltaR !== false && options.deltaRError > 0;
-  const { sources } = reservoirSources(shared ? [{ id: 'all', name: 'all', deltaR: options.deltaR, deltaRError: options.deltaRError, source: 'Simulated shelf' }] : []);
+  const { sources: [source] } = reservoirSources(shared ? [{ id: 'all', name: 'all', deltaR: options.deltaR, deltaRError: options.deltaRError, source: 'Simulated shelf' }] : []);
+  const grids: (CalibrationResult | null)[][] = [];
   const trueLevelAges = new Map<string, number>();
   for (let s = 0; s < options.levels; s++) {
     // Levels spread over the core: the s-th level in the s-th share of the mud intervals.
@@ -176,21 +178,35 @@ export function simulateCore(marineCurve: CalibrationCurve, options: SimulatedCo
         deltaR: options.deltaR,
         deltaRError: options.deltaRError,
       }).density,
-      ...(shared
-        ? {
-            reservoir: {
-              sourceKey: sources[0].key,
-              ...((grid) => ({ gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => Math.log(g.likelihoodMass!)) }))(
-                sources[0].grid.map((deltaR) => calibrateRadiocarbon({ c14Age, c14Error: options.labErrorC14, curve: marineCurve, deltaR, deltaRError: 0 })),
-              ),
-            },
-          }
-        : {}),
     });
+    if (shared) {
+      grids.push(
+        source.grid.map((deltaR) => {
+          try {
+            return calibrateRadiocarbon({ c14Age, c14Error: options.labErrorC14, curve: marineCurve, deltaR, deltaRError: 0 });
+          } catch (error) {
+            if (error instanceof CalibrationInputError) return null;
+            throw error;
+          }
+        }),
+      );
+    }
     trueLevelAges.set(id, age);
   }
+  let reservoir: AgeModelInput['reservoirSources'];
+  if (shared) {
+    const kept = calibratedGrid(source, grids);
+    reservoir = [kept.source];
+    samples.forEach((sample, i) => {
+      const grid = kept.perSample[i];
+      samples[i] = {
+        ...sample,
+        reservoir: { sourceKey: source.key, gridLikelihoods: grid.map((g) => g.density), gridLogMass: grid.map((g) => Math.log(g.likelihoodMass!)) },
+      };
+    });
+  }
   return {
-    input: { units, eventHorizons, samples, orderSamplesByDepth: true, ...(shared ? { reservoirSources: sources } : {}) },
+    input: { units, eventHorizons, samples, orderSamplesByDepth: true, ...(reservoir ? { reservoirSources: reservoir } : {}) },
     trueEventAges,
     trueErosionM,
     trueRatesCmPerKyr: rates,
