@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AgeModelJob } from '../../backend/src/age-models/age-model.job';
+import { AgeModelRunsRepository } from '../../backend/src/age-models/age-model-runs.repository';
 import { RunExecutor } from '../../backend/src/jobs/run-executor';
+import { RefreshRepository } from '../../backend/src/provenance/refresh.repository';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
 import { GraphqlClient } from '../support/graphql';
@@ -191,5 +193,29 @@ describe('the sparsely dated column of issue 12, built through the API', () => {
     expect(younger).toBeLessThanOrEqual(0.03);
     expect(younger).toBeGreaterThan(0.002);
     for (const h of horizons) expect(h.latestPosterior.hpd95.length).toBeLessThanOrEqual(4);
+  });
+});
+
+describe('the run a site feeds downstream', () => {
+  it('is the same run for the ladder, site recurrence and the refresh plan: the newest successful, not a newer failed or running one', async () => {
+    const site = (await buildColumn(clients.RESEARCHER, 'AMD', false)).siteId;
+    const insert = async (status: string, minutesAgo: number) =>
+      (
+        await sql<{ id: string }>(
+          `insert into age_model_runs (site_id, status, progress, seed, settings, input_snapshot, input_fingerprint, created_at)
+           values ($1, $2, 1, 5, '{}'::jsonb, '{}'::jsonb, 'fixture', now() - make_interval(mins => $3)) returning id`,
+          [site, status, minutesAgo],
+        )
+      )[0].id;
+    await insert('SUCCEEDED', 30);
+    const newerSuccess = await insert('SUCCEEDED', 20);
+    await insert('FAILED', 10);
+    await insert('RUNNING', 5);
+    const runs = server.app.get(AgeModelRunsRepository);
+    expect(await runs.latestSucceededRunIds([site, emptySiteId])).toEqual([{ id: newerSuccess, siteId: site }]);
+    expect((await runs.latestSucceededForSite(site))?.id).toBe(newerSuccess);
+    expect((await runs.latestSucceededForSite(emptySiteId))).toBeUndefined();
+    const refreshRuns = (await server.app.get(RefreshRepository).latestSiteRuns(fixture.projectId)).filter((r) => r.siteId === site);
+    expect(refreshRuns.map((r) => r.id)).toEqual([newerSuccess]);
   });
 });

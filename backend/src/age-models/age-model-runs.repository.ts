@@ -1,9 +1,10 @@
 import { Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray, sql } from 'drizzle-orm';
+import { desc, eq, inArray, sql } from 'drizzle-orm';
 import { QueryResult } from 'pg';
 import { DatabaseService, Executor } from '../database/database.service';
-import { ageModelRuns } from '../database/schema';
+import { ageModelRuns, sites } from '../database/schema';
 import { RunsRepository } from '../jobs/runs.repository';
+import { downstreamRunIds } from './downstream-runs';
 
 export type AgeModelRunRow = typeof ageModelRuns.$inferSelect;
 
@@ -64,13 +65,12 @@ export class AgeModelRunsRepository {
     return row;
   }
 
-  /** A site's newest successful run with its whole results, joint event draws included (site recurrence). */
+  /** The site's run used downstream (`downstreamRunIds`) with its whole results, joint event draws included (site recurrence). */
   async latestSucceededForSite(siteId: string, executor: Executor = this.database.db): Promise<AgeModelRunRow | undefined> {
     const [row] = await executor
       .select()
       .from(ageModelRuns)
-      .where(and(eq(ageModelRuns.siteId, siteId), eq(ageModelRuns.status, 'SUCCEEDED')))
-      .orderBy(desc(ageModelRuns.createdAt))
+      .where(inArray(ageModelRuns.id, downstreamRunIds(executor, eq(sites.id, siteId))))
       .limit(1);
     return row;
   }
@@ -104,14 +104,13 @@ export class AgeModelRunsRepository {
     return this.runs.statusOf(ageModelRuns, id);
   }
 
-  /** Id of each site's newest successful age model run, without loading its results. */
+  /** Id of each site's run used downstream (`downstreamRunIds`), without loading its results. */
   async latestSucceededRunIds(siteIds: string[], executor: Executor = this.database.db): Promise<{ id: string; siteId: string }[]> {
     if (siteIds.length === 0) return [];
     return executor
-      .selectDistinctOn([ageModelRuns.siteId], { id: ageModelRuns.id, siteId: ageModelRuns.siteId })
+      .select({ id: ageModelRuns.id, siteId: ageModelRuns.siteId })
       .from(ageModelRuns)
-      .where(and(inArray(ageModelRuns.siteId, siteIds), eq(ageModelRuns.status, 'SUCCEEDED')))
-      .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
+      .where(inArray(ageModelRuns.id, downstreamRunIds(executor, inArray(sites.id, siteIds))));
   }
 
   /**

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { downstreamRunIds } from '../age-models/downstream-runs';
 import { DatabaseService, Executor } from '../database/database.service';
 import { ageModelRuns, recurrenceAnalyses, refreshPlans, refreshSettings, refreshSteps, sites, users } from '../database/schema';
 
@@ -52,10 +53,10 @@ export class RefreshRepository {
     await this.database.db.update(refreshPlans).set({ status: 'FINISHED', updatedAt: new Date() }).where(and(eq(refreshPlans.id, id), eq(refreshPlans.status, 'ACTIVE')));
   }
 
-  /** Each site's newest successful age model run in the project, with the site's current revision. */
+  /** Each site's run used downstream (`downstreamRunIds`) in the project, with the site's current revision. */
   latestSiteRuns(projectId: string) {
     return this.database.db
-      .selectDistinctOn([ageModelRuns.siteId], {
+      .select({
         id: ageModelRuns.id,
         siteId: ageModelRuns.siteId,
         siteName: sites.name,
@@ -65,8 +66,8 @@ export class RefreshRepository {
       })
       .from(ageModelRuns)
       .innerJoin(sites, eq(sites.id, ageModelRuns.siteId))
-      .where(and(eq(sites.projectId, projectId), eq(ageModelRuns.status, 'SUCCEEDED')))
-      .orderBy(ageModelRuns.siteId, desc(ageModelRuns.createdAt));
+      .where(inArray(ageModelRuns.id, downstreamRunIds(this.database.db, eq(sites.projectId, projectId))))
+      .orderBy(ageModelRuns.siteId);
   }
 
   /** Sites that already have a queued or running run of their current column. */
