@@ -243,6 +243,7 @@ export class ResultTablesService {
     const analyses = [];
     const runTables = new Map<string, ResultTable>();
     const figures: BundleFigure[] = [];
+    const jointRuns = new Map<string, { id: string; name: string; usedBy: string[] }>();
     const csvFiles: { name: string; table: string; content: string }[] = [];
     for (const [index, { id, status }] of pinned.entries()) {
       if (status !== 'SUCCEEDED') continue;
@@ -255,6 +256,11 @@ export class ResultTablesService {
       const title = segment ? `Events of the analysis of segment ${segment}` : 'Events of the site analysis';
       figures.push(this.figureOf(`${name}-events.svg`, title, events, (row) => String(row.members)));
       for (const input of await this.provenance.inputsOf({ kind: 'recurrenceAnalysis', id })) {
+        if (input.kind === 'jointRun') {
+          const entry = jointRuns.get(input.id) ?? { id: input.id, name: input.name, usedBy: [] };
+          entry.usedBy.push(id);
+          jointRuns.set(input.id, entry);
+        }
         if (input.kind !== 'ageModelRun' || runTables.has(input.id)) continue;
         const run = await this.runs.findById(input.id);
         if (run?.status === 'SUCCEEDED') runTables.set(input.id, await this.runEventsTable(run));
@@ -274,6 +280,8 @@ export class ResultTablesService {
       data: release.snapshot,
       recurrenceAnalyses: analyses,
       ageModelRuns: [...runTables.values()].map(tableJson),
+      /** Joint age model runs the pinned analyses used (their event ages are in each analysis' event table). */
+      jointRuns: [...jointRuns.values()],
       csvFiles,
       figures,
       note: 'Age model runs and analyses are computed results, not frozen data: those listed here are the analyses pinned to this release (pinned only while the live data were exactly as released) and the runs they used. Each figure is drawn from the rows of the table it names.',

@@ -53,6 +53,15 @@ describe(recurrenceExportCsv.name, () => {
     expect(named).toContain('age model runs,Tarn Flat (r1); r2');
     expect(named).toContain('age model run ids,r1 r2');
     expect(named).toContain('seed,5');
+    expect(named.some((line) => line.startsWith('joint age model run'))).toBe(false);
+  });
+
+  it('names the joint run an analysis drew from, with its id', () => {
+    const joint = recurrenceExportCsv(
+      { ...HEADER, ageModelRunIds: [], jointRunId: 'j1', names: { project: 'P', segment: 'North', site: null, hypothesis: 'H', ageModelRuns: [], jointRun: 'joint run under H' } },
+      RESULTS,
+    ).split('\r\n');
+    expect(joint).toContain('joint age model run,joint run under H (j1)');
   });
 
   it('starts no text cell with a formula character (negative numbers stay numbers)', () => {

@@ -18,6 +18,8 @@ export interface RecurrenceExportHeader {
   hypothesisId: string | null;
   hypothesisVersion: number | null;
   ageModelRunIds: string[];
+  /** The joint age model run whose draws it used, if any (then ageModelRunIds is empty). */
+  jointRunId?: string | null;
   seed: number;
   forecastStartYear: number;
   windowsYears: number[];
@@ -32,6 +34,8 @@ export interface RecurrenceExportHeader {
     hypothesis: string | null;
     /** Per entry of ageModelRunIds: the run's site. */
     ageModelRuns: (string | null)[];
+    /** What the joint run is called in its recorded input (its hypothesis). */
+    jointRun?: string | null;
   };
 }
 
@@ -145,6 +149,7 @@ export function recurrenceExportCsv(
     ['hypothesis version', header.hypothesisVersion],
     ['age model runs', header.ageModelRunIds.map((id, i) => (header.names?.ageModelRuns[i] ? `${header.names.ageModelRuns[i]} (${id})` : id)).join('; ')],
     ['age model run ids', header.ageModelRunIds.join(' ')],
+    ...(header.jointRunId ? [['joint age model run', header.names?.jointRun ? `${header.names.jointRun} (${header.jointRunId})` : header.jointRunId]] : []),
     ['seed', header.seed],
     ['forecast start year (CE)', header.forecastStartYear],
     ['windows (years)', header.windowsYears.join(' ')],

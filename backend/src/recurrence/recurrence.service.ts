@@ -288,6 +288,7 @@ export class RecurrenceService {
       hypothesisId: analysis.hypothesisId,
       hypothesisVersion: analysis.hypothesisVersion,
       ageModelRunIds,
+      jointRunId: recorded.find((i) => i.kind === 'jointRun')?.id ?? null,
       seed: analysis.seed,
       forecastStartYear: analysis.forecastStartYear,
       windowsYears: analysis.windowsYears,
@@ -300,6 +301,7 @@ export class RecurrenceService {
         site: (await this.siteOf(analysis))?.name ?? null,
         hypothesis: recorded.find((i) => i.kind === 'hypothesis')?.name ?? null,
         ageModelRuns: ageModelRunIds.map((id) => runName.get(id) ?? null),
+        jointRun: recorded.find((i) => i.kind === 'jointRun')?.name ?? null,
       },
     };
     const table = eventTableOf(analysis);

@@ -51,6 +51,7 @@ export function RefreshPanel({ projectId, canConfigure, onShowAnalysis }: Refres
       const siteId = siteOfRun.get(step.freshId);
       return siteId ? <Link to={paths.ageModel(projectId, siteId)}>fresh run</Link> : null;
     }
+    if (step.kind === 'jointRun') return <Link to={paths.ladder(projectId)}>joint run on the ladder</Link>;
     if (step.kind === 'recurrenceAnalysis' && onShowAnalysis && step.status === 'SUCCEEDED') {
       return (
         <Button size="small" variant="minimal" text="show fresh analysis" onClick={() => onShowAnalysis(step.freshId!)} />
