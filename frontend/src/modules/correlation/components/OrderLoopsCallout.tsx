@@ -27,7 +27,7 @@ export function OrderLoopsCallout({ loops, selectedKey, onSelect }: OrderLoopsCa
                 size="small"
                 variant={chosen ? 'solid' : 'outlined'}
                 intent={chosen ? Intent.WARNING : Intent.NONE}
-                icon={IconNames.CYCLE}
+                icon={IconNames.HIGHLIGHT}
                 text={`loop ${index + 1}`}
                 aria-pressed={chosen}
                 title={chosen ? 'Draw every loop alike' : 'Pick this loop out on the ladder'}
