@@ -292,7 +292,7 @@ export function LadderView({ projectId }: LadderViewProps) {
                 <Tab id="regional" title={`Regional events (${hypothesis.regionalEvents.length})`} panel={<RegionalEventsPanel projectId={projectId} hypothesis={hypothesis} eventLabels={eventNames} />} />
                 <Tab
                   id="joint"
-                  title={hypothesis.latestJointRun ? `Joint run (${hypothesis.latestJointRun.status.toLowerCase()})` : 'Joint run'}
+                  title="Joint run"
                   panel={<JointRunPanel projectId={projectId} hypothesis={hypothesis} canRun={canEdit} eventLabels={eventNames} />}
                 />
                 <Tab

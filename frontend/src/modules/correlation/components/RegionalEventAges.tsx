@@ -33,7 +33,7 @@ export function RegionalEventAges({ event }: RegionalEventAgesProps) {
                 </Tag>
               )}
             </th>
-            <td>{age.medianCalBp === null ? <span className="sc-chart-legend">no fresh run</span> : <AgeValue calBp={age.medianCalBp} />}</td>
+            <td>{age.medianCalBp === null ? <span className="sc-chart-legend">{age.missing}</span> : <AgeValue calBp={age.medianCalBp} />}</td>
             <td>{age.medianCalBp === null ? '–' : <AgeRangesValue ranges={age.hpd95} />}</td>
           </tr>
         ))}

@@ -31,5 +31,6 @@ describe('regionalAges', () => {
     expect(ages.jointShown).toBe(false);
     expect(ages.shown.medianCalBp).toBe(1500);
     expect(ages.other.medianCalBp).toBeNull();
+    expect(ages.other.missing).toBe('no up-to-date joint run');
   });
 });

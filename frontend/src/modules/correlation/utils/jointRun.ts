@@ -33,8 +33,8 @@ export type RegionalAgeFields = {
 
 /** The age a regional event shows (the joint one when the server says a fresh joint run dates it) and the other one beside it. */
 export function regionalAges(event: RegionalAgeFields) {
-  const joint = { label: 'Joint run', medianCalBp: event.jointMedianCalBp ?? null, hpd95: event.jointHpd95 };
-  const combined = { label: 'Independent', medianCalBp: event.combinedMedianCalBp ?? null, hpd95: event.combinedHpd95 };
+  const joint = { label: 'Joint run', medianCalBp: event.jointMedianCalBp ?? null, hpd95: event.jointHpd95, missing: 'no up-to-date joint run' };
+  const combined = { label: 'Independent', medianCalBp: event.combinedMedianCalBp ?? null, hpd95: event.combinedHpd95, missing: 'no combined age' };
   return event.ageShown === 'JOINT_RUN' ? { shown: joint, other: combined, jointShown: true } : { shown: combined, other: joint, jointShown: false };
 }
 
