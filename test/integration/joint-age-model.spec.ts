@@ -4,7 +4,11 @@ import { normalDensity, summarise } from '../../backend/src/chronology/common/de
 import { SeededRandom } from '../../backend/src/chronology/common/random';
 import type { JointAgeModelResult, JointChainDraws, JointChainSettings, JointModelInput } from '../../backend/src/chronology/joint-age-model/types';
 import { JointChainJob } from '../../backend/src/correlation/joint-runs/joint-chain.job';
+import { JobQueueService } from '../../backend/src/jobs/job-queue.service';
+import { JobReaper } from '../../backend/src/jobs/job-reaper';
+import { JobRegistry } from '../../backend/src/jobs/job-registry';
 import { RunExecutor } from '../../backend/src/jobs/run-executor';
+import { RunsRepository } from '../../backend/src/jobs/runs.repository';
 import { RecurrenceJob } from '../../backend/src/recurrence/recurrence.job';
 import { startTestServer, TestServer } from '../support/app';
 import { createProjectFixture, FixtureRole, PASSWORD, ProjectFixture, sql } from '../support/fixtures';
@@ -369,6 +373,22 @@ describe('cancelling and failing', () => {
     expect(run.status).toBe('FAILED');
     expect(run.message).toContain('chain 1 of 2 failed');
     expect(run.message).toContain('test double: this seed fails');
+    expect(run.chains.map((c: { status: string }) => c.status)).toEqual(['FAILED', 'CANCELLED']);
+  });
+});
+
+describe('a chain whose worker died', () => {
+  it('is given up by the reaper after its last attempt, which fails the run and stops its other chains', async () => {
+    const runId = await startJoint({});
+    const [first] = await sql<{ id: string }>(`select id from joint_age_model_chains where run_id = $1 and chain_index = 0`, [runId]);
+    // As a worker that claimed the chain for its last attempt and then vanished leaves it.
+    await sql(`update joint_age_model_chains set status = 'RUNNING', attempts = 2, updated_at = now() - interval '1 hour' where id = $1`, [first.id]);
+    await sql(`update joint_age_model_runs set status = 'RUNNING' where id = $1`, [runId]);
+    const reaper = new JobReaper(server.app.get(JobRegistry), server.app.get(RunsRepository), server.app.get(JobQueueService));
+    await reaper.reapOnce();
+    const run = await runOf(runId);
+    expect(run.status).toBe('FAILED');
+    expect(run.message).toMatch(/^chain 1 of 2 failed: the worker stopped during the run 2 times/);
     expect(run.chains.map((c: { status: string }) => c.status)).toEqual(['FAILED', 'CANCELLED']);
   });
 });
