@@ -260,7 +260,7 @@ function firstSiteLink(page) {
 
 const LAB_SHEET_HEADER = 'labCode,unit,depthM,method,material,c14Age,c14Error,curve';
 
-async function researcherBuildsSite(page, { baseUrl, shot, width }) {
+async function researcherBuildsSite(page, { baseUrl, shot, width, round }) {
   const siteName = `E2E Marsh ${width}`;
   await signIn(page, baseUrl, 'researcher@demo.test');
   await openProject(page);
@@ -282,7 +282,7 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
   await page.getByRole('button', { name: 'Add unit' }).waitFor();
 
   for (const [name, top, base] of [
-    ['tidal mud', '1.2', '2.0'],
+    ['tidal mud', '1.3', '2.0'],
     ['peat', '0.5', '1.2'],
   ]) {
     await page.getByRole('button', { name: 'Add unit' }).click();
@@ -294,6 +294,19 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
     await dialog.waitFor({ state: 'detached' });
     await page.getByRole('cell', { name, exact: true }).waitFor();
   }
+  // A unit inserted mid-column, below the peat, into the 1.2-1.3 m gap: the dialog fills the gap's
+  // depths and position 2, says the peat moves up, and the server renumbers it in the same write.
+  await page.getByRole('button', { name: 'Insert a unit below peat' }).click();
+  const insertDialog = page.getByRole('dialog');
+  await insertDialog.locator('#name').fill('sand lens');
+  check((await insertDialog.locator('#topDepthM').inputValue()) === '1.2' && (await insertDialog.locator('#baseDepthM').inputValue()) === '1.3', 'the insert dialog does not fill the gap below the peat');
+  await insertDialog.getByTestId('unit-insert-note').waitFor();
+  await shot('unit-insert');
+  await insertDialog.getByRole('button', { name: 'Insert unit' }).click();
+  await insertDialog.waitFor({ state: 'detached' });
+  await page.getByRole('cell', { name: 'sand lens', exact: true }).waitFor();
+  const positions = async (name) => (await page.locator('tr', { has: page.getByRole('cell', { name, exact: true }) }).first().locator('td').first().innerText()).trim();
+  check((await positions('sand lens')) === '2' && (await positions('peat')) === '3' && (await positions('tidal mud')) === '1', 'inserting below the peat did not renumber the column 1, 2, 3');
   // Every site control is offered once the column has two units (a horizon lies between two).
   await checkControls(page, EDIT_CONTROLS.site, true, 'the researcher');
   await page.getByRole('button', { name: 'Add event horizon' }).click();
@@ -317,10 +330,26 @@ async function researcherBuildsSite(page, { baseUrl, shot, width }) {
   const importDialog = page.getByRole('dialog');
   // Lab codes are unique in a project: each width's round imports its own.
   const [firstCode, secondCode] = [`E2E-${width}-101`, `E2E-${width}-102`];
+  // The laboratory calls the lab code "Lab ID": the first round maps it once (one problem names
+  // the header, in the Header row, not "row 0"); the project remembers it for the next round.
+  const labHeader = LAB_SHEET_HEADER.replace('labCode', 'Lab ID');
   const sheet = (secondError) =>
-    [LAB_SHEET_HEADER, `${firstCode},tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20`, `${secondCode},peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
+    [labHeader, `${firstCode},tidal mud,1.5,RADIOCARBON,PLANT_MACROFOSSIL,1480,30,INTCAL20`, `${secondCode},peat,0.8,RADIOCARBON,PLANT_MACROFOSSIL,1210,${secondError},INTCAL20`].join('\n');
   await importDialog.locator('#import-csv').fill(sheet(0));
   await importDialog.getByRole('button', { name: 'Check sheet' }).click();
+  const choices = importDialog.getByTestId('import-column-choices');
+  await choices.waitFor();
+  const labIdRow = choices.locator('tr', { hasText: 'Lab ID' });
+  if ((await labIdRow.innerText()).includes('not recognised')) {
+    const headerProblems = importDialog.locator('tr', { hasText: 'not recognised:' });
+    await headerProblems.first().waitFor();
+    check((await headerProblems.count()) === 1, `the unrecognised header is reported ${await headerProblems.count()} times, not once`);
+    check((await headerProblems.first().locator('td').first().innerText()).trim() === 'Header', 'a header problem is not reported on the Header row');
+    await shot('import-header-mapping');
+    await importDialog.getByLabel('Field held by column Lab ID').selectOption('labCode');
+  } else {
+    check(round > 0 && (await labIdRow.innerText()).includes('remembered for this project'), 'the Lab ID mapping is neither asked for nor remembered');
+  }
   const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
   await problemRow.waitFor();
   check((await problemRow.locator('td').first().innerText()).trim() === 'Row 2', 'the c14Error problem is not reported on row 2');
@@ -427,6 +456,59 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const ladder = page.getByRole('img', { name: 'Event ladder' });
   await ladder.waitFor();
   await shot('ladder');
+  // Site names over the columns never overlap (1440 and 1024 px alike).
+  const headerOverlaps = () =>
+    page.evaluate((selector) => {
+      const boxes = [...document.querySelectorAll(selector)].map((element) => element.getBoundingClientRect()).filter((box) => box.width > 0);
+      const hits = [];
+      for (let i = 0; i < boxes.length; i += 1)
+        for (let j = i + 1; j < boxes.length; j += 1) {
+          const [a, b] = [boxes[i], boxes[j]];
+          if (a.left < b.right - 0.5 && b.left < a.right - 0.5 && a.top < b.bottom - 0.5 && b.top < a.bottom - 0.5) hits.push(`${i}/${j}`);
+        }
+      return hits;
+    }, 'svg[aria-label="Event ladder"] g.sc-ladder-header > text, svg[aria-label="Regional events in space and time"] text.sc-site-label');
+  const ladderOverlaps = await headerOverlaps();
+  check(ladderOverlaps.length === 0, `ladder column labels overlap: ${ladderOverlaps.join(', ')}`);
+  // Regional events are numbered on the chart, and a failing one is marked by a sign, not colour alone.
+  await ladder.locator('text', { hasText: /^R1( ✕)?$/ }).first().waitFor();
+  const failingBands = await ladder.locator('[data-fails="true"]').count();
+  const crossed = await ladder.locator('text', { hasText: /^R\d+ ✕$/ }).count();
+  check(crossed === failingBands, `${failingBands} failing regional events but ${crossed} marked ✕`);
+  // Keyboard: Tab reaches an event, arrows move between events, Enter selects one.
+  await page.locator('.sc-ladder-event').first().focus();
+  const focusedLabel = () => page.evaluate(() => (document.activeElement?.classList.contains('sc-ladder-event') ? document.activeElement.getAttribute('aria-label') : null));
+  const startLabel = await focusedLabel();
+  await page.keyboard.press('ArrowDown');
+  await page.keyboard.press('ArrowRight');
+  const movedLabel = await focusedLabel();
+  check(startLabel !== null && movedLabel !== null && movedLabel !== startLabel, `arrow keys did not move the focus between ladder events (${startLabel} -> ${movedLabel})`);
+  await page.keyboard.press('Enter');
+  await page.getByText(/^Selected: /).first().waitFor();
+  await shot('ladder-keyboard');
+  await page.getByRole('button', { name: 'Clear selection' }).click();
+  // The Ties tab names each event with its site.
+  await page.getByRole('tab', { name: /Ties/ }).click();
+  const firstTie = (await page.locator('.bp6-tab-panel tbody tr').first().locator('td').first().innerText()).trim();
+  check(/ at .+ – .+ at /.test(firstTie), `a tie is listed without site names: "${firstTie}"`);
+  await page.getByRole('tab', { name: /Regional events/ }).click();
+  // A figure-ready export: title, caption with units, the legend and the numbered events in the file.
+  const [ladderSvg] = await Promise.all([page.waitForEvent('download', { timeout: STEP_TIMEOUT_MS }), page.getByRole('button', { name: 'SVG', exact: true }).first().click()]);
+  const ladderFile = join(E2E_DIR, 'ladder.svg');
+  await ladderSvg.saveAs(ladderFile);
+  const ladderText = readFileSync(ladderFile, 'utf8');
+  check(/font-weight="600" fill="#1c2127">Event ladder · Velmora Margin/.test(ladderText) && /cal BP|CE\/BCE/.test(ladderText) && ladderText.includes('regional event (R#)'), 'the exported ladder lacks its title, units or legend');
+  // Space-time: segment boundaries, numbered events, labels apart.
+  await page.getByText('Space–time', { exact: true }).click();
+  const spaceTime = page.getByRole('img', { name: 'Regional events in space and time' });
+  await spaceTime.waitFor();
+  check((await spaceTime.locator('[data-segment-boundary]').count()) > 0, 'space-time shows no segment boundaries');
+  await spaceTime.locator('text', { hasText: /^R1( ✕)?$/ }).first().waitFor();
+  const spaceTimeOverlaps = await headerOverlaps();
+  check(spaceTimeOverlaps.length === 0, `space-time site labels overlap: ${spaceTimeOverlaps.join(', ')}`);
+  await shot('space-time');
+  await page.getByText('Ladder', { exact: true }).first().click();
+  await ladder.waitFor();
   // Tie in a new, empty hypothesis of the correlator's own: no earlier tie can then chain the
   // pair into a same-site join, so the first pair in different columns is accepted.
   await page.getByRole('button', { name: 'New hypothesis' }).click();
@@ -503,6 +585,15 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   await card.scrollIntoViewIfNeeded();
   log(`ladder: tied ${pairLine}; ties ${tiesBefore} -> ${await tiesOf()}; regional events ${regionalBefore} -> ${await countOf()}; chi-square ${chiSquare}`);
   await shot('regional-event');
+  // Side by side with another hypothesis says what differs and marks the differing ties.
+  await page.getByText('Side by side', { exact: true }).click();
+  const differences = page.getByTestId('ladder-differences');
+  await differences.waitFor();
+  check(/What differs: \d+ ties? only in .+, \d+ only in /.test(await differences.innerText()), 'side by side does not say what differs');
+  await waitForCount(page.locator('[data-tie-differs="true"]'), (count) => count > 0, 'ties marked as only in one hypothesis');
+  await shot('side-by-side');
+  await page.getByText('Side by side', { exact: true }).click();
+  await differences.waitFor({ state: 'detached' });
   await correlatorSeesOrderLoop(page, baseUrl, shot);
   await correlatorAcceptsProposedTie(page, baseUrl, shot);
 }
@@ -578,6 +669,10 @@ async function analystRunsRecurrence(page, { baseUrl, shot, round }) {
   check(cells.length >= 2 && cells.slice(1).some((text) => /\d/.test(text)), `the probability table's first row has no figures: ${cells.join(' | ')}`);
   log(`recurrence: ${cells.join(' | ')}`);
   await shot('results');
+  // Interval rows name their events ("... (2) → ... (1)"), not bare numbers.
+  const intervalTable = page.locator('table', { has: page.locator('th', { hasText: 'Between events' }) }).first();
+  const firstInterval = (await intervalTable.locator('tbody tr').first().locator('td').first().innerText()).trim();
+  check(/[A-Za-z].* \(2\) → .*[A-Za-z].* \(1\)/.test(firstInterval) && !/^event \d/.test(firstInterval), `an interval row does not name its events: "${firstInterval}"`);
 
   const [download] = await Promise.all([page.waitForEvent('download', { timeout: STEP_TIMEOUT_MS }), page.getByRole('button', { name: 'CSV', exact: true }).click()]);
   const file = join(E2E_DIR, 'recurrence.csv');

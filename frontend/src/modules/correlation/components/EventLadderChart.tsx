@@ -189,7 +189,7 @@ export function EventLadderChart({ columns, hypothesis, selectedEventIds, onSele
             const labelTop = (label?.row ?? 0) * HEADER_ROW_PX;
             const detail = `${column.site.kind.toLowerCase()} · ${column.site.alongStrikeKm.toFixed(0)} km`;
             return (
-              <g key={column.site.id}>
+              <g key={column.site.id} className="sc-ladder-header">
                 <text x={label?.x ?? x} y={18 + labelTop} fontSize={12} fontWeight={600} fill={CHART_COLOURS.text}>
                   <title>{column.site.name}</title>
                   {label?.text ?? column.site.name}
