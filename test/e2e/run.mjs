@@ -341,7 +341,7 @@ async function researcherBuildsSite(page, { baseUrl, shot, width, round }) {
   await choices.waitFor();
   const labIdRow = choices.locator('tr', { hasText: 'Lab ID' });
   if ((await labIdRow.innerText()).includes('not recognised')) {
-    const headerProblems = importDialog.locator('tr', { hasText: 'not recognised:' });
+    const headerProblems = importDialog.getByTestId('import-problems').locator('tr', { hasText: 'not recognised:' });
     await headerProblems.first().waitFor();
     check((await headerProblems.count()) === 1, `the unrecognised header is reported ${await headerProblems.count()} times, not once`);
     check((await headerProblems.first().locator('td').first().innerText()).trim() === 'Header', 'a header problem is not reported on the Header row');
@@ -350,7 +350,7 @@ async function researcherBuildsSite(page, { baseUrl, shot, width, round }) {
   } else {
     check(round > 0 && (await labIdRow.innerText()).includes('remembered for this project'), 'the Lab ID mapping is neither asked for nor remembered');
   }
-  const problemRow = importDialog.locator('tr', { hasText: 'c14Error' });
+  const problemRow = importDialog.getByTestId('import-problems').locator('tr', { hasText: 'c14Error' });
   await problemRow.waitFor();
   check((await problemRow.locator('td').first().innerText()).trim() === 'Row 2', 'the c14Error problem is not reported on row 2');
   await shot('import-row-error');
@@ -499,7 +499,7 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const ladderText = readFileSync(ladderFile, 'utf8');
   check(/font-weight="600" fill="#1c2127">Event ladder · Velmora Margin/.test(ladderText) && /cal BP|CE\/BCE/.test(ladderText) && ladderText.includes('regional event (R#)'), 'the exported ladder lacks its title, units or legend');
   // Space-time: segment boundaries, numbered events, labels apart.
-  await page.getByText('Space–time', { exact: true }).click();
+  await page.locator('.bp6-segmented-control').getByText('Space–time', { exact: true }).click();
   const spaceTime = page.getByRole('img', { name: 'Regional events in space and time' });
   await spaceTime.waitFor();
   check((await spaceTime.locator('[data-segment-boundary]').count()) > 0, 'space-time shows no segment boundaries');
@@ -507,7 +507,7 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
   const spaceTimeOverlaps = await headerOverlaps();
   check(spaceTimeOverlaps.length === 0, `space-time site labels overlap: ${spaceTimeOverlaps.join(', ')}`);
   await shot('space-time');
-  await page.getByText('Ladder', { exact: true }).first().click();
+  await page.locator('.bp6-segmented-control').getByText('Ladder', { exact: true }).click();
   await ladder.waitFor();
   // Tie in a new, empty hypothesis of the correlator's own: no earlier tie can then chain the
   // pair into a same-site join, so the first pair in different columns is accepted.

@@ -129,7 +129,7 @@ export function SpaceTimeChart({ columns, hypothesis, segments = [], figure }: S
                 <line x1={x} x2={x} y1={MARGIN.top - 6} y2={plotBottom} stroke={CHART_COLOURS.grid} strokeDasharray="2 3" />
                 <path d={`M${x - 4},${MARGIN.top - 12}L${x + 4},${MARGIN.top - 12}L${x},${MARGIN.top - 5}Z`} fill={CHART_COLOURS.axis} />
                 {label && (
-                  <text x={label.x} y={12 + label.row * 12} fontSize={10} fill={CHART_COLOURS.text} className="sc-site-label">
+                  <text x={label.x} y={11 + label.row * 14} fontSize={10} fill={CHART_COLOURS.text} className="sc-site-label">
                     <title>{`${column.site.name}, ${column.site.alongStrikeKm.toFixed(0)} km`}</title>
                     {label.text}
                   </text>

@@ -202,7 +202,7 @@ function ImportCheckResult({ result }: ImportCheckResultProps) {
         )}
       </Callout>
       {!ok && (
-        <HTMLTable compact striped className="sc-table sc-table-fill">
+        <HTMLTable compact striped className="sc-table sc-table-fill" data-testid="import-problems">
           <thead>
             <tr>
               <th>Where</th>
