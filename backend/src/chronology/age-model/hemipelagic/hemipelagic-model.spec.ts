@@ -69,9 +69,10 @@ describe(runHemipelagicModel.name, () => {
    * years wide missing three of eight true ages (issue 12). Four seeded cores here; the larger run
    * and its coverage figures are in `npm run bench`.
    */
-  it('dates the beds of simulated cores with ranges a fraction of the ordering model\'s, covering most true ages', () => {
+  it('dates the beds of simulated cores with ranges a fraction of the ordering model\'s, covering true ages near nominal', () => {
     const marine = builtInCurve('MARINE20');
     let covered95 = 0;
+    let covered68 = 0;
     let total = 0;
     let widest = 0;
     for (let seed = 11; seed <= 14; seed++) {
@@ -81,6 +82,7 @@ describe(runHemipelagicModel.name, () => {
       for (const event of result.events) {
         total++;
         if (covers(event.summary.hpd95, simulated.trueEventAges.get(event.eventHorizonId)!)) covered95++;
+        if (covers(event.summary.hpd68, simulated.trueEventAges.get(event.eventHorizonId)!)) covered68++;
         widest = Math.max(widest, event.summary.hpd95[0].olderCalBp - event.summary.hpd95[event.summary.hpd95.length - 1].youngerCalBp);
       }
       // The curve is monotone in depth: deeper mud is never younger (medians).
@@ -89,7 +91,12 @@ describe(runHemipelagicModel.name, () => {
       }
     }
     expect(widest).toBeLessThan(2500);
-    expect(covered95 / total).toBeGreaterThanOrEqual(0.75);
+    // CI-sized (32 events): at nominal 95.4 % fewer than 27 covered has probability 0.3 %, and the
+    // 68.3 % count lies in 16-27 with probability about 98 % [binomial, jstat]. The large run (over 200
+    // events) is `npm run bench -- core coverage`.
+    expect(covered95).toBeGreaterThanOrEqual(27);
+    expect(covered68).toBeGreaterThanOrEqual(16);
+    expect(covered68).toBeLessThanOrEqual(27);
   }, 60_000);
 
   it('refuses a core whose rate cannot be measured when none is given', () => {

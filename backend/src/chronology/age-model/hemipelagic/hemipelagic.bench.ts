@@ -7,6 +7,7 @@ import { generateDemoScenario } from '../../../demo/generate';
 import { builtInCurve } from '../../../reference-data/reference-data';
 import { calibrateRadiocarbon } from '../../calibration/calibrate';
 import { AgeModelInput } from '../column';
+import { calibratedGrid, ReservoirSource, reservoirSources, SampleReservoir } from '../reservoir-offsets';
 import { runHemipelagicModel } from './hemipelagic-model';
 
 export interface HemipelagicBench {
@@ -29,7 +30,7 @@ export function benchHemipelagic(): HemipelagicBench {
   const input: AgeModelInput = {
     units: site.units.map((u) => ({
       id: u.key, name: u.name, position: u.position, topDepthM: u.topDepthM, baseDepthM: u.baseDepthM, facies: u.facies,
-      basalErosionM: (u as { basalErosionM?: number | null }).basalErosionM ?? null,
+      basalErosionM: u.basalErosionM,
     })),
     eventHorizons: site.eventHorizons.map((h) => ({ id: h.key, name: h.name, unitBelowId: h.unitBelowKey, unitAboveId: h.unitAboveKey })),
     samples: site.samples
@@ -43,9 +44,42 @@ export function benchHemipelagic(): HemipelagicBench {
       })),
     orderSamplesByDepth: true,
   };
+  // As the service does: marine levels with one Delta-R share one offset (reservoir-offsets.ts).
+  const marine = site.samples.filter((s) => s.c14Age !== null && s.curve === 'MARINE20' && s.deltaR !== null);
+  const { sources, keyOf } = reservoirSources(
+    marine.map((s) => ({ id: s.labCode, name: s.labCode, deltaR: s.deltaR!, deltaRError: s.deltaRError ?? 0, source: null })),
+  );
+  const reservoirSourcesKept: ReservoirSource[] = [];
+  const bySample = new Map<string, SampleReservoir>();
+  for (const source of sources) {
+    const members = marine.filter((s) => keyOf.get(s.labCode) === source.key);
+    const grids = members.map((s) =>
+      source.grid.map((deltaR) => {
+        try {
+          return calibrateRadiocarbon({ c14Age: s.c14Age!, c14Error: s.c14Error!, curve: curves.marine20, deltaR, deltaRError: 0 });
+        } catch {
+          return null;
+        }
+      }),
+    );
+    const kept = calibratedGrid(source, grids);
+    reservoirSourcesKept.push(kept.source);
+    members.forEach((s, i) =>
+      bySample.set(s.labCode, {
+        sourceKey: source.key,
+        gridLikelihoods: kept.perSample[i].map((g) => g.density),
+        gridLogMass: kept.perSample[i].map((g) => Math.log(g.likelihoodMass!)),
+      }),
+    );
+  }
+  const shared: AgeModelInput = {
+    ...input,
+    samples: input.samples.map((s) => (bySample.has(s.id) ? { ...s, reservoir: bySample.get(s.id)! } : s)),
+    reservoirSources: reservoirSourcesKept,
+  };
   const started = process.hrtime.bigint();
   const cpuStarted = process.cpuUsage();
-  const result = runHemipelagicModel(input, { seed: 7 });
+  const result = runHemipelagicModel(shared, { seed: 7 });
   const cpu = process.cpuUsage(cpuStarted);
   return {
     site: site.name,
