@@ -4,6 +4,10 @@
  * rate memory, uniform erosion logged with error or missed, one shared true Delta-R, reworked and
  * burrowed levels): the share of true event ages inside the 68.3 % and 95.4 % HPD ranges.
  * Used by the spec (a few cores) and by `npm run bench` (the large run).
+ *
+ * Large run (2026-12-05, default settings, seeds 1000-1033: 28 cores, 224 events): 95.4 % ranges
+ * covered 95.1 %, 68.3 % ranges 60.3 %; the worst run's split R-hat was 1.11 and its smallest event
+ * ESS 26, so some single cores still mix slowly (adaptive Metropolis across all rates at once).
  */
 import { CalibrationCurve } from '../../calibration/curve';
 import { HpdRange } from '../../common/density';
