@@ -342,13 +342,13 @@ describe(runAgeModel.name, () => {
   });
 
   describe('inherited samples', () => {
-    // True history: E1 at 3000 cal BP, E2 at 2500; deposits dated by 14C simulated through IntCal20.
-    const random = new SeededRandom(2024);
-    const measured = (calBp: number): CalendarDensity => {
-      const i = calBp - intcal20.startCalBp;
-      const age = Math.round(intcal20.mu[i] + intcal20.sigma[i] * random.normal() + 30 * random.normal());
-      return c14(age, 30);
+    // True history: E1 at 3000 cal BP, E2 at 2500; deposits dated by 14C simulated once through
+    // IntCal20 (curve sigma plus 30 years of lab error) and kept as fixed measured ages, so the
+    // tolerances below belong to one stated data set rather than to a random stream.
+    const SIMULATED_C14: Record<number, number> = {
+      3150: 2961, 3060: 2816, 2900: 2833, 2700: 2552, 2580: 2541, 2420: 2427, 2300: 2176, 3600: 3398, 3100: 2909, 2800: 2733,
     };
+    const measured = (calBp: number): CalendarDensity => c14(SIMULATED_C14[calBp], 30);
     const base: AgeModelInput = {
       units: [unit('u1', 1), unit('u2', 2), unit('u3', 3)],
       eventHorizons: [
@@ -376,14 +376,16 @@ describe(runAgeModel.name, () => {
 
     it('flags much older charcoal entered as dating its deposit as an outlier, leaving the events in place', () => {
       // Source: the outlier mixture (Christen 1994) [analytic]. An age 800 years (about 12 sigma)
-      // out of order has a likelihood far below the flat alternative, so the sample is an outlier
+      // out of order has a likelihood far below the broad shifted alternative, so the sample is an outlier
       // and its date drops out. Its deposit still lies in unit 2, and under uniform deposition one
       // more point in a unit weighs the unit's duration D by a factor D + 1, which lengthens the
       // unit a little (by about Var(D) / E(D), some 20 years here). So the check is against the
       // same column with an undated sample in unit 2 (a flat likelihood over the samples' years):
-      // the events must agree with it within 5 years (medians) and 12 (95.4 % limits), and stay
+      // the events must agree with it within 12 years (medians) and 20 (95.4 % limits), and stay
       // within 20 / 35 years of the column without the sample, against the ~700 years the date
-      // would move E1 if it were believed.
+      // would move E1 if it were believed. (Two independent runs of this length differ by a few
+      // years in a median and some ten in an HPD limit by Monte Carlo error alone: a posterior sd
+      // near 80 years over an ESS of some hundreds [analytic].)
       const result = withSample(muchOlder, 'DATES_DEPOSIT');
       const young = Math.min(...base.samples.map((x) => x.likelihood.startCalBp));
       const old = Math.max(...base.samples.map((x) => x.likelihood.startCalBp + x.likelihood.probabilities.length - 1));
@@ -392,7 +394,7 @@ describe(runAgeModel.name, () => {
       for (const id of ['e1', 'e2']) {
         const moved = eventOf(result, id).summary;
         for (const [reference, medianTolerance, limitTolerance] of [
-          [eventOf(undated, id).summary, 5, 12],
+          [eventOf(undated, id).summary, 12, 20],
           [eventOf(without, id).summary, 20, 35],
         ] as const) {
           expect(Math.abs(moved.medianCalBp - reference.medianCalBp)).toBeLessThan(medianTolerance);

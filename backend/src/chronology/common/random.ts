@@ -1,17 +1,38 @@
 /**
  * Seeded random numbers for every Monte Carlo computation, so a run is reproducible from its
  * seed. Built on pure-rand's xoroshiro128+ generator; the seed is a 32-bit integer.
+ *
+ * The generator's 128-bit state is filled from the seed by SplitMix32 (a 32-bit variant of
+ * Steele, Lea & Flood 2014, "Fast splittable pseudorandom number generators", OOPSLA), not from
+ * the seed's bits directly: pure-rand's own `xoroshiro128plus(seed)` leaves most of the state
+ * zero, so small neighbouring seeds (1, 2, 3, ... as chains and runs use) gave a first uniform of
+ * about 1.0 every time and correlated draws after it.
  */
 import { xoroshiro128plus } from 'pure-rand';
 
 export type RandomGenerator = ReturnType<typeof xoroshiro128plus>;
+
+/** The n-th output (n = 1, 2, ...) of SplitMix32 started at `seed`: a well-mixed 32-bit word. */
+function splitMix32(seed: number, n: number): number {
+  let z = (seed + Math.imul(n, 0x9e3779b9)) | 0;
+  z = Math.imul(z ^ (z >>> 16), 0x21f0aaad);
+  z = Math.imul(z ^ (z >>> 15), 0x735a2d97);
+  return (z ^ (z >>> 15)) | 0;
+}
+
+/** A xoroshiro128+ generator whose whole state is mixed from the seed (never all zero). */
+export function seededGenerator(seed: number): RandomGenerator {
+  const state = [1, 2, 3, 4].map((n) => splitMix32(seed | 0, n));
+  if (state.every((word) => word === 0)) state[0] = 1;
+  return xoroshiro128plus.fromState(state);
+}
 
 export class SeededRandom {
   private readonly generator: RandomGenerator;
   private spareNormal: number | undefined;
 
   constructor(seed: number) {
-    this.generator = xoroshiro128plus(seed | 0);
+    this.generator = seededGenerator(seed);
   }
 
   /** A uniform number in [0, 1) with 53 random bits. */

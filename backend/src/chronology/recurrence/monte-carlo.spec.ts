@@ -108,8 +108,9 @@ describe(simulateRecurrence.name, () => {
     expect(summary.intervals[0].median).toBeCloseTo(200, 0);
     expect(sdFromRange(summary.intervals[0])).toBeCloseTo(36.06, 0);
     expect(sdFromRange(summary.intervals[1])).toBeCloseTo(Math.sqrt(20 ** 2 + 40 ** 2), 0);
-    // Open interval from the youngest event to 2025 CE (-75 cal BP): 575 +- 40.
-    expect(summary.openInterval.median).toBeCloseTo(575, 0);
+    // Open interval from the youngest event to 2025 CE (-75 cal BP): 575 +- 40. The Monte Carlo
+    // error of a median of n draws is 1.2533 sd / sqrt(n) = 0.35 years here [analytic]; allow 3.
+    expect(Math.abs(summary.openInterval.median - 575)).toBeLessThan(3 * 1.2533 * 40 / Math.sqrt(options.drawCount));
   });
 
   it('gives the same result from the same seed and a different one from another seed', () => {
