@@ -97,6 +97,26 @@ export interface OrderAdjacency {
   readonly youngerNeighbours: Int32Array;
 }
 
+/** Youngest age `node` may take given its younger neighbours' `values` (at least `youngEdge`). */
+export function youngestAllowed(g: OrderAdjacency, values: Float64Array, node: number, youngEdge: number): number {
+  let lo = youngEdge;
+  for (let k = g.youngerOffsets[node]; k < g.youngerOffsets[node + 1]; k++) {
+    const v = values[g.youngerNeighbours[k]];
+    if (v > lo) lo = v;
+  }
+  return lo;
+}
+
+/** Oldest age `node` may take given its older neighbours' `values` (at most `oldEdge`). */
+export function oldestAllowed(g: OrderAdjacency, values: Float64Array, node: number, oldEdge: number): number {
+  let hi = oldEdge;
+  for (let k = g.olderOffsets[node]; k < g.olderOffsets[node + 1]; k++) {
+    const v = values[g.olderNeighbours[k]];
+    if (v < hi) hi = v;
+  }
+  return hi;
+}
+
 export interface SamplerModel {
   readonly graph: OrderGraph;
   /** Deposit likelihoods, indexed by sample (node - firstDeposit). */
@@ -246,24 +266,12 @@ export class OrderChain {
 
   /** Youngest age a node may take given its younger neighbours. */
   private lowerBound(node: number): number {
-    const g = this.graph;
-    let lo = this.youngEdge;
-    for (let k = g.youngerOffsets[node]; k < g.youngerOffsets[node + 1]; k++) {
-      const v = this.values[g.youngerNeighbours[k]];
-      if (v > lo) lo = v;
-    }
-    return lo;
+    return youngestAllowed(this.graph, this.values, node, this.youngEdge);
   }
 
   /** Oldest age a node may take given its older neighbours. */
   private upperBound(node: number): number {
-    const g = this.graph;
-    let hi = this.oldEdge;
-    for (let k = g.olderOffsets[node]; k < g.olderOffsets[node + 1]; k++) {
-      const v = this.values[g.olderNeighbours[k]];
-      if (v < hi) hi = v;
-    }
-    return hi;
+    return oldestAllowed(this.graph, this.values, node, this.oldEdge);
   }
 
   /**

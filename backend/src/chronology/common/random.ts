@@ -23,7 +23,7 @@ function splitMix32(seed: number, n: number): number {
 /** A xoroshiro128+ generator whose whole state is mixed from the seed (never all zero). */
 export function seededGenerator(seed: number): RandomGenerator {
   const state = [1, 2, 3, 4].map((n) => splitMix32(seed | 0, n));
-  if (state.every((word) => word === 0)) state[0] = 1;
+  if (!state.some((word) => word !== 0)) state[0] = 1;
   return xoroshiro128plus.fromState(state);
 }
 

@@ -34,7 +34,9 @@ import {
   logSpanPrior,
   orderPaths,
   pathBuffers,
+  oldestAllowed,
   proposeBoundaryOffset,
+  youngestAllowed,
 } from '../age-model/sampler';
 import { SeededRandom } from '../common/random';
 import { JointGraph, JointModel } from './joint-model';
@@ -98,23 +100,11 @@ export class JointChain {
   }
 
   private lowerBound(node: number): number {
-    const g = this.graph;
-    let lo = this.youngEdge;
-    for (let k = g.youngerOffsets[node]; k < g.youngerOffsets[node + 1]; k++) {
-      const v = this.values[g.youngerNeighbours[k]];
-      if (v > lo) lo = v;
-    }
-    return lo;
+    return youngestAllowed(this.graph, this.values, node, this.youngEdge);
   }
 
   private upperBound(node: number): number {
-    const g = this.graph;
-    let hi = this.oldEdge;
-    for (let k = g.olderOffsets[node]; k < g.olderOffsets[node + 1]; k++) {
-      const v = this.values[g.olderNeighbours[k]];
-      if (v < hi) hi = v;
-    }
-    return hi;
+    return oldestAllowed(this.graph, this.values, node, this.oldEdge);
   }
 
   private isBoundary(node: number): boolean {
