@@ -575,10 +575,10 @@ async function correlatorTiesEvents(page, { baseUrl, shot }) {
     { timeout: STEP_TIMEOUT_MS },
   );
   await regionalTab.click();
-  // The regional event now holds both events, with its concordance, chi-square, rupture and Mw checks.
+  // The regional event now holds both events, with its concordance, chi-square, minimum rupture length and Mw checks.
   const card = page.locator('.sc-regional-card').filter({ hasText: labelA }).filter({ hasText: labelB }).first();
   await card.waitFor();
-  for (const label of ['Concordance', 'Same age?', 'Rupture', 'Mw']) await card.getByText(label, { exact: true }).waitFor();
+  for (const label of ['Concordance', 'Same age?', 'Minimum rupture length', 'Mw from minimum length', 'Mw from area']) await card.getByText(label, { exact: true }).waitFor();
   // The same-age test in words: the spread, the 5 % limit and what it means.
   const chiSquare = (await card.locator('dt:has-text("Same age?") + dd').innerText()).trim();
   check(/spread by [\d.]+, (under|over) [\d.]+.*1 time in 20/.test(chiSquare), `the regional event's same-age test does not say spread, limit and meaning: "${chiSquare}"`);
