@@ -263,12 +263,25 @@ describe('releases', () => {
   });
 
   it('shows columns, samples and segments below its sites as they stood, not as they are now', async () => {
-    const NESTED = `query($id: ID!) { release(id: $id) { sites { id segment { id name } units { id position name }
-      eventHorizons { id name unitBelowId unitAboveId } samples { id unitId labCode notes c14Age } } segments { id name } } }`;
+    const NESTED = `query($id: ID!) { release(id: $id) { sites { id segment { id name } units { id position name basalErosionM }
+      eventHorizons { id name unitBelowId unitAboveId } samples { id unitId labCode notes c14Age deltaRSource inheritanceScaleYears } } segments { id name } } }`;
     const frozen = (await clients.VIEWER.ok(NESTED, { id: first.id })).release;
     const site = frozen.sites.find((s: { id: string }) => s.id === siteId);
     const sample = site.samples.find((s: { id: string }) => s.id === sampleId);
     expect(sample).toBeDefined();
+    // The bundle-format-2 fields read back as the rows held them when the release was frozen.
+    const [stored] = await sql<{ delta_r_source: string | null; inheritance_scale_years: number | null }>(
+      'select delta_r_source, inheritance_scale_years from samples where id = $1',
+      [sampleId],
+    );
+    expect({ deltaRSource: sample.deltaRSource, inheritanceScaleYears: sample.inheritanceScaleYears }).toEqual({
+      deltaRSource: stored.delta_r_source,
+      inheritanceScaleYears: stored.inheritance_scale_years,
+    });
+    const units = await sql<{ id: string; basal_erosion_m: number | null }>('select id, basal_erosion_m from units where site_id = $1', [siteId]);
+    expect(Object.fromEntries(site.units.map((u: { id: string; basalErosionM: number | null }) => [u.id, u.basalErosionM]))).toEqual(
+      Object.fromEntries(units.map((u) => [u.id, u.basal_erosion_m])),
+    );
     expect(site.units.map((u: { position: number }) => u.position)).toEqual([...site.units.map((u: { position: number }) => u.position)].sort((a, b) => a - b));
     expect(site.units.map((u: { id: string }) => u.id)).toContain(sample.unitId);
 

@@ -1746,10 +1746,14 @@ export type ReleasedSample = {
   delta13C?: Maybe<Scalars['Float']['output']>;
   deltaR?: Maybe<Scalars['Float']['output']>;
   deltaRError?: Maybe<Scalars['Float']['output']>;
+  /** The Delta-R entry the sample's offset comes from (samples of a site naming one source share one offset); null when not given or frozen before bundle format 2. */
+  deltaRSource?: Maybe<Scalars['String']['output']>;
   depthM?: Maybe<Scalars['Float']['output']>;
   excluded: Scalars['Boolean']['output'];
   exclusionReason?: Maybe<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
+  /** The sample's own inheritance or intrusion scale (years); null takes its material's default, or was frozen before bundle format 2. */
+  inheritanceScaleYears?: Maybe<Scalars['Float']['output']>;
   labCode: Scalars['String']['output'];
   material: SampleMaterial;
   measurementYear?: Maybe<Scalars['Int']['output']>;
@@ -1796,6 +1800,8 @@ export type ReleasedSite = {
 /** A unit as frozen in a release. */
 export type ReleasedUnit = {
   __typename?: 'ReleasedUnit';
+  /** Estimated thickness of mud (m) the unit's base eroded; null when not given or frozen before bundle format 2. */
+  basalErosionM?: Maybe<Scalars['Float']['output']>;
   baseDepthM: Scalars['Float']['output'];
   facies: Facies;
   id: Scalars['ID']['output'];
