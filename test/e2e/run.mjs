@@ -435,10 +435,10 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   // A single-year sliver of probability is not listed as a range ("490–490 cal BP").
   check(!/\b(\d+)–\1 cal BP/.test(firstRange), `the first event lists a zero-width range: "${firstRange}"`);
   log(`age model: ${await rows.count()} events (table rows before ${before}), first range ${firstRange.replace(/\s+/g, ' ')}`);
-  // The run history lists this run with its seed as the one the ladder uses, beside the demo's run.
+  // The run history lists this run with its seed as the one the ladder uses (the newest, no run chosen), beside the demo's run.
   const historyRows = page.getByRole('table', { name: 'Run history' }).locator('tbody tr');
   await waitForCount(historyRows, (count) => count >= 2, 'two or more runs in the run history');
-  await historyRows.filter({ hasText: new RegExp(`seed ${seed}\\b`) }).filter({ hasText: 'ladder, regional events, recurrence' }).waitFor();
+  await historyRows.filter({ hasText: new RegExp(`seed ${seed}\\b`) }).filter({ hasText: 'used downstream · newest' }).waitFor();
   await shot('run-finished');
   // A demo core's Logs tab draws the core on true and event-free depth.
   await page.goto(`${baseUrl}/projects`);

@@ -125,6 +125,20 @@ describe('the ladder answer cache and the project revision', () => {
     expect((await ladderRead(clients.VIEWER)).hit).toBe(false);
   });
 
+  it('choosing the run a site uses downstream, and clearing the choice, is not served from the cache', async () => {
+    const [run] = await sql<{ id: string; site_id: string }>(
+      `select r.id, r.site_id from age_model_runs r join sites s on s.id = r.site_id where s.project_id = $1 and r.status = 'SUCCEEDED' limit 1`,
+      [fixture.projectId],
+    );
+    const choose = `mutation($i: ChooseDownstreamRunInput!) { chooseDownstreamRun(input: $i) { id } }`;
+    for (const runId of [run.id, null]) {
+      await ladderRead(clients.VIEWER);
+      expect((await ladderRead(clients.VIEWER)).hit).toBe(true);
+      await clients.RESEARCHER.ok(choose, { i: { siteId: run.site_id, runId } });
+      expect((await ladderRead(clients.VIEWER)).hit, `after choosing ${runId}`).toBe(false);
+    }
+  });
+
   it('a deleted row is not served from the cache, and the answer shows the deletion', async () => {
     await ladderRead(clients.VIEWER);
     expect((await ladderRead(clients.VIEWER)).hit).toBe(true);

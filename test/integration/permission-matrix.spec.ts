@@ -311,6 +311,18 @@ const CASES: Record<string, MatrixCase> = {
       return { id: run.id };
     },
   },
+  // Choosing which run feeds the ladder is the age models' owners' call: whoever may start them.
+  chooseDownstreamRun: {
+    access: ageModels,
+    variables: async () => {
+      const [run] = await sql<{ id: string }>(`select id from age_model_runs where site_id = $1 and status = 'SUCCEEDED' limit 1`, [runSiteId]);
+      return { input: { siteId: runSiteId, runId: run.id } };
+    },
+    // Later rows (recurrence) read the run used downstream: follow the newest again.
+    cleanup: async () => {
+      await sql(`delete from downstream_run_choices where site_id = $1`, [runSiteId]);
+    },
+  },
 
   createHypothesis: { access: correlation, variables: async () => ({ input: { projectId: fixture.projectId, name: unique('Hypothesis') } }) },
   updateHypothesis: { access: correlation, variables: async () => ({ id: hypothesisId, input: { description: unique('description') } }) },

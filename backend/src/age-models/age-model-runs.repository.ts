@@ -1,12 +1,13 @@
 import { Injectable } from '@nestjs/common';
-import { desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { QueryResult } from 'pg';
 import { DatabaseService, Executor } from '../database/database.service';
-import { ageModelRuns, sites } from '../database/schema';
+import { ageModelRuns, downstreamRunChoices, sites } from '../database/schema';
 import { RunsRepository } from '../jobs/runs.repository';
 import { downstreamRunIds } from './downstream-runs';
 
 export type AgeModelRunRow = typeof ageModelRuns.$inferSelect;
+export type DownstreamRunChoiceRow = typeof downstreamRunChoices.$inferSelect;
 
 /** md5 of the empty string: the fingerprint of a column with nothing in it. */
 export const EMPTY_COLUMN_FINGERPRINT = 'd41d8cd98f00b204e9800998ecf8427e';
@@ -72,6 +73,58 @@ export class AgeModelRunsRepository {
       .from(ageModelRuns)
       .where(inArray(ageModelRuns.id, downstreamRunIds(executor, eq(sites.id, siteId))))
       .limit(1);
+    return row;
+  }
+
+  /** The site's newest successful run's id, whatever the site's choice. */
+  async newestSucceededId(siteId: string, executor: Executor = this.database.db): Promise<string | undefined> {
+    const [row] = await executor
+      .select({ id: ageModelRuns.id })
+      .from(ageModelRuns)
+      .where(and(eq(ageModelRuns.siteId, siteId), eq(ageModelRuns.status, 'SUCCEEDED')))
+      .orderBy(desc(ageModelRuns.createdAt))
+      .limit(1);
+    return row?.id;
+  }
+
+  /** A site's chosen run (`downstream_run_choices`); undefined when it follows its newest successful run. */
+  async choiceOf(siteId: string, executor: Executor = this.database.db): Promise<DownstreamRunChoiceRow | undefined> {
+    const [row] = await executor.select().from(downstreamRunChoices).where(eq(downstreamRunChoices.siteId, siteId));
+    return row;
+  }
+
+  /** The choices of a project's sites. */
+  choicesOfProject(projectId: string, executor: Executor = this.database.db): Promise<DownstreamRunChoiceRow[]> {
+    return executor
+      .select({ siteId: downstreamRunChoices.siteId, ageModelRunId: downstreamRunChoices.ageModelRunId, chosenById: downstreamRunChoices.chosenById, chosenAt: downstreamRunChoices.chosenAt })
+      .from(downstreamRunChoices)
+      .innerJoin(sites, eq(sites.id, downstreamRunChoices.siteId))
+      .where(eq(sites.projectId, projectId))
+      .orderBy(sites.alongStrikeKm, sites.name);
+  }
+
+  async saveChoice(values: typeof downstreamRunChoices.$inferInsert, executor: Executor): Promise<DownstreamRunChoiceRow> {
+    const [row] = await executor
+      .insert(downstreamRunChoices)
+      .values(values)
+      .onConflictDoUpdate({ target: downstreamRunChoices.siteId, set: { ageModelRunId: values.ageModelRunId, chosenById: values.chosenById, chosenAt: sql`now()` } })
+      .returning();
+    return row;
+  }
+
+  /** Remove a site's choice; the removed row, or undefined when there was none. */
+  async deleteChoice(siteId: string, executor: Executor): Promise<DownstreamRunChoiceRow | undefined> {
+    const [row] = await executor.delete(downstreamRunChoices).where(eq(downstreamRunChoices.siteId, siteId)).returning();
+    return row;
+  }
+
+  /** Move a choice of `fromRunId` to `toRunId` (a refresh's fresh run of a chosen run); the moved row, if any. */
+  async moveChoice(fromRunId: string, toRunId: string, executor: Executor): Promise<DownstreamRunChoiceRow | undefined> {
+    const [row] = await executor
+      .update(downstreamRunChoices)
+      .set({ ageModelRunId: toRunId })
+      .where(eq(downstreamRunChoices.ageModelRunId, fromRunId))
+      .returning();
     return row;
   }
 

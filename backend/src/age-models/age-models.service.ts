@@ -18,9 +18,10 @@ import { calibratedGrid, ReservoirSource, reservoirSources, SampleReservoir } fr
 import { SiteRow } from '../sites/sites.repository';
 import { SitesService } from '../sites/sites.service';
 import { UnitsRepository } from '../units/units.repository';
-import { AgeModelRunRow, AgeModelRunsRepository } from './age-model-runs.repository';
+import { AgeModelRunRow, AgeModelRunsRepository, DownstreamRunChoiceRow } from './age-model-runs.repository';
 import { AgeModelJob } from './age-model.job';
 import { storeInput } from './age-model-results';
+import { ChooseDownstreamRunInput } from './dto/choose-downstream-run.input';
 import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 
 /** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
@@ -117,6 +118,72 @@ export class AgeModelsService {
     return cancelled;
   }
 
+  /**
+   * Choose which successful run of a site feeds everything downstream (`downstream-runs.ts`), or
+   * with no `runId` go back to the newest successful run. Who may start the site's runs may choose
+   * among them. The run must be a SUCCEEDED run of this very site: anything else (a run of
+   * another site or project, an unknown id, a run that failed, was cancelled or has not ended) is
+   * BAD_USER_INPUT on `runId` and changes nothing. The write bumps the project revision (trigger),
+   * so cached ladders go; results that used the run fed downstream before report stale.
+   */
+  async chooseDownstreamRun(user: AuthUser, input: ChooseDownstreamRunInput): Promise<SiteRow> {
+    const site = await this.sites.get(user, input.siteId, Permission.AgeModelRun);
+    const runId = input.runId ?? null;
+    if (runId !== null) {
+      const run = await this.runs.findById(runId);
+      // Another site's or project's run reads as "not a run of this site": its existence is not told.
+      if (!run || run.siteId !== site.id) throw badInput('runId', `not an age model run of site ${site.name}`);
+      if (run.status !== 'SUCCEEDED') {
+        throw badInput('runId', `only a successful run can be used downstream; this run is ${run.status.toLowerCase()}`);
+      }
+    }
+    await this.database.transaction(async (tx) => {
+      const before = (await this.runs.choiceOf(site.id, tx)) ?? null;
+      if ((before?.ageModelRunId ?? null) === runId) return;
+      const after = runId === null ? (await this.runs.deleteChoice(site.id, tx), null) : await this.runs.saveChoice({ siteId: site.id, ageModelRunId: runId, chosenById: user.id }, tx);
+      await this.audit.record(tx, {
+        actor: user, projectId: site.projectId, action: after ? 'update' : 'delete', objectType: 'downstreamRunChoice', objectId: site.id,
+        before: before && choiceImage(before), after: after && choiceImage(after),
+      });
+    });
+    return site;
+  }
+
+  /** A site's chosen run; undefined when it follows its newest successful run. */
+  choiceOf(siteId: string): Promise<DownstreamRunChoiceRow | undefined> {
+    return this.runs.choiceOf(siteId);
+  }
+
+  choicesOfProject(projectId: string): Promise<DownstreamRunChoiceRow[]> {
+    return this.runs.choicesOfProject(projectId);
+  }
+
+  /** The run a site uses downstream (`downstream-runs.ts`), with its results. */
+  downstreamRunOf(siteId: string): Promise<AgeModelRunRow | undefined> {
+    return this.runs.latestSucceededForSite(siteId);
+  }
+
+  newestSucceededId(siteId: string): Promise<string | undefined> {
+    return this.runs.newestSucceededId(siteId);
+  }
+
+  /**
+   * A refresh re-ran a chosen run (same settings and seed on today's column) and the fresh run
+   * succeeded: the choice moves to it, so the researcher's choice holds on the new column. Audited
+   * as the refresh's requester's change; nothing when the stale run was not (or no longer) chosen.
+   */
+  async carryChoice(actor: AuthUser | null, staleRunId: string, freshRunId: string): Promise<void> {
+    await this.database.transaction(async (tx) => {
+      const moved = await this.runs.moveChoice(staleRunId, freshRunId, tx);
+      if (!moved) return;
+      const site = await this.sites.findById(moved.siteId);
+      await this.audit.record(tx, {
+        actor, projectId: site?.projectId ?? null, action: 'update', objectType: 'downstreamRunChoice', objectId: moved.siteId,
+        before: { ageModelRunId: staleRunId }, after: { ...choiceImage(moved), carriedByRefresh: true },
+      });
+    });
+  }
+
   listForSite(siteId: string): Promise<AgeModelRunRow[]> {
     return this.runs.listForSite(siteId);
   }
@@ -196,4 +263,8 @@ export class AgeModelsService {
     }
     return { bySample, sources: kept };
   }
+}
+
+function choiceImage(choice: DownstreamRunChoiceRow) {
+  return { siteId: choice.siteId, ageModelRunId: choice.ageModelRunId, chosenById: choice.chosenById, chosenAt: choice.chosenAt };
 }

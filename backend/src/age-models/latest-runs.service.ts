@@ -36,8 +36,9 @@ export interface DisplayRun {
 const RUN_CACHE_CAPACITY = 400;
 
 /**
- * The one way to read sites' newest successful age model runs and their event posteriors (the
- * ladder, correlation checks, segment recurrence, `EventHorizon.latestPosterior`). Ids are read
+ * The one way to read the age model runs sites use downstream (`downstream-runs.ts`: the chosen
+ * run, else the newest successful one) and their event posteriors (the ladder, correlation
+ * checks, segment recurrence, `EventHorizon.latestPosterior`). Ids are read
  * first; a run's results are read and decoded only when this process has not decoded them before,
  * since a succeeded run's results never change.
  */
@@ -47,7 +48,12 @@ export class LatestRunsService {
 
   constructor(private readonly repository: AgeModelRunsRepository) {}
 
-  /** Each site's newest successful run, by site id; sites without one are absent. */
+  /** The id of each site's run used downstream, by site id, without reading results; sites without one are absent. */
+  async idsForSites(siteIds: readonly string[]): Promise<Map<string, string>> {
+    return new Map((await this.repository.latestSucceededRunIds([...siteIds])).map(({ id, siteId }) => [siteId, id]));
+  }
+
+  /** Each site's run used downstream, by site id; sites without one are absent. */
   async forSites(siteIds: readonly string[]): Promise<Map<string, DisplayRun>> {
     const latest = await this.repository.latestSucceededRunIds([...siteIds]);
     const decoded = new Map<string, DisplayRun>();
@@ -69,7 +75,7 @@ export class LatestRunsService {
     return bySite;
   }
 
-  /** Every event posterior of the sites' newest successful runs, by event horizon id. */
+  /** Every event posterior of the sites' runs used downstream, by event horizon id. */
   async posteriorsForSites(siteIds: readonly string[]): Promise<Map<string, DisplayPosterior>> {
     const posteriors = new Map<string, DisplayPosterior>();
     for (const run of (await this.forSites(siteIds)).values()) {

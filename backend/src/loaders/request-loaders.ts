@@ -13,8 +13,10 @@ export interface RequestLoaders {
   segmentById: DataLoader<string, SegmentRow | null>;
   /** The current column revision of a site (bumped by triggers on its units, horizons and samples). */
   columnRevision: DataLoader<string, number | null>;
-  /** A site's newest successful age model run with its decoded event posteriors. */
+  /** A site's age model run used downstream (`downstream-runs.ts`) with its decoded event posteriors. */
   latestRunBySite: DataLoader<string, DisplayRun | null>;
+  /** The id of a site's age model run used downstream, without its results. */
+  downstreamRunId: DataLoader<string, string | null>;
 }
 
 @Injectable()
@@ -38,6 +40,10 @@ export class RequestLoadersFactory {
       latestRunBySite: new DataLoader(async (siteIds) => {
         const runs = await this.latestRuns.forSites(siteIds);
         return siteIds.map((id) => runs.get(id) ?? null);
+      }),
+      downstreamRunId: new DataLoader(async (siteIds) => {
+        const ids = await this.latestRuns.idsForSites(siteIds);
+        return siteIds.map((id) => ids.get(id) ?? null);
       }),
     };
   }

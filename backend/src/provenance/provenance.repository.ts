@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import { DatabaseService, Executor } from '../database/database.service';
-import { ageModelRuns, eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, resultInputs, samples, segments, sites, ties, units, users } from '../database/schema';
+import { downstreamRunIds } from '../age-models/downstream-runs';
+import { ageModelRuns, downstreamRunChoices, eventHorizons, hypotheses, projects, recurrenceAnalyses, releases, resultInputs, samples, segments, sites, ties, units, users } from '../database/schema';
 import type { InputKind, ResultKind } from './staleness';
 
 export type ResultInputRow = typeof resultInputs.$inferSelect;
@@ -42,6 +43,16 @@ export class ProvenanceRepository {
       .from(ageModelRuns)
       .innerJoin(sites, eq(sites.id, ageModelRuns.siteId))
       .where(inArray(ageModelRuns.id, [...runIds]));
+  }
+
+  /** The run each site uses downstream (`downstreamRunIds`), and whether it is the site's chosen run. */
+  downstreamRuns(siteIds: readonly string[], executor: Executor = this.database.db) {
+    if (siteIds.length === 0) return Promise.resolve([]);
+    return executor
+      .select({ id: ageModelRuns.id, siteId: ageModelRuns.siteId, chosen: sql<boolean>`${downstreamRunChoices.siteId} is not null` })
+      .from(ageModelRuns)
+      .leftJoin(downstreamRunChoices, and(eq(downstreamRunChoices.siteId, ageModelRuns.siteId), eq(downstreamRunChoices.ageModelRunId, ageModelRuns.id)))
+      .where(inArray(ageModelRuns.id, downstreamRunIds(executor, inArray(sites.id, [...siteIds]))));
   }
 
   sitesByIds(ids: readonly string[], executor: Executor = this.database.db) {

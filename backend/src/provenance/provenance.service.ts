@@ -155,16 +155,21 @@ export class ProvenanceService {
       frontier = next;
     }
     const inputIds = (kind: InputKind) => [...new Set([...recorded.values()].flat().filter((i) => i.kind === kind).map((i) => i.id))];
-    const [siteRows, hypothesisRows] = await Promise.all([
+    // The sites of the runs results used: is each run still the one its site uses downstream?
+    const runSiteIds = [...new Set([...recorded.entries()].filter(([key]) => key.startsWith('ageModelRun:')).flatMap(([, inputs]) => inputs.map((i) => i.id)))];
+    const [siteRows, hypothesisRows, downstreamRows] = await Promise.all([
       this.repository.sitesByIds(inputIds('site')),
       this.repository.hypothesesByIds(inputIds('hypothesis')),
+      this.repository.downstreamRuns(runSiteIds),
     ]);
     const sites = new Map(siteRows.map((s) => [s.id, { revision: s.columnRevision, name: s.name }]));
     const hypotheses = new Map(hypothesisRows.map((h) => [h.id, { version: h.version, name: h.name }]));
+    const downstream = new Map(downstreamRows.map((r) => [r.siteId, { id: r.id, chosen: r.chosen }]));
     return {
       inputsOf: (kind, id) => recorded.get(resultKey(kind, id)) ?? (kind === 'recurrenceAnalysis' ? [] : undefined),
       site: (id) => sites.get(id),
       hypothesis: (id) => hypotheses.get(id),
+      downstreamRun: (siteId) => downstream.get(siteId),
     };
   }
 }

@@ -128,7 +128,7 @@ export class RefreshRepository {
 
   /** When anything in the project was last written (its newest audit record), for the automatic refresh. */
   async lastChangeAt(projectId: string): Promise<Date | null> {
-    const result = await this.database.db.execute(sql`select max(at) as at from audit_records where project_id = ${projectId} and object_type in ('unit','eventHorizon','sample','tie','site','hypothesis')`);
+    const result = await this.database.db.execute(sql`select max(at) as at from audit_records where project_id = ${projectId} and object_type in ('unit','eventHorizon','sample','tie','site','hypothesis','downstreamRunChoice')`);
     const at = (result as unknown as { rows: { at: Date | string | null }[] }).rows[0]?.at;
     return at ? new Date(at) : null;
   }

@@ -197,6 +197,9 @@ export class RefreshService {
         if (!fresh || fresh.status === 'FAILED' || fresh.status === 'CANCELLED') {
           await this.repository.moveStep(step.id, 'QUEUED', { status: 'FAILED', message: fresh?.message ?? 'the fresh result was deleted', finishedAt: new Date() });
         } else if (fresh.status === 'SUCCEEDED') {
+          // A chosen site run re-run on today's column: the choice moves to the fresh run before
+          // the analyses waiting for it start, so they read it (and the choice holds).
+          if (kind === 'ageModelRun') await this.ageModels.carryChoice(await this.repository.user(plan.requestedById) ?? null, step.staleId, step.freshId!);
           await this.repository.moveStep(step.id, 'QUEUED', { status: 'SUCCEEDED', finishedAt: new Date() });
         }
       }
@@ -238,7 +241,7 @@ export class RefreshService {
     const skipped: SkippedRefresh[] = [];
     const skip = (kind: ResultKind, id: string, label: string, reason: string) => skipped.push({ kind, id, label, reason });
 
-    // Stage 1: each site's newest successful run, when its column changed since.
+    // Stage 1: each site's run used downstream (chosen, else newest successful), when its column changed since.
     const siteRuns = (await this.repository.latestSiteRuns(projectId)).filter((r) => r.columnRevision !== r.siteRevision);
     const alreadyRunning = await this.repository.sitesBeingRun(siteRuns.map((r) => r.siteId));
     const siteStep = new Map<string, string>();

@@ -67,4 +67,31 @@ describe('staleReasons', () => {
     staleReasons('ageModelRun', 'runA', counting, memo);
     expect(reads).toBe(before);
   });
+
+  it('marks a result stale when a run it used is no longer the run its site uses downstream, and only then', () => {
+    const base = graph({ A: 3, B: 5 }, 2);
+    const withDownstream = (runs: Record<string, { id: string; chosen: boolean }>): ProvenanceGraph => ({ ...base, downstreamRun: (siteId) => runs[siteId] });
+    // Both sites still use the runs the analyses used: nothing is stale.
+    const same = withDownstream({ A: { id: 'runA', chosen: false }, B: { id: 'runB', chosen: true } });
+    expect(staleReasons('recurrenceAnalysis', 'segment', same)).toEqual([]);
+    expect(staleReasons('recurrenceAnalysis', 'onB', same)).toEqual([]);
+
+    // A researcher chose another run of Wren Core: the analyses that used runB say so; the run itself and the joint run are not stale.
+    const chosen = withDownstream({ A: { id: 'runA', chosen: false }, B: { id: 'runB2', chosen: true } });
+    const [reason] = staleReasons('recurrenceAnalysis', 'onB', chosen);
+    expect(reason).toMatchObject({ inputKind: 'ageModelRun', inputId: 'runB', inputName: 'Wren Core', via: [] });
+    expect(reason.message).toContain('chosen by a researcher');
+    expect(reason.message).toContain('Wren Core');
+    expect(staleReasons('recurrenceAnalysis', 'segment', chosen).map((r) => r.inputId)).toEqual(['runB']);
+    expect(stale(chosen, 'ageModelRun', 'runB')).toBe(false);
+    expect(stale(chosen, 'recurrenceAnalysis', 'onJoint')).toBe(false);
+
+    // Back to the newest run, which is not the one the analysis used either.
+    const newest = withDownstream({ A: { id: 'runA2', chosen: false }, B: { id: 'runB', chosen: false } });
+    const [onA] = staleReasons('recurrenceAnalysis', 'segment', newest);
+    expect(onA).toMatchObject({ inputId: 'runA', inputName: 'Tarn Flat' });
+    expect(onA.message).toContain('newest successful');
+    // A site with no run used downstream (not read) adds nothing.
+    expect(staleReasons('recurrenceAnalysis', 'segment', withDownstream({}))).toEqual([]);
+  });
 });

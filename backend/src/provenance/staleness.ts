@@ -1,8 +1,10 @@
 /**
  * When a derived result went stale, and why: pure functions over a provenance graph. A result is
  * stale when any of its inputs changed after it was computed, through any number of steps: a site
- * column or hypothesis moved past the revision it read, or a result it used (an age model run, a
- * joint run) is itself stale or gone. No framework imports, no I/O.
+ * column or hypothesis moved past the revision it read, a result it used (an age model run, a
+ * joint run) is itself stale or gone, or an age model run it used is no longer the run its site
+ * uses downstream (a researcher chose another, or a newer run succeeded). No framework imports,
+ * no I/O.
  */
 
 /** Kinds of derived results. New kinds (joint runs) need no change here. */
@@ -29,6 +31,11 @@ export interface ProvenanceGraph {
   site(id: string): { revision: number; name: string } | undefined;
   /** A hypothesis' current version and name; undefined when it was deleted. */
   hypothesis(id: string): { version: number; name: string } | undefined;
+  /**
+   * The age model run a site uses downstream today, and whether a researcher chose it (else it is
+   * the newest successful run); undefined when the site has none or it was not read.
+   */
+  downstreamRun?(siteId: string): { id: string; chosen: boolean } | undefined;
 }
 
 /** One changed input, as people read it. */
@@ -92,6 +99,20 @@ export function staleReasons(
       }
       for (const upstream of staleReasons(input.kind, input.id, graph, memo, depth + 1)) {
         reasons.push({ ...upstream, via: [label, ...upstream.via] });
+      }
+      if (input.kind === 'ageModelRun') {
+        const siteId = graph.inputsOf('ageModelRun', input.id)?.find((i) => i.kind === 'site')?.id;
+        const current = siteId === undefined ? undefined : graph.downstreamRun?.(siteId);
+        if (current && current.id !== input.id) {
+          reasons.push(
+            direct(
+              input,
+              current.chosen
+                ? `site ${input.name} now uses another age model run downstream, chosen by a researcher, not the run this used`
+                : `site ${input.name} now uses its newest successful age model run downstream, not the run this used`,
+            ),
+          );
+        }
       }
     }
   }

@@ -90,6 +90,8 @@ export type AgeModelRun = {
   /** What changed in the site's column since this run was queued; empty while it is up to date. */
   staleReasons: Array<StaleReason>;
   status: JobStatus;
+  /** True when this is the run its site uses downstream (Site.downstreamRun). */
+  usedDownstream: Scalars['Boolean']['output'];
 };
 
 /** How a sample's age relates to the deposit it sits in. */
@@ -210,6 +212,12 @@ export type ChiSquareTest = {
   passes: Scalars['Boolean']['output'];
   /** Ward & Wilson (1978) statistic. */
   t: Scalars['Float']['output'];
+};
+
+export type ChooseDownstreamRunInput = {
+  /** A successful run of the site; null or left out: follow the site's newest successful run again. */
+  runId?: InputMaybe<Scalars['ID']['input']>;
+  siteId: Scalars['ID']['input'];
 };
 
 /** A regional event in either analysis's table, matched by its member site events. */
@@ -482,6 +490,21 @@ export type DepthModel =
   /** Stratigraphic order only: events and samples lie in the order of their units, depth says nothing more (trenches, marshes, outcrops). */
   | 'ORDER_ONLY';
 
+/** A researcher's choice of the age model run a site uses downstream, in place of its newest successful run. */
+export type DownstreamRunChoice = {
+  __typename?: 'DownstreamRunChoice';
+  chosenAt: Scalars['DateTime']['output'];
+  /** Who chose it (null once their account is gone). */
+  chosenBy?: Maybe<User>;
+  /** True when the site has a successful run newer than the chosen one. */
+  newerRunExists: Scalars['Boolean']['output'];
+  /** The site's newest successful run: the chosen one, or a newer one the choice keeps out. */
+  newestRun: AgeModelRun;
+  /** The chosen run (a successful run of the site). */
+  run: AgeModelRun;
+  site: Site;
+};
+
 /** How an event differs between two analyses' event tables. */
 export type EventDifference =
   | 'COUNTED_IN_A_ONLY'
@@ -502,7 +525,7 @@ export type EventHorizon = {
   displacementM?: Maybe<Scalars['Float']['output']>;
   evidence: Array<Scalars['String']['output']>;
   id: Scalars['ID']['output'];
-  /** Posterior summary from the site's latest successful age model run, if any. */
+  /** Posterior summary from the site's run used downstream (Site.downstreamRun), if any. */
   latestPosterior?: Maybe<EventPosterior>;
   name: Scalars['String']['output'];
   notes?: Maybe<Scalars['String']['output']>;
@@ -899,6 +922,13 @@ export type Mutation = {
   /** Stop a queued or running joint run and all its chains (CORRELATOR, ADMIN). */
   cancelJointAgeModelRun: JointAgeModelRun;
   cancelRecurrenceAnalysis: RecurrenceAnalysis;
+  /**
+   * Choose which successful age model run of a site the ladder, regional events, site recurrence and
+   * the refresh use, or (runId null) follow the newest successful run again (RESEARCHER, ADMIN).
+   * BAD_USER_INPUT on runId for a run that is not a successful run of the site. Results computed from
+   * the run used before become stale.
+   */
+  chooseDownstreamRun: Site;
   createEventHorizon: EventHorizon;
   createHypothesis: Hypothesis;
   createProject: Project;
@@ -970,6 +1000,11 @@ export type MutationCancelJointAgeModelRunArgs = {
 
 export type MutationCancelRecurrenceAnalysisArgs = {
   id: Scalars['ID']['input'];
+};
+
+
+export type MutationChooseDownstreamRunArgs = {
+  input: ChooseDownstreamRunInput;
 };
 
 
@@ -1265,6 +1300,8 @@ export type Project = {
   __typename?: 'Project';
   createdAt: Scalars['DateTime']['output'];
   description?: Maybe<Scalars['String']['output']>;
+  /** The sites that use a chosen run downstream rather than simply their newest successful run, along strike. */
+  downstreamRunChoices: Array<DownstreamRunChoice>;
   hypotheses: Array<Hypothesis>;
   id: Scalars['ID']['output'];
   invitations: Array<Invitation>;
@@ -1644,7 +1681,7 @@ export type RefreshStep = {
 /** A connected group of tied events: one inferred earthquake. */
 export type RegionalEvent = {
   __typename?: 'RegionalEvent';
-  /** The age model runs its members' ages came from: each member site's newest successful run (stale ones say so). */
+  /** The age model runs its members' ages came from: each member site's run used downstream, Site.downstreamRun (stale ones say so). */
   ageModelRuns: Array<AgeModelRun>;
   /** JOINT_RUN when a fresh joint run dates it (then its joint age is the one to show), else COMBINED_DENSITIES. */
   ageShown: RegionalEventAgeSource;
@@ -2122,6 +2159,14 @@ export type Site = {
   attachments: Array<Attachment>;
   /** Physical-property logs of this core, by name. */
   coreLogs: Array<CoreLog>;
+  /**
+   * The age model run whose event ages the ladder, correlation checks, regional events, site
+   * recurrence and the refresh use: the chosen run (downstreamRunChoice) when there is one, else the
+   * newest successful run; null while the site has no successful run.
+   */
+  downstreamRun?: Maybe<AgeModelRun>;
+  /** The chosen run used downstream; null when the site follows its newest successful run. */
+  downstreamRunChoice?: Maybe<DownstreamRunChoice>;
   /** Ground elevation (m above sea level) for land sites. */
   elevationM?: Maybe<Scalars['Float']['output']>;
   /** Event horizons, oldest first. */
@@ -2446,7 +2491,7 @@ export type AgeModelSiteQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, seed: number, settings: unknown, depthModel: DepthModel, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number } | null }> } };
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null, downstreamRun?: { __typename?: 'AgeModelRun', id: string } | null, downstreamRunChoice?: { __typename?: 'DownstreamRunChoice', chosenAt: string, run: { __typename?: 'AgeModelRun', id: string }, chosenBy?: { __typename?: 'User', displayName: string } | null } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, seed: number, settings: unknown, depthModel: DepthModel, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number } | null }> } };
 
 export type StartAgeModelRunMutationVariables = Exact<{
   input: StartAgeModelRunInput;
@@ -2461,6 +2506,13 @@ export type CancelAgeModelRunMutationVariables = Exact<{
 
 
 export type CancelAgeModelRunMutation = { __typename?: 'Mutation', cancelAgeModelRun: { __typename?: 'AgeModelRun', id: string, status: JobStatus } };
+
+export type ChooseDownstreamRunMutationVariables = Exact<{
+  input: ChooseDownstreamRunInput;
+}>;
+
+
+export type ChooseDownstreamRunMutation = { __typename?: 'Mutation', chooseDownstreamRun: { __typename?: 'Site', id: string, downstreamRun?: { __typename?: 'AgeModelRun', id: string } | null } };
 
 export type HpdRangeFieldsFragment = { __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number };
 
@@ -2760,7 +2812,7 @@ export type LatestRefreshQueryVariables = Exact<{
 }>;
 
 
-export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshSettings: { __typename?: 'RefreshSettings', automatic: boolean, debounceSeconds: number }, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, automatic: boolean, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, kind: string, label: string, status: string, message?: string | null, freshId?: string | null, waitingFor: Array<string> }>, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string } }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, kind: string, label: string, reason: string }>, progress: { __typename?: 'RefreshProgress', total: number, waiting: number, running: number, succeeded: number, failed: number, blocked: number, skipped: number, fraction: number } }> } };
+export type LatestRefreshQuery = { __typename?: 'Query', project: { __typename?: 'Project', id: string, refreshSettings: { __typename?: 'RefreshSettings', automatic: boolean, debounceSeconds: number }, downstreamRunChoices: Array<{ __typename?: 'DownstreamRunChoice', newerRunExists: boolean, site: { __typename?: 'Site', id: string, name: string }, run: { __typename?: 'AgeModelRun', id: string, createdAt: string }, newestRun: { __typename?: 'AgeModelRun', id: string, createdAt: string } }>, refreshPlans: Array<{ __typename?: 'RefreshPlan', id: string, status: string, automatic: boolean, createdAt: string, steps: Array<{ __typename?: 'RefreshStep', id: string, stage: number, kind: string, label: string, status: string, message?: string | null, freshId?: string | null, waitingFor: Array<string> }>, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, site: { __typename?: 'Site', id: string } }>, skipped: Array<{ __typename?: 'SkippedRefresh', id: string, kind: string, label: string, reason: string }>, progress: { __typename?: 'RefreshProgress', total: number, waiting: number, running: number, succeeded: number, failed: number, blocked: number, skipped: number, fraction: number } }> } };
 
 export type SetRefreshSettingsMutationVariables = Exact<{
   input: SetRefreshSettingsInput;
@@ -3149,6 +3201,18 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
       status
       stale
     }
+    downstreamRun {
+      id
+    }
+    downstreamRunChoice {
+      run {
+        id
+      }
+      chosenAt
+      chosenBy {
+        displayName
+      }
+    }
     ageModelRuns {
       id
       status
@@ -3188,6 +3252,16 @@ export const CancelAgeModelRunDocument = new TypedDocumentString(`
   }
 }
     `) as unknown as TypedDocumentString<CancelAgeModelRunMutation, CancelAgeModelRunMutationVariables>;
+export const ChooseDownstreamRunDocument = new TypedDocumentString(`
+    mutation ChooseDownstreamRun($input: ChooseDownstreamRunInput!) {
+  chooseDownstreamRun(input: $input) {
+    id
+    downstreamRun {
+      id
+    }
+  }
+}
+    `) as unknown as TypedDocumentString<ChooseDownstreamRunMutation, ChooseDownstreamRunMutationVariables>;
 export const SiteAttachmentsDocument = new TypedDocumentString(`
     query SiteAttachments($id: ID!) {
   site(id: $id) {
@@ -4336,6 +4410,21 @@ export const LatestRefreshDocument = new TypedDocumentString(`
     refreshSettings {
       automatic
       debounceSeconds
+    }
+    downstreamRunChoices {
+      site {
+        id
+        name
+      }
+      run {
+        id
+        createdAt
+      }
+      newestRun {
+        id
+        createdAt
+      }
+      newerRunExists
     }
     refreshPlans {
       id

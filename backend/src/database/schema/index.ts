@@ -22,3 +22,4 @@ export * from './core-logs';
 export * from './rate-limits';
 export * from './project-revisions';
 export * from './lab-sheet-columns';
+export * from './downstream-run-choices';

@@ -5,10 +5,10 @@ import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import type { AgeModelRunQuery } from '@/gql/graphql';
-import { CancelAgeModelRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
+import { CancelAgeModelRunDocument, ChooseDownstreamRunDocument, StartAgeModelRunDocument } from '@/modules/age-model/graphql/ageModel';
 import { ageModelQueries } from '@/modules/age-model/hooks/ageModelQueries';
 import { bracketingSamples, eventChartWindow, formatOffset, isFlaggedOutlier, isRunActive, OUTLIER_FLAG_PROBABILITY, RUN_SETTINGS_FIELDS, type RunSettingsInput } from '@/modules/age-model/utils/ageModelView';
-import { newestFirst, runsToShow } from '@/modules/age-model/utils/runHistory';
+import { downstreamSentence, newestFirst, runsToShow } from '@/modules/age-model/utils/runHistory';
 import { AgeRangesValue, AgeValue } from '@/modules/ages/components/AgeValues';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { fieldErrorsOf, formErrorOf } from '@/modules/api/utils/apiError';
@@ -45,6 +45,8 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
   const invalidates = [ageModelQueries.all(projectId)];
   const start = useGraphqlMutation(StartAgeModelRunDocument, { invalidates });
   const cancel = useGraphqlMutation(CancelAgeModelRunDocument, { invalidates });
+  // A new choice changes event ages across the project (ladder, regional events): refresh it all.
+  const choose = useGraphqlMutation(ChooseDownstreamRunDocument, { invalidates: [projectQueries.detail(projectId)] });
 
   // A run that has just finished changes every event's age in the project: refresh it all
   // (the history with it, which then shows the finished run's results).
@@ -85,8 +87,9 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
   const loadedSite = siteQuery.data;
   const mayRun = allows(loadedSite.project, 'AGE_MODEL_RUN');
   const busy = activeId !== null || (run ? isRunActive(run.status) : false);
-  // Downstream screens read the site's newest successful run.
-  const downstreamId = history.find((entry) => entry.status === 'SUCCEEDED')?.id ?? null;
+  // Downstream screens read the chosen run, else the newest successful one (Site.downstreamRun).
+  const downstream = { downstreamId: loadedSite.downstreamRun?.id ?? null, chosenId: loadedSite.downstreamRunChoice?.run.id ?? null };
+  const handleChoose = (runId: string | null) => choose.mutate({ input: { siteId, runId } });
 
   const handleStart = (settings: RunSettingsInput) => {
     start.mutate(
@@ -153,7 +156,7 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
         <>
           {selectedRunId !== null && (
             <Callout icon={IconNames.HISTORY} className="sc-run-in-progress" title={`An earlier run: queued ${new Date(runQuery.data.createdAt).toLocaleString()}`}>
-              {shownId === downstreamId ? 'The ladder, regional events and recurrence use this run.' : 'The ladder, regional events and recurrence use the newest successful run, not this one.'}{' '}
+              {downstreamSentence(shownId, downstream)}{' '}
               <Button size="small" variant="minimal" intent={Intent.PRIMARY} text="Show the newest results" onClick={() => setSelectedRunId(null)} />
             </Callout>
           )}
@@ -170,7 +173,24 @@ export function AgeModelView({ projectId, siteId }: AgeModelViewProps) {
 
       {run?.status === 'SUCCEEDED' && run.depthModel === 'HEMIPELAGIC_RATE' && <CoreSection projectId={projectId} siteId={siteId} ageDepth={run.ageDepth} />}
 
-      {history.length > 0 && <RunHistory runs={history} shownId={shownId} downstreamId={downstreamId} onShow={setSelectedRunId} />}
+      {history.length > 0 && (
+        <>
+          {choose.error && (
+            <Callout intent={Intent.DANGER} icon={IconNames.ERROR} title="The choice was not saved">
+              {choose.error.message}
+            </Callout>
+          )}
+          <RunHistory
+            runs={history}
+            shownId={shownId}
+            downstream={downstream}
+            onShow={setSelectedRunId}
+            mayChoose={mayRun}
+            onChoose={handleChoose}
+            choosing={choose.isPending}
+          />
+        </>
+      )}
     </div>
   );
 }

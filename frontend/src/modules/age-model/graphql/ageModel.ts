@@ -84,7 +84,10 @@ export const AgeModelRunDocument = graphql(`
   }
 `);
 
-/** The site's column with every sample's calibrated likelihood, its latest run and its run history (newest 50). */
+/**
+ * The site's column with every sample's calibrated likelihood, its latest run, its run history
+ * (newest 50) and which run feeds the ladder, regional events and recurrence (chosen or newest).
+ */
 export const AgeModelSiteDocument = graphql(`
   query AgeModelSite($id: ID!) {
     site(id: $id) {
@@ -148,6 +151,18 @@ export const AgeModelSiteDocument = graphql(`
         status
         stale
       }
+      downstreamRun {
+        id
+      }
+      downstreamRunChoice {
+        run {
+          id
+        }
+        chosenAt
+        chosenBy {
+          displayName
+        }
+      }
       ageModelRuns {
         id
         status
@@ -182,6 +197,18 @@ export const CancelAgeModelRunDocument = graphql(`
     cancelAgeModelRun(id: $id) {
       id
       status
+    }
+  }
+`);
+
+/** Choose the run the site uses downstream, or (runId null) follow its newest successful run again. */
+export const ChooseDownstreamRunDocument = graphql(`
+  mutation ChooseDownstreamRun($input: ChooseDownstreamRunInput!) {
+    chooseDownstreamRun(input: $input) {
+      id
+      downstreamRun {
+        id
+      }
     }
   }
 `);

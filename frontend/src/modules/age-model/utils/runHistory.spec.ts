@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { newestFirst, runSettingsSummary, runsToShow } from './runHistory';
+import { downstreamRow, downstreamSentence, newestFirst, runSettingsSummary, runsToShow } from './runHistory';
 
 const run = (id: string, status: string, createdAt: string) => ({ id, status, createdAt });
 
@@ -62,5 +62,36 @@ describe(runSettingsSummary.name, () => {
 
   it('leaves out what the run did not record', () => {
     expect(runSettingsSummary('ORDER_ONLY', 1, null)).toBe('order only · seed 1');
+  });
+});
+
+describe(downstreamRow.name, () => {
+  const following = { downstreamId: 'newer', chosenId: null };
+  const chosenOld = { downstreamId: 'old', chosenId: 'old' };
+
+  it('marks the newest successful run while the site follows it, and offers every other success to choose', () => {
+    expect(downstreamRow(run('newer', 'SUCCEEDED', ''), following, true)).toEqual({ mark: 'used downstream · newest', action: null });
+    expect(downstreamRow(run('old', 'SUCCEEDED', ''), following, true)).toEqual({ mark: null, action: 'choose' });
+  });
+
+  it('marks a chosen run as chosen and offers the way back to the newest; the newest is then offered to choose', () => {
+    expect(downstreamRow(run('old', 'SUCCEEDED', ''), chosenOld, true)).toEqual({ mark: 'used downstream · chosen', action: 'followNewest' });
+    expect(downstreamRow(run('newer', 'SUCCEEDED', ''), chosenOld, true)).toEqual({ mark: null, action: 'choose' });
+  });
+
+  it('offers nothing for runs that did not succeed, nor to a reader who may not run age models', () => {
+    for (const status of ['FAILED', 'CANCELLED', 'QUEUED', 'RUNNING']) expect(downstreamRow(run('x', status, ''), following, true)).toEqual({ mark: null, action: null });
+    expect(downstreamRow(run('old', 'SUCCEEDED', ''), following, false).action).toBeNull();
+    expect(downstreamRow(run('old', 'SUCCEEDED', ''), chosenOld, false)).toEqual({ mark: 'used downstream · chosen', action: null });
+  });
+});
+
+describe(downstreamSentence.name, () => {
+  it('says whether the shown run is the one downstream reads, and why', () => {
+    expect(downstreamSentence('newer', { downstreamId: 'newer', chosenId: null })).toContain('the newest successful one');
+    expect(downstreamSentence('old', { downstreamId: 'old', chosenId: 'old' })).toContain('chosen in place of the newest');
+    expect(downstreamSentence('old', { downstreamId: 'newer', chosenId: null })).toContain('use the newest successful run, not this one');
+    expect(downstreamSentence('newer', { downstreamId: 'old', chosenId: 'old' })).toContain('another run, chosen for this site');
+    expect(downstreamSentence('failed', { downstreamId: null, chosenId: null })).toContain('no successful run');
   });
 });

@@ -56,3 +56,47 @@ export function runSettingsSummary(depthModel: string, seed: number, settings: u
   }
   return parts.join(' · ');
 }
+
+/** Which run of the site feeds the ladder, regional events and recurrence, and whether a researcher chose it. */
+export type DownstreamState = {
+  /** The run used downstream (Site.downstreamRun); null while the site has no successful run. */
+  downstreamId: string | null;
+  /** The chosen run (Site.downstreamRunChoice); null when the site follows its newest successful run. */
+  chosenId: string | null;
+};
+
+/** What a history row says of a run's part downstream, and the one action it offers there. */
+export type DownstreamRow = {
+  /** The mark beside the run; null for a run nothing downstream reads. */
+  mark: string | null;
+  /** `choose`: use this run downstream; `followNewest`: go back to the newest successful run. */
+  action: 'choose' | 'followNewest' | null;
+};
+
+/**
+ * A run's part downstream in the history: the run used downstream is marked (as chosen, or as the
+ * newest successful run); any other successful run can be chosen, and the chosen run can be given
+ * up for the newest again, when the reader may run age models.
+ */
+export function downstreamRow(run: { id: string; status: string }, state: DownstreamState, mayChoose: boolean): DownstreamRow {
+  const chosen = state.chosenId !== null && run.id === state.chosenId;
+  if (run.id === state.downstreamId) {
+    return { mark: chosen ? 'used downstream · chosen' : 'used downstream · newest', action: chosen && mayChoose ? 'followNewest' : null };
+  }
+  return { mark: null, action: mayChoose && run.status === 'SUCCEEDED' ? 'choose' : null };
+}
+
+/**
+ * The sentence above an earlier run's results: does the ladder read this run, and if not which one.
+ */
+export function downstreamSentence(shownId: string, state: DownstreamState): string {
+  if (shownId === state.downstreamId) {
+    return state.chosenId === shownId
+      ? 'The ladder, regional events and recurrence use this run: it was chosen in place of the newest.'
+      : 'The ladder, regional events and recurrence use this run, the newest successful one.';
+  }
+  if (state.downstreamId === null) return 'Nothing downstream reads this site yet: it has no successful run.';
+  return state.chosenId !== null
+    ? 'The ladder, regional events and recurrence use another run, chosen for this site, not this one.'
+    : 'The ladder, regional events and recurrence use the newest successful run, not this one.';
+}

@@ -1,4 +1,4 @@
-import { Button, Classes, HTMLTable, Intent, NumericInput, ProgressBar, Switch, Tag } from '@blueprintjs/core';
+import { Button, Callout, Classes, HTMLTable, Intent, NumericInput, ProgressBar, Switch, Tag } from '@blueprintjs/core';
 import { IconNames } from '@blueprintjs/icons';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
@@ -8,7 +8,7 @@ import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { useGraphqlMutation } from '@/modules/api/hooks/useGraphqlMutation';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { LatestRefreshDocument, RefreshStaleResultsDocument, SetRefreshSettingsDocument } from '@/modules/recurrence/graphql/recurrence';
-import { progressLine, stepNote } from '@/modules/recurrence/utils/refreshPlan';
+import { chosenRunNotes, progressLine, stepNote } from '@/modules/recurrence/utils/refreshPlan';
 
 /** Polling interval while a refresh is active. */
 const REFRESH_POLL_MS = 2000;
@@ -44,6 +44,8 @@ export function RefreshPanel({ projectId, canConfigure, onShowAnalysis }: Refres
   const plan = latest.data?.refreshPlans[0] ?? null;
   const handleRefresh = () => refresh.mutate({ projectId });
   const siteOfRun = new Map((plan?.ageModelRuns ?? []).map((run) => [run.id, run.site.id]));
+  const choices = latest.data?.downstreamRunChoices ?? [];
+  const chosenNotes = chosenRunNotes(choices, (iso) => new Date(iso).toLocaleString());
 
   const freshLink = (step: NonNullable<typeof plan>['steps'][number]) => {
     if (!step.freshId || step.status === 'FAILED') return null;
@@ -69,6 +71,20 @@ export function RefreshPanel({ projectId, canConfigure, onShowAnalysis }: Refres
       </p>
       <Button icon={IconNames.REFRESH} text="Refresh stale results" onClick={handleRefresh} loading={refresh.isPending} disabled={plan?.status === 'ACTIVE'} />
       {refresh.error && <p className={Classes.INTENT_DANGER}>{refresh.error.message}</p>}
+      {chosenNotes.length > 0 && (
+        <Callout icon={IconNames.PIN} title="Chosen runs that are not the newest" className="sc-chosen-runs">
+          <p>A refresh re-runs and keeps to these chosen runs; a newer run reaches the ladder and analyses once its site goes back to the newest.</p>
+          <ul>
+            {choices
+              .filter((choice) => choice.newerRunExists)
+              .map((choice, i) => (
+                <li key={choice.site.id}>
+                  {chosenNotes[i]} <Link to={paths.ageModel(projectId, choice.site.id)}>age model of {choice.site.name}</Link>
+                </li>
+              ))}
+          </ul>
+        </Callout>
+      )}
       {latest.data && (
         <AutomaticRefresh projectId={projectId} settings={latest.data.refreshSettings} canConfigure={canConfigure} />
       )}

@@ -233,6 +233,21 @@ export const LatestRefreshDocument = graphql(`
         automatic
         debounceSeconds
       }
+      downstreamRunChoices {
+        site {
+          id
+          name
+        }
+        run {
+          id
+          createdAt
+        }
+        newestRun {
+          id
+          createdAt
+        }
+        newerRunExists
+      }
       refreshPlans {
         id
         status

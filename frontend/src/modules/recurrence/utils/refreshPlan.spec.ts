@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { progressLine, stepNote } from './refreshPlan';
+import { chosenRunNotes, progressLine, stepNote } from './refreshPlan';
 
 describe('stepNote', () => {
   it('names what a waiting step waits for', () => {
@@ -21,5 +21,28 @@ describe('progressLine', () => {
       '3 of 4 steps ended · 1 computing · 1 failed · 1 not started',
     );
     expect(progressLine({ total: 1, succeeded: 0, failed: 0, blocked: 0, running: 0, waiting: 1, skipped: 2 })).toBe('0 of 1 step ended · 1 waiting · 2 skipped');
+  });
+});
+
+describe('chosenRunNotes', () => {
+  const choice = (name: string, runAt: string, newestAt: string, newerRunExists: boolean) => ({
+    site: { id: name, name },
+    run: { id: `${name}-chosen`, createdAt: runAt },
+    newestRun: { id: newerRunExists ? `${name}-newest` : `${name}-chosen`, createdAt: newestAt },
+    newerRunExists,
+  });
+
+  it('names each site whose chosen run is not its newest, with both runs\' times, and no other', () => {
+    const notes = chosenRunNotes(
+      [choice('Kelp Terrace', '2026-12-01', '2026-12-04', true), choice('Ngaio Swamp', '2026-12-02', '2026-12-02', false)],
+      (iso) => `[${iso}]`,
+    );
+    expect(notes).toEqual([
+      'Kelp Terrace: the run queued [2026-12-01] was chosen to feed the ladder and analyses, not its newest successful run (queued [2026-12-04]).',
+    ]);
+  });
+
+  it('says nothing when every site follows its newest run', () => {
+    expect(chosenRunNotes([], String)).toEqual([]);
   });
 });

@@ -41,3 +41,25 @@ function listed(labels: readonly string[]): string {
   if (labels.length <= 1) return labels.join('');
   return `${labels.slice(0, -1).join(', ')} and ${labels[labels.length - 1]}`;
 }
+
+/** A site's chosen run used downstream, as the refresh panel reads it. */
+export type ChosenRunView = {
+  site: { id: string; name: string };
+  run: { id: string; createdAt: string };
+  newestRun: { id: string; createdAt: string };
+  newerRunExists: boolean;
+};
+
+/**
+ * One line per site whose chosen run is not its newest successful run: a refresh re-runs and
+ * follows the chosen run, so a newer run stays out of the ladder and analyses until the choice is
+ * given up on the site's age model page. `when` formats a time.
+ */
+export function chosenRunNotes(choices: readonly ChosenRunView[], when: (iso: string) => string): string[] {
+  return choices
+    .filter((choice) => choice.newerRunExists)
+    .map(
+      (choice) =>
+        `${choice.site.name}: the run queued ${when(choice.run.createdAt)} was chosen to feed the ladder and analyses, not its newest successful run (queued ${when(choice.newestRun.createdAt)}).`,
+    );
+}
