@@ -440,6 +440,15 @@ async function researcherRunsAgeModel(page, { baseUrl, shot, round }) {
   await waitForCount(historyRows, (count) => count >= 2, 'two or more runs in the run history');
   await historyRows.filter({ hasText: new RegExp(`seed ${seed}\\b`) }).filter({ hasText: 'used downstream · newest' }).waitFor();
   await shot('run-finished');
+  // An earlier run can be chosen to feed the ladder in place of the newest, and the newest followed again.
+  const useButton = page.getByRole('button', { name: 'Use this run downstream' });
+  const offered = historyRows.filter({ has: useButton }).first();
+  const offeredQueued = (await offered.locator('td').first().innerText()).trim();
+  await offered.getByRole('button', { name: 'Use this run downstream' }).click();
+  await historyRows.filter({ hasText: offeredQueued }).filter({ hasText: 'used downstream · chosen' }).waitFor();
+  await shot('run-chosen');
+  await historyRows.filter({ hasText: 'used downstream · chosen' }).getByRole('button', { name: 'Follow the newest run' }).click();
+  await historyRows.filter({ hasText: new RegExp(`seed ${seed}\\b`) }).filter({ hasText: 'used downstream · newest' }).waitFor();
   // A demo core's Logs tab draws the core on true and event-free depth.
   await page.goto(`${baseUrl}/projects`);
   await openProject(page);

@@ -40,7 +40,7 @@ export function RunHistory({ runs, shownId, downstream, onShow, mayChoose, onCho
       <h3>Run history</h3>
       <p className={Classes.TEXT_MUTED}>
         {downstream.chosenId !== null
-          ? 'A chosen run feeds the ladder, regional events and recurrence for this site; newer runs do not replace it until you go back to the newest.'
+          ? 'A chosen run feeds the ladder, regional events and recurrence for this site; newer runs do not replace it until the site follows its newest run again.'
           : 'The newest successful run feeds the ladder, regional events and recurrence for this site.'}
       </p>
       <HTMLTable compact striped className="sc-table" aria-label="Run history">
@@ -120,7 +120,7 @@ function DownstreamCell({ run, downstream, mayChoose, onChoose, choosing }: Down
         <Button size="small" variant="minimal" icon={IconNames.PIN} text="Use this run downstream" disabled={choosing} onClick={() => onChoose(run.id)} />
       )}
       {action === 'followNewest' && (
-        <Button size="small" variant="minimal" icon={IconNames.UNPIN} text="Back to the newest run" disabled={choosing} onClick={() => onChoose(null)} />
+        <Button size="small" variant="minimal" icon={IconNames.UNPIN} text="Follow the newest run" disabled={choosing} onClick={() => onChoose(null)} />
       )}
     </span>
   );

@@ -69,7 +69,7 @@ export type DownstreamState = {
 export type DownstreamRow = {
   /** The mark beside the run; null for a run nothing downstream reads. */
   mark: string | null;
-  /** `choose`: use this run downstream; `followNewest`: go back to the newest successful run. */
+  /** `choose`: use this run downstream; `followNewest`: follow the newest successful run again. */
   action: 'choose' | 'followNewest' | null;
 };
 

@@ -73,7 +73,7 @@ export function RefreshPanel({ projectId, canConfigure, onShowAnalysis }: Refres
       {refresh.error && <p className={Classes.INTENT_DANGER}>{refresh.error.message}</p>}
       {chosenNotes.length > 0 && (
         <Callout icon={IconNames.PIN} title="Chosen runs that are not the newest" className="sc-chosen-runs">
-          <p>A refresh re-runs and keeps to these chosen runs; a newer run reaches the ladder and analyses once its site goes back to the newest.</p>
+          <p>A refresh re-runs and keeps to these chosen runs; a newer run reaches the ladder and analyses once its site follows its newest run again.</p>
           <ul>
             {choices
               .filter((choice) => choice.newerRunExists)
