@@ -14,6 +14,14 @@ export interface AccessRequest {
 
 @Injectable()
 export class AccessService {
+  /**
+   * Role lookups still waiting for the database, by user and project. A request's parallel fields
+   * (the ladder and `project`, then `myRole` and `myPermissions`) ask the same question at once
+   * and share one read; an answered lookup is dropped at once, so nothing is kept between reads
+   * and a field that runs after a change (a later mutation field) reads again.
+   */
+  private readonly pending = new Map<string, Promise<Role | undefined>>();
+
   constructor(private readonly access: AccessRepository) {}
 
   /**
@@ -21,7 +29,7 @@ export class AccessService {
    * FORBIDDEN, so the existence of another project's objects is not revealed.
    */
   async requireAccess({ user, permission, projectId, objectName = 'project' }: AccessRequest): Promise<Role> {
-    const role = await this.access.roleOf(user.id, projectId);
+    const role = await this.lookUp(user.id, projectId);
     if (!role) throw new DomainError('NOT_FOUND', `${objectName} not found`);
     if (!roleAllows(role, permission)) {
       throw forbidden(`the ${role} role cannot ${describe(permission)} in this project`);
@@ -31,7 +39,17 @@ export class AccessService {
 
   /** The caller's role, or undefined when not a member. */
   roleOf(user: AuthUser, projectId: string): Promise<Role | undefined> {
-    return this.access.roleOf(user.id, projectId);
+    return this.lookUp(user.id, projectId);
+  }
+
+  private lookUp(userId: string, projectId: string): Promise<Role | undefined> {
+    const key = `${userId} ${projectId}`;
+    let lookup = this.pending.get(key);
+    if (!lookup) {
+      lookup = this.access.roleOf(userId, projectId).finally(() => this.pending.delete(key));
+      this.pending.set(key, lookup);
+    }
+    return lookup;
   }
 }
 

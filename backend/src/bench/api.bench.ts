@@ -8,6 +8,7 @@ import { ChildProcess, spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { loadavg } from 'node:os';
 import { join } from 'node:path';
 import { Client, Pool } from 'pg';
 import { storeDensity, StoredAgeModelResults } from '../age-models/age-model-results';
@@ -32,6 +33,13 @@ export interface LadderLoadBench {
   responseBytes: number;
   /** Peak resident memory of the API process (VmHWM) after the load, MiB; null off Linux. */
   peakRssMiB: number | null;
+  /**
+   * CPU time (user + system) the API process spent per request during the load, ms; null off
+   * Linux. Less moved than the latencies by other work on a shared machine.
+   */
+  cpuMsPerRequest: number | null;
+  /** The machine's 1-minute load average as the load started (other work on a shared machine). */
+  loadAverage: number;
 }
 
 export interface ImportBench {
@@ -159,12 +167,25 @@ function peakRssMiB(pid: number | undefined): number | null {
   return match ? Number(match[1]) / 1024 : null;
 }
 
+/** CPU time (user + system) a process has used so far, ms, from /proc (Linux); null elsewhere. */
+function cpuMs(pid: number | undefined): number | null {
+  const stat = `/proc/${pid}/stat`;
+  if (pid === undefined || !existsSync(stat)) return null;
+  // Fields after the command name (which may hold spaces): utime and stime are the 12th and 13th, in clock ticks.
+  const text = readFileSync(stat, 'utf8');
+  const fields = text.slice(text.lastIndexOf(')') + 2).split(' ');
+  return ((Number(fields[11]) + Number(fields[12])) * 1000) / CLOCK_TICKS_PER_SECOND;
+}
+
+/** Linux's USER_HZ, the unit of /proc's CPU times (100 on every common architecture) [common practice]. */
+const CLOCK_TICKS_PER_SECOND = 100;
+
 /**
  * The invented bench project: 40 cores along a 600 km margin, 16 units and 15 event horizons
  * each, 50 radiocarbon samples each, and a SUCCEEDED age model run per site whose results are
  * stored as the worker stores them (normal posteriors, 4,000 joint draws).
  */
-async function seedProject(pool: Pool): Promise<{ projectId: string; email: string }> {
+export async function seedProject(pool: Pool): Promise<{ projectId: string; email: string }> {
   const random = new SeededRandom(40_600);
   const email = 'bench-viewer@stratochron.test';
   const hash = await bcrypt.hash(PASSWORD, 4);
@@ -276,6 +297,8 @@ async function benchLadder(url: string, token: string, projectId: string, pid: n
   // eslint-disable-next-line @typescript-eslint/no-require-imports
   const autocannon = require('autocannon') as Autocannon;
   const times: number[] = [];
+  const cpuBefore = cpuMs(pid);
+  const loadAverage = loadavg()[0];
   const instance = autocannon({
     url: `${url}/graphql`,
     connections: CONNECTIONS,
@@ -287,6 +310,7 @@ async function benchLadder(url: string, token: string, projectId: string, pid: n
   // autocannon's own summary stops at p90/p97.5; the target is a p95, so keep every time.
   instance.on('response', (_client, _status, _bytes, responseTimeMs) => times.push(responseTimeMs));
   const result = await instance;
+  const cpuAfter = cpuMs(pid);
   times.sort((a, b) => a - b);
   const check = await graphql(url, token, query, { projectId });
   return {
@@ -304,6 +328,8 @@ async function benchLadder(url: string, token: string, projectId: string, pid: n
     requestsPerSecond: result.requests.total / result.duration,
     responseBytes: first.bytes,
     peakRssMiB: peakRssMiB(pid),
+    loadAverage,
+    cpuMsPerRequest: cpuBefore !== null && cpuAfter !== null && result.requests.total > 0 ? (cpuAfter - cpuBefore) / result.requests.total : null,
   };
 }
 

@@ -193,6 +193,8 @@ export const BENCHMARKS: Benchmark[] = [
         { figure: `  same, throughput over ${round(r.seconds, 0)} s (requests/s)`, value: round(r.requestsPerSecond, 1), target: '(no target)', met: true },
         { figure: '  same, failed or timed-out requests', value: r.failures, target: '0', met: r.failures === 0 },
         { figure: '  same, first (cold) query (ms)', value: round(r.coldMs, 0), target: '(no target)', met: true },
+        { figure: '  same, API CPU time per request (ms)', value: r.cpuMsPerRequest === null ? 'n/a' : round(r.cpuMsPerRequest, 1), target: '(no target)', met: true },
+        { figure: '  same, machine load average (1 min) as the load started', value: round(r.loadAverage, 2), target: '(no target)', met: true },
         { figure: '  same, response size (kB)', value: round(r.responseBytes / 1024, 0), target: '(no target)', met: true },
         { figure: '  API peak RSS so far (MiB)', value: mib(r.peakRssMiB), target: '(no target)', met: true },
       ];

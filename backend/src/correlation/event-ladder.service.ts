@@ -27,7 +27,8 @@ export interface LadderColumnView {
 }
 
 export interface EventLadderView {
-  project: ProjectRow;
+  /** `EventLadder.project` is read only when a client asks for it (`EventLadderService.project`). */
+  projectId: string;
   columns: LadderColumnView[];
 }
 
@@ -45,8 +46,7 @@ export class EventLadderService {
    */
   async get(user: AuthUser, projectId: string): Promise<EventLadderView> {
     await this.access.requireAccess({ user, permission: Permission.ProjectRead, projectId });
-    const [project, data] = await Promise.all([this.projects.findById(projectId), this.correlationData.load(projectId)]);
-    if (!project) throw notFound('project');
+    const data = await this.correlationData.load(projectId);
     const eventsBySite = new Map<string, LadderEventView[]>(data.sites.map((site) => [site.id, []]));
     for (const event of data.events) {
       const posterior = posteriorOf(data, event);
@@ -58,12 +58,19 @@ export class EventLadderService {
       });
     }
     return {
-      project,
+      projectId,
       columns: data.sites.map((site) => ({
         site,
         latestAgeModelRun: data.runsBySite.get(site.id)?.row ?? null,
         events: eventsBySite.get(site.id) ?? [],
       })),
     };
+  }
+
+  /** The ladder's project (the caller's access was checked when the ladder was read). */
+  async project(ladder: EventLadderView): Promise<ProjectRow> {
+    const project = await this.projects.findById(ladder.projectId);
+    if (!project) throw notFound('project');
+    return project;
   }
 }

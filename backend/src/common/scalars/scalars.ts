@@ -1,4 +1,5 @@
 import { GraphQLScalarType, Kind, ValueNode } from 'graphql';
+import { numberListJson } from '../answer-json';
 
 /** ISO-8601 date-time strings in and out; Date objects from the database are serialised. */
 export const DateTimeScalar = new GraphQLScalarType({
@@ -37,10 +38,13 @@ export const JsonScalar = new GraphQLScalarType({
   },
 });
 
-/** A list of finite numbers passed through as one JSON array (no per-item scalar work). */
+/**
+ * A list of finite numbers passed through as one JSON array (no per-item scalar work); answered as
+ * a `NumberListJson`, whose text is made once per array (see `answerJson`).
+ */
 export const NumberListScalar = new GraphQLScalarType({
   name: 'NumberList',
-  serialize: (value) => value,
+  serialize: (value) => (Array.isArray(value) ? numberListJson(value as number[]) : value),
   parseValue: (value) => {
     if (!Array.isArray(value) || !value.every((v) => typeof v === 'number' && Number.isFinite(v))) {
       throw new TypeError('NumberList must be an array of finite numbers');
