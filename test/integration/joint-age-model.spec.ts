@@ -118,6 +118,7 @@ const CREATE_HORIZON = `mutation($i: CreateEventHorizonInput!) { createEventHori
 const CREATE_SAMPLE = `mutation($i: CreateSampleInput!) { createSample(input: $i) { id } }`;
 const CREATE_HYPOTHESIS = `mutation($i: CreateHypothesisInput!) { createHypothesis(input: $i) { id version } }`;
 const ADD_TIE = `mutation($i: AddTieInput!) { addTie(input: $i) { id } }`;
+const HYPOTHESIS_TIES = `query($id: ID!) { hypothesis(id: $id) { ties { id } } }`;
 const START = `mutation($i: StartJointAgeModelRunInput!) { startJointAgeModelRun(input: $i) { id status } }`;
 const CANCEL = `mutation($id: ID!) { cancelJointAgeModelRun(id: $id) { id status } }`;
 const RUN = `query($id: ID!) { jointAgeModelRun(id: $id) { id status progress message stale staleReasons { message inputKind }
@@ -333,11 +334,23 @@ describe('refusals and access', () => {
     // A-E1 with B-E2 and A-E2 with B-E1: each site puts the other pair in the opposite order.
     await clients.CORRELATOR.ok(ADD_TIE, { i: { hypothesisId: crossing, eventAId: site.A.events[0], eventBId: site.B.events[1], confidence: 1 } });
     await clients.CORRELATOR.ok(ADD_TIE, { i: { hypothesisId: crossing, eventAId: site.A.events[1], eventBId: site.B.events[0], confidence: 1 } });
-    const error = await clients.CORRELATOR.errorOf(START, { i: { hypothesisId: crossing } });
-    expect(error).toMatchObject({ code: 'BAD_USER_INPUT', field: 'hypothesisId' });
+    const tieIds: string[] = (await clients.CORRELATOR.ok(HYPOTHESIS_TIES, { id: crossing })).hypothesis.ties.map((tie: { id: string }) => tie.id);
+    const { errors } = await clients.CORRELATOR.request(START, { i: { hypothesisId: crossing } });
+    const [error] = errors ?? [];
+    expect(error.extensions).toMatchObject({ code: 'BAD_USER_INPUT', field: 'hypothesisId' });
     expect(error.message).toContain(name);
     expect(error.message).toMatch(/order loop/);
-    for (const event of ['A-E1', 'A-E2', 'B-E1', 'B-E2']) expect(error.message).toContain(event);
+    // Sites and events as a correlator reads them; no id in the words (ties, events, sites, regional events).
+    expect(error.message).toContain('Kettle Reach "A-E1" is older than "A-E2", which is tied to "B-E1" at Plover Marsh');
+    expect(error.message).toContain('Plover Marsh "B-E1" is older than "B-E2", which is tied to "A-E1" at Kettle Reach');
+    expect(error.message).toContain('The regional events on this loop: ');
+    for (const regional of ['"A-E1" at Kettle Reach + "B-E2" at Plover Marsh', '"A-E2" at Kettle Reach + "B-E1" at Plover Marsh']) expect(error.message).toContain(regional);
+    expect(error.message).not.toMatch(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i);
+    // The ids are in the structured fields, one list per loop.
+    const extensions = error.extensions as { regionalEventIds: string[][]; tieIds: string[][] };
+    expect(extensions.regionalEventIds).toHaveLength(1);
+    expect(extensions.regionalEventIds[0]).toHaveLength(2);
+    expect([...extensions.tieIds[0]].sort()).toEqual([...tieIds].sort());
     const [count] = await sql<{ n: string }>(`select count(*) as n from joint_age_model_runs where hypothesis_id = $1`, [crossing]);
     expect(count.n).toBe('0');
   });

@@ -10,6 +10,7 @@ const SITES: Record<string, { siteName: string; alongStrikeKm: number }> = {
   H: { siteName: 'Harrow Core', alongStrikeKm: 80 },
   T: { siteName: 'Tansy Trench', alongStrikeKm: 210 },
   W: { siteName: 'Wren Lake', alongStrikeKm: 300 },
+  X: { siteName: 'Ochre Bay', alongStrikeKm: 420 },
 };
 
 /** Event `K2` is the second event from the base at Kestrel Marsh, and so on. */
@@ -44,12 +45,61 @@ describe(orderConflicts.name, () => {
     expect(conflict.siteIds).toEqual(['K', 'H']);
     expect(conflict.message).toContain('Kestrel Marsh');
     expect(conflict.message).toContain('Harrow Core');
-    expect(conflict.message).toContain('At Kestrel Marsh "K1" is older than "K2", which is tied to "H1" by tie tB');
-    expect(conflict.message).toContain('at Harrow Core "H1" is older than "H2", which is tied to "K1" by tie tA');
-    expect(conflict.message).toContain('cross');
+    expect(conflict.message).toContain('At Kestrel Marsh "K1" is older than "K2", which is tied to "H1" at Harrow Core;');
+    expect(conflict.message).toContain('at Harrow Core "H1" is older than "H2", which is tied to "K1" at Kestrel Marsh:');
+    expect(conflict.message).toContain('cross, putting "K1" at Kestrel Marsh before itself');
+    expect(conflict.message).toContain('The regional events on this loop: "K1" at Kestrel Marsh + "H2" at Harrow Core; "K2" at Kestrel Marsh + "H1" at Harrow Core.');
+    expect(conflict.message).not.toMatch(/\bt[AB]\b/);
     expect(conflict.regionalEventIds).toHaveLength(2);
     expect(conflict.eventIds).toEqual(['K1', 'K2', 'H1', 'H2']);
     expect(conflict.steps.map((step) => `${step.siteId}:${step.olderEventId}<${step.youngerEventId}`)).toEqual(['K:K1<K2', 'H:H1<H2']);
+  });
+
+  it('names sites, event labels and regional events in the message, never an id', () => {
+    // Ids as the database makes them (UUIDs), unlike the labels a correlator reads.
+    const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+    const events: SiteEvent[] = [
+      { ...siteEvent('K1'), id: uuid(1), name: 'KM-E1', siteId: uuid(101) },
+      { ...siteEvent('K2'), id: uuid(2), name: 'KM-E2', siteId: uuid(101) },
+      { ...siteEvent('H1'), id: uuid(3), name: 'HC-T4', siteId: uuid(102) },
+      { ...siteEvent('H2'), id: uuid(4), name: 'HC-T5', siteId: uuid(102) },
+      { ...siteEvent('T1'), id: uuid(5), name: 'TT-1', siteId: uuid(103) },
+      { ...siteEvent('T2'), id: uuid(6), name: 'TT-2', siteId: uuid(103) },
+    ];
+    // X = KM-E1 + HC-T4 + TT-2 (a chain through Harrow Core), Y = KM-E2 + TT-1: they cross at Tansy Trench.
+    const ties: Tie[] = [
+      { id: uuid(201), eventAId: uuid(1), eventBId: uuid(3) },
+      { id: uuid(202), eventAId: uuid(3), eventBId: uuid(6) },
+      { id: uuid(203), eventAId: uuid(2), eventBId: uuid(5) },
+    ];
+    const [conflict, ...others] = orderConflicts(events, regionalEvents(events, ties), ties);
+    expect(others).toEqual([]);
+    expect(conflict.message).not.toMatch(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i);
+    expect(conflict.message).toContain('"TT-2", which is tied to "KM-E1" at Kestrel Marsh through "HC-T4" at Harrow Core');
+    expect(conflict.message).toContain('"KM-E1" at Kestrel Marsh + "HC-T4" at Harrow Core + "TT-2" at Tansy Trench');
+    expect(conflict.message).toContain('"KM-E2" at Kestrel Marsh + "TT-1" at Tansy Trench');
+    // The ids are in the structured fields.
+    expect([...conflict.tieIds].sort()).toEqual([uuid(201), uuid(202), uuid(203)]);
+    expect(conflict.siteIds).toEqual([uuid(101), uuid(103)]);
+  });
+
+  it('counts the members of a large regional event past the first four', () => {
+    const conflicts = check(['K1', 'K2', 'H1', 'H2', 'T1', 'W1'], [
+      ['tA', 'K1', 'H2'],
+      ['tB', 'K2', 'H1'],
+      ['tC', 'H1', 'T1'],
+      ['tD', 'T1', 'W1'],
+    ]);
+    expect(conflicts).toHaveLength(1);
+    expect(conflicts[0].message).toContain('"K2" at Kestrel Marsh + "H1" at Harrow Core + "T1" at Tansy Trench + "W1" at Wren Lake.');
+    const five = check(['K1', 'K2', 'H1', 'H2', 'T1', 'W1', 'X1'], [
+      ['tA', 'K1', 'H2'],
+      ['tB', 'K2', 'H1'],
+      ['tC', 'H1', 'T1'],
+      ['tD', 'T1', 'W1'],
+      ['tE', 'W1', 'X1'],
+    ]);
+    expect(five[0].message).toContain('"K2" at Kestrel Marsh + "H1" at Harrow Core + "T1" at Tansy Trench + "W1" at Wren Lake + 1 more.');
   });
 
   it('accepts ties that keep the order at both sites', () => {
@@ -84,7 +134,9 @@ describe(orderConflicts.name, () => {
     // The chain through Harrow Core, walked from where the loop enters X to where it leaves.
     const chains = [conflict.tieAPathIds, conflict.tieBPathIds].map((path) => path.join(','));
     expect(chains.sort()).toEqual(['t2,t1', 't3']);
-    expect(conflict.message).toContain('"T2", which is tied to "K1" by ties t2, t1');
+    expect(conflict.message).toContain('"T2", which is tied to "K1" at Kestrel Marsh through "H1" at Harrow Core');
+    expect(conflict.message).toContain('"K1" at Kestrel Marsh + "H1" at Harrow Core + "T2" at Tansy Trench');
+    expect(conflict.message).not.toMatch(/\bt[123]\b/);
   });
 
   it('accepts three sites in consistent order', () => {

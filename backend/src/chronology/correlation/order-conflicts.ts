@@ -207,6 +207,33 @@ function quoted(event: SiteEvent): string {
   return `"${event.name}"`;
 }
 
+/** An event as a correlator names it: its label and its site (`"E3" at Kestrel Marsh`). */
+function placed(event: SiteEvent): string {
+  return `${quoted(event)} at ${event.siteName}`;
+}
+
+/** Members of a regional event named in a loop's message; more are counted. */
+const MEMBERS_NAMED = 4;
+
+/** A regional event by its members along strike (`"K1" at Kestrel Marsh + "H2" at Harrow Core`). */
+function regionalEventName(node: Node): string {
+  const members = [...node.bySite.values()].sort((a, b) => a.alongStrikeKm - b.alongStrikeKm || a.siteName.localeCompare(b.siteName));
+  const named = members.slice(0, MEMBERS_NAMED).map(placed).join(' + ');
+  return members.length > MEMBERS_NAMED ? `${named} + ${members.length - MEMBERS_NAMED} more` : named;
+}
+
+/** The events a chain of ties passes through between `from` and its far end, in order. */
+function eventsBetween(from: string, path: readonly string[], tiesById: Map<string, Tie>, eventsById: Map<string, SiteEvent>): SiteEvent[] {
+  const passed: SiteEvent[] = [];
+  let at = from;
+  for (const tieId of path.slice(0, -1)) {
+    const tie = tiesById.get(tieId) as Tie;
+    at = tie.eventAId === at ? tie.eventBId : tie.eventAId;
+    passed.push(eventsById.get(at) as SiteEvent);
+  }
+  return passed;
+}
+
 function describeCycle(graph: OrderGraph, cycle: readonly number[], tiesById: Map<string, Tie>): OrderConflict {
   const n = cycle.length;
   // Consecutive edges of a minimal cycle share no site, so the first witness of each will do.
@@ -235,17 +262,22 @@ function describeCycle(graph: OrderGraph, cycle: readonly number[], tiesById: Ma
     return p.alongStrikeKm - q.alongStrikeKm || (a < b ? -1 : a > b ? 1 : 0);
   });
 
-  const through = (path: readonly string[]): string => (path.length === 1 ? `tie ${path[0]}` : `ties ${path.join(', ')}`);
+  // Ties are named by the events they join and regional events by their members: ids stay in the
+  // structured fields, where clients look them up.
+  const eventsById = new Map(cycle.flatMap((u) => [...graph.nodes[u].bySite.values()].map((event) => [event.id, event] as const)));
   const clauses = witnesses.map((witness, i) => {
     const next = (i + 1) % n;
     const partner = witnesses[next].older;
-    const tied = partner.id === witness.younger.id ? '' : `, which is tied to ${quoted(partner)} by ${through(tiePaths[next])}`;
+    const passed = eventsBetween(witness.younger.id, tiePaths[next], tiesById, eventsById);
+    const through = passed.length === 0 ? '' : ` through ${passed.map(placed).join(' and ')}`;
+    const tied = partner.id === witness.younger.id ? '' : `, which is tied to ${placed(partner)}${through}`;
     return `at ${witness.older.siteName} ${quoted(witness.older)} is older than ${quoted(witness.younger)}${tied}`;
   });
   const start = witnesses[0].older;
   const message =
     `${clauses.join('; ')}: ${n === 2 ? 'these correlations cross' : `these ${n} correlations make a loop and cross`}, ` +
-    `putting ${quoted(start)} at ${start.siteName} before itself, so they cannot all hold.`;
+    `putting ${placed(start)} before itself, so they cannot all hold. ` +
+    `The regional events on this loop: ${cycle.map((u) => regionalEventName(graph.nodes[u])).join('; ')}.`;
   return {
     regionalEventIds: cycle.map((u) => graph.nodes[u].group.id),
     steps,

@@ -131,7 +131,8 @@ export class JointRunsService {
       throw badInput(
         'hypothesisId',
         `hypothesis "${hypothesis.name}" has ${loops.length} order ${loops.length === 1 ? 'loop' : 'loops'}, so no one chronology can hold all its ties; remove or change a tie on each loop first. ${named}${more}`,
-        { regionalEventIds: loops.map((loop) => [...loop.regionalEventIds]) },
+        // The words name sites and events; the ids are here, one list per loop.
+        { regionalEventIds: loops.map((loop) => [...loop.regionalEventIds]), tieIds: loops.map((loop) => loop.ties.map((tie) => tie.id)) },
       );
     }
     const tied = checks.regionalEvents.filter((r) => r.members.length > 1);
