@@ -126,7 +126,7 @@ describe('startAgeModelRun depthModel', () => {
   });
 
   it('runs HEMIPELAGIC_RATE: both events dated, the curve at every contact and every 5 cm, stored with its settings', async () => {
-    const { startAgeModelRun } = await clients.RESEARCHER.ok(START, { i: { siteId: coreId, seed: 5, depthModel: 'HEMIPELAGIC_RATE', iterations: 20000 } });
+    const { startAgeModelRun } = await clients.RESEARCHER.ok(START, { i: { siteId: coreId, seed: 5, depthModel: 'HEMIPELAGIC_RATE', iterations: 4000 } });
     expect(startAgeModelRun.depthModel).toBe('HEMIPELAGIC_RATE');
     expect(startAgeModelRun.settings.depthModel).toBe('HEMIPELAGIC_RATE');
     await server.app.get(RunExecutor).execute(server.app.get(AgeModelJob), startAgeModelRun.id);

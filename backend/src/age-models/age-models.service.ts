@@ -27,12 +27,17 @@ import { StartAgeModelRunInput } from './dto/start-age-model-run.input';
 /** Default sweeps per chain for interactive runs: converges for demo-sized columns in seconds. */
 export const DEFAULT_ITERATIONS = 20_000;
 
-/** The hemipelagic model's chain settings (its steps are cheap and many) and its own settings. */
+/**
+ * The hemipelagic model's chain settings (an iteration is one sweep of its moves) and its own
+ * settings. Thinning keeps at most about 2,000 draws per chain, so a long run does not hold
+ * millions of curve points.
+ */
 function hemipelagicRunSettings(input: Omit<StartAgeModelRunInput, 'siteId'>) {
+  const iterations = input.iterations ?? DEFAULT_HEMIPELAGIC_RUN_SETTINGS.iterations;
   return {
-    iterations: input.iterations ?? DEFAULT_HEMIPELAGIC_RUN_SETTINGS.iterations,
+    iterations,
     burnIn: DEFAULT_HEMIPELAGIC_RUN_SETTINGS.burnIn,
-    thin: DEFAULT_HEMIPELAGIC_RUN_SETTINGS.thin,
+    thin: Math.max(DEFAULT_HEMIPELAGIC_RUN_SETTINGS.thin, Math.ceil(iterations / 2_000)),
     hemipelagic: { ...DEFAULT_HEMIPELAGIC_SETTINGS, rateMeanCmPerKyr: input.hemipelagicRateCmPerKyr ?? null },
   };
 }

@@ -30,6 +30,9 @@ interface JStatSubset {
     pdf(x: number, rate: number): number;
     cdf(x: number, rate: number): number;
   };
+  /** Gamma (shape, scale) and beta densities (priors in the hemipelagic exact-posterior spec). */
+  gamma: { pdf(x: number, shape: number, scale: number): number };
+  beta: { pdf(x: number, a: number, b: number): number };
 }
 
 export const { jStat } = require('jstat') as { jStat: JStatSubset };

@@ -21,7 +21,8 @@ export interface HemipelagicBench {
   readonly sections: number;
 }
 
-export function benchHemipelagic(): HemipelagicBench {
+/** The demo's longest core as the service hands it to the model (shared Delta-R offsets included). */
+export function demoLongestCore(): { site: string; input: AgeModelInput } {
   const curves = { intcal20: builtInCurve('INTCAL20'), marine20: builtInCurve('MARINE20') };
   const scenario = generateDemoScenario(undefined, curves);
   const cores = scenario.sites.filter((s) => s.kind === 'CORE');
@@ -77,12 +78,17 @@ export function benchHemipelagic(): HemipelagicBench {
     samples: input.samples.map((s) => (bySample.has(s.id) ? { ...s, reservoir: bySample.get(s.id)! } : s)),
     reservoirSources: reservoirSourcesKept,
   };
+  return { site: site.name, input: shared };
+}
+
+export function benchHemipelagic(): HemipelagicBench {
+  const { site, input } = demoLongestCore();
   const started = process.hrtime.bigint();
   const cpuStarted = process.cpuUsage();
-  const result = runHemipelagicModel(shared, { seed: 7 });
+  const result = runHemipelagicModel(input, { seed: 7 });
   const cpu = process.cpuUsage(cpuStarted);
   return {
-    site: site.name,
+    site,
     seconds: Number(process.hrtime.bigint() - started) / 1e9,
     cpuSeconds: (cpu.user + cpu.system) / 1e6,
     minEss: result.diagnostics.minEss,

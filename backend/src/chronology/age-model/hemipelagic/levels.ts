@@ -179,9 +179,15 @@ export class SharedLevelLikelihoods implements LevelLikelihoods {
   private readonly shared: {
     readonly levels: Int32Array;
     readonly logPrior: Float64Array;
-    /** Per grid value, per level of the source: log L_q on whole years from `starts[k][level]` (read between years linearly in the log). */
-    readonly values: Float32Array[][];
-    readonly starts: Int32Array[];
+    /**
+     * Per level of the source: log L_q on whole years from `starts[level]`, the grid values of one
+     * year side by side (`values[level][year * n + k]`, n grid values), so that a level's year and
+     * interpolation weight are found once for all grid values. Years outside a grid value's own
+     * window hold LOG_FLOOR.
+     */
+    readonly values: Float32Array[];
+    readonly starts: Int32Array;
+    readonly lengths: Int32Array;
   }[];
   private readonly plainLevels: Int32Array;
 
@@ -202,45 +208,59 @@ export class SharedLevelLikelihoods implements LevelLikelihoods {
       });
       if (levels.length === 0) continue;
       levels.forEach((j) => inShared.add(j));
-      const starts: Int32Array[] = [];
-      const values = source.grid.map((_, k) => {
+      const perGrid = source.grid.map((_, k) => {
         const grid = new GridLevelLikelihoods(
           levels.map((j) => ({ ...samples[j], likelihood: samples[j].reservoir!.gridLikelihoods[k] })),
           inheritanceScaleYears,
           outliers,
         );
-        starts.push(Int32Array.from(levels, (_, local) => grid.windowOf(local).youngCalBp));
-        return levels.map((_, local) => {
-          const window = grid.windowOf(local);
-          return Float32Array.from({ length: window.oldCalBp - window.youngCalBp + 1 }, (_, i) => {
-            const value = grid.mixture(local, window.youngCalBp + i);
-            return value > 0 ? Math.log(value) : LOG_FLOOR;
-          });
-        });
+        return levels.map((_, local) => ({ grid, local, window: grid.windowOf(local) }));
       });
-      this.shared.push({ levels: Int32Array.from(levels), logPrior: logGridPrior(source, levels.map((j) => samples[j].reservoir)), values, starts });
+      const n = source.grid.length;
+      const starts = Int32Array.from(levels, (_, local) => Math.min(...perGrid.map((g) => g[local].window.youngCalBp)));
+      const ends = Int32Array.from(levels, (_, local) => Math.max(...perGrid.map((g) => g[local].window.oldCalBp)));
+      const lengths = Int32Array.from(levels, (_, local) => ends[local] - starts[local] + 1);
+      const values = levels.map((_, local) => {
+        const table = new Float32Array(lengths[local] * n).fill(LOG_FLOOR);
+        perGrid.forEach((g, k) => {
+          const { grid, window } = g[local];
+          for (let year = window.youngCalBp; year <= window.oldCalBp; year++) {
+            const value = grid.mixture(local, year);
+            table[(year - starts[local]) * n + k] = value > 0 ? Math.log(value) : LOG_FLOOR;
+          }
+        });
+        return table;
+      });
+      this.shared.push({ levels: Int32Array.from(levels), logPrior: logGridPrior(source, levels.map((j) => samples[j].reservoir)), values, starts, lengths });
     }
     this.plainLevels = Int32Array.from({ length: this.count }, (_, j) => j).filter((j) => !inShared.has(j));
   }
 
-  private sharedLogValue(s: number, k: number, local: number, calBp: number): number {
-    const values = this.shared[s].values[k][local];
-    const x = calBp - this.shared[s].starts[k][local];
-    if (!(x >= 0 && x <= values.length - 1)) return LOG_FLOOR;
-    const i = Math.floor(x);
-    const f = x - i;
-    return i + 1 < values.length ? values[i] * (1 - f) + values[i + 1] * f : values[i];
-  }
-
-  /** Each source's log weights over its grid at the given ages (unnormalised), into `out[s]`. */
+  /**
+   * Each source's log weights over its grid at the given ages (unnormalised), into `out`: the log
+   * prior plus each level's log L_q at its age, read between whole years linearly in the log (LOG_FLOOR
+   * outside the level's years).
+   */
   private logWeights(ages: Float64Array, s: number, out: Float64Array): void {
     const src = this.shared[s];
-    for (let k = 0; k < src.values.length; k++) {
-      let lw = src.logPrior[k];
-      for (let local = 0; local < src.levels.length; local++) {
-        lw += this.sharedLogValue(s, k, local, ages[src.levels[local]]);
+    const n = src.logPrior.length;
+    for (let k = 0; k < n; k++) out[k] = src.logPrior[k];
+    for (let local = 0; local < src.levels.length; local++) {
+      const x = ages[src.levels[local]] - src.starts[local];
+      const length = src.lengths[local];
+      if (!(x >= 0 && x <= length - 1)) {
+        for (let k = 0; k < n; k++) out[k] += LOG_FLOOR;
+        continue;
       }
-      out[k] = lw;
+      const values = src.values[local];
+      const i = Math.floor(x);
+      const f = x - i;
+      const row = i * n;
+      if (i + 1 < length) {
+        for (let k = 0; k < n; k++) out[k] += values[row + k] * (1 - f) + values[row + n + k] * f;
+      } else {
+        for (let k = 0; k < n; k++) out[k] += values[row + k];
+      }
     }
   }
 
@@ -252,7 +272,7 @@ export class SharedLevelLikelihoods implements LevelLikelihoods {
     for (let s = 0; s < this.shared.length; s++) {
       const w = this.scratch;
       this.logWeights(ages, s, w);
-      const n = this.shared[s].values.length;
+      const n = this.shared[s].logPrior.length;
       let top = -Infinity;
       for (let k = 0; k < n; k++) top = Math.max(top, w[k]);
       let sum = 0;
@@ -268,7 +288,7 @@ export class SharedLevelLikelihoods implements LevelLikelihoods {
   }
 
   offsetWeights(ages: Float64Array, s: number): Float64Array {
-    const n = this.shared[s].values.length;
+    const n = this.shared[s].logPrior.length;
     const w = new Float64Array(n);
     this.logWeights(ages, s, w);
     let top = -Infinity;

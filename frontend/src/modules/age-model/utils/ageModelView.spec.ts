@@ -71,7 +71,7 @@ describe(defaultDepthModel.name, () => {
 
   it('picks the hemipelagic model for a core with mud units that have depths', () => {
     expect(defaultDepthModel({ kind: 'CORE', units: [mud, bed] })).toBe('HEMIPELAGIC_RATE');
-    expect(initialRunSettings({ kind: 'CORE', units: [mud, bed] })).toMatchObject({ depthModel: 'HEMIPELAGIC_RATE', iterations: '60000' });
+    expect(initialRunSettings({ kind: 'CORE', units: [mud, bed] })).toMatchObject({ depthModel: 'HEMIPELAGIC_RATE', iterations: '4000' });
   });
 
   it('keeps order only for other sites, cores without mud, or mud without a thickness', () => {
@@ -83,7 +83,7 @@ describe(defaultDepthModel.name, () => {
 
 describe(withDepthModel.name, () => {
   it('moves untouched iterations to the new model default and keeps typed ones', () => {
-    expect(withDepthModel(DEFAULT_RUN_SETTINGS, 'HEMIPELAGIC_RATE').iterations).toBe('60000');
+    expect(withDepthModel(DEFAULT_RUN_SETTINGS, 'HEMIPELAGIC_RATE').iterations).toBe('4000');
     expect(withDepthModel({ ...DEFAULT_RUN_SETTINGS, iterations: '5000' }, 'HEMIPELAGIC_RATE').iterations).toBe('5000');
   });
 });

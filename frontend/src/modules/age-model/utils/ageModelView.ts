@@ -89,12 +89,13 @@ export type RunSettingsInput = {
 };
 
 /**
- * Iterations per chain the form starts with for each depth model: the server's defaults (the
- * hemipelagic model's steps are cheap, and it keeps one draw in twenty, so it runs longer).
+ * Iterations per chain the form starts with for each depth model: the server's defaults (an
+ * iteration of the hemipelagic model is a sweep of moves along every rate and several joint
+ * directions, so fewer are needed).
  */
 export const DEFAULT_ITERATIONS: Record<DepthModelChoice, string> = {
   ORDER_ONLY: '20000',
-  HEMIPELAGIC_RATE: '60000',
+  HEMIPELAGIC_RATE: '4000',
 };
 
 /**
