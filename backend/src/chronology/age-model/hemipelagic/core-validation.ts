@@ -6,12 +6,11 @@
  * Used by the spec (a few cores) and by `npm run bench` (the large run).
  *
  * Large run (2026-12-05, default settings, seeds 1000-1033: 31 cores, 248 events), sampler of
- * `direction-sampler.ts` (4 chains of 4,000 sweeps): 95.4 % ranges covered 94.4 %, 68.3 % ranges
- * 66.9 %; worst split R-hat 1.027, smallest event ESS 344 (two cores whose levels disagree, where
- * the posterior has two modes, stay near 345; the rest above 700). The adaptive Metropolis sampler
- * used before gave on the same seeds 92.7 % and 66.9 %, worst R-hat 1.124 and smallest ESS 23 (an
- * earlier run, before the seeded generator changed, reported 95.1 % / 60.3 % of 224 events with
- * R-hat 1.11 and ESS 26).
+ * `direction-sampler.ts` (4 chains of 4,000 sweeps): 95.4 % ranges covered 93.5 %, 68.3 % ranges
+ * 66.5 %; worst split R-hat 1.014, smallest event ESS 429 (cores whose levels disagree, where the
+ * posterior has two modes, are the slowest). The adaptive Metropolis sampler used before gave on
+ * the same seeds 92.7 % and 66.9 %, worst R-hat 1.124 and smallest ESS 23 (an earlier run, before
+ * the seeded generator changed, reported 95.1 % / 60.3 % of 224 events with R-hat 1.11 and ESS 26).
  */
 import { CalibrationCurve } from '../../calibration/curve';
 import { HpdRange } from '../../common/density';

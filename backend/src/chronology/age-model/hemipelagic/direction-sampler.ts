@@ -17,13 +17,18 @@
  * Stat. 18(2):349-367, section 3), by a Robbins-Monro step on its logarithm. At the end of burn-in
  * the sampler may add the principal axes of the burn-in's draws as further directions (their
  * covariance then is fixed), which lets it move along the few combinations of rates that the
- * dated levels pin down; after burn-in nothing adapts, so the kept draws come from one fixed
+ * dated levels pin down, and the three widest of them once more with a step four times as long
+ * (choices made before the kept draws, so each is a fixed symmetric move); after burn-in nothing adapts, so the kept draws come from one fixed
  * Metropolis-within-Gibbs kernel.
  */
 import { SeededRandom } from '../../common/random';
 
 /** Acceptance rate a one-dimensional random-walk step adapts towards (Roberts & Rosenthal 2009). */
 const TARGET_ACCEPTANCE = 0.44;
+
+/** The number of widest principal axes also proposed with a long step, and its factor. */
+const LONG_AXES = 3;
+const LONG_STEP = 4;
 
 /** One direction of the sweep: a sparse vector of sampler coordinates and their weights. */
 export interface Direction {
@@ -161,6 +166,10 @@ export class DirectionSampler {
       // Along a unit axis the spread is sqrt(value); 2.4 standard deviations suit a one-dimensional normal.
       added.push({ name: `axis:${k}`, indices, weights, scale: 2.4 * Math.sqrt(values[k]) });
     }
+    // The widest axes once more with four times the step: where dated levels disagree the posterior
+    // has modes (which level is the outlier) that short steps seldom cross.
+    const widest = [...added].sort((a, b) => b.scale - a.scale).slice(0, LONG_AXES);
+    for (const axis of widest) added.push({ ...axis, name: `axis:long:${axis.name}`, scale: LONG_STEP * axis.scale });
     this.directions = [...this.directions, ...added];
     this.logScales = Float64Array.from([...this.logScales, ...added.map((a) => Math.log(a.scale))]);
     this.adaptations = new Float64Array(this.directions.length);

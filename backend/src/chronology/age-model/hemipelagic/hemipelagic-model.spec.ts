@@ -96,7 +96,7 @@ describe(runHemipelagicModel.name, () => {
     }
     expect(widest).toBeLessThan(2500);
     // The chains mix at half the default sweeps (the adaptive Metropolis sampler used before reached
-    // split R-hat 1.12 and ESS 23 on such cores at its defaults; these four give about 1.03 and 150).
+    // split R-hat 1.12 and ESS 23 on such cores at its defaults; these four give 1.02 and 232).
     expect(worstRhat).toBeLessThan(1.05);
     expect(smallestEss).toBeGreaterThan(100);
     // CI-sized (32 events): at nominal 95.4 % fewer than 27 covered has probability 0.3 %, and the

@@ -28,9 +28,9 @@
  * The sampler works on (age at the shallowest dated level, log a_1..K, logit r, log E_c) by
  * sweeps of Metropolis moves along fixed directions (`direction-sampler.ts`): each coordinate in
  * turn, neighbouring sections' rates in opposite senses, every rate scaled at once, and after
- * burn-in the burn-in's principal axes; several seeded chains from dispersed starts. Convergence
- * is the split R-hat and bulk ESS of the ordering model (`../convergence.ts`). An iteration is
- * one sweep. (Adaptive Metropolis on all coordinates at once, used before, mixed slowly: on
+ * burn-in the burn-in's principal axes (the widest three also with long steps); several seeded
+ * chains from dispersed starts. Convergence is the split R-hat and bulk ESS of the ordering model
+ * (`../convergence.ts`). An iteration is one sweep. (Adaptive Metropolis on all coordinates at once, used before, mixed slowly: on
  * simulated cores a worst split R-hat of 1.12 and a smallest event ESS of 23, see
  * `core-validation.ts`.)
  */
@@ -125,7 +125,7 @@ export interface HemipelagicRunSettings extends AgeModelSettings {
 /**
  * Chain settings that suit the hemipelagic sampler: an iteration is a sweep of some 2K + d moves
  * (K sections, d coordinates), so a few thousand suffice (on the demo's longest core the smallest
- * event ESS was about 1,500 at these settings, `npm run bench -- hemipelagic`).
+ * event ESS was about 1,600 at these settings, `npm run bench -- hemipelagic`).
  */
 export const DEFAULT_HEMIPELAGIC_RUN_SETTINGS: HemipelagicRunSettings = {
   ...DEFAULT_AGE_MODEL_SETTINGS,
