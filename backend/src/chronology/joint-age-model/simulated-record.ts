@@ -45,6 +45,11 @@ export interface SimulatedRecordOptions {
    * trench is sampled. For diagnosis.
    */
   readonly samplesPerYear?: number;
+  /**
+   * If given, a gross outlier's shift is two-sided exponential (Laplace) with this mean absolute
+   * shift, the model's own outlier form, instead of 300-1,500 years either way. For diagnosis.
+   */
+  readonly outlierLaplaceYears?: number;
 }
 
 export interface SimulatedRecord {
@@ -65,7 +70,7 @@ function siteColumn(
   random: SeededRandom,
   siteId: string,
   ages: readonly number[],
-  shares: { erosion: number; outlier: number; offset: number; logSd: number; perYear?: number },
+  shares: { erosion: number; outlier: number; offset: number; logSd: number; perYear?: number; laplace?: number },
 ): AgeModelInput {
   const units: ColumnUnit[] = [];
   const eventHorizons: ColumnEventHorizon[] = [];
@@ -99,7 +104,10 @@ function siteColumn(
         ageRelation = 'YOUNGER_THAN_DEPOSIT';
         material = deposit - gamma2(random, 40);
       }
-      if (random.uniform() < shares.outlier) material += (random.uniform() < 0.5 ? -1 : 1) * (300 + 1200 * random.uniform());
+      if (random.uniform() < shares.outlier) {
+        const sign = random.uniform() < 0.5 ? -1 : 1;
+        material += sign * (shares.laplace !== undefined ? random.exponential(shares.laplace) : 300 + 1200 * random.uniform());
+      }
       const error = 30 + 30 * random.uniform();
       samples.push({
         id: `${siteId}-s${u + 1}-${s + 1}`,
@@ -158,6 +166,7 @@ export function simulateRecord(options: SimulatedRecordOptions): SimulatedRecord
       offset: options.offsetShare ?? 0.33,
       logSd: options.depositionLogSd ?? 0.8,
       perYear: options.samplesPerYear,
+      laplace: options.outlierLaplaceYears,
     });
     column.eventHorizons.forEach((horizon, i) => {
       members[recorded[i]].push({ siteId, eventHorizonId: horizon.id });
