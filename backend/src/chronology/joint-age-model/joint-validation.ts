@@ -7,7 +7,7 @@
  * true age, and the total length of its 95.4 % ranges. A well-calibrated model covers the truth at
  * about the nominal rates [analytic]. Used by the spec (a few records) and the bench (100+ events).
  *
- * Measured on 2026-12-05 (after 95b1714, which moved records with an event in the future; the
+ * Measured on 2026-12-05 (after 875e592, which moved records with an event in the future; the
  * bench's settings, 4 chains of 1,000 + 4,000 sweeps kept every 4th; 4 sites and 6 true events per
  * record; machine shared, so no timings):
  * - seeds 1000-1023 (24 records, 134 regional events, 419 site events): joint 95.4 % ranges cover
@@ -39,12 +39,12 @@
  *   V / prod s^m (V the joint order's volume), which favours short spans by one factor of the
  *   scale per extra member. Splitting each shared node's count between its members (exponent
  *   1 / n per member site, a logarithmic pool) changed the joint's coverage by under one point
- *   (seeds 2000-2039 before 95b1714: 87.9 % / 54.1 % to 88.7 % / 54.1 % with everything off;
+ *   (seeds 2000-2039 before 875e592: 87.9 % / 54.1 % to 88.7 % / 54.1 % with everything off;
  *   92.5 % / 62.4 % to 93.1 % / 61.8 % with uniform deposition, 30 records). Not the cause; the
  *   model is kept as the issue states it.
  * - The generator: ages are calendar ages with Gaussian errors (no calibration curve, so no curve
  *   error to share); a regional event's truth is one age at every member site; switching offsets
- *   off does switch them off. One defect, fixed in 95b1714: about 3 % of records had events in
+ *   off does switch them off. One defect, fixed in 875e592: about 3 % of records had events in
  *   the future and top units dated older than the event beneath them (none among seeds
  *   1000-1023).
  * - Misfit to the uniform deposition prior, which takes events and dated deposits as one
