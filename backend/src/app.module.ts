@@ -12,6 +12,7 @@ import { CalibrationModule } from './calibration/calibration.module';
 import { formatGraphqlError } from './common/errors/format-graphql-error';
 import { GraphqlExceptionFilter } from './common/errors/graphql-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { compiledExecutionPlugin } from './common/compiled-execution';
 import { answerJson } from './common/answer-json';
 import { costLimitPlugin } from './common/graphql-cost';
 import { inputScreeningPlugin } from './common/graphql-input-screen';
@@ -66,7 +67,8 @@ import { ReleasesModule } from './releases/releases.module';
         // No field carries cache hints, and the default cache-control plugin's per-field hook
         // cost ~10 % of executing a large answer such as the event ladder.
         // Inputs are screened (ids, NUL) and the operation priced before any resolver runs.
-        plugins: [ApolloServerPluginCacheControlDisabled(), inputScreeningPlugin(), costLimitPlugin(), ladderCache.plugin()],
+        // Compiled execution last: its answer replaces execution once the others have run.
+        plugins: [ApolloServerPluginCacheControlDisabled(), inputScreeningPlugin(), costLimitPlugin(), ladderCache.plugin(), compiledExecutionPlugin(config.graphqlCompileAfter)],
         // One serialisation per answer, shared with the answer-size cap and the ladder cache.
         stringifyResult: answerJson,
         introspection: config.nodeEnv !== 'production',

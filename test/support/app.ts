@@ -22,6 +22,9 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     SEED_DEMO: 'false',
     PORT: '3000',
     FRONTEND_DIST: '/nonexistent',
+    // Every query runs compiled from its first sighting (a server compiles from the second), so
+    // the suite checks the compiled answers; answers with errors are interpreted either way.
+    GRAPHQL_COMPILE_AFTER: '1',
     ...env,
   });
   const app = await createApp(config);

@@ -47,6 +47,11 @@ export interface AppConfig {
   /** Memory for serialised event-ladder answers per API process, MiB; 0 turns the cache off. */
   readonly ladderCacheMiB: number;
   /**
+   * Sightings of one query text after which it runs compiled (graphql-jit) instead of
+   * interpreted (GRAPHQL_COMPILE_AFTER; 0 turns compiling off). See `compiledExecutionPlugin`.
+   */
+  readonly graphqlCompileAfter: number;
+  /**
    * Reverse proxies whose `X-Forwarded-For` is believed (TRUST_PROXY: comma-separated addresses,
    * CIDR ranges or Express's names loopback, linklocal, uniquelocal); empty believes none, so the
    * client address (which sign-in throttling keys on) is the connection's own.
@@ -137,6 +142,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
     jobHeartbeatTimeoutMs: integer('JOB_HEARTBEAT_TIMEOUT_MS', 20_000, 3_000, 3_600_000),
     operatorEmails,
     ladderCacheMiB: integer('LADDER_CACHE_MIB', 64, 0, 16_384),
+    graphqlCompileAfter: integer('GRAPHQL_COMPILE_AFTER', 2, 0, 1000),
     importCalibrationBudgetMs: integer('IMPORT_CALIBRATION_BUDGET_MS', 20_000, 1, 600_000),
     trustProxy,
     devMailPage,
