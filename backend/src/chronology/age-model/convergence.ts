@@ -30,9 +30,26 @@ function splitChains(chains: readonly Float64Array[]): Float64Array[] {
 }
 
 /**
+ * Phi^-1((r - 3/8) / (S + 1/4)) for every whole rank r = 1..S, by S: every quantity of a run has
+ * the same number of draws, and draws of continuous ages rarely tie, so one table per draw count
+ * replaces an inverse normal per draw (the table is the same function at the same points).
+ */
+const normalScoreTables = new Map<number, Float64Array>();
+
+function normalScores(total: number): Float64Array {
+  let table = normalScoreTables.get(total);
+  if (!table) {
+    table = new Float64Array(total);
+    for (let rank = 1; rank <= total; rank++) table[rank - 1] = jStat.normal.inv((rank - 0.375) / (total + 0.25), 0, 1);
+    if (normalScoreTables.size >= 16) normalScoreTables.clear();
+    normalScoreTables.set(total, table);
+  }
+  return table;
+}
+
+/**
  * Rank-normalise draws pooled over chains: z = Phi^-1((r - 3/8) / (S + 1/4)) with r the rank
- * (average rank for ties, which the 1-year grid makes common) and S the number of draws
- * (Vehtari et al. 2021, eq. 14, Blom's offset).
+ * (average rank for ties) and S the number of draws (Vehtari et al. 2021, eq. 14, Blom's offset).
  */
 function rankNormalise(chains: readonly Float64Array[]): Float64Array[] {
   const n = chains[0].length;
@@ -40,15 +57,15 @@ function rankNormalise(chains: readonly Float64Array[]): Float64Array[] {
   const sorted = new Float64Array(total);
   chains.forEach((chain, j) => sorted.set(chain, j * n));
   sorted.sort();
-  // z for each run of equal values, stored at the run's first index; draws on a year grid repeat
-  // values, so far fewer inverse normal evaluations than draws are needed.
+  const scores = normalScores(total);
+  // z for each run of equal values, stored at the run's first index.
   const zAtRunStart = new Float64Array(total);
   let i = 0;
   while (i < total) {
     let j = i;
     while (j + 1 < total && sorted[j + 1] === sorted[i]) j++;
-    const averageRank = (i + j) / 2 + 1;
-    zAtRunStart[i] = jStat.normal.inv((averageRank - 0.375) / (total + 0.25), 0, 1);
+    // A run of one is the whole rank i + 1, read from the table; a tie has a half-integer rank.
+    zAtRunStart[i] = j === i ? scores[i] : jStat.normal.inv(((i + j) / 2 + 1 - 0.375) / (total + 0.25), 0, 1);
     i = j + 1;
   }
   const firstIndexOf = (x: number): number => {
@@ -155,7 +172,9 @@ export function chainDiagnostics(chains: readonly Float64Array[]): ChainDiagnost
     return { rhat: 1, ess: split.length * split[0].length };
   }
   const ranked = rankNormalise(split);
-  const pooled = Float64Array.from(split.flatMap((chain) => Array.from(chain))).sort();
+  const pooled = new Float64Array(split.length * split[0].length);
+  split.forEach((chain, j) => pooled.set(chain, j * chain.length));
+  pooled.sort();
   const mid = pooled.length / 2;
   const median = pooled.length % 2 === 1 ? pooled[Math.floor(mid)] : (pooled[mid - 1] + pooled[mid]) / 2;
   const folded = rankNormalise(split.map((chain) => chain.map((x) => Math.abs(x - median))));
