@@ -56,6 +56,28 @@ describe('calibrate', () => {
     expect(calibrate.medianCalBp).toBeLessThan(1100);
   });
 
+  it('gives the density as a compact grid for drawing: 1-year bins for a usual error, pooled bins of the same area for the widest', async () => {
+    const GRID = `query($i: CalibrateInput!) { calibrate(input: $i) { density { calBp probability } densityGrid { startCalBp stepYears values } } }`;
+    type Answer = { calibrate: { density: { calBp: number; probability: number }[]; densityGrid: { startCalBp: number; stepYears: number; values: number[] } } };
+    const usual = (await viewer.ok<Answer>(GRID, { i: { c14Age: 1126, c14Error: 13, curve: 'INTCAL20' } })).calibrate;
+    // Same years as the listed points, same probabilities to the grid's 4 significant figures.
+    expect(usual.densityGrid.stepYears).toBe(1);
+    expect(usual.densityGrid.startCalBp).toBe(usual.density[0].calBp);
+    const byYear = new Map(usual.density.map((p) => [p.calBp, p.probability]));
+    usual.densityGrid.values.forEach((value, i) => {
+      const point = byYear.get(usual.densityGrid.startCalBp + i) ?? 0;
+      expect(Math.abs(value - point)).toBeLessThanOrEqual(Math.max(point * 5e-4, 1e-6));
+    });
+    // The widest allowed error: at most 2,000 values, wider bins, and the area still 1 (values
+    // are probability per year, so area = sum x step) [analytic].
+    const GRID_ONLY = `query($i: CalibrateInput!) { calibrate(input: $i) { densityGrid { startCalBp stepYears values } } }`;
+    const wide = (await viewer.ok<{ calibrate: Pick<Answer['calibrate'], 'densityGrid'> }>(GRID_ONLY, { i: { c14Age: 3000, c14Error: 20000, curve: 'INTCAL20' } })).calibrate.densityGrid;
+    expect(wide.values.length).toBeLessThanOrEqual(2000);
+    expect(wide.values.length).toBeGreaterThan(1000);
+    expect(wide.stepYears).toBeGreaterThan(1);
+    expect(wide.values.reduce((sum, v) => sum + v, 0) * wide.stepYears).toBeCloseTo(1, 2);
+  });
+
   it('refuses what cannot be calibrated, naming the field', async () => {
     const cases: [Record<string, unknown>, string][] = [
       [{ c14Age: 1000, c14Error: 0, curve: 'INTCAL20' }, 'c14Error'],

@@ -382,6 +382,9 @@ async function benchImport(url: string, token: string, pool: Pool, projectId: st
   return { rows: outcome.rowCount, validateSeconds, commitSeconds, committed: outcome.committed, errors: outcome.errors.length, peakRssMiB: peakRssMiB(pid) };
 }
 
+/** The probe whose answer is as large as the contract's 1-year listing makes it (no size target: no page asks for it). */
+export const POINTS_PROBE = 'the same, density as 1-year points, which no page asks for';
+
 /** Replay issue 17's probes once each (bounded: a handful of requests to the local API). */
 async function benchProbes(url: string, token: string, pool: Pool, projectId: string, email: string): Promise<ProbeBench[]> {
   const site = await pool.query<{ id: string }>(`select id from sites where project_id = $1 and name = 'Bench import trench'`, [projectId]);
@@ -389,7 +392,9 @@ async function benchProbes(url: string, token: string, pool: Pool, projectId: st
   const duplicates = ['labCode,unit,depthM,method,material,c14Age,c14Error,curve', ...Array.from({ length: 2000 }, () => 'DUP-1,1,2.5,RADIOCARBON,DETRITAL_CHARCOAL,2450,30,INTCAL20')].join('\n');
   const probes: [string, string | undefined, string, Record<string, unknown>][] = [
     ['20 aliased calibrate, c14Error 1,000,000', token, `{ ${aliases(20, (i) => `c${i}: calibrate(input: { c14Age: 3000, c14Error: 1000000, curve: INTCAL20 }) { density { calBp probability } }`)} }`, {}],
-    ['one calibrate at the widest allowed error (20,000)', token, '{ calibrate(input: { c14Age: 3000, c14Error: 20000, curve: INTCAL20 }) { density { calBp probability } } }', {}],
+    // What the calculator page asks (its density as the compact grid), then the 1-year points.
+    ['one calibrate at the widest allowed error (20,000)', token, '{ calibrate(input: { c14Age: 3000, c14Error: 20000, curve: INTCAL20 }) { densityGrid { startCalBp stepYears values } } }', {}],
+    [POINTS_PROBE, token, '{ calibrate(input: { c14Age: 3000, c14Error: 20000, curve: INTCAL20 }) { density { calBp probability } } }', {}],
     ['calibrateLuminescence, errorYears 1,000,000', token, '{ calibrateLuminescence(input: { ageYears: 5000, errorYears: 1000000, measurementYear: 2020 }) { medianCalBp } }', {}],
     ['100 aliased hypothesis { regionalEvents }', token, `{ ${aliases(100, (i) => `h${i}: hypothesis(id: "00000000-0000-4000-8000-000000000000") { regionalEvents { id } }`)} }`, {}],
     ['20 aliased signIn with the right password', undefined, `mutation { ${aliases(20, (i) => `s${i}: signIn(email: "${email}", password: "${PASSWORD}") { token }`)} }`, {}],

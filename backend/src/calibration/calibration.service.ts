@@ -5,6 +5,7 @@ import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../auth/auth-user';
 import { CalibrationResult, calibrateRadiocarbon } from '../chronology/calibration/calibrate';
 import { CalendarDensity } from '../chronology/common/density';
+import { DensityGrid, thinToGrid } from '../chronology/common/density-views';
 import { calibrateLuminescence } from '../chronology/calibration/calendar-ages';
 import { CurveFormatError } from '../chronology/calibration/curve';
 import { validateCurveText } from '../chronology/calibration/custom-curve';
@@ -19,7 +20,10 @@ import { CalibrateInput, CalibrateLuminescenceInput, InstallCurveInput } from '.
 import { CurveInfo, CurveRegistryService } from './curve-registry.service';
 import { UsersService } from '../users/users.service';
 
-/** A calibration as the API returns it: summaries plus the density as (calBp, probability) points. */
+/**
+ * A calibration as the API returns it: summaries plus the density as (calBp, probability) points
+ * and, for drawing, as a compact grid of at most `CALIBRATION_GRID_POINTS` values.
+ */
 export interface CalibrationView {
   curve: string | null;
   medianCalBp: number;
@@ -29,6 +33,7 @@ export interface CalibrationView {
   hpd95: StoredCalibration['hpd95'];
   warnings: string[];
   density: { calBp: number; probability: number }[];
+  densityGrid: DensityGrid;
 }
 
 @Injectable()
@@ -88,7 +93,7 @@ export class CalibrationService {
 
   /** A stored sample's calibration as the API shows it: the stored summaries plus the recomputed density. */
   async viewOfSample(stored: StoredCalibration, dating: SampleDating): Promise<CalibrationView> {
-    return { ...stored, density: densityPoints(await this.densityOfSample(dating)) };
+    return { ...stored, ...densityViews(await this.densityOfSample(dating)) };
   }
 
   /** The built-in and installed curves by code (for computations handed to a thread). */
@@ -192,6 +197,26 @@ function densityPoints({ startCalBp, probabilities }: CalendarDensity): Calibrat
   return points;
 }
 
+/**
+ * Values a calibration's `densityGrid` holds at most: 1-year bins for any error the calculator is
+ * used with (a span up to 2,000 years), pooled bins for the widest (20,000 years of error spread
+ * a density over ~55,000 years: 2.9 MB as points, ~20 kB as this grid).
+ */
+export const CALIBRATION_GRID_POINTS = 2000;
+
+/** The listed span of a density (probabilities above the listing threshold) as a drawing grid. */
+function densityGridOf({ startCalBp, probabilities }: CalendarDensity): DensityGrid {
+  let first = probabilities.findIndex((p) => p > DENSITY_LISTING_THRESHOLD);
+  if (first < 0) first = 0;
+  let last = probabilities.length - 1;
+  while (last > first && !(probabilities[last] > DENSITY_LISTING_THRESHOLD)) last--;
+  return thinToGrid({ startCalBp: startCalBp + first, probabilities: probabilities.slice(first, last + 1) }, CALIBRATION_GRID_POINTS);
+}
+
+function densityViews(density: CalendarDensity): Pick<CalibrationView, 'density' | 'densityGrid'> {
+  return { density: densityPoints(density), densityGrid: densityGridOf(density) };
+}
+
 function toView(result: CalibrationResult, curve: string | null): CalibrationView {
-  return { ...toStored(result, curve), density: densityPoints(result.density) };
+  return { ...toStored(result, curve), ...densityViews(result.density) };
 }

@@ -40,6 +40,7 @@ export const FIELD_WEIGHTS: Readonly<Record<string, number>> = {
   'Query.calibrationCurveBand': 200,
   'Sample.calibration': 2, // stored summaries; its density is recomputed (Calibration.density)
   'Calibration.density': 200,
+  'Calibration.densityGrid': 200,
   'EventPosterior.density': 50,
   'LadderEvent.density': 20,
   'RegionalEvent.combinedDensity': 100,

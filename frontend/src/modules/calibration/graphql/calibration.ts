@@ -13,9 +13,10 @@ export const CalibrateDocument = graphql(`
       hpd95 {
         ...HpdRangeFields
       }
-      density {
-        calBp
-        probability
+      densityGrid {
+        startCalBp
+        stepYears
+        values
       }
       warnings
     }

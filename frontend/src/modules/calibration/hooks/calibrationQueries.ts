@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { CalibrateInput, CurveCode } from '@/gql/graphql';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { CalibrateDocument, CalibrationCurveBandDocument, CalibrationCurvesDocument } from '@/modules/calibration/graphql/calibration';
+import { gridToDensity } from '@/modules/correlation/utils/ladderData';
 
 /**
  * Query keys and options for calibration. Results depend only on their inputs and the curves,
@@ -18,7 +19,12 @@ export const calibrationQueries = {
   calibrate: (input: CalibrateInput) =>
     queryOptions({
       queryKey: [...calibrationQueries.all(), 'calibrate', input] as const,
-      queryFn: async () => (await graphqlRequest(CalibrateDocument, { input })).calibrate,
+      // The compact grid (at most 2,000 values) expanded to points for drawing: the widest
+      // errors' 1-year points would be a 2.9 MB answer.
+      queryFn: async () => {
+        const { densityGrid, ...calibration } = (await graphqlRequest(CalibrateDocument, { input })).calibrate;
+        return { ...calibration, density: gridToDensity(densityGrid) };
+      },
       staleTime: Infinity,
     }),
   band: (curve: CurveCode, youngerCalBp: number, olderCalBp: number) =>
