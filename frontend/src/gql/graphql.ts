@@ -2493,7 +2493,7 @@ export type AgeModelSiteQueryVariables = Exact<{
 }>;
 
 
-export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null, downstreamRun?: { __typename?: 'AgeModelRun', id: string } | null, downstreamRunChoice?: { __typename?: 'DownstreamRunChoice', chosenAt: string, run: { __typename?: 'AgeModelRun', id: string }, chosenBy?: { __typename?: 'User', displayName: string } | null } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, seed: number, settings: unknown, depthModel: DepthModel, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number } | null }> } };
+export type AgeModelSiteQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, name: string, kind: SiteKind, project: { __typename?: 'Project', id: string, name: string, myRole: Role, myPermissions: Array<Permission> }, units: Array<{ __typename?: 'Unit', id: string, position: number, name: string, topDepthM: number, baseDepthM: number, facies: Facies, basalErosionM?: number | null }>, eventHorizons: Array<{ __typename?: 'EventHorizon', id: string, name: string, quality: number, unitBelow: { __typename?: 'Unit', id: string, position: number }, unitAbove: { __typename?: 'Unit', id: string, position: number } }>, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, material: SampleMaterial, ageRelation: AgeRelation, excluded: boolean, depthM?: number | null, calibrationError?: string | null, unit: { __typename?: 'Unit', id: string, position: number }, calibration?: { __typename?: 'Calibration', medianCalBp: number, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } } | null }>, latestAgeModelRun?: { __typename?: 'AgeModelRun', id: string, status: JobStatus, stale: boolean } | null, downstreamRun?: { __typename?: 'AgeModelRun', id: string } | null, downstreamRunChoice?: { __typename?: 'DownstreamRunChoice', chosenAt: string, run: { __typename?: 'AgeModelRun', id: string }, chosenBy?: { __typename?: 'User', displayName: string } | null } | null, ageModelRuns: Array<{ __typename?: 'AgeModelRun', id: string, status: JobStatus, progress: number, seed: number, settings: unknown, depthModel: DepthModel, stale: boolean, createdAt: string, finishedAt?: string | null, diagnostics?: { __typename?: 'AgeModelDiagnostics', converged: boolean, maxRhat: number, minEss: number } | null }> } };
 
 export type StartAgeModelRunMutationVariables = Exact<{
   input: StartAgeModelRunInput;
@@ -2578,7 +2578,7 @@ export type SiteCalibrationsQueryVariables = Exact<{
 }>;
 
 
-export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, density: Array<{ __typename?: 'DensityPoint', calBp: number, probability: number }> } | null }> } };
+export type SiteCalibrationsQuery = { __typename?: 'Query', site: { __typename?: 'Site', id: string, samples: Array<{ __typename?: 'Sample', id: string, labCode: string, method: DatingMethod, c14Age?: number | null, c14Error?: number | null, curve?: CurveCode | null, deltaR?: number | null, deltaRError?: number | null, excluded: boolean, unit: { __typename?: 'Unit', id: string, name: string, position: number }, calibration?: { __typename?: 'Calibration', curve?: CurveCode | null, medianCalBp: number, meanCalBp: number, sdYears: number, warnings: Array<string>, hpd68: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, hpd95: Array<{ __typename?: 'HpdRange', olderCalBp: number, youngerCalBp: number, probability: number }>, densityGrid: { __typename?: 'DensityGrid', startCalBp: number, stepYears: number, values: number[] } } | null }> } };
 
 export type SiteCoreLogsQueryVariables = Exact<{
   id: Scalars['ID']['input'];
@@ -3192,9 +3192,10 @@ export const AgeModelSiteDocument = new TypedDocumentString(`
         hpd95 {
           ...HpdRangeFields
         }
-        density {
-          calBp
-          probability
+        densityGrid {
+          startCalBp
+          stepYears
+          values
         }
       }
     }
@@ -3437,9 +3438,10 @@ export const SiteCalibrationsDocument = new TypedDocumentString(`
         hpd95 {
           ...HpdRangeFields
         }
-        density {
-          calBp
-          probability
+        densityGrid {
+          startCalBp
+          stepYears
+          values
         }
         warnings
       }

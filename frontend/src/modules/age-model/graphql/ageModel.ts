@@ -140,9 +140,10 @@ export const AgeModelSiteDocument = graphql(`
           hpd95 {
             ...HpdRangeFields
           }
-          density {
-            calBp
-            probability
+          densityGrid {
+            startCalBp
+            stepYears
+            values
           }
         }
       }

@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { AgeModelRunDocument, AgeModelSiteDocument } from '@/modules/age-model/graphql/ageModel';
 import { isRunActive } from '@/modules/age-model/utils/ageModelView';
+import { withCalibrationPoints } from '@/modules/calibration/utils/calibrationPoints';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 
 /** How often a queued or running age model is asked for its progress. */
@@ -13,7 +14,10 @@ export const ageModelQueries = {
   site: (projectId: string, siteId: string) =>
     queryOptions({
       queryKey: [...ageModelQueries.all(projectId), 'site', siteId] as const,
-      queryFn: async () => (await graphqlRequest(AgeModelSiteDocument, { id: siteId })).site,
+      queryFn: async () => {
+        const { site } = await graphqlRequest(AgeModelSiteDocument, { id: siteId });
+        return site && { ...site, samples: site.samples.map(withCalibrationPoints) };
+      },
     }),
   run: (projectId: string, runId: string) =>
     queryOptions({

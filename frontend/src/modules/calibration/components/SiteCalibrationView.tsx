@@ -6,14 +6,16 @@ import type { CurveCode, SiteCalibrationsQuery } from '@/gql/graphql';
 import { formErrorOf } from '@/modules/api/utils/apiError';
 import { ageOnCurveAxis } from '@/modules/calibration/utils/calibrationChart';
 import { SERIES_COLOURS, seriesColour } from '@/modules/calibration/utils/calibrationPalette';
+import type { WithCalibrationPoints } from '@/modules/calibration/utils/calibrationPoints';
 import { siteQueries } from '@/modules/sites/hooks/siteQueries';
 import { LoadingState } from '@/modules/ui/components/LoadingState';
 import type { CalibrationSeries } from './CalibrationChart';
 import { CalibrationFigure } from './CalibrationFigure';
 import { CalibrationRanges } from './CalibrationRanges';
 
-type CalibratedSample = SiteCalibrationsQuery['site']['samples'][number] & {
-  calibration: NonNullable<SiteCalibrationsQuery['site']['samples'][number]['calibration']>;
+type SiteSample = WithCalibrationPoints<SiteCalibrationsQuery['site']['samples'][number]>;
+type CalibratedSample = SiteSample & {
+  calibration: NonNullable<SiteSample['calibration']>;
   c14Age: number;
   c14Error: number;
   curve: CurveCode;

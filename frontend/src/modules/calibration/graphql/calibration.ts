@@ -76,9 +76,10 @@ export const SiteCalibrationsDocument = graphql(`
           hpd95 {
             ...HpdRangeFields
           }
-          density {
-            calBp
-            probability
+          densityGrid {
+            startCalBp
+            stepYears
+            values
           }
           warnings
         }

@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { SiteCalibrationsDocument } from '@/modules/calibration/graphql/calibration';
+import { withCalibrationPoints } from '@/modules/calibration/utils/calibrationPoints';
 import { projectQueries } from '@/modules/projects/hooks/projectQueries';
 import { SiteDocument } from '@/modules/sites/graphql/site';
 
@@ -17,6 +18,9 @@ export const siteQueries = {
   calibrations: (projectId: string, siteId: string) =>
     queryOptions({
       queryKey: [...siteQueries.detail(projectId, siteId), 'calibrations'] as const,
-      queryFn: async () => (await graphqlRequest(SiteCalibrationsDocument, { id: siteId })).site,
+      queryFn: async () => {
+        const { site } = await graphqlRequest(SiteCalibrationsDocument, { id: siteId });
+        return { ...site, samples: site.samples.map(withCalibrationPoints) };
+      },
     }),
 };
