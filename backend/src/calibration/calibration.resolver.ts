@@ -1,7 +1,8 @@
-import { Args, Int, Mutation, Query, Resolver } from '@nestjs/graphql';
+import { Args, Int, Mutation, Parent, Query, ResolveField, Resolver } from '@nestjs/graphql';
 import { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { CalibrationService, CalibrationView } from './calibration.service';
+import type { DensityGrid } from '../chronology/common/density-views';
+import { CalibrationService, CalibrationView, densityGridOf, densityPoints } from './calibration.service';
 import { CurveInfo } from './curve-registry.service';
 import { CalibrateInput, CalibrateLuminescenceInput, CurveCode, InstallCurveInput } from './dto/calibrate.input';
 
@@ -31,6 +32,17 @@ export class CalibrationResolver {
     @Args('olderCalBp', { type: () => Int }) olderCalBp: number,
   ) {
     return this.calibration.curveBand(curve, youngerCalBp, olderCalBp);
+  }
+
+  /** Made only when asked (a sample's density is recomputed from its dating). */
+  @ResolveField('density')
+  async density(@Parent() calibration: CalibrationView): Promise<{ calBp: number; probability: number }[]> {
+    return densityPoints(await calibration.calendarDensity());
+  }
+
+  @ResolveField('densityGrid')
+  async densityGrid(@Parent() calibration: CalibrationView): Promise<DensityGrid> {
+    return densityGridOf(await calibration.calendarDensity());
   }
 
   @Mutation('installCalibrationCurve')

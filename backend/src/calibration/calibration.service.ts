@@ -21,8 +21,9 @@ import { CurveInfo, CurveRegistryService } from './curve-registry.service';
 import { UsersService } from '../users/users.service';
 
 /**
- * A calibration as the API returns it: summaries plus the density as (calBp, probability) points
- * and, for drawing, as a compact grid of at most `CALIBRATION_GRID_POINTS` values.
+ * A calibration as the API returns it: the summaries, and its density made only when a field asks
+ * for it (`Calibration.density`, `Calibration.densityGrid`): a sample's density is recomputed from
+ * its dating, which the summaries shown in a site's sample table do not need.
  */
 export interface CalibrationView {
   curve: string | null;
@@ -32,8 +33,8 @@ export interface CalibrationView {
   hpd68: StoredCalibration['hpd68'];
   hpd95: StoredCalibration['hpd95'];
   warnings: string[];
-  density: { calBp: number; probability: number }[];
-  densityGrid: DensityGrid;
+  /** The calendar density, computed at most once for this view. */
+  calendarDensity(): Promise<CalendarDensity>;
 }
 
 @Injectable()
@@ -92,8 +93,9 @@ export class CalibrationService {
   }
 
   /** A stored sample's calibration as the API shows it: the stored summaries plus the recomputed density. */
-  async viewOfSample(stored: StoredCalibration, dating: SampleDating): Promise<CalibrationView> {
-    return { ...stored, ...densityViews(await this.densityOfSample(dating)) };
+  viewOfSample(stored: StoredCalibration, dating: SampleDating): CalibrationView {
+    let density: Promise<CalendarDensity> | undefined;
+    return { ...stored, calendarDensity: () => (density ??= this.densityOfSample(dating)) };
   }
 
   /** The built-in and installed curves by code (for computations handed to a thread). */
@@ -189,8 +191,9 @@ function asUserInput<T>(compute: () => T): T {
 /** Probabilities at or below this share of the (unit) mass are left out of a density as the API lists it. */
 export const DENSITY_LISTING_THRESHOLD = 1e-6;
 
-function densityPoints({ startCalBp, probabilities }: CalendarDensity): CalibrationView['density'] {
-  const points: CalibrationView['density'] = [];
+/** `Calibration.density`: the 1-year grid's years above the listing threshold, as points. */
+export function densityPoints({ startCalBp, probabilities }: CalendarDensity): { calBp: number; probability: number }[] {
+  const points: { calBp: number; probability: number }[] = [];
   probabilities.forEach((probability, i) => {
     if (probability > DENSITY_LISTING_THRESHOLD) points.push({ calBp: startCalBp + i, probability });
   });
@@ -198,14 +201,14 @@ function densityPoints({ startCalBp, probabilities }: CalendarDensity): Calibrat
 }
 
 /**
- * Values a calibration's `densityGrid` holds at most: 1-year bins for any error the calculator is
- * used with (a span up to 2,000 years), pooled bins for the widest (20,000 years of error spread
+ * Values a calibration's `densityGrid` holds at most: 1-year bins while the density spans up to
+ * 2,000 years, pooled bins beyond (the widest (20,000 years of error spread
  * a density over ~55,000 years: 2.9 MB as points, ~20 kB as this grid).
  */
 export const CALIBRATION_GRID_POINTS = 2000;
 
-/** The listed span of a density (probabilities above the listing threshold) as a drawing grid. */
-function densityGridOf({ startCalBp, probabilities }: CalendarDensity): DensityGrid {
+/** `Calibration.densityGrid`: the listed span of a density (above the listing threshold) as a drawing grid. */
+export function densityGridOf({ startCalBp, probabilities }: CalendarDensity): DensityGrid {
   let first = probabilities.findIndex((p) => p > DENSITY_LISTING_THRESHOLD);
   if (first < 0) first = 0;
   let last = probabilities.length - 1;
@@ -213,10 +216,6 @@ function densityGridOf({ startCalBp, probabilities }: CalendarDensity): DensityG
   return thinToGrid({ startCalBp: startCalBp + first, probabilities: probabilities.slice(first, last + 1) }, CALIBRATION_GRID_POINTS);
 }
 
-function densityViews(density: CalendarDensity): Pick<CalibrationView, 'density' | 'densityGrid'> {
-  return { density: densityPoints(density), densityGrid: densityGridOf(density) };
-}
-
 function toView(result: CalibrationResult, curve: string | null): CalibrationView {
-  return { ...toStored(result, curve), ...densityViews(result.density) };
+  return { ...toStored(result, curve), calendarDensity: () => Promise.resolve(result.density) };
 }

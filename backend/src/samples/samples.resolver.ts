@@ -46,7 +46,7 @@ export class SamplesResolver {
   }
 
   @ResolveField('calibration')
-  async calibration(@Parent() sample: SampleRow): Promise<CalibrationView | null> {
+  calibration(@Parent() sample: SampleRow): CalibrationView | null {
     return sample.calibration ? this.calibrations.viewOfSample(sample.calibration, sample) : null;
   }
 
