@@ -202,8 +202,8 @@ export function densityPoints({ startCalBp, probabilities }: CalendarDensity): {
 
 /**
  * Values a calibration's `densityGrid` holds at most: 1-year bins while the density spans up to
- * 2,000 years, pooled bins beyond (the widest (20,000 years of error spread
- * a density over ~55,000 years: 2.9 MB as points, ~20 kB as this grid).
+ * 2,000 years, pooled bins beyond (the widest error, 20,000 years, spreads a density over ~55,000
+ * years: 2.9 MB as points, ~20 kB as this grid).
  */
 export const CALIBRATION_GRID_POINTS = 2000;
 

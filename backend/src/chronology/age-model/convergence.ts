@@ -36,15 +36,28 @@ function splitChains(chains: readonly Float64Array[]): Float64Array[] {
  */
 const normalScoreTables = new Map<number, Float64Array>();
 
+/** Blom's normal score of a (possibly average) rank among `total` draws. */
+function normalScore(rank: number, total: number): number {
+  return jStat.normal.inv((rank - 0.375) / (total + 0.25), 0, 1);
+}
+
 function normalScores(total: number): Float64Array {
   let table = normalScoreTables.get(total);
   if (!table) {
     table = new Float64Array(total);
-    for (let rank = 1; rank <= total; rank++) table[rank - 1] = jStat.normal.inv((rank - 0.375) / (total + 0.25), 0, 1);
+    for (let rank = 1; rank <= total; rank++) table[rank - 1] = normalScore(rank, total);
     if (normalScoreTables.size >= 16) normalScoreTables.clear();
     normalScoreTables.set(total, table);
   }
   return table;
+}
+
+/** Every chain's draws (chains of equal length) in one ascending array. */
+function pooledSorted(chains: readonly Float64Array[]): Float64Array {
+  const n = chains[0].length;
+  const pooled = new Float64Array(n * chains.length);
+  chains.forEach((chain, j) => pooled.set(chain, j * n));
+  return pooled.sort();
 }
 
 /**
@@ -52,11 +65,8 @@ function normalScores(total: number): Float64Array {
  * (average rank for ties) and S the number of draws (Vehtari et al. 2021, eq. 14, Blom's offset).
  */
 function rankNormalise(chains: readonly Float64Array[]): Float64Array[] {
-  const n = chains[0].length;
-  const total = n * chains.length;
-  const sorted = new Float64Array(total);
-  chains.forEach((chain, j) => sorted.set(chain, j * n));
-  sorted.sort();
+  const sorted = pooledSorted(chains);
+  const total = sorted.length;
   const scores = normalScores(total);
   // z for each run of equal values, stored at the run's first index.
   const zAtRunStart = new Float64Array(total);
@@ -65,7 +75,7 @@ function rankNormalise(chains: readonly Float64Array[]): Float64Array[] {
     let j = i;
     while (j + 1 < total && sorted[j + 1] === sorted[i]) j++;
     // A run of one is the whole rank i + 1, read from the table; a tie has a half-integer rank.
-    zAtRunStart[i] = j === i ? scores[i] : jStat.normal.inv(((i + j) / 2 + 1 - 0.375) / (total + 0.25), 0, 1);
+    zAtRunStart[i] = j === i ? scores[i] : normalScore((i + j) / 2 + 1, total);
     i = j + 1;
   }
   const firstIndexOf = (x: number): number => {
@@ -172,9 +182,7 @@ export function chainDiagnostics(chains: readonly Float64Array[]): ChainDiagnost
     return { rhat: 1, ess: split.length * split[0].length };
   }
   const ranked = rankNormalise(split);
-  const pooled = new Float64Array(split.length * split[0].length);
-  split.forEach((chain, j) => pooled.set(chain, j * chain.length));
-  pooled.sort();
+  const pooled = pooledSorted(split);
   const mid = pooled.length / 2;
   const median = pooled.length % 2 === 1 ? pooled[Math.floor(mid)] : (pooled[mid - 1] + pooled[mid]) / 2;
   const folded = rankNormalise(split.map((chain) => chain.map((x) => Math.abs(x - median))));

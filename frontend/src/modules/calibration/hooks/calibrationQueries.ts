@@ -2,7 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { CalibrateInput, CurveCode } from '@/gql/graphql';
 import { graphqlRequest } from '@/modules/api/utils/graphqlClient';
 import { CalibrateDocument, CalibrationCurveBandDocument, CalibrationCurvesDocument } from '@/modules/calibration/graphql/calibration';
-import { gridToDensity } from '@/modules/correlation/utils/ladderData';
+import { withDensityPoints } from '@/modules/calibration/utils/calibrationPoints';
 
 /**
  * Query keys and options for calibration. Results depend only on their inputs and the curves,
@@ -21,10 +21,7 @@ export const calibrationQueries = {
       queryKey: [...calibrationQueries.all(), 'calibrate', input] as const,
       // The compact grid (at most 2,000 values) expanded to points for drawing: the widest
       // errors' 1-year points would be a 2.9 MB answer.
-      queryFn: async () => {
-        const { densityGrid, ...calibration } = (await graphqlRequest(CalibrateDocument, { input })).calibrate;
-        return { ...calibration, density: gridToDensity(densityGrid) };
-      },
+      queryFn: async () => withDensityPoints((await graphqlRequest(CalibrateDocument, { input })).calibrate),
       staleTime: Infinity,
     }),
   band: (curve: CurveCode, youngerCalBp: number, olderCalBp: number) =>

@@ -3,9 +3,18 @@ import { gridToDensity, type DensityGridLike } from '@/modules/correlation/utils
 
 type GridCalibration = { densityGrid: DensityGridLike };
 
+/** A calibration that came as the API's compact grid, with the grid expanded to points. */
+export type WithDensityPoints<C extends GridCalibration> = Omit<C, 'densityGrid'> & { density: DensityPoint[] };
+
+/** The calibration with its `densityGrid` expanded to the points the charts draw. */
+export function withDensityPoints<C extends GridCalibration>(calibration: C): WithDensityPoints<C> {
+  const { densityGrid, ...summary } = calibration;
+  return { ...summary, density: gridToDensity(densityGrid) };
+}
+
 /** A sample whose calibration came as the API's compact grid, with the grid expanded to points. */
 export type WithCalibrationPoints<S extends { calibration?: GridCalibration | null }> = Omit<S, 'calibration'> & {
-  calibration: (Omit<NonNullable<S['calibration']>, 'densityGrid'> & { density: DensityPoint[] }) | null;
+  calibration: WithDensityPoints<NonNullable<S['calibration']>> | null;
 };
 
 /**
@@ -14,7 +23,5 @@ export type WithCalibrationPoints<S extends { calibration?: GridCalibration | nu
  */
 export function withCalibrationPoints<S extends { calibration?: GridCalibration | null }>(sample: S): WithCalibrationPoints<S> {
   const { calibration, ...rest } = sample;
-  if (!calibration) return { ...rest, calibration: null } as WithCalibrationPoints<S>;
-  const { densityGrid, ...summary } = calibration;
-  return { ...rest, calibration: { ...summary, density: gridToDensity(densityGrid) } } as WithCalibrationPoints<S>;
+  return { ...rest, calibration: calibration ? withDensityPoints(calibration) : null } as WithCalibrationPoints<S>;
 }
